@@ -1,0 +1,68 @@
+// The trade's fixed vocabularies, shared by the database enums, the API schemas and the UI.
+
+export const roastLevels = ['light', 'medium', 'medium-dark', 'dark', 'french'] as const;
+export type RoastLevel = (typeof roastLevels)[number];
+export const roastLevelLabels: Record<RoastLevel, string> = {
+  light: 'Light',
+  medium: 'Medium',
+  'medium-dark': 'Medium-dark',
+  dark: 'Dark',
+  french: 'French',
+};
+
+export const processes = ['washed', 'natural', 'honey', 'wet-hulled'] as const;
+export type Process = (typeof processes)[number];
+export const processLabels: Record<Process, string> = {
+  washed: 'Washed',
+  natural: 'Natural',
+  honey: 'Honey',
+  'wet-hulled': 'Wet-hulled',
+};
+
+/** Bag sizes by code; green coffee and roasted coffee each sell a subset. */
+export const bagSizes = ['8oz', '12oz', '1lb', '2lb', '5lb'] as const;
+export type BagSize = (typeof bagSizes)[number];
+export const greenBagSizes = ['8oz', '1lb', '2lb', '5lb'] as const satisfies readonly BagSize[];
+export type GreenBagSize = (typeof greenBagSizes)[number];
+export const roastedBagSizes = ['12oz', '1lb', '2lb'] as const satisfies readonly BagSize[];
+export type RoastedBagSize = (typeof roastedBagSizes)[number];
+
+export const brewMethods = ['filter', 'espresso'] as const;
+export type BrewMethod = (typeof brewMethods)[number];
+
+export const grinds = ['whole-bean', 'espresso', 'moka-pot', 'aeropress', 'pour-over', 'drip', 'french-press', 'cold-brew'] as const;
+export type Grind = (typeof grinds)[number];
+export const grindLabels: Record<Grind, string> = {
+  'whole-bean': 'Whole bean',
+  espresso: 'Espresso',
+  'moka-pot': 'Moka pot',
+  aeropress: 'AeroPress-style',
+  'pour-over': 'Pour-over',
+  drip: 'Drip machine',
+  'french-press': 'French press',
+  'cold-brew': 'Cold brew',
+};
+
+export const cadences = [1, 2, 3, 4] as const;
+export type CadenceWeeks = (typeof cadences)[number];
+
+export const roles = ['customer', 'staff', 'owner'] as const;
+export type Role = (typeof roles)[number];
+
+export const orderKinds = ['green', 'roasted'] as const;
+export type OrderKind = (typeof orderKinds)[number];
+
+export const orderStatuses = ['pending_payment', 'paid', 'held', 'roasted', 'packed', 'shipped', 'cancelled', 'refunded'] as const;
+export type OrderStatus = (typeof orderStatuses)[number];
+
+export const subscriptionStatuses = ['incomplete', 'active', 'paused', 'past_due', 'cancelled'] as const;
+export type SubscriptionStatus = (typeof subscriptionStatuses)[number];
+
+export const deliveryStatuses = ['scheduled', 'skipped', 'held', 'roasted', 'shipped'] as const;
+export type DeliveryStatus = (typeof deliveryStatuses)[number];
+
+export const homeRoastDevices = ['popper', 'stovetop-pan', 'oven', 'drum-home', 'fluid-bed-home'] as const;
+export type HomeRoastDevice = (typeof homeRoastDevices)[number];
+
+export const stockMovementReasons = ['arrival', 'sale', 'roast', 'sample', 'loss', 'count', 'refund'] as const;
+export type StockMovementReason = (typeof stockMovementReasons)[number];

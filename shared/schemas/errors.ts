@@ -1,0 +1,11 @@
+import { z } from 'zod';
+
+/** The one error body every API failure returns (API.md). */
+export const apiErrorSchema = z.object({
+  error: z.object({
+    code: z.string(),
+    message: z.string(),
+    fields: z.record(z.string(), z.string()).optional(),
+  }),
+});
+export type ApiErrorBody = z.infer<typeof apiErrorSchema>;
