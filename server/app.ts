@@ -1,0 +1,97 @@
+import { randomUUID } from 'node:crypto';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Config } from './config';
+import type { Database } from './db/client';
+import type { Queue } from './jobs/queue';
+import type { Logger } from './lib/logger';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { requireClientHeader } from './middleware/require-client-header';
+import { healthRoutes } from './modules/health/health.routes';
+import { createLotsRepo } from './modules/lots/lots.repo';
+import { lotsRoutes } from './modules/lots/lots.routes';
+import { createLotsService } from './modules/lots/lots.service';
+
+export interface AppDeps {
+  config: Config;
+  database: Database;
+  logger: Logger;
+  /** Absent in API-only test apps; health then reports the queue as stopped. */
+  queue?: Queue;
+}
+
+const requestIdPattern = /^[\w-]{8,64}$/;
+
+/** Builds the whole HTTP app from its dependencies. Never listens: index.ts and the tests do that. */
+export function createApp(deps: AppDeps): Express {
+  const { config, database, logger } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    pinoHttp({
+      logger,
+      // Honour a load balancer's request id when it looks like one; otherwise mint our own.
+      genReqId: (req, res) => {
+        const incoming = req.headers['x-request-id'];
+        const id = typeof incoming === 'string' && requestIdPattern.test(incoming) ? incoming : randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+      serializers: {
+        req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'none'"],
+          frameAncestors: ["'none'"],
+          formAction: ["'self'"],
+          ...(config.NODE_ENV === 'production' ? { upgradeInsecureRequests: [] } : {}),
+        },
+      },
+      strictTransportSecurity: config.NODE_ENV === 'production',
+      referrerPolicy: { policy: 'strict-origin-when-cross-origin' },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '100kb' }));
+  api.use(requireClientHeader);
+  api.use('/health', healthRoutes(deps));
+  api.use('/lots', lotsRoutes(createLotsService(createLotsRepo(database.db))));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const staticDir = path.resolve(config.STATIC_DIR);
+  const indexHtml = path.join(staticDir, 'index.html');
+  app.use('/assets', express.static(path.join(staticDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+  app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
+  // Every other GET is a client-side route: the SPA decides what to show (its own 404 included).
+  app.get('/{*splat}', (_req, res, next) => {
+    if (!existsSync(indexHtml)) return next();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexHtml);
+  });
+
+  app.use(errorHandler);
+  return app;
+}

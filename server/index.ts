@@ -1,0 +1,80 @@
+import type { Server } from 'node:http';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { createApp } from './app';
+import { ConfigError, loadConfig, type Config } from './config';
+import { createDatabase } from './db/client';
+import { startQueue } from './jobs/queue';
+import { createLogger, type Logger } from './lib/logger';
+
+export interface RunningServer {
+  url: string;
+  stop(): Promise<void>;
+}
+
+/** Opens the database and the queue, listens, and returns a handle that shuts all three down. */
+export async function startServer(config: Config, logger: Logger = createLogger(config)): Promise<RunningServer> {
+  const database = createDatabase({
+    url: config.DATABASE_URL,
+    poolMax: config.DATABASE_POOL_MAX,
+    connectTimeoutMs: config.DATABASE_CONNECT_TIMEOUT_MS,
+    onIdleError: (error) => logger.warn({ err: error }, 'database connection dropped'),
+  });
+  const queue = await startQueue(config.DATABASE_URL, logger);
+  const app = createApp({ config, database, logger, queue });
+
+  const server: Server = await new Promise((resolve, reject) => {
+    const listening = app.listen(config.PORT, config.HOST, () => resolve(listening));
+    listening.once('error', reject);
+  });
+  const url = `http://${config.HOST}:${config.PORT}`;
+  logger.info({ url }, 'Restday is listening');
+
+  return {
+    url,
+    async stop() {
+      // Finish requests in flight, then let go of the queue and the pool.
+      const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeIdleConnections();
+      const forceAfter = setTimeout(() => server.closeAllConnections(), 5000).unref();
+      await closed;
+      clearTimeout(forceAfter);
+      await queue.stop();
+      await database.close();
+      logger.info('Restday stopped');
+    },
+  };
+}
+
+async function main() {
+  let config: Config;
+  try {
+    config = loadConfig();
+  } catch (error) {
+    if (error instanceof ConfigError) {
+      console.error(error.message);
+      process.exit(1);
+    }
+    throw error;
+  }
+  const logger = createLogger(config);
+  const running = await startServer(config, logger);
+  let stopping = false;
+  for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+    process.once(signal, () => {
+      if (stopping) return;
+      stopping = true;
+      running.stop().then(
+        () => process.exit(0),
+        (error: unknown) => {
+          logger.error({ err: error }, 'shutdown failed');
+          process.exit(1);
+        },
+      );
+    });
+  }
+}
+
+if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  void main();
+}

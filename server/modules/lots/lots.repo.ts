@@ -1,0 +1,91 @@
+import { and, asc, eq, gte, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
+import type { Db } from '../../db/client';
+import { lotPriceBreaks, lots, uploads } from '../../db/schema/index';
+import type { LotListQuery } from '@shared/schemas/lots';
+
+/** The query's filters, with "in stock" already turned into a gram threshold by the service. */
+export type LotFilters = Omit<LotListQuery, 'inStock'> & { minStockGrams?: number };
+
+function escapeLike(text: string) {
+  return text.replace(/[\\%_]/g, (character) => `\\${character}`);
+}
+
+export function createLotsRepo(db: Db) {
+  return {
+    async listListed(filters: LotFilters) {
+      const conditions: SQL[] = [eq(lots.isListed, true)];
+      if (filters.q) {
+        const pattern = `%${escapeLike(filters.q)}%`;
+        conditions.push(
+          or(
+            ilike(lots.name, pattern),
+            ilike(lots.origin, pattern),
+            ilike(lots.region, pattern),
+            ilike(lots.producer, pattern),
+            ilike(lots.variety, pattern),
+            ilike(lots.code, pattern),
+            sql`array_to_string(${lots.tastingNotes}, ' ') ilike ${pattern}`,
+          )!,
+        );
+      }
+      if (filters.origin) conditions.push(sql`lower(${lots.origin}) = lower(${filters.origin})`);
+      if (filters.process) conditions.push(eq(lots.process, filters.process));
+      if (filters.level) conditions.push(eq(lots.suggestedLevel, filters.level));
+      if (filters.minStockGrams !== undefined) conditions.push(gte(lots.stockGrams, filters.minStockGrams));
+
+      const rows = await db
+        .select({
+          id: lots.id,
+          code: lots.code,
+          name: lots.name,
+          origin: lots.origin,
+          region: lots.region,
+          process: lots.process,
+          variety: lots.variety,
+          altitudeM: lots.altitudeM,
+          cropYear: lots.cropYear,
+          suggestedLevel: lots.suggestedLevel,
+          tastingNotes: lots.tastingNotes,
+          cuppingScore: lots.cuppingScore,
+          stockGrams: lots.stockGrams,
+          pricePerKgCents: lots.pricePerKgCents,
+        })
+        .from(lots)
+        .where(and(...conditions))
+        .orderBy(asc(lots.origin), asc(lots.name));
+
+      const firstPhotos = await this.firstPhotoIds(rows.map((row) => row.id));
+      return rows.map(({ id, ...row }) => ({ ...row, firstPhotoId: firstPhotos.get(id) ?? null }));
+    },
+
+    async firstPhotoIds(lotIds: string[]): Promise<Map<string, string>> {
+      if (lotIds.length === 0) return new Map();
+      const photos = await db
+        .selectDistinctOn([uploads.lotId], { lotId: uploads.lotId, id: uploads.id })
+        .from(uploads)
+        .where(and(inArray(uploads.lotId, lotIds), eq(uploads.kind, 'photo')))
+        .orderBy(uploads.lotId, asc(uploads.position), asc(uploads.createdAt));
+      return new Map(photos.flatMap((photo) => (photo.lotId ? [[photo.lotId, photo.id] as const] : [])));
+    },
+
+    async findListedByCode(code: string) {
+      const lot = await db.query.lots.findFirst({ where: and(eq(lots.code, code), eq(lots.isListed, true)) });
+      if (!lot) return undefined;
+      const [priceBreaks, files] = await Promise.all([
+        db
+          .select({ minGrams: lotPriceBreaks.minGrams, pricePerKgCents: lotPriceBreaks.pricePerKgCents })
+          .from(lotPriceBreaks)
+          .where(eq(lotPriceBreaks.lotId, lot.id))
+          .orderBy(asc(lotPriceBreaks.minGrams)),
+        db
+          .select({ id: uploads.id, kind: uploads.kind })
+          .from(uploads)
+          .where(eq(uploads.lotId, lot.id))
+          .orderBy(asc(uploads.position), asc(uploads.createdAt)),
+      ]);
+      return { lot, priceBreaks, files };
+    },
+  };
+}
+
+export type LotsRepo = ReturnType<typeof createLotsRepo>;

@@ -1,0 +1,22 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { lotListQuerySchema, type LotDetail, type LotListResponse } from '@shared/schemas/lots';
+import type { LotsService } from './lots.service';
+
+const lotCodeParams = z.object({ code: z.string().trim().min(1).max(40) });
+
+export function lotsRoutes(service: LotsService): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    const items = await service.list(lotListQuerySchema.parse(req.query));
+    res.json({ items } satisfies LotListResponse);
+  });
+
+  router.get('/:code', async (req, res) => {
+    const { code } = lotCodeParams.parse(req.params);
+    res.json((await service.get(code)) satisfies LotDetail);
+  });
+
+  return router;
+}

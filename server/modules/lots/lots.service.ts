@@ -1,0 +1,51 @@
+import type { LotDetail, LotListQuery, LotSummary } from '@shared/schemas/lots';
+import { AppError } from '../../lib/app-error';
+import type { LotsRepo } from './lots.repo';
+
+/** The smallest green bag sold; a lot is "in stock" while it can fill one. */
+const smallestGreenBagGrams = 227;
+
+const uploadUrl = (id: string) => `/api/uploads/${id}`;
+
+export function createLotsService(repo: LotsRepo) {
+  return {
+    async list(query: LotListQuery): Promise<LotSummary[]> {
+      const { inStock, ...filters } = query;
+      const rows = await repo.listListed({ ...filters, ...(inStock ? { minStockGrams: smallestGreenBagGrams } : {}) });
+      return rows.map(({ firstPhotoId, ...row }) => ({ ...row, photoUrl: firstPhotoId ? uploadUrl(firstPhotoId) : null }));
+    },
+
+    async get(code: string): Promise<LotDetail> {
+      const found = await repo.findListedByCode(code);
+      if (!found) throw new AppError(404, 'lot_not_found', `No lot with code ${code}.`);
+      const { lot, priceBreaks, files } = found;
+      const specSheet = files.find((file) => file.kind === 'spec_sheet');
+      return {
+        code: lot.code,
+        name: lot.name,
+        origin: lot.origin,
+        region: lot.region,
+        producer: lot.producer,
+        variety: lot.variety,
+        process: lot.process,
+        altitudeM: lot.altitudeM,
+        cropYear: lot.cropYear,
+        moisturePct: lot.moisturePct,
+        densityGPerL: lot.densityGPerL,
+        screenSize: lot.screenSize,
+        cuppingScore: lot.cuppingScore,
+        tastingNotes: lot.tastingNotes,
+        description: lot.description,
+        suggestedLevel: lot.suggestedLevel,
+        allowedLevels: lot.allowedLevels,
+        stockGrams: lot.stockGrams,
+        pricePerKgCents: lot.pricePerKgCents,
+        priceBreaks,
+        photos: files.filter((file) => file.kind === 'photo').map((file) => uploadUrl(file.id)),
+        specSheetUrl: specSheet ? uploadUrl(specSheet.id) : null,
+      };
+    },
+  };
+}
+
+export type LotsService = ReturnType<typeof createLotsService>;
