@@ -1,0 +1,58 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { launchChromium } from '../setup/chromium';
+
+const baseUrl = inject('baseUrl');
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function openPage(path: string) {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);
+  });
+  page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
+  await page.goto(`${baseUrl}${path}`);
+  return { page, problems, close: () => context.close() };
+}
+
+describe('the shop in a real browser', () => {
+  it('home page shows seeded lots with no console errors under the strict CSP', async () => {
+    const { page, problems, close } = await openPage('/');
+    await page.getByTestId('lot-card').first().waitFor();
+    expect(await page.getByTestId('lot-card').count()).toBeGreaterThan(0);
+    expect(await page.title()).toMatch(/Restday|Wrenfield/);
+    expect(problems).toEqual([]);
+    await close();
+  });
+
+  it('Green Lots lists every seeded lot and a filter narrows it through the URL', async () => {
+    const { page, problems, close } = await openPage('/lots');
+    await page.getByTestId('lot-card').first().waitFor();
+    const all = await page.getByTestId('lot-card').count();
+    expect(all).toBeGreaterThanOrEqual(8);
+
+    await page.goto(`${baseUrl}/lots?process=natural`);
+    await page.getByTestId('lot-card').first().waitFor();
+    const naturals = await page.getByTestId('lot-card').count();
+    expect(naturals).toBeGreaterThan(0);
+    expect(naturals).toBeLessThan(all);
+    expect(problems).toEqual([]);
+    await close();
+  });
+
+  it('an unknown address shows the 404 page from the SPA', async () => {
+    const { page, close } = await openPage('/no-such-page');
+    await page.getByRole('heading', { level: 1 }).waitFor();
+    expect(await page.getByRole('link', { name: /home|shop/i }).count()).toBeGreaterThan(0);
+    await close();
+  });
+});

@@ -1,0 +1,44 @@
+import request from 'supertest';
+import { afterAll, describe, expect, it } from 'vitest';
+import { apiErrorSchema } from '@shared/schemas/errors';
+import { startCluster, testClusterOptions } from '../../dev-services/postgres';
+import { createTestApp } from '../setup/test-app';
+
+// Stops the real test cluster mid-run, so this file restarts it whatever happens.
+const restartCluster = () => startCluster(testClusterOptions());
+afterAll(() => {
+  restartCluster();
+});
+
+const app = createTestApp();
+
+async function timed(path: string) {
+  const started = performance.now();
+  const response = await request(app).get(path);
+  return { response, elapsedMs: performance.now() - started };
+}
+
+describe('when PostgreSQL goes away and comes back', () => {
+  it('answers 503 quickly while it is down and recovers without a restart', async () => {
+    expect((await request(app).get('/api/lots')).status).toBe(200);
+
+    restartCluster().stop();
+
+    const lots = await timed('/api/lots');
+    expect(lots.response.status).toBe(503);
+    expect(apiErrorSchema.parse(lots.response.body).error.code).toBe('database_unavailable');
+    expect(lots.response.headers['retry-after']).toBeDefined();
+    // The pool's connect timeout is 2 s; a hung request would take the client's whole timeout.
+    expect(lots.elapsedMs).toBeLessThan(4000);
+
+    const health = await timed('/api/health');
+    expect(health.response.status).toBe(503);
+    expect(health.response.body).toMatchObject({ ok: false, db: 'down' });
+
+    restartCluster();
+
+    const recovered = await request(app).get('/api/lots');
+    expect(recovered.status).toBe(200);
+    expect((await request(app).get('/api/health')).body).toMatchObject({ ok: true, db: 'up' });
+  });
+});
