@@ -1,8 +1,8 @@
 // The local mail catcher (maildev): real SMTP on loopback, and a web inbox to read what Restday sent.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { projectRoot } from './postgres';
 
 export interface MailCatcher {
@@ -10,8 +10,6 @@ export interface MailCatcher {
   webUrl: string;
   stop(): Promise<void>;
 }
-
-const require = createRequire(import.meta.url);
 
 async function answers(url: string): Promise<boolean> {
   try {
@@ -29,7 +27,7 @@ export async function startMailCatcher(options: { smtpPort: number; webPort: num
   }
   const mailDir = options.mailDir ?? path.join(projectRoot, '.data', 'mail');
   mkdirSync(mailDir, { recursive: true });
-  const binary = path.join(path.dirname(require.resolve('maildev/package.json')), 'dist', 'bin', 'maildev.js');
+  const binary = path.join(path.dirname(fileURLToPath(import.meta.resolve('maildev'))), 'bin', 'maildev.js');
   const child: ChildProcess = spawn(
     process.execPath,
     [binary, '--smtp', String(options.smtpPort), '--web', String(options.webPort), '--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--mail-directory', mailDir, '--silent'],

@@ -1,9 +1,11 @@
+import { bagFillGrams } from '@shared/domain/units';
+import { greenBagSizes } from '@shared/domain/vocabulary';
 import type { LotDetail, LotListQuery, LotSummary } from '@shared/schemas/lots';
 import { AppError } from '../../lib/app-error';
 import type { LotsRepo } from './lots.repo';
 
-/** The smallest green bag sold; a lot is "in stock" while it can fill one. */
-const smallestGreenBagGrams = 227;
+/** A lot is "in stock" while it can fill the smallest green bag sold. */
+const smallestGreenBagGrams = Math.min(...greenBagSizes.map(bagFillGrams));
 
 const uploadUrl = (id: string) => `/api/uploads/${id}`;
 

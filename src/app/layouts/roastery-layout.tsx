@@ -1,0 +1,57 @@
+import clsx from 'clsx';
+import { ArrowLeft } from 'lucide-react';
+import { Link, NavLink, Outlet } from 'react-router-dom';
+import { RestdayMark } from '@/components/brand/restday-mark';
+import { paths } from '@/config/paths';
+import { NavigationProgress } from './navigation-progress';
+import { SkipLink } from './skip-link';
+
+const roasteryNav = [
+  { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
+  { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false },
+];
+
+function navLinkStyles({ isActive }: { isActive: boolean }): string {
+  return clsx(
+    'inline-flex min-h-11 items-center whitespace-nowrap rounded-control px-2 text-small font-semibold no-underline sm:px-3 sm:text-body',
+    isActive ? 'bg-crema text-ink' : 'text-paper hover:bg-paper/10',
+  );
+}
+
+/** The staff's Roastery: its own dark header, so nobody mistakes it for the shop. */
+export default function RoasteryLayout() {
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <SkipLink />
+      <NavigationProgress />
+      <header className="bg-ink text-paper [&_:focus-visible]:outline-crema">
+        <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 sm:flex-nowrap sm:px-6">
+          <Link to={paths.roastery.overview.getHref()} className="mr-2 inline-flex min-h-11 items-center gap-2 font-heading font-semibold text-h3 text-paper no-underline">
+            <RestdayMark className="size-8" />
+            Restday <span className="text-crema">Roastery</span>
+          </Link>
+          <nav aria-label="Roastery" className="order-last -mx-4 w-[calc(100%+2rem)] overflow-x-auto px-2 sm:order-none sm:mx-0 sm:w-auto sm:px-0">
+            <ul className="flex gap-1">
+              {roasteryNav.map((item) => (
+                <li key={item.to}>
+                  <NavLink to={item.to} end={item.end} className={navLinkStyles}>
+                    {item.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
+          </nav>
+          <Link to={paths.home.getHref()} className="ml-auto inline-flex min-h-11 items-center gap-1.5 text-small font-semibold text-paper underline">
+            <ArrowLeft aria-hidden="true" className="size-4" />
+            <span className="sm:hidden">Shop</span>
+            <span className="hidden sm:inline">Back to the shop</span>
+          </Link>
+        </div>
+      </header>
+
+      <main id="main" className="mx-auto w-full max-w-page flex-1 px-4 py-8 sm:px-6 sm:py-10">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,76 @@
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { useMemo, type ComponentType } from 'react';
+import { createBrowserRouter, RouterProvider, type LoaderFunction, type RouteObject } from 'react-router-dom';
+import { RouteErrorBoundary } from '@/components/errors/route-error-boundary';
+import { PageLoading } from '@/components/ui/page-loading';
+import { paths } from '@/config/paths';
+import { AppRoot } from './layouts/app-root';
+
+/** What a lazily loaded route or layout module exports. */
+type RouteModule = {
+  default: ComponentType;
+  /** Starts the page's queries as soon as the route matches, with the options its hooks use. */
+  clientLoader?: (queryClient: QueryClient) => LoaderFunction;
+};
+
+function toRoute(queryClient: QueryClient) {
+  return (module: RouteModule) => ({
+    Component: module.default,
+    ...(module.clientLoader ? { loader: module.clientLoader(queryClient) } : {}),
+  });
+}
+
+/** Every route of the SPA; each page and layout loads lazily. Exported for tests (memory router). */
+export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
+  const load = toRoute(queryClient);
+  return [
+    {
+      id: 'root',
+      Component: AppRoot,
+      errorElement: <RouteErrorBoundary standalone />,
+      hydrateFallbackElement: <PageLoading />,
+      children: [
+        {
+          lazy: () => import('./layouts/shop-layout').then(load),
+          children: [
+            {
+              errorElement: <RouteErrorBoundary />,
+              children: [
+                { index: true, lazy: () => import('./routes/shop/home').then(load) },
+                { path: paths.lots.path, lazy: () => import('./routes/shop/lots').then(load) },
+                { path: paths.lot.path, lazy: () => import('./routes/shop/lot').then(load) },
+                { path: paths.roastingBasics.path, lazy: () => import('./routes/shop/roasting-basics').then(load) },
+                { path: paths.subscribe.path, lazy: () => import('./routes/shop/subscribe').then(load) },
+                {
+                  path: paths.account.overview.path,
+                  lazy: () => import('./layouts/account-layout').then(load),
+                  children: [{ index: true, lazy: () => import('./routes/account/overview').then(load) }],
+                },
+                { path: '*', lazy: () => import('./routes/shop/not-found').then(load) },
+              ],
+            },
+          ],
+        },
+        {
+          path: paths.roastery.overview.path,
+          lazy: () => import('./layouts/roastery-layout').then(load),
+          children: [
+            {
+              errorElement: <RouteErrorBoundary />,
+              children: [
+                { index: true, lazy: () => import('./routes/roastery/overview').then(load) },
+                { path: paths.roastery.greenStock.path, lazy: () => import('./routes/roastery/green-stock').then(load) },
+              ],
+            },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function AppRouter() {
+  const queryClient = useQueryClient();
+  const router = useMemo(() => createBrowserRouter(createAppRoutes(queryClient)), [queryClient]);
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,139 @@
+// @vitest-environment happy-dom
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { apiErrorResponse, jsonResponse, makeLot, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const ethiopia = makeLot();
+const brazil = makeLot({
+  code: 'RD-T02',
+  name: 'Test Plateau Natural',
+  origin: 'Brazil',
+  region: 'Sul de Minas',
+  process: 'natural',
+  variety: 'Yellow Catuai',
+  altitudeM: 1150,
+  suggestedLevel: 'medium-dark',
+  tastingNotes: ['cocoa', 'hazelnut'],
+  stockGrams: 0,
+  pricePerKgCents: 1890,
+});
+
+describe('Green Lots page', () => {
+  it('shows a card for each lot from /api/lots with its descriptors, price and stock state', async () => {
+    stubFetch(() => jsonResponse({ items: [ethiopia, brazil] }));
+    renderApp('/lots');
+
+    const cards = await screen.findAllByTestId('lot-card');
+    expect(cards).toHaveLength(2);
+
+    const [first, second] = cards as [HTMLElement, HTMLElement];
+    expect(within(first).getByRole('link', { name: 'Test Ridge Washed' }).getAttribute('href')).toBe('/lots/RD-T01');
+    expect(within(first).getByText('Ethiopia · Sidama')).toBeTruthy();
+    expect(within(first).getByText('Washed')).toBeTruthy();
+    expect(within(first).getByText('Heirloom')).toBeTruthy();
+    expect(within(first).getByText('1,950 m')).toBeTruthy();
+    expect(within(first).getByText('Light')).toBeTruthy();
+    expect(within(first).getByText('bergamot')).toBeTruthy();
+    expect(within(first).getByText('$24.50 / kg')).toBeTruthy();
+    expect(within(first).getByText('In stock · 18.4 kg')).toBeTruthy();
+
+    expect(within(second).getByText('Out of stock')).toBeTruthy();
+    expect(within(second).getByText('Medium-dark')).toBeTruthy();
+    expect(within(second).queryByText(/In stock/)).toBeNull();
+
+    expect(screen.getByRole('status').textContent).toBe('2 lots');
+    await waitFor(() => expect(document.title).toBe('Green Lots · Restday'));
+  });
+
+  it('shows a loading skeleton until the lots arrive', async () => {
+    let answer: (response: Response) => void = () => undefined;
+    stubFetch(() => new Promise<Response>((resolve) => (answer = resolve)));
+    renderApp('/lots');
+
+    expect(await screen.findByText('Loading green lots…')).toBeTruthy();
+    expect(screen.queryAllByTestId('lot-card')).toHaveLength(0);
+
+    answer(jsonResponse({ items: [ethiopia] }));
+    expect(await screen.findAllByTestId('lot-card')).toHaveLength(1);
+    expect(screen.queryByText('Loading green lots…')).toBeNull();
+  });
+
+  it('sends the filters in the URL to the API and offers to reset them when nothing matches', async () => {
+    const fetchMock = stubFetch((url) => jsonResponse({ items: url.searchParams.has('process') ? [] : [ethiopia, brazil] }));
+    const { router } = renderApp('/lots?process=honey&inStock=true');
+
+    expect(await screen.findByRole('heading', { name: 'No lots match these filters' })).toBeTruthy();
+    expect(requestedUrls(fetchMock)).toContain('/api/lots?process=honey&inStock=true');
+
+    fireEvent.click(screen.getByRole('link', { name: 'Reset filters' }));
+
+    expect(await screen.findAllByTestId('lot-card')).toHaveLength(2);
+    expect(router.state.location.search).toBe('');
+  });
+
+  it('says so when no lots are listed at all, without a reset link', async () => {
+    stubFetch(() => jsonResponse({ items: [] }));
+    renderApp('/lots');
+
+    expect(await screen.findByRole('heading', { name: 'No green lots are listed right now' })).toBeTruthy();
+    expect(screen.queryByRole('link', { name: 'Reset filters' })).toBeNull();
+  });
+
+  it('shows the error from the API and loads the lots when the visitor tries again', async () => {
+    let failing = true;
+    stubFetch(() =>
+      failing ? apiErrorResponse(503, 'database_unavailable', 'The catalog is resting for a moment.') : jsonResponse({ items: [ethiopia] }),
+    );
+    renderApp('/lots');
+
+    const alert = await screen.findByRole('alert');
+    expect(within(alert).getByText('Green Lots could not load')).toBeTruthy();
+    expect(within(alert).getByText('The catalog is resting for a moment.')).toBeTruthy();
+
+    failing = false;
+    fireEvent.click(within(alert).getByRole('button', { name: 'Try again' }));
+
+    expect(await screen.findAllByTestId('lot-card')).toHaveLength(1);
+    expect(screen.queryByRole('alert')).toBeNull();
+  });
+
+  it('keeps each filter in the URL and asks the API for it', async () => {
+    const fetchMock = stubFetch(() => jsonResponse({ items: [ethiopia, brazil] }));
+    const { router } = renderApp('/lots');
+    await screen.findAllByTestId('lot-card');
+
+    fireEvent.change(screen.getByLabelText('Process'), { target: { value: 'natural' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?process=natural'));
+
+    fireEvent.change(screen.getByLabelText('Suggested roast'), { target: { value: 'medium-dark' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?process=natural&level=medium-dark'));
+
+    fireEvent.change(screen.getByLabelText('Origin'), { target: { value: 'Brazil' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?origin=Brazil&process=natural&level=medium-dark'));
+    fireEvent.click(screen.getByLabelText('In stock only'));
+    await waitFor(() => expect(router.state.location.search).toBe('?origin=Brazil&process=natural&level=medium-dark&inStock=true'));
+
+    fireEvent.change(screen.getByRole('searchbox', { name: 'Search' }), { target: { value: '  cocoa ' } });
+    fireEvent.submit(screen.getByRole('search'));
+    await waitFor(() => expect(router.state.location.search).toBe('?q=cocoa&origin=Brazil&process=natural&level=medium-dark&inStock=true'));
+
+    await waitFor(() => expect(requestedUrls(fetchMock)).toContain('/api/lots?q=cocoa&origin=Brazil&process=natural&level=medium-dark&inStock=true'));
+
+    fireEvent.click(screen.getByLabelText('In stock only'));
+    await waitFor(() => expect(router.state.location.search).toBe('?q=cocoa&origin=Brazil&process=natural&level=medium-dark'));
+  });
+
+  it('ignores a filter value the API would refuse', async () => {
+    const fetchMock = stubFetch(() => jsonResponse({ items: [ethiopia] }));
+    renderApp('/lots?level=charcoal&process=washed');
+
+    await screen.findAllByTestId('lot-card');
+    expect(requestedUrls(fetchMock)).toContain('/api/lots?process=washed');
+    expect(requestedUrls(fetchMock).some((url) => url.includes('charcoal'))).toBe(false);
+  });
+});

@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import { formatAltitude, formatGrams, formatMoney, formatPercent, formatPricePerKg, formatScore } from './format';
+
+describe('display formatting', () => {
+  it('shows cents as US dollars', () => {
+    expect(formatMoney(2450)).toBe('$24.50');
+    expect(formatMoney(5)).toBe('$0.05');
+    expect(formatPricePerKg(189_000)).toBe('$1,890.00 / kg');
+  });
+
+  it('shows grams below a kilogram, kilograms to one decimal above', () => {
+    expect(formatGrams(0)).toBe('0 g');
+    expect(formatGrams(454)).toBe('454 g');
+    expect(formatGrams(1000)).toBe('1 kg');
+    expect(formatGrams(2268)).toBe('2.3 kg');
+    expect(formatGrams(18_400)).toBe('18.4 kg');
+  });
+
+  it('shows altitude, percentages and cupping scores', () => {
+    expect(formatAltitude(1850)).toBe('1,850 m');
+    expect(formatPercent(10.8)).toBe('10.8%');
+    expect(formatPercent(11)).toBe('11%');
+    expect(formatScore(86.25)).toBe('86.25');
+    expect(formatScore(87)).toBe('87');
+  });
+});

@@ -1,0 +1,90 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { configure, render } from '@testing-library/react';
+import { createMemoryRouter, RouterProvider } from 'react-router-dom';
+import { vi } from 'vitest';
+import type { LotDetail, LotSummary } from '@shared/schemas/lots';
+import { createAppRoutes } from '@/app/router';
+import { createQueryClient } from '@/lib/query-client';
+
+// Every page is a lazy module; the first render in a test file waits for Vite to transform it.
+configure({ asyncUtilTimeout: 5000 });
+
+/** Renders the real route table at `url` in a memory router, with a fresh query client. */
+export function renderApp(url: string) {
+  const queryClient = createQueryClient();
+  // Tests decide each response themselves; automatic retries would only slow them down.
+  queryClient.setDefaultOptions({ queries: { ...queryClient.getDefaultOptions().queries, retry: false } });
+  const router = createMemoryRouter(createAppRoutes(queryClient), { initialEntries: [url] });
+  const view = render(
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+  return { ...view, router, queryClient };
+}
+
+type ApiHandler = (url: URL, init: RequestInit | undefined) => Response | Promise<Response>;
+
+/** Replaces `fetch`, the network boundary, with a handler that answers like the server would. */
+export function stubFetch(handler: ApiHandler) {
+  const fetchMock = vi.fn((input: RequestInfo | URL, init?: RequestInit) => {
+    const href = input instanceof Request ? input.url : String(input);
+    return Promise.resolve(handler(new URL(href, 'http://restday.test'), init));
+  });
+  vi.stubGlobal('fetch', fetchMock);
+  return fetchMock;
+}
+
+export function jsonResponse(body: unknown, status = 200): Response {
+  return new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+}
+
+export function apiErrorResponse(status: number, code: string, message: string): Response {
+  return jsonResponse({ error: { code, message } }, status);
+}
+
+/** The URLs `fetch` was called with, as path plus query. */
+export function requestedUrls(fetchMock: ReturnType<typeof stubFetch>): string[] {
+  return fetchMock.mock.calls.map(([input]) => {
+    const url = new URL(String(input), 'http://restday.test');
+    return `${url.pathname}${url.search}`;
+  });
+}
+
+// Invented lots for tests; no real farm, producer or importer.
+export function makeLot(overrides: Partial<LotSummary> = {}): LotSummary {
+  return {
+    code: 'RD-T01',
+    name: 'Test Ridge Washed',
+    origin: 'Ethiopia',
+    region: 'Sidama',
+    process: 'washed',
+    variety: 'Heirloom',
+    altitudeM: 1950,
+    cropYear: 2025,
+    suggestedLevel: 'light',
+    tastingNotes: ['bergamot', 'apricot'],
+    cuppingScore: 87.25,
+    stockGrams: 18_400,
+    pricePerKgCents: 2450,
+    photoUrl: null,
+    ...overrides,
+  };
+}
+
+export function makeLotDetail(overrides: Partial<LotDetail> = {}): LotDetail {
+  const { photoUrl: _photoUrl, ...summary } = makeLot();
+  return {
+    ...summary,
+    producer: 'Invented Hills Cooperative',
+    moisturePct: 10.8,
+    densityGPerL: 712,
+    screenSize: '17/18',
+    description: 'A bright, clean lot invented for tests.',
+    allowedLevels: ['light', 'medium'],
+    priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2200 }],
+    photos: [],
+    specSheetUrl: null,
+    ...overrides,
+  };
+}
