@@ -1,7 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
+import { existsSync } from 'node:fs';
 import { chromium, type Browser } from 'playwright-core';
 
 const chromiumPath = '/usr/bin/chromium';
@@ -21,8 +19,8 @@ export function ensureChromium(): string {
   return chromiumPath;
 }
 
+/** Playwright gives each launch a fresh, empty profile of its own. */
 export async function launchChromium(): Promise<Browser> {
-  const userDataDir = mkdtempSync(path.join(tmpdir(), 'restday-chromium-'));
   return chromium.launch({
     executablePath: ensureChromium(),
     headless: true,
@@ -34,7 +32,6 @@ export async function launchChromium(): Promise<Browser> {
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${userDataDir}`,
     ],
   });
 }
