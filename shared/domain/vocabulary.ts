@@ -66,3 +66,16 @@ export type HomeRoastDevice = (typeof homeRoastDevices)[number];
 
 export const stockMovementReasons = ['arrival', 'sale', 'roast', 'sample', 'loss', 'count', 'refund'] as const;
 export type StockMovementReason = (typeof stockMovementReasons)[number];
+
+/** Days of the week by short code, Monday first (ISO 8601 order). */
+export const weekdays = ['mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun'] as const;
+export type Weekday = (typeof weekdays)[number];
+export const weekdayLabels: Record<Weekday, string> = {
+  mon: 'Monday',
+  tue: 'Tuesday',
+  wed: 'Wednesday',
+  thu: 'Thursday',
+  fri: 'Friday',
+  sat: 'Saturday',
+  sun: 'Sunday',
+};

@@ -1,0 +1,99 @@
+/**
+ * Money as integers in the currency's minor unit (cents for USD, yen for JPY), as Stripe takes
+ * amounts (Stripe docs, Currencies: zero-decimal and three-decimal currencies).
+ *
+ * Rounding rule, stated once for all of Restday: when an amount must be rounded to the minor
+ * unit, round to the nearest unit, halves up (away from zero): `roundHalfUpDiv` in integer-math.ts.
+ * Every other function here works on whole minor units and never rounds.
+ *
+ * - `currencies`, `currencyExponent(code)`: minor-unit exponent (usd 2, jpy 0, kwd 3).
+ * - `toMinorUnits(text, currency)`: "12.34" → 1234; refuses more decimals than the currency has.
+ * - `formatMoney(minor, currency, locale?)`: 1234 usd → "$12.34".
+ * - `percentOf(amount, pct)`: a percentage of an amount, rounded by the rule above.
+ * - `sumMinor(amounts)`: a checked sum (every term and the total safe integers).
+ */
+import { roundHalfUpDiv, toHundredths } from './integer-math';
+import type { ParseResult } from './units';
+
+/** Lower-case ISO 4217 codes, as Stripe's API spells them, with their minor-unit exponent. */
+export const currencyExponents = {
+  usd: 2,
+  cad: 2,
+  eur: 2,
+  gbp: 2,
+  aud: 2,
+  nzd: 2,
+  chf: 2,
+  jpy: 0,
+  krw: 0,
+  vnd: 0,
+  clp: 0,
+  bhd: 3,
+  jod: 3,
+  kwd: 3,
+  omr: 3,
+  tnd: 3,
+} as const satisfies Record<string, 0 | 2 | 3>;
+export type CurrencyCode = keyof typeof currencyExponents;
+export const currencies = Object.keys(currencyExponents) as CurrencyCode[];
+
+export function isCurrencyCode(code: string): code is CurrencyCode {
+  return Object.hasOwn(currencyExponents, code);
+}
+
+export function currencyExponent(currency: CurrencyCode): number {
+  return currencyExponents[currency];
+}
+
+function assertMinor(amount: number): void {
+  if (!Number.isSafeInteger(amount)) throw new RangeError(`money must be whole minor units, got ${amount}`);
+}
+
+const AMOUNT_PATTERN = /^-?\d+(\.\d+)?$/;
+
+export function toMinorUnits(text: string, currency: CurrencyCode): ParseResult<number> {
+  const trimmed = text.trim().replaceAll(',', '');
+  const exponent = currencyExponent(currency);
+  if (!AMOUNT_PATTERN.test(trimmed)) return { ok: false, message: `"${text}" is not an amount, e.g. "12.50".` };
+  if ((trimmed.split('.')[1]?.length ?? 0) > exponent) {
+    return {
+      ok: false,
+      message:
+        exponent === 0
+          ? `${currency.toUpperCase()} has no minor unit; enter a whole amount.`
+          : `${currency.toUpperCase()} amounts have at most ${exponent} decimals.`,
+    };
+  }
+  const [whole = '0', fraction = ''] = trimmed.split('.');
+  // Built from the digits as written, so no float ever touches the amount.
+  const minor = Number(BigInt(`${whole}${fraction.padEnd(exponent, '0')}`));
+  if (!Number.isSafeInteger(minor)) return { ok: false, message: 'That amount is too large.' };
+  return { ok: true, value: minor };
+}
+
+export function formatMoney(amount: number, currency: CurrencyCode, locale = 'en-US'): string {
+  assertMinor(amount);
+  const exponent = currencyExponent(currency);
+  return new Intl.NumberFormat(locale, {
+    style: 'currency',
+    currency: currency.toUpperCase(),
+    minimumFractionDigits: exponent,
+    maximumFractionDigits: exponent,
+  }).format(amount / 10 ** exponent);
+}
+
+/** `pct` % of `amount` (pct with up to two decimals), rounded half-up to a whole minor unit. */
+export function percentOf(amount: number, pct: number): number {
+  assertMinor(amount);
+  return roundHalfUpDiv(BigInt(amount) * BigInt(toHundredths(pct)), 10_000);
+}
+
+export function sumMinor(amounts: readonly number[]): number {
+  let total = 0;
+  for (const amount of amounts) {
+    assertMinor(amount);
+    total += amount;
+  }
+  assertMinor(total);
+  return total;
+}

@@ -1,0 +1,278 @@
+/**
+ * The Roast Calendar: which days roast and ship, and the dates each order and subscription
+ * delivery gets, in the shop's time zone.
+ *
+ * - `isOpenRoastDay(date, settings, calendar)`, `isShipDay(date, settings, calendar)`,
+ *   `dayCapacityGrams(date, settings, calendar)`.
+ * - `cutoffInstant(roastDate, settings)`: orders paid before it can roast that day.
+ * - `datesForRoastDate(roastDate, coffee, settings, calendar)`: ship date (first ship day on or
+ *   after roast + degassing hold), ready-from (roast + rest for the brew method and level),
+ *   best-before (roast + bestBeforeDays), expected arrival (ship + transit business days).
+ * - `scheduleOrder(order, settings, calendar)`: for an instant of payment, the first open roast
+ *   day whose cutoff has not passed and with capacity left, and the dates that follow from it.
+ * - `subscriptionDeliveries(subscription, settings, calendar)`: the anchored series of deliveries
+ *   for a cadence, honouring skips, a pause and closures without drifting. To change the cadence,
+ *   anchor the new series on the `nominalDate` of the first delivery that is not locked.
+ * - `roastCalendarDays(from, to, settings, calendar)`: the calendar view of a date range.
+ * - `greenOrderDates(paidAt, settings, calendar)`: green coffee ships (no roast) on the first ship
+ *   day on or after the payment day, or the next one when paid after the cutoff time.
+ *
+ * Rules: a cutoff has passed at the cutoff instant itself. A calendar override decides whether a
+ * day roasts; an override that closes a day also stops shipping on it (the shop is closed).
+ * Transit counts Monday–Friday. Subscription deliveries are booked ahead and not held back by
+ * capacity; one-time orders are. Searches look at most `SEARCH_HORIZON_DAYS` ahead and throw a
+ * `ScheduleError` when nothing is found.
+ */
+import { addDays, daysBetween, instantAt, localDateOf, weekdayOf, type IsoDate } from './shop-time';
+import type { BrewMethod, CadenceWeeks, RoastLevel, Weekday } from './vocabulary';
+
+export interface ScheduleSettings {
+  timeZone: string;
+  roastWeekdays: readonly Weekday[];
+  cutoff: { time: string; daysBefore: number };
+  shipWeekdays: readonly Weekday[];
+  transitDays: number;
+  degasHoldDays: number;
+  restDays: Record<BrewMethod, number>;
+  /** Added to the brew method's rest per level (darker roasts degas faster). */
+  restAdjustDays: Record<RoastLevel, number>;
+  bestBeforeDays: number;
+  dayCapacityGrams: number;
+}
+
+export interface CalendarOverride {
+  open: boolean;
+  capacityGrams?: number | null;
+  note?: string | null;
+}
+
+export interface RoastCalendar {
+  overrides?: Readonly<Record<IsoDate, CalendarOverride>>;
+  /** Green grams already planned per roast day. */
+  plannedGreenGrams?: Readonly<Record<IsoDate, number>>;
+}
+
+export const SEARCH_HORIZON_DAYS = 120;
+
+export class ScheduleError extends Error {
+  constructor(
+    readonly code: 'no_roast_day' | 'no_ship_day',
+    message: string,
+  ) {
+    super(message);
+    this.name = 'ScheduleError';
+  }
+}
+
+const businessDays: ReadonlySet<Weekday> = new Set(['mon', 'tue', 'wed', 'thu', 'fri']);
+
+export function isOpenRoastDay(date: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): boolean {
+  const override = calendar.overrides?.[date];
+  return override ? override.open : settings.roastWeekdays.includes(weekdayOf(date));
+}
+
+export function isShipDay(date: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): boolean {
+  if (calendar.overrides?.[date]?.open === false) return false;
+  return settings.shipWeekdays.includes(weekdayOf(date));
+}
+
+/** Green grams the day can roast; zero when closed. */
+export function dayCapacityGrams(date: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): number {
+  if (!isOpenRoastDay(date, settings, calendar)) return 0;
+  return calendar.overrides?.[date]?.capacityGrams ?? settings.dayCapacityGrams;
+}
+
+export function cutoffInstant(roastDate: IsoDate, settings: ScheduleSettings): Date {
+  return instantAt(addDays(roastDate, -settings.cutoff.daysBefore), settings.cutoff.time, settings.timeZone);
+}
+
+function firstDayFrom(start: IsoDate, accept: (date: IsoDate) => boolean): IsoDate | undefined {
+  for (let offset = 0; offset <= SEARCH_HORIZON_DAYS; offset += 1) {
+    const date = addDays(start, offset);
+    if (accept(date)) return date;
+  }
+  return undefined;
+}
+
+function firstShipDayFrom(start: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar): IsoDate {
+  const shipDate = firstDayFrom(start, (date) => isShipDay(date, settings, calendar));
+  if (!shipDate) {
+    throw new ScheduleError('no_ship_day', `No ship day within ${SEARCH_HORIZON_DAYS} days of ${start}.`);
+  }
+  return shipDate;
+}
+
+/** The date after `transitDays` business days in transit. */
+export function arrivalDate(shipDate: IsoDate, transitDays: number): IsoDate {
+  let date = shipDate;
+  for (let remaining = transitDays; remaining > 0; ) {
+    date = addDays(date, 1);
+    if (businessDays.has(weekdayOf(date))) remaining -= 1;
+  }
+  return date;
+}
+
+export interface CoffeeForRest {
+  brewMethod: BrewMethod;
+  roastLevel: RoastLevel;
+}
+
+export interface RoastDates {
+  roastDate: IsoDate;
+  /** Orders paid at or after this instant miss the roast date (ISO-8601 UTC). */
+  cutoffAt: string;
+  shipDate: IsoDate;
+  readyFrom: IsoDate;
+  bestBefore: IsoDate;
+  expectedArrival: IsoDate;
+}
+
+export function restDaysFor(coffee: CoffeeForRest, settings: ScheduleSettings): number {
+  return Math.max(0, settings.restDays[coffee.brewMethod] + settings.restAdjustDays[coffee.roastLevel]);
+}
+
+export function datesForRoastDate(
+  roastDate: IsoDate,
+  coffee: CoffeeForRest,
+  settings: ScheduleSettings,
+  calendar: RoastCalendar = {},
+): RoastDates {
+  const shipDate = firstShipDayFrom(addDays(roastDate, settings.degasHoldDays), settings, calendar);
+  return {
+    roastDate,
+    cutoffAt: cutoffInstant(roastDate, settings).toISOString(),
+    shipDate,
+    readyFrom: addDays(roastDate, restDaysFor(coffee, settings)),
+    bestBefore: addDays(roastDate, settings.bestBeforeDays),
+    expectedArrival: arrivalDate(shipDate, settings.transitDays),
+  };
+}
+
+export interface OrderToSchedule extends CoffeeForRest {
+  paidAt: Date;
+  /** Green grams the order adds to its roast day. */
+  greenGrams: number;
+}
+
+export function scheduleOrder(
+  order: OrderToSchedule,
+  settings: ScheduleSettings,
+  calendar: RoastCalendar = {},
+): RoastDates {
+  const paidMs = order.paidAt.getTime();
+  const paidDate = localDateOf(order.paidAt, settings.timeZone);
+  const roastDate = firstDayFrom(
+    paidDate,
+    (date) =>
+      isOpenRoastDay(date, settings, calendar) &&
+      paidMs < cutoffInstant(date, settings).getTime() &&
+      (calendar.plannedGreenGrams?.[date] ?? 0) + order.greenGrams <= dayCapacityGrams(date, settings, calendar),
+  );
+  if (!roastDate) {
+    throw new ScheduleError(
+      'no_roast_day',
+      `No open roast day within ${SEARCH_HORIZON_DAYS} days has ${order.greenGrams.toLocaleString('en-US')} g of capacity left.`,
+    );
+  }
+  return datesForRoastDate(roastDate, order, settings, calendar);
+}
+
+export interface SubscriptionForSchedule extends CoffeeForRest {
+  /** Roast date of the first delivery; every later one sits on this weekly grid. */
+  anchorDate: IsoDate;
+  cadenceWeeks: CadenceWeeks;
+  /** Nominal (grid) dates of deliveries the subscriber skipped. */
+  skippedDates?: readonly IsoDate[];
+  /** Deliveries whose grid date falls before this date are paused (not listed). */
+  pausedUntil?: IsoDate | null;
+  /** List deliveries roasting on or after this date; defaults to today in the shop. */
+  from?: IsoDate;
+  count: number;
+  now: Date;
+}
+
+export interface ScheduledDelivery extends RoastDates {
+  /** The delivery's place on the grid; stable when a closure moves the roast date. */
+  nominalDate: IsoDate;
+  status: 'scheduled' | 'skipped';
+  movedByClosure: boolean;
+  /** True once the cutoff has passed: changes then reach the next delivery. */
+  locked: boolean;
+}
+
+export function subscriptionDeliveries(
+  subscription: SubscriptionForSchedule,
+  settings: ScheduleSettings,
+  calendar: RoastCalendar = {},
+): ScheduledDelivery[] {
+  const periodDays = subscription.cadenceWeeks * 7;
+  const from = subscription.from ?? localDateOf(subscription.now, settings.timeZone);
+  const skipped = new Set(subscription.skippedDates ?? []);
+  const pausedUntil = subscription.pausedUntil ?? null;
+  // A delivery can only move later, and by at most the search horizon, so start just before `from`.
+  const firstIndex = Math.max(0, Math.floor((daysBetween(subscription.anchorDate, from) - SEARCH_HORIZON_DAYS) / periodDays));
+  const deliveries: ScheduledDelivery[] = [];
+  for (let index = firstIndex; deliveries.length < subscription.count; index += 1) {
+    const nominalDate = addDays(subscription.anchorDate, index * periodDays);
+    if (pausedUntil !== null && nominalDate < pausedUntil) continue;
+    const roastDate = firstDayFrom(nominalDate, (date) => isOpenRoastDay(date, settings, calendar));
+    if (!roastDate) {
+      throw new ScheduleError('no_roast_day', `No open roast day within ${SEARCH_HORIZON_DAYS} days of ${nominalDate}.`);
+    }
+    if (roastDate < from) continue;
+    const dates = datesForRoastDate(roastDate, subscription, settings, calendar);
+    deliveries.push({
+      ...dates,
+      nominalDate,
+      status: skipped.has(nominalDate) ? 'skipped' : 'scheduled',
+      movedByClosure: roastDate !== nominalDate,
+      locked: subscription.now.getTime() >= Date.parse(dates.cutoffAt),
+    });
+  }
+  return deliveries;
+}
+
+export interface CalendarDay {
+  date: IsoDate;
+  weekday: Weekday;
+  open: boolean;
+  capacityGrams: number;
+  plannedGreenGrams: number;
+  note: string | null;
+}
+
+export const MAX_CALENDAR_SPAN_DAYS = 366;
+
+export function roastCalendarDays(
+  from: IsoDate,
+  to: IsoDate,
+  settings: ScheduleSettings,
+  calendar: RoastCalendar = {},
+): CalendarDay[] {
+  const span = daysBetween(from, to);
+  if (span < 0 || span >= MAX_CALENDAR_SPAN_DAYS) {
+    throw new RangeError(`the range must run forwards and span at most ${MAX_CALENDAR_SPAN_DAYS} days`);
+  }
+  return Array.from({ length: span + 1 }, (_, offset) => {
+    const date = addDays(from, offset);
+    return {
+      date,
+      weekday: weekdayOf(date),
+      open: isOpenRoastDay(date, settings, calendar),
+      capacityGrams: dayCapacityGrams(date, settings, calendar),
+      plannedGreenGrams: calendar.plannedGreenGrams?.[date] ?? 0,
+      note: calendar.overrides?.[date]?.note ?? null,
+    };
+  });
+}
+
+export function greenOrderDates(
+  paidAt: Date,
+  settings: ScheduleSettings,
+  calendar: RoastCalendar = {},
+): { shipDate: IsoDate; expectedArrival: IsoDate } {
+  const paidDate = localDateOf(paidAt, settings.timeZone);
+  const beforeCutoff = paidAt.getTime() < instantAt(paidDate, settings.cutoff.time, settings.timeZone).getTime();
+  const shipDate = firstShipDayFrom(beforeCutoff ? paidDate : addDays(paidDate, 1), settings, calendar);
+  return { shipDate, expectedArrival: arrivalDate(shipDate, settings.transitDays) };
+}

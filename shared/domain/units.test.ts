@@ -1,0 +1,119 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+  bagFillGrams,
+  fillGrams,
+  GRAMS_PER_OUNCE,
+  GRAMS_PER_POUND,
+  gramsToOunces,
+  gramsToPounds,
+  parseQuantity,
+  toGrams,
+  type MassUnit,
+} from './units';
+
+describe('exact conversion factors', () => {
+  it('uses the defined pound and ounce', () => {
+    expect(GRAMS_PER_POUND).toBe(453.59237); // NIST SP 811 App. B (exact)
+    expect(GRAMS_PER_OUNCE).toBeCloseTo(28.349523125, 12); // NIST SP 811 App. B (exact)
+  });
+
+  it('converts the bag sizes as TRADE.md lists them', () => {
+    expect(toGrams({ amount: 12, unit: 'oz' })).toBeCloseTo(340.19, 2); // NIST SP 811 via TRADE.md
+    expect(toGrams({ amount: 1, unit: 'lb' })).toBeCloseTo(453.59, 2); // NIST SP 811 via TRADE.md
+    expect(toGrams({ amount: 2, unit: 'lb' })).toBeCloseTo(907.18, 2); // NIST SP 811 via TRADE.md
+    expect(toGrams({ amount: 5, unit: 'lb' })).toBeCloseTo(2267.96, 2); // NIST SP 811 via TRADE.md
+    expect(toGrams({ amount: 0.5, unit: 'kg' })).toBe(500);
+  });
+
+  it('converts grams back to ounces and pounds', () => {
+    expect(gramsToOunces(340.1942775)).toBeCloseTo(12, 10); // NIST SP 811 App. B
+    expect(gramsToPounds(907.18474)).toBeCloseTo(2, 10); // NIST SP 811 App. B
+  });
+});
+
+describe('fill grams: the declared quantity rounded up to a whole gram', () => {
+  it('fills each bag size to at least its label (PRODUCT.md)', () => {
+    expect(bagFillGrams('8oz')).toBe(227); // PRODUCT.md: 226.80 g → 227
+    expect(bagFillGrams('12oz')).toBe(341); // PRODUCT.md: 340.19 g → 341
+    expect(bagFillGrams('1lb')).toBe(454); // PRODUCT.md: 453.59 g → 454
+    expect(bagFillGrams('2lb')).toBe(908); // PRODUCT.md: 907.18 g → 908
+    expect(bagFillGrams('5lb')).toBe(2268); // PRODUCT.md: 2267.96 g → 2268
+  });
+
+  it('is never short and never a whole gram over, for any typed amount', () => {
+    const unit = fc.constantFrom<MassUnit>('g', 'kg', 'oz', 'lb');
+    const amount = fc.integer({ min: 1, max: 10_000_000 }).map((thousandths) => thousandths / 1000);
+    fc.assert(
+      fc.property(amount, unit, (value, massUnit) => {
+        const exact = toGrams({ amount: value, unit: massUnit });
+        const fill = fillGrams({ amount: value, unit: massUnit });
+        expect(fill).toBeGreaterThanOrEqual(exact - 1e-6);
+        expect(fill - 1).toBeLessThan(exact);
+      }),
+    );
+  });
+
+  it('keeps whole grams exact and agrees between pounds and ounces', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 100_000 }), (n) => {
+        expect(fillGrams({ amount: n, unit: 'g' })).toBe(n);
+        expect(fillGrams({ amount: n / 1000, unit: 'kg' })).toBe(n);
+        expect(fillGrams({ amount: n, unit: 'lb' })).toBe(fillGrams({ amount: 16 * n, unit: 'oz' }));
+      }),
+    );
+  });
+});
+
+describe('out-of-range amounts', () => {
+  it('refuses negative and enormous amounts instead of rounding them', () => {
+    expect(() => fillGrams({ amount: -1, unit: 'g' })).toThrow(RangeError);
+    expect(() => fillGrams({ amount: 1e12, unit: 'kg' })).toThrow(RangeError);
+  });
+});
+
+describe('parseQuantity', () => {
+  it.each([
+    ['1 lb', 1, 'lb'],
+    ['340 g', 340, 'g'],
+    ['12oz', 12, 'oz'],
+    ['0.5 kg', 0.5, 'kg'],
+    ['  2 Pounds ', 2, 'lb'],
+    ['1.5lbs', 1.5, 'lb'],
+    ['1,000 g', 1000, 'g'],
+    ['.5 kg', 0.5, 'kg'],
+    ['8 oz.', 8, 'oz'],
+  ])('reads %j', (text, amount, unit) => {
+    expect(parseQuantity(text)).toEqual({ ok: true, value: { amount, unit } });
+  });
+
+  it.each([
+    ['', /empty/],
+    ['twelve ounces', /not a weight/],
+    ['12', /needs a unit/],
+    ['12 stone', /"stone" is not a unit/],
+    ['0 g', /more than zero/],
+    ['0,5 kg', /point for decimals/],
+    ['-1 lb', /not a weight/],
+    ['1.1234567 kg', /at most 6 decimals/],
+    ['2000 kg', /more than a tonne/],
+  ])('explains what is wrong with %j', (text, message) => {
+    const result = parseQuantity(text);
+    expect(result.ok).toBe(false);
+    if (!result.ok) {
+      expect(result.message).toMatch(message);
+      expect(result.message.length).toBeGreaterThan(20);
+    }
+  });
+
+  it('reads back any amount it is given with a unit', () => {
+    const unit = fc.constantFrom<MassUnit>('g', 'kg', 'oz', 'lb');
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 9_999_999 }), unit, (hundredths, massUnit) => {
+        const amount = hundredths / 100;
+        if (toGrams({ amount, unit: massUnit }) > 1_000_000) return;
+        expect(parseQuantity(`${amount} ${massUnit}`)).toEqual({ ok: true, value: { amount, unit: massUnit } });
+      }),
+    );
+  });
+});
