@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isRoastGuideDevice, roastGuideDevices } from '../domain/home-roast-guide';
 import { processes, roastLevels } from '../domain/vocabulary';
 
 const booleanFlag = z
@@ -53,3 +54,14 @@ export const lotDetailSchema = lotSummarySchema.omit({ photoUrl: true }).extend(
   specSheetUrl: z.string().nullable(),
 });
 export type LotDetail = z.infer<typeof lotDetailSchema>;
+
+/** Query string of `GET /api/lots/:code/roast-guide`; the level defaults to the lot's suggestion. */
+export const roastGuideQuerySchema = z.object({
+  device: z
+    .string()
+    .default('popper')
+    .refine(isRoastGuideDevice, { message: `must be one of: ${roastGuideDevices.join(', ')}` }),
+  level: z.enum(roastLevels).optional(),
+  greenGrams: z.coerce.number().int('must be whole grams').min(1).max(100_000).default(454),
+});
+export type RoastGuideQuery = z.infer<typeof roastGuideQuerySchema>;

@@ -1,23 +1,12 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, date, index, integer, jsonb, numeric, pgTable, text, uuid } from 'drizzle-orm/pg-core';
-import type { RoastLevel } from '../../../shared/domain/vocabulary';
+import { defaultLossModel, type LossModel } from '../../../shared/domain/roast-loss';
 import { users } from './accounts';
 import { lots } from './catalog';
 import { instant, timestamps } from './common';
 import { roastLevelEnum } from './enums';
 import { orderItems, orders } from './orders';
 
-export type LossRange = { minPct: number; maxPct: number; defaultPct: number };
-export type LossModel = Record<RoastLevel, LossRange>;
-
-/** The loss model defaults from TRADE.md (from memory; ranges, midpoint as default). */
-export const defaultLossModel: LossModel = {
-  light: { minPct: 11, maxPct: 14, defaultPct: 12.5 },
-  medium: { minPct: 14, maxPct: 16, defaultPct: 15 },
-  'medium-dark': { minPct: 16, maxPct: 18, defaultPct: 17 },
-  dark: { minPct: 18, maxPct: 20, defaultPct: 19 },
-  french: { minPct: 20, maxPct: 25, defaultPct: 22 },
-};
 
 /**
  * The shop's settings: exactly one row (id = 1). Weekdays are ISO numbers (1 = Monday … 7 = Sunday)

@@ -21,11 +21,10 @@ import type {
   Role,
   SubscriptionStatus,
 } from '../../../shared/domain/vocabulary';
-import { roastLevels } from '../../../shared/domain/vocabulary';
 import type { Db } from '../client';
 import * as schema from '../schema/index';
-import type { AddressSnapshot, LossModel } from '../schema/index';
-import { defaultLossModel } from '../schema/index';
+import { defaultLossModel, estimateLevelFromLoss, lossPctOf } from '../../../shared/domain/roast-loss';
+import type { AddressSnapshot } from '../schema/index';
 import type { DemoCalendar } from './demo-dates';
 import { demoCalendar } from './demo-dates';
 import type { DemoLot } from './demo-lots';
@@ -122,12 +121,6 @@ async function insertScenario(tx: Tx, sc: DemoScenario): Promise<void> {
   await insertMany(tx, schema.emailOutbox, sc.outbox);
 }
 
-/** Expected-loss helpers on the loss model. */
-function estimateLevel(model: LossModel, lossPct: number): RoastLevel {
-  for (const level of roastLevels) if (lossPct <= model[level].maxPct) return level;
-  return 'french';
-}
-const round2 = (n: number) => Math.round(n * 100) / 100;
 const earlier = (a: Date, b: Date) => (a.getTime() <= b.getTime() ? a : b);
 
 /** Build every demo row in memory (pure: same `now` and hash → same rows). */
@@ -458,7 +451,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       const lossPct = batchCounter % 11 === 5 ? loss.maxPct + 1.2 : loss.defaultPct + (rng.next() - 0.5) * (loss.maxPct - loss.minPct) * 0.8;
       const greenGramsIn = perBatch + rng.int(0, 9);
       const roastedGramsOut = Math.round(greenGramsIn * (1 - lossPct / 100));
-      const recordedLoss = round2(((greenGramsIn - roastedGramsOut) / greenGramsIn) * 100);
+      const recordedLoss = lossPctOf(greenGramsIn, roastedGramsOut);
       const [total, development] = levelSeconds[level];
       const totalSeconds = total + rng.int(-30, 30);
       const id = rng.uuid();
@@ -594,7 +587,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     const greenGrams = rng.int(p.green[0], p.green[1]);
     const lossTarget = model[level].minPct + rng.next() * (model[level].maxPct - model[level].minPct);
     const roastedGrams = Math.round(greenGrams * (1 - lossTarget / 100));
-    const lossPct = round2(((greenGrams - roastedGrams) / greenGrams) * 100);
+    const lossPct = lossPctOf(greenGrams, roastedGrams);
     const yellowSeconds = rng.int(p.yellow[0], p.yellow[1]);
     const firstCrackSeconds = rng.int(p.crack[0], p.crack[1]);
     const endSeconds = firstCrackSeconds + rng.int(afterCrack[level][0], afterCrack[level][1]);
@@ -611,7 +604,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       firstCrackSeconds,
       endSeconds,
       levelReached: rng.chance(0.8) ? level : null,
-      estimatedLevel: estimateLevel(model, lossPct),
+      estimatedLevel: estimateLevelFromLoss(lossPct, model).level,
       lossPct,
       developmentSeconds: endSeconds - firstCrackSeconds,
       notes: rng.pick(['', 'Windy on the porch; took longer to yellow.', 'Stirred constantly, even colour.', 'First crack was quiet, went by smell.', 'Cooled in a colander by the fan.']),

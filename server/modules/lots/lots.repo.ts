@@ -1,6 +1,6 @@
 import { and, asc, eq, gte, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { lotPriceBreaks, lots, uploads } from '../../db/schema/index';
+import { lotPriceBreaks, lots, shopSettings, uploads } from '../../db/schema/index';
 import type { LotListQuery } from '@shared/schemas/lots';
 
 /** The query's filters, with "in stock" already turned into a gram threshold by the service. */
@@ -84,6 +84,20 @@ export function createLotsRepo(db: Db) {
           .orderBy(asc(uploads.position), asc(uploads.createdAt)),
       ]);
       return { lot, priceBreaks, files };
+    },
+
+    /** The owner's loss model, or undefined before the shop has settings. */
+    async lossModel() {
+      const [settings] = await db.select({ lossModel: shopSettings.lossModel }).from(shopSettings).limit(1);
+      return settings?.lossModel;
+    },
+
+    async findListedLevels(code: string) {
+      const [lot] = await db
+        .select({ suggestedLevel: lots.suggestedLevel, allowedLevels: lots.allowedLevels })
+        .from(lots)
+        .where(and(eq(lots.code, code), eq(lots.isListed, true)));
+      return lot;
     },
   };
 }

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { lotListQuerySchema, type LotDetail, type LotListResponse } from '@shared/schemas/lots';
+import { lotListQuerySchema, roastGuideQuerySchema, type LotDetail, type LotListResponse } from '@shared/schemas/lots';
 import type { LotsService } from './lots.service';
 
 const lotCodeParams = z.object({ code: z.string().trim().min(1).max(40) });
@@ -16,6 +16,11 @@ export function lotsRoutes(service: LotsService): Router {
   router.get('/:code', async (req, res) => {
     const { code } = lotCodeParams.parse(req.params);
     res.json((await service.get(code)) satisfies LotDetail);
+  });
+
+  router.get('/:code/roast-guide', async (req, res) => {
+    const { code } = lotCodeParams.parse(req.params);
+    res.json(await service.roastGuide(code, roastGuideQuerySchema.parse(req.query)));
   });
 
   return router;

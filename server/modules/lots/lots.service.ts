@@ -1,6 +1,8 @@
+import { homeRoastGuide, type HomeRoastGuide } from '@shared/domain/home-roast-guide';
+import { defaultLossModel } from '@shared/domain/roast-loss';
 import { bagFillGrams } from '@shared/domain/units';
 import { greenBagSizes } from '@shared/domain/vocabulary';
-import type { LotDetail, LotListQuery, LotSummary } from '@shared/schemas/lots';
+import type { LotDetail, LotListQuery, LotSummary, RoastGuideQuery } from '@shared/schemas/lots';
 import { AppError } from '../../lib/app-error';
 import type { LotsRepo } from './lots.repo';
 
@@ -46,6 +48,15 @@ export function createLotsService(repo: LotsRepo) {
         photos: files.filter((file) => file.kind === 'photo').map((file) => uploadUrl(file.id)),
         specSheetUrl: specSheet ? uploadUrl(specSheet.id) : null,
       };
+    },
+
+    async roastGuide(code: string, query: RoastGuideQuery): Promise<HomeRoastGuide> {
+      const [lot, lossModel] = await Promise.all([repo.findListedLevels(code), repo.lossModel()]);
+      if (!lot) throw new AppError(404, 'lot_not_found', `No lot with code ${code}.`);
+      return homeRoastGuide(
+        { device: query.device, level: query.level ?? lot.suggestedLevel, greenGrams: query.greenGrams, suggestedLevel: lot.suggestedLevel },
+        lossModel ?? defaultLossModel,
+      );
     },
   };
 }
