@@ -31,7 +31,7 @@ export default defineConfig({
           name: 'api',
           include: ['tests/api/**/*.test.ts', 'tests/reliability/**/*.test.ts'],
           setupFiles: ['tests/setup/fail-on-console-error.ts'],
-          globalSetup: ['tests/setup/global-database.ts'],
+          globalSetup: ['tests/setup/global-services.ts'],
           // API tests share one database; files run one at a time so their fixtures never collide.
           fileParallelism: false,
           testTimeout: 20_000,

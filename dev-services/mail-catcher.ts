@@ -2,7 +2,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { projectRoot } from './postgres';
 
 export interface MailCatcher {
@@ -27,7 +26,8 @@ export async function startMailCatcher(options: { smtpPort: number; webPort: num
   }
   const mailDir = options.mailDir ?? path.join(projectRoot, '.data', 'mail');
   mkdirSync(mailDir, { recursive: true });
-  const binary = path.join(path.dirname(fileURLToPath(import.meta.resolve('maildev'))), 'bin', 'maildev.js');
+  // maildev's package exports only its ESM entry, so its binary is found by path (a direct dependency).
+  const binary = path.join(projectRoot, 'node_modules', 'maildev', 'dist', 'bin', 'maildev.js');
   const child: ChildProcess = spawn(
     process.execPath,
     [binary, '--smtp', String(options.smtpPort), '--web', String(options.webPort), '--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--mail-directory', mailDir, '--silent'],

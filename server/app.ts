@@ -7,6 +7,7 @@ import { pinoHttp } from 'pino-http';
 import type { Config } from './config';
 import type { Database } from './db/client';
 import type { Queue } from './jobs/queue';
+import type { Clock } from './lib/clock';
 import type { Logger } from './lib/logger';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { requireClientHeader } from './middleware/require-client-header';
@@ -19,6 +20,7 @@ export interface AppDeps {
   config: Config;
   database: Database;
   logger: Logger;
+  clock: Clock;
   /** Absent in API-only test apps; health then reports the queue as stopped. */
   queue?: Queue;
 }

@@ -5,6 +5,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig, type Config } from './config';
 import { createDatabase } from './db/client';
 import { startQueue } from './jobs/queue';
+import { createAdjustableClock, systemClock } from './lib/clock';
 import { createLogger, type Logger } from './lib/logger';
 
 export interface RunningServer {
@@ -21,7 +22,8 @@ export async function startServer(config: Config, logger: Logger = createLogger(
     onIdleError: (error) => logger.warn({ err: error }, 'database connection dropped'),
   });
   const queue = await startQueue(config.DATABASE_URL, logger);
-  const app = createApp({ config, database, logger, queue });
+  const clock = config.RESTDAY_TEST_CLOCK ? createAdjustableClock() : systemClock;
+  const app = createApp({ config, database, logger, queue, clock });
 
   const server: Server = await new Promise((resolve, reject) => {
     const listening = app.listen(config.PORT, config.HOST, () => resolve(listening));

@@ -1,0 +1,42 @@
+import type { TestProject } from 'vitest/node';
+import { startMailCatcher } from '../../dev-services/mail-catcher';
+import { createDatabaseIfMissing, startCluster, testClusterOptions } from '../../dev-services/postgres';
+import { runMigrations } from '../../server/db/migrate';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    databaseUrl: string;
+    /** SMTP of the test mail catcher, e.g. smtp://127.0.0.1:1026. */
+    smtpUrl: string;
+    /** The test mail catcher's REST API and inbox, e.g. http://127.0.0.1:1081. */
+    mailCatcherUrl: string;
+  }
+}
+
+/**
+ * The real services API tests talk to: the throwaway PostgreSQL cluster with a fresh, migrated
+ * database, and a mail catcher on its own ports (never the ones `npm start` uses).
+ */
+export default async function setup(project: TestProject) {
+  const cluster = startCluster(testClusterOptions());
+  const database = 'restday_test';
+  createDatabaseIfMissing(cluster, database, { recreate: true });
+  const databaseUrl = cluster.urlFor(database);
+  await runMigrations(databaseUrl);
+
+  const smtpPort = Number(process.env.RESTDAY_TEST_SMTP_PORT ?? 1026);
+  const mail = await startMailCatcher({
+    smtpPort,
+    webPort: Number(process.env.RESTDAY_TEST_MAILDEV_WEB_PORT ?? 1081),
+    mailDir: `${cluster.dataDir}-mail`,
+  });
+
+  project.provide('databaseUrl', databaseUrl);
+  project.provide('smtpUrl', `smtp://127.0.0.1:${smtpPort}`);
+  project.provide('mailCatcherUrl', mail.webUrl);
+
+  return async () => {
+    await mail.stop();
+    if (cluster.startedHere) cluster.stop();
+  };
+}
