@@ -2,7 +2,7 @@
 // listening on loopback only, with its socket inside its data directory.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readdirSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -14,7 +14,10 @@ const isRoot = process.getuid?.() === 0;
 export interface ClusterOptions {
   /** Where the cluster lives; falls back under /tmp when the postgres user cannot reach it. */
   dataDir: string;
+  /** 0 picks a free port when the cluster starts. */
   port: number;
+  /** The setting that changes the port, named when the port is taken. */
+  portVariable: string;
   /** Throwaway clusters for tests trade durability for speed. */
   durable: boolean;
 }
@@ -34,6 +37,7 @@ export function devClusterOptions(env: NodeJS.ProcessEnv = process.env): Cluster
   return {
     dataDir: env.RESTDAY_PG_DATA ?? path.join(projectRoot, '.data', 'postgres'),
     port: Number(env.RESTDAY_PG_PORT ?? 54329),
+    portVariable: 'RESTDAY_PG_PORT',
     durable: true,
   };
 }
@@ -41,7 +45,9 @@ export function devClusterOptions(env: NodeJS.ProcessEnv = process.env): Cluster
 export function testClusterOptions(env: NodeJS.ProcessEnv = process.env): ClusterOptions {
   return {
     dataDir: env.RESTDAY_TEST_PG_DATA ?? path.join(projectRoot, '.data', 'postgres-test'),
-    port: Number(env.RESTDAY_TEST_PG_PORT ?? 54339),
+    // Any free port: a second checkout's tests on the same machine must not collide with these.
+    port: Number(env.RESTDAY_TEST_PG_PORT ?? 0),
+    portVariable: 'RESTDAY_TEST_PG_PORT',
     durable: false,
   };
 }
@@ -109,22 +115,40 @@ function initCluster(bin: string, dataDir: string) {
   run(bin, 'initdb', ['-D', dataDir, '-U', databaseUser, '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8']);
 }
 
+/** postmaster.pid's fourth line is the port the running server listens on. */
+function runningPort(dataDir: string): number {
+  const port = Number(readFileSync(path.join(dataDir, 'postmaster.pid'), 'utf8').split('\n')[3]);
+  if (!Number.isInteger(port) || port <= 0) throw new PostgresSetupError(`Cannot read the port of the cluster in ${dataDir}`);
+  return port;
+}
+
+function freePort(): number {
+  // A synchronous probe keeps cluster start-up a plain sequence of commands.
+  const probe = spawnSync(process.execPath, ['-e', "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})"], {
+    encoding: 'utf8',
+  });
+  const port = Number(probe.stdout.trim());
+  if (!Number.isInteger(port) || port <= 0) throw new PostgresSetupError('Could not find a free port for PostgreSQL');
+  return port;
+}
+
 export function startCluster(options: ClusterOptions): RunningCluster {
   const bin = findPostgresBinaries();
   const dataDir = resolveDataDir(options.dataDir);
-  const cluster = (startedHere: boolean): RunningCluster => ({
+  const cluster = (port: number, startedHere: boolean): RunningCluster => ({
     dataDir,
-    port: options.port,
+    port,
     startedHere,
-    urlFor: (database) => `postgres://${databaseUser}@127.0.0.1:${options.port}/${database}`,
+    urlFor: (database) => `postgres://${databaseUser}@127.0.0.1:${port}/${database}`,
     stop: () => stopCluster(bin, dataDir),
   });
 
-  if (isRunning(bin, dataDir)) return cluster(false);
+  if (isRunning(bin, dataDir)) return cluster(runningPort(dataDir), false);
   if (!existsSync(path.join(dataDir, 'PG_VERSION'))) initCluster(bin, dataDir);
 
+  const port = options.port || freePort();
   const settings = [
-    `-p ${options.port}`,
+    `-p ${port}`,
     `-k ${dataDir}`,
     '-c listen_addresses=127.0.0.1',
     ...(options.durable ? [] : ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off']),
@@ -135,10 +159,10 @@ export function startCluster(options: ClusterOptions): RunningCluster {
   });
   if (started.status !== 0) {
     throw new PostgresSetupError(
-      `PostgreSQL did not start on 127.0.0.1:${options.port} (is the port taken? set RESTDAY_PG_PORT). See ${logFile}`,
+      `PostgreSQL did not start on 127.0.0.1:${port} (is the port taken? set ${options.portVariable}). See ${logFile}`,
     );
   }
-  return cluster(true);
+  return cluster(port, true);
 }
 
 function stopCluster(bin: string, dataDir: string) {

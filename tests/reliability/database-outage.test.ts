@@ -4,8 +4,9 @@ import { apiErrorSchema } from '@shared/schemas/errors';
 import { startCluster, testClusterOptions } from '../../dev-services/postgres';
 import { createTestApp } from '../setup/test-app';
 
-// Stops the real test cluster mid-run, so this file restarts it whatever happens.
-const restartCluster = () => startCluster(testClusterOptions());
+// Stops the real test cluster mid-run, so this file restarts it (on the same port) whatever happens.
+const { port } = startCluster(testClusterOptions());
+const restartCluster = () => startCluster({ ...testClusterOptions(), port });
 afterAll(() => {
   restartCluster();
 });

@@ -6,7 +6,7 @@ import { createDatabase } from '../../server/db/client';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/index';
 import { loadConfig } from '../../server/config';
-import { startServer } from '../../server/index';
+import { startServer, type RunningServer } from '../../server/index';
 import { createLogger } from '../../server/lib/logger';
 import { ensureChromium } from './chromium';
 
@@ -33,19 +33,29 @@ export default async function setup(project: TestProject) {
   buildClientIfStale();
 
   const cluster = startCluster(testClusterOptions());
-  createDatabaseIfMissing(cluster, 'restday_e2e', { recreate: true });
-  const databaseUrl = cluster.urlFor('restday_e2e');
-  await runMigrations(databaseUrl);
-  const seeding = createDatabase({ url: databaseUrl, poolMax: 2, connectTimeoutMs: 5000 });
-  await seedDemo(seeding.db, { now: new Date() });
-  await seeding.close();
+  const stopCluster = () => {
+    if (cluster.startedHere) cluster.stop();
+  };
+  let server: RunningServer;
+  try {
+    createDatabaseIfMissing(cluster, 'restday_e2e', { recreate: true });
+    const databaseUrl = cluster.urlFor('restday_e2e');
+    await runMigrations(databaseUrl);
+    const seeding = createDatabase({ url: databaseUrl, poolMax: 2, connectTimeoutMs: 5000 });
+    await seedDemo(seeding.db, { now: new Date() });
+    await seeding.close();
 
-  const config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'warn', DATABASE_URL: databaseUrl, PORT: String(await freePort()) });
-  const server = await startServer(config, createLogger(config));
+    const config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'warn', DATABASE_URL: databaseUrl, PORT: String(await freePort()) });
+    server = await startServer(config, createLogger(config));
+  } catch (error) {
+    // Teardown only runs after a successful set-up, so a failed one cleans up here.
+    stopCluster();
+    throw error;
+  }
   project.provide('baseUrl', server.url);
 
   return async () => {
     await server.stop();
-    if (cluster.startedHere) cluster.stop();
+    stopCluster();
   };
 }

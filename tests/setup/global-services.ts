@@ -1,5 +1,5 @@
 import type { TestProject } from 'vitest/node';
-import { startMailCatcher } from '../../dev-services/mail-catcher';
+import { startMailCatcher, type MailCatcher } from '../../dev-services/mail-catcher';
 import { createDatabaseIfMissing, startCluster, testClusterOptions } from '../../dev-services/postgres';
 import { runMigrations } from '../../server/db/migrate';
 
@@ -19,17 +19,27 @@ declare module 'vitest' {
  */
 export default async function setup(project: TestProject) {
   const cluster = startCluster(testClusterOptions());
+  const stopCluster = () => {
+    if (cluster.startedHere) cluster.stop();
+  };
   const database = 'restday_test';
-  createDatabaseIfMissing(cluster, database, { recreate: true });
-  const databaseUrl = cluster.urlFor(database);
-  await runMigrations(databaseUrl);
-
   const smtpPort = Number(process.env.RESTDAY_TEST_SMTP_PORT ?? 1026);
-  const mail = await startMailCatcher({
-    smtpPort,
-    webPort: Number(process.env.RESTDAY_TEST_MAILDEV_WEB_PORT ?? 1081),
-    mailDir: `${cluster.dataDir}-mail`,
-  });
+  let databaseUrl: string;
+  let mail: MailCatcher;
+  try {
+    createDatabaseIfMissing(cluster, database, { recreate: true });
+    databaseUrl = cluster.urlFor(database);
+    await runMigrations(databaseUrl);
+    mail = await startMailCatcher({
+      smtpPort,
+      webPort: Number(process.env.RESTDAY_TEST_MAILDEV_WEB_PORT ?? 1081),
+      mailDir: `${cluster.dataDir}-mail`,
+    });
+  } catch (error) {
+    // Teardown only runs after a successful set-up, so a failed one cleans up here.
+    stopCluster();
+    throw error;
+  }
 
   project.provide('databaseUrl', databaseUrl);
   project.provide('smtpUrl', `smtp://127.0.0.1:${smtpPort}`);
@@ -37,6 +47,6 @@ export default async function setup(project: TestProject) {
 
   return async () => {
     await mail.stop();
-    if (cluster.startedHere) cluster.stop();
+    stopCluster();
   };
 }
