@@ -3,6 +3,10 @@ import pg from 'pg';
 import * as schema from './schema/index';
 
 export type Db = NodePgDatabase<typeof schema>;
+/** The handle inside `db.transaction(async (tx) => …)`. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+/** Repos take either, so a service can run several of them in one transaction. */
+export type DbOrTx = Db | Tx;
 
 export interface Database {
   db: Db;
