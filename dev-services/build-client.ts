@@ -25,6 +25,11 @@ export function buildClientIfStale(): void {
   if (!clientBuildIsStale()) return;
   console.log('Building the shop client (sources changed since the last build)…');
   const vite = path.join(path.dirname(createRequire(import.meta.url).resolve('vite/package.json')), 'bin', 'vite.js');
-  const result = spawnSync(process.execPath, [vite, 'build', '--logLevel', 'warn'], { cwd: projectRoot, stdio: 'inherit' });
+  // Always a production bundle, even when a test runner (NODE_ENV=test) asks for the build.
+  const result = spawnSync(process.execPath, [vite, 'build', '--logLevel', 'warn'], {
+    cwd: projectRoot,
+    stdio: 'inherit',
+    env: { ...process.env, NODE_ENV: 'production' },
+  });
   if (result.status !== 0) throw new Error('The client build failed; see the messages above.');
 }
