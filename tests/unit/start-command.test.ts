@@ -2,7 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 
 describe('npm start with a bad setting', () => {
-  it('stops before starting anything, with a message that names the key', () => {
+  it('stops before starting anything, with a message that names the key', { timeout: 30_000 }, () => {
     const result = spawnSync(process.execPath, ['--import', 'tsx', 'dev-services/start.ts'], {
       env: { ...process.env, PORT: 'abc' },
       encoding: 'utf8',
