@@ -12,12 +12,22 @@ const redactedPaths = [
   '*.password',
   '*.token',
   '*.passwordHash',
+  '*.currentPassword',
+  '*.newPassword',
+  '*.resetUrl',
+  '*.acceptUrl',
 ];
 
-export function createLogger(config: Pick<Config, 'LOG_LEVEL' | 'NODE_ENV'>): Logger {
-  return pino({
-    level: config.LOG_LEVEL,
-    base: { service: 'restday' },
-    redact: { paths: redactedPaths, censor: '[redacted]' },
-  });
+/** JSON lines to stdout, or to `destination` (tests read the lines back). */
+export function createLogger(config: Pick<Config, 'LOG_LEVEL' | 'NODE_ENV'>, destination?: pino.DestinationStream): Logger {
+  return pino(
+    {
+      level: config.LOG_LEVEL,
+      base: { service: 'restday' },
+      // ISO 8601 in UTC ("time":"2026-12-01T14:03:00.000Z"): audit lines read the same in any zone.
+      timestamp: pino.stdTimeFunctions.isoTime,
+      redact: { paths: redactedPaths, censor: '[redacted]' },
+    },
+    destination,
+  );
 }

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { boolean, check, index, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, check, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { instant, timestamps } from './common';
 import { roleEnum } from './enums';
 
@@ -115,4 +115,18 @@ export const auditLog = pgTable(
     detail: jsonb('detail').$type<Record<string, unknown>>().notNull().default({}),
   },
   (t) => [index('audit_log_at_idx').on(t.at), index('audit_log_action_at_idx').on(t.action, t.at), index('audit_log_actor_id_idx').on(t.actorId)],
+);
+
+/**
+ * Fixed-window counters for throttling sign-in, sign-up and password reset, shared by every app
+ * process. The key is a SHA-256 of the bucket and its subject (IP, e-mail), so no address is stored.
+ */
+export const throttleCounters = pgTable(
+  'throttle_counters',
+  {
+    key: text('key').primaryKey(),
+    hits: integer('hits').notNull(),
+    resetAt: instant('reset_at').notNull(),
+  },
+  (t) => [index('throttle_counters_reset_at_idx').on(t.resetAt), check('throttle_counters_hits_not_negative', sql`${t.hits} >= 0`)],
 );

@@ -1,0 +1,37 @@
+import type { RequestHandler } from 'express';
+import type { Role } from '@shared/domain/vocabulary';
+import { AppError } from '../lib/app-error';
+
+/** Who is signed in, as the session middleware (server/modules/auth/load-session.ts) found them on this request. */
+export interface SessionUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  /** Hash of the session's id (the JWT's jti), as stored in the sessions table. */
+  sessionId: string;
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    /** Set for a live session of an enabled account; role and name are read fresh on every request. */
+    user?: SessionUser;
+  }
+}
+
+const signInRequired = () => new AppError(401, 'sign_in_required', 'Please sign in to continue.');
+
+/** Any signed-in account; routes behind it must still keep each customer to their own records. */
+export const requireUser: RequestHandler = (req, _res, next) => {
+  next(req.user ? undefined : signInRequired());
+};
+
+/** Signed in with one of `roles` (list every role allowed: `requireRole('staff', 'owner')`). */
+export function requireRole(...roles: Role[]): RequestHandler {
+  const allowed = new Set(roles);
+  return (req, _res, next) => {
+    if (!req.user) return next(signInRequired());
+    if (!allowed.has(req.user.role)) return next(new AppError(403, 'forbidden', 'Your account does not have access to this.'));
+    next();
+  };
+}

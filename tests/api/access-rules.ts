@@ -1,0 +1,77 @@
+// Who may call each API route. tests/api/access-control.test.ts reads the app's own route list and
+// fails for any route missing here (and for any rule naming no route): add a row with every new route.
+import { addresses } from '../../server/db/schema/index';
+import { getTestDb } from '../setup/test-db';
+import type { TestUser } from '../setup/test-users';
+
+export type Access =
+  /** Anyone, signed in or not. */
+  | 'public'
+  /** Any signed-in account, acting on its own data only (no record id in the path). */
+  | 'signed-in'
+  /** Any signed-in account, on a record it owns: customer A's record; customer B, staff and owner get 404 (or 403). */
+  | 'own-record'
+  /** The record's owner (customer A), and staff and owner; customer B gets 404 (or 403). */
+  | 'own-or-staff'
+  /** Staff and owner. */
+  | 'staff'
+  /** The owner only. */
+  | 'owner'
+  /** No session: the request proves itself (e.g. a Stripe signature), so without that proof it never gets a 2xx. */
+  | 'signed-request';
+
+export interface AccessRule {
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  /** As mounted, with Express parameters: `/api/account/addresses/:id`. */
+  path: string;
+  access: Access;
+  /**
+   * `own-record` and `own-or-staff`: makes a record owned by `owner` (customer A) and returns the
+   * path's parameters. Other rules get a random UUID for every parameter unless `params` says otherwise.
+   */
+  record?: (owner: TestUser) => Promise<Record<string, string>>;
+  params?: Record<string, string>;
+  /** A body sent by every caller (none by default: an allowed caller may then get a 400, never a 401 or 403). */
+  body?: Record<string, unknown>;
+}
+
+async function addressOf(owner: TestUser) {
+  const [row] = await getTestDb()
+    .insert(addresses)
+    .values({ userId: owner.id, name: owner.name, line1: '7 Invented Lane', city: 'Larch Bend', region: 'MT', postalCode: '59701' })
+    .returning({ id: addresses.id });
+  return { id: row!.id };
+}
+
+export const accessRules: AccessRule[] = [
+  { method: 'GET', path: '/api/health', access: 'public' },
+  { method: 'POST', path: '/api/payments/webhook', access: 'signed-request' },
+
+  { method: 'POST', path: '/api/auth/sign-up', access: 'public' },
+  { method: 'POST', path: '/api/auth/sign-in', access: 'public' },
+  { method: 'POST', path: '/api/auth/sign-out', access: 'public' },
+  { method: 'GET', path: '/api/auth/me', access: 'signed-in' },
+  { method: 'POST', path: '/api/auth/password-reset', access: 'public' },
+  { method: 'POST', path: '/api/auth/password-reset/confirm', access: 'public' },
+  { method: 'POST', path: '/api/auth/invitations/preview', access: 'public' },
+  { method: 'POST', path: '/api/auth/invitations/accept', access: 'public' },
+
+  { method: 'PATCH', path: '/api/account/profile', access: 'signed-in' },
+  { method: 'PUT', path: '/api/account/email', access: 'signed-in' },
+  { method: 'PUT', path: '/api/account/password', access: 'signed-in' },
+  { method: 'GET', path: '/api/account/addresses', access: 'signed-in' },
+  { method: 'POST', path: '/api/account/addresses', access: 'signed-in' },
+  { method: 'PUT', path: '/api/account/addresses/:id', access: 'own-record', record: addressOf, body: { name: 'Changed', line1: '1 Other Road', city: 'Greyhaven', region: 'WA', postalCode: '98201' } },
+  { method: 'DELETE', path: '/api/account/addresses/:id', access: 'own-record', record: addressOf },
+
+  { method: 'GET', path: '/api/owner/team', access: 'owner' },
+  { method: 'POST', path: '/api/owner/team', access: 'owner' },
+  { method: 'PATCH', path: '/api/owner/team/:id', access: 'owner' },
+  { method: 'DELETE', path: '/api/owner/team/invitations/:id', access: 'owner' },
+
+  { method: 'GET', path: '/api/lots', access: 'public' },
+  { method: 'GET', path: '/api/lots/:code', access: 'public' },
+  { method: 'GET', path: '/api/lots/:code/roast-guide', access: 'public' },
+
+  { method: 'GET', path: '/api/roastery/outbox', access: 'staff' },
+];
