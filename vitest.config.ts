@@ -21,6 +21,8 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'unit',
+          // Component tests load lazy routes; on a busy 2-core machine the first import is slow.
+          testTimeout: 15_000,
           include: ['shared/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/unit/**/*.test.{ts,tsx}'],
           setupFiles: ['tests/setup/fail-on-console-error.ts'],
         },

@@ -7,6 +7,7 @@ import { createLogger } from '../server/lib/logger';
 import { buildClientIfStale } from './build-client';
 import { startMailCatcher } from './mail-catcher';
 import { prepareDatabase } from './prepare-database';
+import { startDevelopmentStripeFake } from './stripe-fake/index';
 
 const stops: (() => Promise<void> | void)[] = [];
 let stopping = false;
@@ -38,7 +39,11 @@ async function main() {
   const mail = await startMailCatcher({ smtpPort, webPort: Number(process.env.MAILDEV_WEB_PORT ?? 1080) });
   stops.push(() => mail.stop());
 
-  const server = await startServer({ ...config, DATABASE_URL: database.url }, createLogger({ ...config, LOG_LEVEL: process.env.LOG_LEVEL ? config.LOG_LEVEL : 'warn' }));
+  // Test payments go to the local payment fake unless STRIPE_API_URL or STRIPE_SECRET_KEY is set.
+  const stripeFake = await startDevelopmentStripeFake(config);
+  if (stripeFake) stops.push(() => stripeFake.stop());
+
+  const server = await startServer({ ...config, DATABASE_URL: database.url, ...(stripeFake ? { STRIPE_API_URL: stripeFake.url } : {}) }, createLogger({ ...config, LOG_LEVEL: process.env.LOG_LEVEL ? config.LOG_LEVEL : 'warn' }));
   stops.push(() => server.stop());
 
   const width = Math.max(...demoSignIns.map((signIn) => signIn.email.length));
@@ -48,6 +53,7 @@ Restday is running.
   Roastery        ${server.url}/roastery
   Health          ${server.url}/api/health
   Mail catcher    ${mail.webUrl}/
+  Payment fake    ${stripeFake ? `${stripeFake.url}/ (test payments only; pay with 4242 4242 4242 4242)` : 'off (STRIPE_API_URL or STRIPE_SECRET_KEY is set)'}
   Database        ${database.url}
 
 Demo sign-ins (all invented):

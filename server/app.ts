@@ -11,15 +11,27 @@ import type { Clock } from './lib/clock';
 import type { Logger } from './lib/logger';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { requireClientHeader } from './middleware/require-client-header';
+import { createDevClockRepo } from './modules/dev-clock/dev-clock.repo';
+import { devClockRoutes } from './modules/dev-clock/dev-clock.routes';
+import { createDevClockService, isAdjustableClock } from './modules/dev-clock/dev-clock.service';
+import { createAccountsModule } from './modules/auth/auth.module';
 import { healthRoutes } from './modules/health/health.routes';
 import { createLotsRepo } from './modules/lots/lots.repo';
 import { lotsRoutes } from './modules/lots/lots.routes';
 import { createLotsService } from './modules/lots/lots.service';
+import { createOutboxRepo } from './modules/outbox/outbox.repo';
+import { outboxRoutes } from './modules/outbox/outbox.routes';
+import { createOutboxService } from './modules/outbox/outbox.service';
+import { createPaymentsGateway } from './integrations/payments';
+import { createPaymentEventsService } from './modules/payments/payment-events.service';
+import { createPaymentsRepo } from './modules/payments/payments.repo';
+import { paymentsWebhookRoutes } from './modules/payments/payments.routes';
 
 export interface AppDeps {
   config: Config;
   database: Database;
   logger: Logger;
+  /** With RESTDAY_TEST_CLOCK on, an AdjustableClock (createAdjustableClock) that POST /api/dev/clock moves. */
   clock: Clock;
   /** Absent in API-only test apps; health then reports the queue as stopped. */
   queue?: Queue;
@@ -30,6 +42,9 @@ const requestIdPattern = /^[\w-]{8,64}$/;
 /** Builds the whole HTTP app from its dependencies. Never listens: index.ts and the tests do that. */
 export function createApp(deps: AppDeps): Express {
   const { config, database, logger } = deps;
+  if (config.RESTDAY_TEST_CLOCK && !isAdjustableClock(deps.clock)) {
+    throw new Error('RESTDAY_TEST_CLOCK is on, so the app needs an adjustable clock (createAdjustableClock()).');
+  }
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -76,11 +91,25 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const api = express.Router();
+  const paymentsGateway = createPaymentsGateway(config);
+  const paymentsRepo = createPaymentsRepo(database.db);
+  // Before express.json and the client-header check: Stripe signs the raw body, and that signature is its authentication.
+  api.use('/payments', paymentsWebhookRoutes(createPaymentEventsService({ repo: paymentsRepo, gateway: paymentsGateway, clock: deps.clock, logger, config })));
   api.use(express.json({ limit: '100kb' }));
-  api.use(requireClientHeader);
+  api.use(requireClientHeader(config));
   api.use('/health', healthRoutes(deps));
+  const accounts = createAccountsModule(deps);
+  // Every router after this line sees req.user; guard each non-public route with requireRole / requireUser.
+  api.use(accounts.loadSession);
+  for (const [mountPath, router] of accounts.routers) api.use(mountPath, router);
   api.use('/lots', lotsRoutes(createLotsService(createLotsRepo(database.db))));
+  api.use('/roastery/outbox', outboxRoutes(createOutboxService(createOutboxRepo(database.db))));
+  // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
+  if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
+    api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));
+  }
   api.use(apiNotFound);
+  api.use(accounts.auditDenials);
   app.use('/api', api);
 
   const staticDir = path.resolve(config.STATIC_DIR);

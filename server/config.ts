@@ -16,6 +16,11 @@ const flag = z
   .default('false')
   .transform((value) => value === 'true' || value === '1');
 
+const flagOn = z
+  .enum(['true', 'false', '1', '0', ''])
+  .default('true')
+  .transform((value) => value !== 'false' && value !== '0');
+
 /** Every setting the server reads, with its default. One schema, checked once at start-up. */
 export const configSchema = z
   .object({
@@ -28,11 +33,23 @@ export const configSchema = z
     DATABASE_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(2000),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters').default(devSessionSecret),
+    /** Throttling of sign-in, sign-up, password reset and e-mailed links: one fixed window… */
+    AUTH_THROTTLE_WINDOW_MINUTES: z.coerce.number().int().min(1).max(1440).default(15),
+    /** …attempts per account from one address (failed sign-ins), and reset e-mails per account… */
+    AUTH_THROTTLE_PER_ACCOUNT: z.coerce.number().int().min(1).max(100_000).default(10),
+    /** …and attempts per IP address (failed sign-ins, sign-ups, reset requests, link uses). */
+    AUTH_THROTTLE_PER_IP: z.coerce.number().int().min(1).max(100_000).default(30),
     SMTP_URL: z.url({ protocol: /^smtps?$/ }).default('smtp://127.0.0.1:1025'),
     MAIL_FROM: z.string().min(3).default('Wrenfield Roastworks <hello@wrenfield.test>'),
+    /** The shop's postal address in the e-mail footer (CAN-SPAM asks for one); lines separated by newlines or a literal backslash-n. The default is invented. */
+    SHOP_POSTAL_ADDRESS: z.string().trim().min(5).default('12 Old Mill Way\nWrenfield, CO 81640\nUnited States'),
+    /** Run the queue workers (outbox relay, jobs) inside the server; off when `npm run worker` processes do it. */
+    WORKERS_IN_SERVER: flagOn,
     STRIPE_SECRET_KEY: z.string().min(1).default('sk_test_restday_local'),
     STRIPE_WEBHOOK_SECRET: z.string().startsWith('whsec_').default('whsec_restday_local_development'),
     STRIPE_API_URL: z.url().optional(),
+    /** How long a Checkout Session stays payable; Stripe allows 30 minutes to 24 hours. */
+    STRIPE_CHECKOUT_EXPIRES_MINUTES: z.coerce.number().int().min(30).max(1440).default(60),
     UPLOADS_DIR: z.string().min(1).default('.data/uploads'),
     STATIC_DIR: z.string().min(1).default('dist'),
     RESTDAY_TEST_CLOCK: flag,

@@ -5,6 +5,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig, type Config } from './config';
 import { createDatabase } from './db/client';
 import { startQueue } from './jobs/queue';
+import { startWorkers, type Workers } from './jobs/workers';
 import { createAdjustableClock, systemClock } from './lib/clock';
 import { createLogger, type Logger } from './lib/logger';
 
@@ -23,6 +24,15 @@ export async function startServer(config: Config, logger: Logger = createLogger(
   });
   const queue = await startQueue(config.DATABASE_URL, logger);
   const clock = config.RESTDAY_TEST_CLOCK ? createAdjustableClock() : systemClock;
+  // The queue workers (outbox relay, jobs) run here unless WORKERS_IN_SERVER=false leaves them to `npm run worker`.
+  let workers: Workers | undefined;
+  try {
+    if (config.WORKERS_IN_SERVER) workers = await startWorkers({ config, database, queue, clock, logger });
+  } catch (error) {
+    await queue.stop();
+    await database.close();
+    throw error;
+  }
   const app = createApp({ config, database, logger, queue, clock });
 
   const server: Server = await new Promise((resolve, reject) => {
@@ -41,6 +51,7 @@ export async function startServer(config: Config, logger: Logger = createLogger(
       const forceAfter = setTimeout(() => server.closeAllConnections(), 5000).unref();
       await closed;
       clearTimeout(forceAfter);
+      await workers?.stop();
       await queue.stop();
       await database.close();
       logger.info('Restday stopped');

@@ -23,6 +23,35 @@ export interface DatabaseOptions {
   onIdleError?: (error: Error) => void;
 }
 
+/**
+ * drizzle-orm 0.45 sends BEGIN before the try/finally that gives the client back, so a BEGIN that
+ * fails (a connection that died while pooled, one left in an aborted transaction) keeps its client
+ * checked out for good: the pool runs dry and `close()` never returns (drizzle-team/drizzle-orm#6241).
+ * Here each transaction runs on a client this code checks out and always releases, destroying it
+ * when BEGIN itself failed.
+ */
+function withReleasingTransactions(db: Db, pool: pg.Pool): Db {
+  const transaction: Db['transaction'] = async (work, config) => {
+    const client = await pool.connect();
+    let began = false;
+    let failure: Error | undefined;
+    try {
+      return await drizzle(client, { schema }).transaction((tx) => {
+        began = true;
+        return work(tx);
+      }, config);
+    } catch (error) {
+      failure = error instanceof Error ? error : new Error(String(error));
+      throw error;
+    } finally {
+      // pg-pool drops a client whose connection broke; one whose BEGIN failed must be dropped by hand.
+      client.release(began ? undefined : failure);
+    }
+  };
+  db.transaction = transaction;
+  return db;
+}
+
 export function createDatabase(options: DatabaseOptions): Database {
   const pool = new pg.Pool({
     connectionString: options.url,
@@ -34,8 +63,12 @@ export function createDatabase(options: DatabaseOptions): Database {
   });
   // Without a listener an idle client's error (say, PostgreSQL restarting) would crash the process.
   pool.on('error', (error) => options.onIdleError?.(error));
+  // The pool's listener only covers idle clients. A checked-out client between two queries of a
+  // transaction has none, so PostgreSQL restarting then would crash the process; with this, its next
+  // query fails instead (a 503, retried by the caller).
+  pool.on('connect', (client) => client.on('error', (error) => options.onIdleError?.(error)));
   return {
-    db: drizzle(pool, { schema }),
+    db: withReleasingTransactions(drizzle(pool, { schema }), pool),
     pool,
     async ping() {
       try {

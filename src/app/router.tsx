@@ -41,10 +41,19 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: paths.lot.path, lazy: () => import('./routes/shop/lot').then(load) },
                 { path: paths.roastingBasics.path, lazy: () => import('./routes/shop/roasting-basics').then(load) },
                 { path: paths.subscribe.path, lazy: () => import('./routes/shop/subscribe').then(load) },
+                { path: paths.signIn.path, lazy: () => import('./routes/auth/sign-in').then(load) },
+                { path: paths.createAccount.path, lazy: () => import('./routes/auth/create-account').then(load) },
+                { path: paths.forgotPassword.path, lazy: () => import('./routes/auth/forgot-password').then(load) },
+                { path: paths.resetPassword.path, lazy: () => import('./routes/auth/reset-password').then(load) },
+                { path: paths.join.path, lazy: () => import('./routes/auth/join').then(load) },
                 {
                   path: paths.account.overview.path,
                   lazy: () => import('./layouts/account-layout').then(load),
-                  children: [{ index: true, lazy: () => import('./routes/account/overview').then(load) }],
+                  children: [
+                    { index: true, lazy: () => import('./routes/account/overview').then(load) },
+                    { path: paths.account.profile.path, lazy: () => import('./routes/account/profile').then(load) },
+                    { path: paths.account.addresses.path, lazy: () => import('./routes/account/addresses').then(load) },
+                  ],
                 },
                 { path: '*', lazy: () => import('./routes/shop/not-found').then(load) },
               ],
@@ -60,6 +69,7 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 { index: true, lazy: () => import('./routes/roastery/overview').then(load) },
                 { path: paths.roastery.greenStock.path, lazy: () => import('./routes/roastery/green-stock').then(load) },
+                { path: paths.roastery.team.path, lazy: () => import('./routes/roastery/team').then(load) },
               ],
             },
           ],

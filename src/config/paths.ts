@@ -11,11 +11,28 @@ export const paths = {
   lot: { path: '/lots/:code', getHref: (code: string) => `/lots/${encodeURIComponent(code)}` },
   roastingBasics: { path: '/roasting-basics', getHref: () => '/roasting-basics' },
   subscribe: { path: '/subscribe', getHref: () => '/subscribe' },
+  signIn: {
+    path: '/sign-in',
+    /** `redirectTo`: the page to return to once signed in. */
+    getHref: (redirectTo?: string) => withSearch('/sign-in', redirectTo ? new URLSearchParams({ redirectTo }) : undefined),
+  },
+  createAccount: {
+    path: '/create-account',
+    getHref: (redirectTo?: string) => withSearch('/create-account', redirectTo ? new URLSearchParams({ redirectTo }) : undefined),
+  },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  // The two pages e-mailed links open (the server builds them from `@shared/schemas/auth`; a test
+  // keeps both in step). The token rides in the fragment (`#token=…`), which no server ever sees.
+  resetPassword: { path: '/reset-password', getHref: () => '/reset-password' },
+  join: { path: '/join', getHref: () => '/join' },
   account: {
     overview: { path: '/account', getHref: () => '/account' },
+    profile: { path: '/account/profile', getHref: () => '/account/profile' },
+    addresses: { path: '/account/addresses', getHref: () => '/account/addresses' },
   },
   roastery: {
     overview: { path: '/roastery', getHref: () => '/roastery' },
     greenStock: { path: '/roastery/green-stock', getHref: () => '/roastery/green-stock' },
+    team: { path: '/roastery/team', getHref: () => '/roastery/team' },
   },
 } as const;

@@ -2,18 +2,29 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { configure, render } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { vi } from 'vitest';
+import type { User } from '@shared/schemas/auth';
 import type { LotDetail, LotSummary } from '@shared/schemas/lots';
 import { createAppRoutes } from '@/app/router';
+import { getCurrentUserQueryOptions } from '@/features/auth/api/get-current-user';
 import { createQueryClient } from '@/lib/query-client';
 
 // Every page is a lazy module; the first render in a test file waits for Vite to transform it.
 configure({ asyncUtilTimeout: 5000 });
 
+type RenderAppOptions = {
+  /**
+   * Who is signed in: nobody (a visitor) unless given. Every page reads the session, so it starts
+   * in the query cache rather than in each test's `fetch` stub; the Roastery needs staff or owner.
+   */
+  session?: User | null;
+};
+
 /** Renders the real route table at `url` in a memory router, with a fresh query client. */
-export function renderApp(url: string) {
+export function renderApp(url: string, { session = null }: RenderAppOptions = {}) {
   const queryClient = createQueryClient();
   // Tests decide each response themselves; automatic retries would only slow them down.
   queryClient.setDefaultOptions({ queries: { ...queryClient.getDefaultOptions().queries, retry: false } });
+  queryClient.setQueryData(getCurrentUserQueryOptions().queryKey, session);
   const router = createMemoryRouter(createAppRoutes(queryClient), { initialEntries: [url] });
   const view = render(
     <QueryClientProvider client={queryClient}>
@@ -39,8 +50,8 @@ export function jsonResponse(body: unknown, status = 200): Response {
   return new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 }
 
-export function apiErrorResponse(status: number, code: string, message: string): Response {
-  return jsonResponse({ error: { code, message } }, status);
+export function apiErrorResponse(status: number, code: string, message: string, fields?: Record<string, string>): Response {
+  return jsonResponse({ error: { code, message, ...(fields ? { fields } : {}) } }, status);
 }
 
 /** The URLs `fetch` was called with, as path plus query. */
@@ -49,6 +60,27 @@ export function requestedUrls(fetchMock: ReturnType<typeof stubFetch>): string[]
     const url = new URL(String(input), 'http://restday.test');
     return `${url.pathname}${url.search}`;
   });
+}
+
+/** The JSON bodies and headers of the `method` requests `fetch` sent to `path`. */
+export function sentRequests(fetchMock: ReturnType<typeof stubFetch>, method: string, path: string) {
+  return fetchMock.mock.calls
+    .filter(([input, init]) => (init?.method ?? 'GET') === method && new URL(String(input), 'http://restday.test').pathname === path)
+    .map(([, init]) => ({
+      body: typeof init?.body === 'string' ? (JSON.parse(init.body) as unknown) : undefined,
+      headers: new Headers(init?.headers),
+    }));
+}
+
+// An invented person for tests.
+export function makeUser(overrides: Partial<User> = {}): User {
+  return {
+    id: '0b7d3c1e-5f2a-4c8e-9a61-3d2f4b8e7c10',
+    email: 'ines.marlow@example.test',
+    name: 'Ines Marlow',
+    role: 'customer',
+    ...overrides,
+  };
 }
 
 // Invented lots for tests; no real farm, producer or importer.

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import type { Db } from '../../server/db/client';
 import * as schema from '../../server/db/schema/index';
 import { seedDemo, seededTables } from '../../server/db/seed/index';
+import { emailPayloadSchemas, isEmailTemplateName, renderSubject } from '../../emails/index';
 import { getTestDb } from '../setup/test-db';
 
 // The database itself refuses impossible rows, whatever the code above it does. Every test runs in
@@ -273,6 +274,30 @@ describe('demo scenario seed', () => {
     });
     expect(first[1]).toHaveLength(10);
     expect(second).toEqual(first);
+  });
+
+  it('seedDemo — every outbox row it writes carries a payload its template accepts', async () => {
+    await inRolledBackTransaction(async (tx) => {
+      await withoutShop(tx);
+      // Other test files may have left messages of their own: look only at the seed's.
+      const earlier = new Set((await tx.select({ id: schema.emailOutbox.id }).from(schema.emailOutbox)).map((row) => row.id));
+      await seedDemo(tx, { now });
+      const rows = (await tx.select().from(schema.emailOutbox)).filter((row) => !earlier.has(row.id));
+      expect(rows.length).toBeGreaterThan(0);
+
+      // The relay parses each row like this before it renders; a misfit would turn into a dead letter.
+      const misfits = rows.flatMap((row) => {
+        if (!isEmailTemplateName(row.template)) return [`${row.dedupeKey}: no template "${row.template}"`];
+        const parsed = emailPayloadSchemas[row.template].safeParse(row.payload);
+        if (!parsed.success) return [`${row.dedupeKey}: ${parsed.error.message}`];
+        // Subjects come from the templates, as on live rows.
+        const subject = renderSubject(row.template, parsed.data);
+        return subject === row.subject ? [] : [`${row.dedupeKey}: subject "${row.subject}", the template's is "${subject}"`];
+      });
+      expect(misfits).toEqual([]);
+      // The rest-day e-mails still to come are among them: a misfit there would only surface days later.
+      expect(rows.some((row) => row.template === 'rest-day' && row.status === 'pending')).toBe(true);
+    });
   });
 
   it('seedDemo — then every lot’s stock equals the sum of its stock movements, and every past roasted order traces to a batch', async () => {

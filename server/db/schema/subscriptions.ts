@@ -29,6 +29,8 @@ export const subscriptions = pgTable(
     shippingAddress: jsonb('shipping_address').$type<AddressSnapshot>().notNull(),
     stripeSubscriptionId: text('stripe_subscription_id'),
     stripeCustomerId: text('stripe_customer_id'),
+    /** The latest Checkout Session started for this subscription; a retry after it expires starts a new one. */
+    stripeCheckoutSessionId: text('stripe_checkout_session_id'),
     /** Price of one delivery (all its bags), in cents. */
     priceCents: integer('price_cents').notNull(),
     currency: text('currency').notNull().default('usd'),
@@ -42,6 +44,7 @@ export const subscriptions = pgTable(
     index('subscriptions_lot_id_idx').on(t.lotId),
     uniqueIndex('subscriptions_stripe_subscription_id_key').on(t.stripeSubscriptionId),
     index('subscriptions_stripe_customer_id_idx').on(t.stripeCustomerId),
+    uniqueIndex('subscriptions_stripe_checkout_session_id_key').on(t.stripeCheckoutSessionId),
     check('subscriptions_bags_per_delivery_range', sql`${t.bagsPerDelivery} between 1 and 10`),
     check('subscriptions_cadence_weeks_range', sql`${t.cadenceWeeks} between 1 and 4`),
     check('subscriptions_price_non_negative', sql`${t.priceCents} >= 0`),

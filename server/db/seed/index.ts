@@ -7,10 +7,9 @@
 // Deterministic: a fixed-seed PRNG (random.ts) drives every choice and makes every id, so the same
 // `now` always gives the same rows. Idempotent: a database that already has the shop_settings row is
 // left alone ({ seeded: false }). The whole seed runs in one transaction behind an advisory lock.
-import type { Algorithm } from '@node-rs/argon2';
-import { hash } from '@node-rs/argon2';
 import { sql } from 'drizzle-orm';
 import type { PgTable } from 'drizzle-orm/pg-core';
+import { parseEmailPayload, renderSubject, type EmailPayloads, type EmailTemplateName } from '../../../emails/index';
 import type {
   BagSize,
   BrewMethod,
@@ -22,10 +21,11 @@ import type {
   SubscriptionStatus,
 } from '../../../shared/domain/vocabulary';
 import type { Db } from '../client';
+import { hashPassword } from '../../lib/password-hashing';
 import * as schema from '../schema/index';
 import { defaultLossModel, estimateLevelFromLoss, lossPctOf } from '../../../shared/domain/roast-loss';
 import type { AddressSnapshot } from '../schema/index';
-import type { DemoCalendar } from './demo-dates';
+import type { DemoCalendar, DeliveryDates } from './demo-dates';
 import { demoCalendar } from './demo-dates';
 import type { DemoLot } from './demo-lots';
 import { demoLots } from './demo-lots';
@@ -52,6 +52,10 @@ const SUBSCRIPTION_BAG_PRICE_CENTS: Record<RoastedBagSize, number> = { '12oz': 1
 /** Invented flat shipping for green orders under the free-shipping line. */
 const GREEN_SHIPPING_CENTS = 850;
 const FREE_SHIPPING_FROM_CENTS = 7500;
+/** Orders and subscriptions take the columns' default currency; the e-mails name it. */
+const CURRENCY = 'usd';
+/** What a Roaster's Rotation line is called, in the same words as the live rows (payments.repo's rotationName). */
+const ROTATION_NAME = "Roaster's Rotation";
 /** Key of the advisory lock that keeps two concurrent seeds from both inserting. */
 const SEED_LOCK_KEY = 7_302_451;
 
@@ -87,9 +91,7 @@ async function hasShop(db: Db | Tx): Promise<boolean> {
  */
 async function hashDemoPassword(): Promise<string> {
   const salt = mulberry32(DEMO_SEED ^ 0x00a2_90d1).bytes(16);
-  // Algorithm is an ambient const enum (not readable under isolatedModules): 2 = Argon2id.
-  const argon2id = 2 as Algorithm;
-  return hash(DEMO_PASSWORD, { algorithm: argon2id, memoryCost: 19456, timeCost: 2, parallelism: 1, salt });
+  return hashPassword(DEMO_PASSWORD, salt);
 }
 
 async function insertMany<T extends PgTable>(tx: Tx, table: T, rows: Insert<T>[]): Promise<void> {
@@ -198,6 +200,8 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
   const customerIds = demoCustomers.map((c) => idOf(c.email));
   const demoCustomerId = idOf(DEMO_CUSTOMER_EMAIL);
   const emailOf = new Map(users.map((u) => [u.id as string, u.email]));
+  const nameById = new Map(users.map((u) => [u.id as string, u.name]));
+  const nameOf = (userId: string) => nameById.get(userId) as string;
 
   // ── Green lots (invented producers) ──────────────────────────────────────────────────────────
   const lotIdByCode = new Map<string, string>();
@@ -218,13 +222,15 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
 
   const stockMovements: Insert<typeof schema.stockMovements>[] = [];
   const outbox: Insert<typeof schema.emailOutbox>[] = [];
-  const queueEmail = (template: string, userId: string, subject: string, key: string, payload: Record<string, unknown>, createdAt: Date, sendAfter: Date = createdAt) => {
+  /** Like the outbox repo's queueEmail: the payload must fit its template (a misfit fails the seed, not the relay). */
+  const queueEmail = <T extends EmailTemplateName>(template: T, userId: string, key: string, payload: EmailPayloads[T], createdAt: Date, sendAfter: Date = createdAt) => {
+    const parsed = parseEmailPayload(template, payload);
     const sent = sendAfter.getTime() <= now.getTime();
     outbox.push({
       id: rng.uuid(),
       template,
       toAddress: emailOf.get(userId) as string,
-      subject,
+      subject: renderSubject(template, parsed),
       payload,
       dedupeKey: `${template}:${key}`,
       status: sent ? 'sent' : 'pending',
@@ -257,8 +263,8 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     if (!stripeCustomer.has(userId)) stripeCustomer.set(userId, `cus_demo_${rng.hex(7)}`);
     return stripeCustomer.get(userId) as string;
   };
-  /** Roasted lines of past roast days, for the batches below (lotId resolved for Roaster's Rotation). */
-  const roastedLines: { roastDate: string; lotId: string; level: RoastLevel; item: Insert<typeof schema.orderItems> }[] = [];
+  /** Roasted lines of past roast days, for the batches and "roasted" e-mails below (lotId resolved for Roaster's Rotation). */
+  const roastedLines: { roastDate: string; lotId: string; level: RoastLevel; item: Insert<typeof schema.orderItems>; userId: string; roastedEmail: EmailPayloads['roasted'] }[] = [];
 
   // Mostly active; a few paused, one past due, one cancelled, one whose checkout never finished.
   const statusPlan: Record<number, SubscriptionStatus> = { 5: 'paused', 17: 'paused', 26: 'paused', 11: 'past_due', 23: 'cancelled', 31: 'incomplete' };
@@ -288,6 +294,9 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     const priceCents = SUBSCRIPTION_BAG_PRICE_CENTS[bagSize] * bagsPerDelivery;
     const address = addressByUser.get(userId) as AddressSnapshot;
     const subscriptionId = rng.uuid();
+    const name = nameOf(userId);
+    const coffee = lot?.name ?? ROTATION_NAME;
+    const emailLine = { description: coffee, size: bagSize, quantity: bagsPerDelivery, lineTotalCents: priceCents, roastLevel, grind };
 
     // Dates: the subscriber's roast weekday, every `cadenceWeeks` weeks; a closure moves a delivery on.
     const firstBase = cal.addDays(cal.weekdayOnOrAfter(today, weekday), 7 * phase);
@@ -327,7 +336,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     });
     if (status === 'incomplete') continue;
 
-    const makeOrder = (dates: ReturnType<DemoCalendar['datesFor']>, orderStatus: OrderStatus): string => {
+    const makeOrder = (dates: DeliveryDates, orderStatus: OrderStatus): string => {
       const id = rng.uuid();
       const billedAt = earlier(cal.at(cal.addDays(dates.roastDate, -8), '06:00'), new Date(now.getTime() - rng.int(1, 30) * HOUR_MS));
       const paid = orderStatus !== 'held';
@@ -347,6 +356,9 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
         unitPriceCents: SUBSCRIPTION_BAG_PRICE_CENTS[bagSize],
         lineTotalCents: priceCents,
       };
+      // Drawn in the row's column order, so the PRNG sequence (and every demo value after it) is unchanged.
+      const shipment = shippedAt ? { shippedAt, carrier: rng.pick(['USPS', 'UPS']), trackingNumber: `WR-DEMO-${rng.hex(5).toUpperCase()}` } : null;
+      const stripeInvoiceId = `in_demo_${rng.hex(8)}`;
       orders.push({
         id,
         userId,
@@ -358,9 +370,9 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
         totalCents: priceCents,
         shippingAddress: address,
         ...dates,
-        carrier: shippedAt ? rng.pick(['USPS', 'UPS']) : null,
-        trackingNumber: shippedAt ? `WR-DEMO-${rng.hex(5).toUpperCase()}` : null,
-        stripeInvoiceId: `in_demo_${rng.hex(8)}`,
+        carrier: shipment?.carrier ?? null,
+        trackingNumber: shipment?.trackingNumber ?? null,
+        stripeInvoiceId,
         stripePaymentIntentId: paid ? `pi_demo_${rng.hex(8)}` : null,
         paidAt: paid ? billedAt : null,
         packedAt,
@@ -370,14 +382,23 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       });
       orderItems.push(item);
       if (dates.roastDate < today) {
-        roastedLines.push({ roastDate: dates.roastDate, lotId: code ? lotId(code) : (pickByDate.get(dates.roastDate) as string), level: roastLevel, item });
+        roastedLines.push({
+          roastDate: dates.roastDate,
+          lotId: code ? lotId(code) : (pickByDate.get(dates.roastDate) as string),
+          level: roastLevel,
+          item,
+          userId,
+          roastedEmail: { name, orderId: id, roastDate: dates.roastDate, lines: [emailLine], shipDate: dates.shipDate, readyFrom: dates.readyFrom },
+        });
       }
-      if (shippedAt) {
-        queueEmail('shipped', userId, 'Your coffee is on its way', id, { orderId: id, readyFrom: dates.readyFrom }, shippedAt);
-        queueEmail('rest-day', userId, 'Your coffee is ready to brew', id, { orderId: id }, shippedAt, cal.at(dates.readyFrom, '08:00'));
+      if (shipment) {
+        const { carrier, trackingNumber } = shipment;
+        queueEmail('shipped', userId, id, { name, orderId: id, kind: 'roasted', carrier, trackingNumber, readyFrom: dates.readyFrom, bestBefore: dates.bestBefore }, shipment.shippedAt);
+        queueEmail('rest-day', userId, id, { name, orderId: id, readyFrom: dates.readyFrom, brewMethod, coffee, bestBefore: dates.bestBefore }, shipment.shippedAt, cal.at(dates.readyFrom, '08:00'));
       }
       if (!paid) {
-        queueEmail('payment-failed', userId, 'We could not take your subscription payment', id, { orderId: id, subscriptionId }, billedAt);
+        // Keyed by the invoice that failed, as the payment webhook keys it.
+        queueEmail('payment-failed', userId, stripeInvoiceId, { name, amountCents: priceCents, currency: CURRENCY, subscriptionId, orderId: id }, billedAt);
       }
       return id;
     };
@@ -413,7 +434,13 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       });
       sequence += 1;
     });
-    queueEmail('subscription-started', userId, 'Your Roasted to Order subscription has started', subscriptionId, { subscriptionId }, createdAt);
+    queueEmail(
+      'subscription-started',
+      userId,
+      subscriptionId,
+      { name, subscriptionId, coffee, size: bagSize, roastLevel, grind, brewMethod, cadenceWeeks, priceCents, currency: CURRENCY, firstRoastDate: pastRoast },
+      createdAt,
+    );
   }
 
   // ── Batches for past roast days (invented weights; loss drawn around the level default) ─────
@@ -486,11 +513,8 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       });
     });
   }
-  // One "roasted" e-mail per order roasted on a past roast day.
-  for (const line of roastedLines) {
-    const order = orders.find((o) => o.id === line.item.orderId);
-    if (order) queueEmail('roasted', order.userId, 'Your coffee was roasted today', order.id as string, { orderId: order.id }, cal.at(line.roastDate, '17:00'));
-  }
+  // One "roasted" e-mail per order roasted on a past roast day (each roasted order has one line).
+  for (const line of roastedLines) queueEmail('roasted', line.userId, line.item.orderId, line.roastedEmail, cal.at(line.roastDate, '17:00'));
 
   // ── One-time green orders (invented customers and baskets) ──────────────────────────────────
   const priceFor = (lot: DemoLot, lineGrams: number) =>
@@ -535,11 +559,13 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     const shippedAt = shipDate && status === 'shipped' ? cal.at(shipDate, '16:00') : null;
     const refundedAt = status === 'refunded' && paidAt ? new Date(paidAt.getTime() + 20 * HOUR_MS) : null;
     let subtotalCents = 0;
+    const emailLines: EmailPayloads['order-confirmed']['lines'] = [];
     for (const [code, size, quantity] of plan.basket) {
       const lot = lotByCode.get(code) as DemoLot;
       const fillGrams = FILL_GRAMS[size];
       const unitPriceCents = Math.round((fillGrams * priceFor(lot, fillGrams * quantity)) / 1000);
       subtotalCents += unitPriceCents * quantity;
+      emailLines.push({ description: lot.name, size, quantity, lineTotalCents: unitPriceCents * quantity });
       orderItems.push({ id: rng.uuid(), orderId: id, lotId: lotId(code), kind: 'green', size, quantity, fillGrams, unitPriceCents, lineTotalCents: unitPriceCents * quantity });
       // Stock is taken when checkout reserves it (pending included) and returned on a refund.
       stockMovements.push({ id: rng.uuid(), lotId: lotId(code), deltaGrams: -fillGrams * quantity, reason: 'sale', note: '', orderId: id, createdAt });
@@ -547,6 +573,10 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     }
     const shippingCents = subtotalCents >= FREE_SHIPPING_FROM_CENTS ? 0 : GREEN_SHIPPING_CENTS;
     const totalCents = subtotalCents + shippingCents;
+    const shippingAddress = addressByUser.get(plan.userId) as AddressSnapshot;
+    const orderShipDate = status === 'refunded' ? null : shipDate;
+    // Drawn in the row's column order, so the PRNG sequence (and every demo value after it) is unchanged.
+    const shipment = shippedAt ? { shippedAt, carrier: rng.pick(['USPS', 'UPS']), trackingNumber: `WR-DEMO-${rng.hex(5).toUpperCase()}` } : null;
     orders.push({
       id,
       userId: plan.userId,
@@ -555,10 +585,10 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       subtotalCents,
       shippingCents,
       totalCents,
-      shippingAddress: addressByUser.get(plan.userId) as AddressSnapshot,
-      shipDate: status === 'refunded' ? null : shipDate,
-      carrier: shippedAt ? rng.pick(['USPS', 'UPS']) : null,
-      trackingNumber: shippedAt ? `WR-DEMO-${rng.hex(5).toUpperCase()}` : null,
+      shippingAddress,
+      shipDate: orderShipDate,
+      carrier: shipment?.carrier ?? null,
+      trackingNumber: shipment?.trackingNumber ?? null,
       stripeCheckoutSessionId: `cs_test_demo_${rng.hex(12)}`,
       stripePaymentIntentId: paidAt ? `pi_demo_${rng.hex(8)}` : null,
       paidAt,
@@ -568,8 +598,20 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       createdAt,
       updatedAt: refundedAt ?? shippedAt ?? packedAt ?? paidAt ?? createdAt,
     });
-    if (paidAt) queueEmail('order-confirmed', plan.userId, 'Thank you: your green coffee order is confirmed', id, { orderId: id }, paidAt);
-    if (shippedAt) queueEmail('shipped', plan.userId, 'Your green coffee is on its way', id, { orderId: id }, shippedAt);
+    const name = nameOf(plan.userId);
+    if (paidAt) {
+      queueEmail(
+        'order-confirmed',
+        plan.userId,
+        id,
+        { name, orderId: id, kind: 'green', lines: emailLines, subtotalCents, shippingCents, totalCents, currency: CURRENCY, shipTo: shippingAddress, ...(orderShipDate ? { shipDate: orderShipDate } : {}) },
+        paidAt,
+      );
+    }
+    if (shipment) {
+      const { carrier, trackingNumber } = shipment;
+      queueEmail('shipped', plan.userId, id, { name, orderId: id, kind: 'green', carrier, trackingNumber }, shipment.shippedAt);
+    }
   }
 
   // ── Roast Journal entries (invented home roasts of lots the customers bought) ────────────────

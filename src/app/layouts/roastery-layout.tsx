@@ -1,10 +1,27 @@
+import type { QueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { ArrowLeft } from 'lucide-react';
-import { Link, NavLink, Outlet } from 'react-router-dom';
+import { Link, NavLink, Outlet, type LoaderFunctionArgs } from 'react-router-dom';
 import { RestdayMark } from '@/components/brand/restday-mark';
 import { paths } from '@/config/paths';
+import { useCurrentUser } from '@/features/auth/api/get-current-user';
+import { AccountMenu } from '@/features/auth/components/account-menu';
+import { RequireRole } from '@/features/auth/components/require-role';
+import { requireUser } from '@/features/auth/utils/require-user';
+import { ownerRoles, roasteryRoles } from '@/features/auth/utils/roles';
 import { NavigationProgress } from './navigation-progress';
 import { SkipLink } from './skip-link';
+
+/** A visitor is sent to sign in first; the page then shows a customer why it is closed to them. */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
+    return null;
+  };
+
+/** Pages only the owner may open; the rest of the nav is for all staff. */
+const ownerNav = [{ to: paths.roastery.team.getHref(), label: 'Team', end: false }];
 
 const roasteryNav = [
   { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
@@ -20,6 +37,8 @@ function navLinkStyles({ isActive }: { isActive: boolean }): string {
 
 /** The staff's Roastery: its own dark header, so nobody mistakes it for the shop. */
 export default function RoasteryLayout() {
+  const role = useCurrentUser().data?.role;
+  const nav = role && ownerRoles.includes(role) ? [...roasteryNav, ...ownerNav] : roasteryNav;
   return (
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
@@ -30,27 +49,38 @@ export default function RoasteryLayout() {
             <RestdayMark className="size-8" />
             Restday <span className="text-crema">Roastery</span>
           </Link>
-          <nav aria-label="Roastery" className="order-last -mx-4 w-[calc(100%+2rem)] overflow-x-auto px-2 sm:order-none sm:mx-0 sm:w-auto sm:px-0">
-            <ul className="flex gap-1">
-              {roasteryNav.map((item) => (
-                <li key={item.to}>
-                  <NavLink to={item.to} end={item.end} className={navLinkStyles}>
-                    {item.label}
-                  </NavLink>
-                </li>
-              ))}
-            </ul>
-          </nav>
+          {role && roasteryRoles.includes(role) ? (
+            <nav aria-label="Roastery" className="order-last -mx-4 w-[calc(100%+2rem)] overflow-x-auto px-2 sm:order-none sm:mx-0 sm:w-auto sm:px-0">
+              <ul className="flex gap-1">
+                {nav.map((item) => (
+                  <li key={item.to}>
+                    <NavLink to={item.to} end={item.end} className={navLinkStyles}>
+                      {item.label}
+                    </NavLink>
+                  </li>
+                ))}
+              </ul>
+            </nav>
+          ) : null}
           <Link to={paths.home.getHref()} className="ml-auto inline-flex min-h-11 items-center gap-1.5 text-small font-semibold text-paper underline">
             <ArrowLeft aria-hidden="true" className="size-4" />
             <span className="sm:hidden">Shop</span>
             <span className="hidden sm:inline">Back to the shop</span>
           </Link>
+          <AccountMenu tone="roastery" />
         </div>
       </header>
 
       <main id="main" className="mx-auto w-full max-w-page flex-1 px-4 py-8 sm:px-6 sm:py-10">
-        <Outlet />
+        <RequireRole
+          allowed={roasteryRoles}
+          notAllowed={{
+            title: 'The Roastery is for the shop’s team',
+            reason: 'It is where staff plan roast days and pack orders. Your orders and Deliveries are in your account.',
+          }}
+        >
+          <Outlet />
+        </RequireRole>
       </main>
     </div>
   );

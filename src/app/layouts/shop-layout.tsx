@@ -1,10 +1,19 @@
+import type { QueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
-import { UserRound } from 'lucide-react';
 import { Link, NavLink, Outlet } from 'react-router-dom';
 import { RestdayMark } from '@/components/brand/restday-mark';
 import { paths } from '@/config/paths';
+import { getCurrentUserQueryOptions } from '@/features/auth/api/get-current-user';
+import { AccountMenu } from '@/features/auth/components/account-menu';
+import { RoasteryLink } from '@/features/auth/components/roastery-link';
 import { NavigationProgress } from './navigation-progress';
 import { SkipLink } from './skip-link';
+
+/** The header shows who is signed in; ask as soon as the shop's frame loads. */
+export const clientLoader = (queryClient: QueryClient) => () => {
+  void queryClient.prefetchQuery(getCurrentUserQueryOptions());
+  return null;
+};
 
 const shopNav = [
   { to: paths.lots.getHref(), label: 'Green Lots' },
@@ -42,10 +51,10 @@ export default function ShopLayout() {
               ))}
             </ul>
           </nav>
-          <NavLink to={paths.account.overview.getHref()} className={(state) => clsx(navLinkStyles(state), 'ml-auto gap-1.5')}>
-            <UserRound aria-hidden="true" className="size-5" />
-            Account
-          </NavLink>
+          <div className="ml-auto flex items-center gap-1">
+            <RoasteryLink />
+            <AccountMenu />
+          </div>
         </div>
       </header>
 
@@ -71,11 +80,6 @@ export default function ShopLayout() {
                   </Link>
                 </li>
               ))}
-              <li>
-                <Link to={paths.roastery.overview.getHref()} className="text-ink underline">
-                  Roastery (staff)
-                </Link>
-              </li>
             </ul>
           </nav>
           <p className="text-ink-muted">

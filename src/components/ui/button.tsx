@@ -1,5 +1,5 @@
 import clsx from 'clsx';
-import type { ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes, Ref } from 'react';
 
 type ButtonVariant = 'primary' | 'secondary';
 
@@ -14,7 +14,7 @@ export function buttonStyles(variant: ButtonVariant = 'primary', className?: str
   );
 }
 
-type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: ButtonVariant };
+type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: ButtonVariant; ref?: Ref<HTMLButtonElement> };
 
 export function Button({ variant = 'primary', className, type = 'button', ...props }: ButtonProps) {
   return <button type={type} className={buttonStyles(variant, className)} {...props} />;

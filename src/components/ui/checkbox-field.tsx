@@ -1,7 +1,7 @@
 import clsx from 'clsx';
-import type { InputHTMLAttributes } from 'react';
+import type { InputHTMLAttributes, Ref } from 'react';
 
-type CheckboxFieldProps = Omit<InputHTMLAttributes<HTMLInputElement>, 'type'> & { label: string };
+type CheckboxFieldProps = Omit<InputHTMLAttributes<HTMLInputElement>, 'type'> & { label: string; ref?: Ref<HTMLInputElement> };
 
 export function CheckboxField({ label, className, ...props }: CheckboxFieldProps) {
   return (

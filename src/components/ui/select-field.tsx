@@ -1,8 +1,8 @@
 import clsx from 'clsx';
-import { useId, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { useId, type ReactNode, type Ref, type SelectHTMLAttributes } from 'react';
 import { controlStyles } from './control-styles';
 
-type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'id'> & { label: string; children: ReactNode };
+type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'id'> & { label: string; children: ReactNode; ref?: Ref<HTMLSelectElement> };
 
 export function SelectField({ label, children, className, ...props }: SelectFieldProps) {
   const id = useId();

@@ -1,17 +1,32 @@
 // @vitest-environment happy-dom
-import { cleanup, screen, waitFor } from '@testing-library/react';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
-import { renderApp } from '@/testing/test-utils';
+import { makeUser, renderApp } from '@/testing/test-utils';
 
 afterEach(cleanup);
 
 describe('account area', () => {
-  it('asks the visitor to sign in to see their orders', async () => {
-    renderApp('/account');
+  it('sends a visitor to sign in, with the way back', async () => {
+    const { router } = renderApp('/account/profile?from=menu');
 
-    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in to see your orders' })).toBeTruthy();
-    expect(screen.getByText('Your account')).toBeTruthy();
-    expect(screen.getByRole('link', { name: 'Account' }).getAttribute('aria-current')).toBe('page');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeTruthy();
+    expect(router.state.location.pathname).toBe('/sign-in');
+    expect(router.state.location.search).toBe('?redirectTo=%2Faccount%2Fprofile%3Ffrom%3Dmenu');
+  });
+
+  it('greets the signed-in customer and leads to their profile and addresses', async () => {
+    renderApp('/account', { session: makeUser() });
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Hello, Ines Marlow' })).toBeTruthy();
+    expect(within(screen.getByRole('main')).getByText('ines.marlow@example.test')).toBeTruthy();
+    const nav = screen.getByRole('navigation', { name: 'Account' });
+    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Profile', 'Addresses']);
+    expect(within(nav).getByRole('link', { name: 'Overview' }).getAttribute('aria-current')).toBe('page');
     await waitFor(() => expect(document.title).toBe('Your account · Restday'));
+  });
+
+  it('is open to staff and the owner too, for their own profile', async () => {
+    renderApp('/account', { session: makeUser({ role: 'owner', name: 'Wren Calloway' }) });
+    expect(await screen.findByRole('heading', { level: 1, name: 'Hello, Wren Calloway' })).toBeTruthy();
   });
 });

@@ -1,25 +1,59 @@
-import { LogIn } from 'lucide-react';
+import { ArrowRight, KeyRound, MapPin } from 'lucide-react';
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
 import { paths } from '@/config/paths';
+import { useCurrentUser } from '@/features/auth/api/get-current-user';
+
+function AccountCard({ to, icon, title, children }: { to: string; icon: ReactNode; title: string; children: ReactNode }) {
+  return (
+    <li className="rounded-card border border-rule bg-sheet p-5 shadow-card">
+      <h2 className="flex items-center gap-2 text-h3">
+        {icon}
+        <Link to={to} className="text-ink no-underline hover:underline">
+          {title}
+        </Link>
+      </h2>
+      <p className="mt-2 text-ink-muted">{children}</p>
+      <p className="mt-3 inline-flex items-center gap-1 text-small font-semibold text-leaf" aria-hidden="true">
+        Open
+        <ArrowRight className="size-4" />
+      </p>
+    </li>
+  );
+}
 
 export default function AccountOverviewRoute() {
+  // The account layout shows this page only once the session is known.
+  const user = useCurrentUser().data;
+  if (!user) return null;
+
   return (
     <>
       <PageTitle title="Your account" />
-      <section className="mx-auto max-w-prose rounded-card border border-rule bg-sheet p-6 text-center shadow-card sm:p-10">
-        <LogIn aria-hidden="true" className="mx-auto size-8 text-leaf" />
-        <h1 className="mt-3 text-h1">Sign in to see your orders</h1>
-        <p className="mt-3 text-ink-muted">
-          Your orders, your upcoming Deliveries and your Roast Journal will live here once you are signed in. Signing in is not open
-          yet; it is coming soon.
+      <header className="mb-8">
+        <h1 className="text-h1">Hello, {user.name}</h1>
+        <p className="mt-2 text-ink-muted">
+          Signed in as <span className="font-semibold break-all text-ink">{user.email}</span>
         </p>
-        <p className="mt-6">
-          <Link to={paths.lots.getHref()} className="font-semibold text-leaf underline">
-            Browse Green Lots meanwhile
-          </Link>
-        </p>
-      </section>
+      </header>
+
+      <ul className="grid gap-4 sm:grid-cols-2">
+        <AccountCard to={paths.account.profile.getHref()} icon={<KeyRound aria-hidden="true" className="size-5 text-ember" />} title="Profile">
+          Your name, the e-mail address you sign in with, and your password.
+        </AccountCard>
+        <AccountCard to={paths.account.addresses.getHref()} icon={<MapPin aria-hidden="true" className="size-5 text-ember" />} title="Addresses">
+          Where your green coffee and subscription bags ship, and which one checkout offers first.
+        </AccountCard>
+      </ul>
+
+      <p className="mt-8 max-w-prose text-ink-muted">
+        Your orders, upcoming Deliveries and Roast Journal will appear here as they open in the shop. Meanwhile,{' '}
+        <Link to={paths.lots.getHref()} className="font-semibold text-leaf underline">
+          browse Green Lots
+        </Link>
+        .
+      </p>
     </>
   );
 }

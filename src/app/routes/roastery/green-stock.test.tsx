@@ -1,12 +1,14 @@
 // @vitest-environment happy-dom
 import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { jsonResponse, makeLot, renderApp, stubFetch } from '@/testing/test-utils';
+import { jsonResponse, makeLot, makeUser, renderApp, stubFetch } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
 });
+
+const staff = makeUser({ role: 'staff' });
 
 const lots = [
   makeLot({ code: 'RD-A', name: 'Plenty Left', stockGrams: 40_000 }),
@@ -17,7 +19,7 @@ const lots = [
 describe('Roastery', () => {
   it('opens on an overview with the green stock count and the commercial-roasting cautions', async () => {
     stubFetch(() => jsonResponse({ items: lots }));
-    renderApp('/roastery');
+    renderApp('/roastery', { session: staff });
 
     const nav = await screen.findByRole('navigation', { name: 'Roastery' });
     expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Green Stock']);
@@ -35,7 +37,7 @@ describe('Roastery', () => {
 
   it('lists Green Stock lowest first, with out-of-stock lots flagged', async () => {
     stubFetch(() => jsonResponse({ items: lots }));
-    renderApp('/roastery/green-stock');
+    renderApp('/roastery/green-stock', { session: staff });
 
     const table = await screen.findByRole('table');
     const rows = within(table).getAllByRole('row').slice(1);

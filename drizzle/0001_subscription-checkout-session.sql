@@ -1,0 +1,2 @@
+ALTER TABLE "subscriptions" ADD COLUMN "stripe_checkout_session_id" text;--> statement-breakpoint
+CREATE UNIQUE INDEX "subscriptions_stripe_checkout_session_id_key" ON "subscriptions" USING btree ("stripe_checkout_session_id");

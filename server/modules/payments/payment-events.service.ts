@@ -1,0 +1,280 @@
+import Stripe from 'stripe';
+import { localDateOf } from '@shared/domain/shop-time';
+import type { WebhookReceipt } from '@shared/schemas/payments';
+import { roastedBagSizes, type BagSize, type RoastedBagSize, type SubscriptionStatus } from '@shared/domain/vocabulary';
+import type { PaymentsGateway } from '../../integrations/payments';
+import type { Clock } from '../../lib/clock';
+import type { Logger } from '../../lib/logger';
+import { queueEmail } from '../outbox/outbox.repo';
+import type { PaymentsRepo, PaymentsTransaction, SubscriptionForPayment } from './payments.repo';
+import { orderIdKey, shopBaseUrl, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
+
+export interface PaymentEventsDeps {
+  repo: PaymentsRepo;
+  gateway: PaymentsGateway;
+  clock: Clock;
+  logger: Logger;
+  config: Pick<PaymentsServiceConfig, 'PUBLIC_URL' | 'HOST' | 'PORT'>;
+}
+
+/** The part of an event that must run in the ledger's transaction (after the Stripe reads, which must not). */
+type Effect = (tx: PaymentsTransaction) => Promise<void>;
+
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const idOf = (value: string | { id: string } | null | undefined) => (typeof value === 'string' ? value : (value?.id ?? null));
+const fromUnix = (seconds: number | null | undefined) => (seconds ? new Date(seconds * 1000) : null);
+
+/** Subscriptions sell roasted bag sizes only (a CHECK constraint keeps it so). */
+function roastedSizeOf(size: BagSize): RoastedBagSize {
+  const roasted = roastedBagSizes.find((candidate) => candidate === size);
+  if (!roasted) throw new Error(`A subscription has the green bag size ${size}`);
+  return roasted;
+}
+
+/** Restday's reading of a Stripe subscription's state. */
+function subscriptionStatusOf(subscription: Stripe.Subscription): SubscriptionStatus {
+  switch (subscription.status) {
+    case 'active':
+    case 'trialing':
+      return subscription.pause_collection ? 'paused' : 'active';
+    case 'past_due':
+    case 'unpaid':
+      return 'past_due';
+    case 'paused':
+      return 'paused';
+    case 'canceled':
+    case 'incomplete_expired':
+      return 'cancelled';
+    default:
+      return 'incomplete';
+  }
+}
+
+function billingOf(subscription: Stripe.Subscription) {
+  const periodEnds = subscription.items.data.map((item) => item.current_period_end);
+  const status = subscriptionStatusOf(subscription);
+  return {
+    status,
+    stripeSubscriptionId: subscription.id,
+    stripeCustomerId: idOf(subscription.customer),
+    currentPeriodEnd: periodEnds.length > 0 ? fromUnix(Math.max(...periodEnds)) : null,
+    cancelledAt: status === 'cancelled' ? fromUnix(subscription.ended_at ?? subscription.canceled_at) : null,
+  };
+}
+
+/**
+ * Applies Stripe's webhooks. Each event id is claimed in the payment_events ledger in the same
+ * transaction as its effect, so a redelivered event changes nothing. Events arrive in any order, so
+ * each handler re-reads the object from Stripe and applies its current state, not the event's copy.
+ */
+export function createPaymentEventsService({ repo, gateway, clock, logger, config }: PaymentEventsDeps) {
+  const baseUrl = shopBaseUrl(config);
+
+  async function completeOrderCheckout(session: Stripe.Checkout.Session): Promise<Effect | undefined> {
+    const orderId = session.metadata?.[orderIdKey] ?? session.client_reference_id;
+    if (!orderId || !uuidPattern.test(orderId)) {
+      logger.warn({ checkoutSessionId: session.id }, 'a paid Checkout Session names no Restday order');
+      return undefined;
+    }
+    const paymentIntentId = idOf(session.payment_intent);
+    return async (tx) => {
+      const order = await tx.lockOrder(orderId);
+      if (!order) return void logger.warn({ orderId, checkoutSessionId: session.id }, 'a paid Checkout Session names an unknown order');
+      if (order.status !== 'pending_payment') return;
+      if (session.amount_total !== order.totalCents || session.currency !== order.currency) {
+        logger.error(
+          { orderId, charged: session.amount_total, currency: session.currency, totalCents: order.totalCents },
+          'the amount paid differs from the order total; the order is left unpaid for staff to check',
+        );
+        return;
+      }
+      // A refund can arrive before the payment it refunds; an order refunded in full is never confirmed.
+      const refundedInFull = order.refundedCents >= order.totalCents;
+      await tx.markOrderPaid(order.id, { status: refundedInFull ? 'refunded' : 'paid', paidAt: clock.now(), checkoutSessionId: session.id, paymentIntentId });
+      if (refundedInFull) return;
+      const lines = await tx.orderLines(order.id);
+      await queueEmail(tx.tx, {
+        template: 'order-confirmed',
+        to: order.customerEmail,
+        dedupeKey: `order-confirmed:${order.id}`,
+        payload: {
+          name: order.customerName,
+          orderId: order.id,
+          kind: order.kind,
+          lines: lines.map((line) => ({
+            description: line.description,
+            size: line.size,
+            quantity: line.quantity,
+            lineTotalCents: line.lineTotalCents,
+            ...(line.roastLevel ? { roastLevel: line.roastLevel } : {}),
+            ...(line.grind ? { grind: line.grind } : {}),
+          })),
+          subtotalCents: order.subtotalCents,
+          shippingCents: order.shippingCents,
+          totalCents: order.totalCents,
+          currency: order.currency,
+          shipTo: order.shippingAddress,
+          ...(order.roastDate ? { roastDate: order.roastDate } : {}),
+          ...(order.shipDate ? { shipDate: order.shipDate } : {}),
+        },
+      });
+    };
+  }
+
+  async function completeSubscriptionCheckout(session: Stripe.Checkout.Session): Promise<Effect | undefined> {
+    const subscriptionId = session.metadata?.[subscriptionIdKey] ?? session.client_reference_id;
+    const stripeSubscriptionId = idOf(session.subscription);
+    if (!subscriptionId || !uuidPattern.test(subscriptionId) || !stripeSubscriptionId) {
+      logger.warn({ checkoutSessionId: session.id }, 'a paid subscription Checkout Session names no Restday subscription');
+      return undefined;
+    }
+    const stripeSubscription = await gateway.retrieveSubscription(stripeSubscriptionId);
+    return async (tx) => {
+      const subscription = await tx.lockSubscription(subscriptionId);
+      if (!subscription) return void logger.warn({ subscriptionId }, 'a paid Checkout Session names an unknown subscription');
+      await tx.updateSubscriptionBilling(subscription.id, { ...billingOf(stripeSubscription), stripeCheckoutSessionId: session.id });
+      const firstRoastDate = await tx.firstDeliveryRoastDate(subscription.id);
+      await queueEmail(tx.tx, {
+        template: 'subscription-started',
+        to: subscription.customerEmail,
+        dedupeKey: `subscription-started:${subscription.id}`,
+        payload: {
+          name: subscription.customerName,
+          subscriptionId: subscription.id,
+          coffee: subscription.coffee,
+          size: roastedSizeOf(subscription.bagSize),
+          roastLevel: subscription.roastLevel,
+          grind: subscription.grind,
+          brewMethod: subscription.brewMethod,
+          cadenceWeeks: subscription.cadenceWeeks,
+          priceCents: subscription.priceCents,
+          currency: subscription.currency,
+          ...(firstRoastDate ? { firstRoastDate } : {}),
+        },
+      });
+    };
+  }
+
+  /** The Restday subscription a Stripe subscription belongs to: by the metadata set at checkout, else by its id. */
+  async function restdaySubscriptionOf(stripeSubscription: Stripe.Subscription): Promise<string | undefined> {
+    const fromMetadata = stripeSubscription.metadata?.[subscriptionIdKey];
+    if (fromMetadata && uuidPattern.test(fromMetadata)) return fromMetadata;
+    return repo.findSubscriptionIdByStripeId(stripeSubscription.id);
+  }
+
+  async function syncSubscription(
+    stripeSubscriptionId: string,
+    then?: (tx: PaymentsTransaction, subscription: SubscriptionForPayment) => Promise<void>,
+  ): Promise<Effect | undefined> {
+    const stripeSubscription = await gateway.retrieveSubscription(stripeSubscriptionId);
+    const subscriptionId = await restdaySubscriptionOf(stripeSubscription);
+    if (!subscriptionId) {
+      logger.warn({ stripeSubscriptionId }, 'a Stripe subscription that is not Restday’s');
+      return undefined;
+    }
+    return async (tx) => {
+      const subscription = await tx.lockSubscription(subscriptionId);
+      if (!subscription) return void logger.warn({ subscriptionId }, 'a Stripe subscription names an unknown subscription');
+      await tx.updateSubscriptionBilling(subscription.id, billingOf(stripeSubscription));
+      await then?.(tx, subscription);
+    };
+  }
+
+  async function invoiceEvent(event: Stripe.Event, outcome: 'paid' | 'failed'): Promise<Effect | undefined> {
+    const invoice = await gateway.retrieveInvoice(idOf(event.data.object as Stripe.Invoice) ?? '');
+    const stripeSubscriptionId = idOf(invoice.parent?.subscription_details?.subscription);
+    if (!stripeSubscriptionId) return undefined;
+    const timeZone = (await repo.shopTimeZone()) ?? 'UTC';
+    return syncSubscription(stripeSubscriptionId, async (tx, subscription) => {
+      if (outcome === 'paid') {
+        await tx.releaseHeldDeliveries(subscription.id);
+        return;
+      }
+      // Only while the invoice is still unpaid: a later payment may have been delivered first.
+      if (invoice.status !== 'open') return;
+      await tx.holdNextDelivery(subscription.id, localDateOf(clock.now(), timeZone));
+      const nextAttempt = fromUnix(invoice.next_payment_attempt);
+      await queueEmail(tx.tx, {
+        template: 'payment-failed',
+        to: subscription.customerEmail,
+        dedupeKey: `payment-failed:${invoice.id}`,
+        payload: {
+          name: subscription.customerName,
+          amountCents: invoice.amount_due,
+          currency: invoice.currency,
+          subscriptionId: subscription.id,
+          updatePaymentUrl: `${baseUrl}/account`,
+          ...(nextAttempt ? { nextAttemptOn: localDateOf(nextAttempt, timeZone) } : {}),
+        },
+      });
+    });
+  }
+
+  async function chargeRefunded(event: Stripe.Event): Promise<Effect | undefined> {
+    const charge = await gateway.retrieveCharge(idOf(event.data.object as Stripe.Charge) ?? '');
+    const paymentIntentId = idOf(charge.payment_intent);
+    if (!paymentIntentId) return undefined;
+    const orderId =
+      (await repo.findOrderIdByPaymentIntent(paymentIntentId)) ?? (await gateway.retrievePaymentIntent(paymentIntentId)).metadata?.[orderIdKey];
+    if (!orderId || !uuidPattern.test(orderId)) {
+      logger.warn({ chargeId: charge.id }, 'a refunded charge names no Restday order');
+      return undefined;
+    }
+    return async (tx) => {
+      const order = await tx.lockOrder(orderId);
+      if (!order) return;
+      // Stripe's amount_refunded is the running total, so applying it in any order lands on the same figure.
+      const refundedCents = Math.min(order.totalCents, Math.max(order.refundedCents, charge.amount_refunded));
+      const refundedInFull = refundedCents >= order.totalCents && order.status !== 'pending_payment';
+      await tx.setOrderRefund(order.id, { refundedCents, status: refundedInFull ? 'refunded' : order.status, paymentIntentId });
+    };
+  }
+
+  const handlers: Partial<Record<string, (event: Stripe.Event) => Promise<Effect | undefined>>> = {
+    async 'checkout.session.completed'(event) {
+      const session = await gateway.retrieveCheckoutSession(idOf(event.data.object as Stripe.Checkout.Session) ?? '');
+      if (session.status !== 'complete' || session.payment_status === 'unpaid') return undefined;
+      return session.mode === 'subscription' ? completeSubscriptionCheckout(session) : completeOrderCheckout(session);
+    },
+    'invoice.paid': (event) => invoiceEvent(event, 'paid'),
+    'invoice.payment_failed': (event) => invoiceEvent(event, 'failed'),
+    'customer.subscription.updated': (event) => syncSubscription(idOf(event.data.object as Stripe.Subscription) ?? ''),
+    'customer.subscription.deleted': (event) => syncSubscription(idOf(event.data.object as Stripe.Subscription) ?? ''),
+    'charge.refunded': chargeRefunded,
+  };
+
+  async function effectOf(event: Stripe.Event): Promise<Effect | undefined> {
+    try {
+      return await handlers[event.type]?.(event);
+    } catch (error) {
+      // An object Stripe no longer has will never come back; retrying the event cannot help.
+      if (error instanceof Stripe.errors.StripeInvalidRequestError && error.statusCode === 404) {
+        logger.warn({ eventId: event.id, type: event.type, err: error }, 'a payment event names an object Stripe does not have');
+        return undefined;
+      }
+      throw error;
+    }
+  }
+
+  return {
+    async handleWebhook(rawBody: Buffer, signature: string | undefined): Promise<WebhookReceipt> {
+      const event = gateway.verifyWebhook(rawBody, signature);
+      if (await repo.isEventRecorded(event.id)) return { received: true, duplicate: true };
+      const effect = await effectOf(event);
+      const applied = await repo.transaction(async (tx) => {
+        const claimed = await tx.recordEvent({
+          id: event.id,
+          type: event.type,
+          payload: JSON.parse(rawBody.toString('utf8')) as Record<string, unknown>,
+          processedAt: clock.now(),
+        });
+        if (claimed) await effect?.(tx);
+        return claimed;
+      });
+      logger.info({ eventId: event.id, type: event.type, duplicate: !applied }, 'payment event');
+      return { received: true, duplicate: !applied };
+    },
+  };
+}
+
+export type PaymentEventsService = ReturnType<typeof createPaymentEventsService>;

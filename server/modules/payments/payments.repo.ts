@@ -1,0 +1,225 @@
+import { and, asc, desc, eq, gte, sql } from 'drizzle-orm';
+import type { Db, DbOrTx, Tx } from '../../db/client';
+import { deliveries, lots, orderItems, orders, paymentEvents, shopSettings, subscriptions, users } from '../../db/schema/index';
+import type { OrderStatus, SubscriptionStatus } from '@shared/domain/vocabulary';
+
+/** Shown for a Roaster's Rotation line or subscription, which has no lot of its own. */
+export const rotationName = "Roaster's Rotation";
+
+export interface RecordedEvent {
+  id: string;
+  type: string;
+  payload: Record<string, unknown>;
+  processedAt: Date;
+}
+
+function queries(db: DbOrTx) {
+  const orderWithCustomer = () =>
+    db
+      .select({
+        id: orders.id,
+        kind: orders.kind,
+        status: orders.status,
+        subtotalCents: orders.subtotalCents,
+        shippingCents: orders.shippingCents,
+        totalCents: orders.totalCents,
+        refundedCents: orders.refundedCents,
+        currency: orders.currency,
+        shippingAddress: orders.shippingAddress,
+        roastDate: orders.roastDate,
+        shipDate: orders.shipDate,
+        stripeCheckoutSessionId: orders.stripeCheckoutSessionId,
+        stripePaymentIntentId: orders.stripePaymentIntentId,
+        customerEmail: users.email,
+        customerName: users.name,
+      })
+      .from(orders)
+      .innerJoin(users, eq(users.id, orders.userId));
+
+  const subscriptionWithCustomer = () =>
+    db
+      .select({
+        id: subscriptions.id,
+        status: subscriptions.status,
+        roastLevel: subscriptions.roastLevel,
+        bagSize: subscriptions.bagSize,
+        bagsPerDelivery: subscriptions.bagsPerDelivery,
+        grind: subscriptions.grind,
+        brewMethod: subscriptions.brewMethod,
+        cadenceWeeks: subscriptions.cadenceWeeks,
+        priceCents: subscriptions.priceCents,
+        currency: subscriptions.currency,
+        stripeSubscriptionId: subscriptions.stripeSubscriptionId,
+        stripeCustomerId: subscriptions.stripeCustomerId,
+        stripeCheckoutSessionId: subscriptions.stripeCheckoutSessionId,
+        coffee: sql<string>`coalesce(${lots.name}, ${rotationName})`,
+        customerEmail: users.email,
+        customerName: users.name,
+      })
+      .from(subscriptions)
+      .innerJoin(users, eq(users.id, subscriptions.userId))
+      .leftJoin(lots, eq(lots.id, subscriptions.lotId));
+
+  return {
+    async findOrder(orderId: string) {
+      const [order] = await orderWithCustomer().where(eq(orders.id, orderId));
+      return order;
+    },
+
+    /** The order, locked until the transaction ends, so two events for it apply one after the other. */
+    async lockOrder(orderId: string) {
+      const [order] = await orderWithCustomer().where(eq(orders.id, orderId)).for('update', { of: orders });
+      return order;
+    },
+
+    async findOrderIdByPaymentIntent(paymentIntentId: string) {
+      const [order] = await db.select({ id: orders.id }).from(orders).where(eq(orders.stripePaymentIntentId, paymentIntentId));
+      return order?.id;
+    },
+
+    async orderLines(orderId: string) {
+      return db
+        .select({
+          description: sql<string>`coalesce(${lots.name}, ${rotationName})`,
+          size: orderItems.size,
+          quantity: orderItems.quantity,
+          unitPriceCents: orderItems.unitPriceCents,
+          lineTotalCents: orderItems.lineTotalCents,
+          roastLevel: orderItems.roastLevel,
+          grind: orderItems.grind,
+        })
+        .from(orderItems)
+        .leftJoin(lots, eq(lots.id, orderItems.lotId))
+        .where(eq(orderItems.orderId, orderId))
+        // Items have no position of their own: by coffee, then the larger bag first.
+        .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id));
+    },
+
+    async setOrderCheckoutSession(orderId: string, sessionId: string) {
+      await db.update(orders).set({ stripeCheckoutSessionId: sessionId }).where(eq(orders.id, orderId));
+    },
+
+    async markOrderPaid(orderId: string, change: { status: OrderStatus; paidAt: Date; checkoutSessionId: string; paymentIntentId: string | null }) {
+      await db
+        .update(orders)
+        .set({
+          status: change.status,
+          paidAt: change.paidAt,
+          stripeCheckoutSessionId: change.checkoutSessionId,
+          ...(change.paymentIntentId ? { stripePaymentIntentId: change.paymentIntentId } : {}),
+        })
+        .where(eq(orders.id, orderId));
+    },
+
+    async setOrderRefund(orderId: string, change: { refundedCents: number; status: OrderStatus; paymentIntentId: string }) {
+      await db
+        .update(orders)
+        .set({ refundedCents: change.refundedCents, status: change.status, stripePaymentIntentId: change.paymentIntentId })
+        .where(eq(orders.id, orderId));
+    },
+
+    async findSubscription(subscriptionId: string) {
+      const [subscription] = await subscriptionWithCustomer().where(eq(subscriptions.id, subscriptionId));
+      return subscription;
+    },
+
+    async lockSubscription(subscriptionId: string) {
+      const [subscription] = await subscriptionWithCustomer().where(eq(subscriptions.id, subscriptionId)).for('update', { of: subscriptions });
+      return subscription;
+    },
+
+    async findSubscriptionIdByStripeId(stripeSubscriptionId: string) {
+      const [subscription] = await db
+        .select({ id: subscriptions.id })
+        .from(subscriptions)
+        .where(eq(subscriptions.stripeSubscriptionId, stripeSubscriptionId));
+      return subscription?.id;
+    },
+
+    async setSubscriptionCheckoutSession(subscriptionId: string, sessionId: string) {
+      await db.update(subscriptions).set({ stripeCheckoutSessionId: sessionId }).where(eq(subscriptions.id, subscriptionId));
+    },
+
+    async updateSubscriptionBilling(
+      subscriptionId: string,
+      change: {
+        status: SubscriptionStatus;
+        stripeSubscriptionId: string;
+        stripeCustomerId: string | null;
+        currentPeriodEnd: Date | null;
+        cancelledAt: Date | null;
+        stripeCheckoutSessionId?: string;
+      },
+    ) {
+      await db.update(subscriptions).set(change).where(eq(subscriptions.id, subscriptionId));
+    },
+
+    async firstDeliveryRoastDate(subscriptionId: string) {
+      const [first] = await db
+        .select({ roastDate: deliveries.roastDate })
+        .from(deliveries)
+        .where(eq(deliveries.subscriptionId, subscriptionId))
+        .orderBy(asc(deliveries.sequence))
+        .limit(1);
+      return first?.roastDate;
+    },
+
+    /** Holds the subscription's next scheduled delivery (roast date today or later) until it is paid. */
+    async holdNextDelivery(subscriptionId: string, today: string) {
+      const [next] = await db
+        .select({ id: deliveries.id })
+        .from(deliveries)
+        .where(and(eq(deliveries.subscriptionId, subscriptionId), eq(deliveries.status, 'scheduled'), gte(deliveries.roastDate, today)))
+        .orderBy(asc(deliveries.roastDate))
+        .limit(1)
+        .for('update');
+      if (!next) return undefined;
+      await db.update(deliveries).set({ status: 'held' }).where(eq(deliveries.id, next.id));
+      return next.id;
+    },
+
+    async releaseHeldDeliveries(subscriptionId: string) {
+      return db
+        .update(deliveries)
+        .set({ status: 'scheduled' })
+        .where(and(eq(deliveries.subscriptionId, subscriptionId), eq(deliveries.status, 'held')))
+        .returning({ id: deliveries.id });
+    },
+
+    async shopTimeZone() {
+      const [settings] = await db.select({ timeZone: shopSettings.timeZone }).from(shopSettings).limit(1);
+      return settings?.timeZone;
+    },
+
+    async isEventRecorded(eventId: string) {
+      const [found] = await db.select({ id: paymentEvents.id }).from(paymentEvents).where(eq(paymentEvents.id, eventId));
+      return found !== undefined;
+    },
+
+    /**
+     * Claims an event id in the ledger. False when it is already there: another delivery of the same
+     * event has been (or, until its transaction ends, is being) applied, so this one must do nothing.
+     */
+    async recordEvent(event: RecordedEvent) {
+      const inserted = await db.insert(paymentEvents).values(event).onConflictDoNothing({ target: paymentEvents.id }).returning({ id: paymentEvents.id });
+      return inserted.length > 0;
+    },
+  };
+}
+
+export type PaymentsQueries = ReturnType<typeof queries>;
+export type PaymentsTransaction = PaymentsQueries & { tx: Tx };
+export type OrderForPayment = NonNullable<Awaited<ReturnType<PaymentsQueries['findOrder']>>>;
+export type SubscriptionForPayment = NonNullable<Awaited<ReturnType<PaymentsQueries['findSubscription']>>>;
+
+export function createPaymentsRepo(db: Db) {
+  return {
+    ...queries(db),
+    /** Runs `work` in one transaction; `tx` is for other modules' repos (the e-mail outbox) in the same transaction. */
+    transaction<T>(work: (tx: PaymentsTransaction) => Promise<T>): Promise<T> {
+      return db.transaction((tx) => work({ ...queries(tx), tx }));
+    },
+  };
+}
+
+export type PaymentsRepo = ReturnType<typeof createPaymentsRepo>;

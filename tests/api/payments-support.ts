@@ -1,0 +1,178 @@
+// Helpers for the payments tests: a real listening server the fake's webhooks reach, the real Stripe
+// SDK pointed at the fake, and invented customers, lots, orders and subscriptions written directly.
+import { randomUUID } from 'node:crypto';
+import { createServer } from 'node:net';
+import { count, eq, inArray } from 'drizzle-orm';
+import type Stripe from 'stripe';
+import { inject } from 'vitest';
+import { stripeFakeControl } from '../../dev-services/stripe-fake/control-client';
+import { loadConfig, type Config } from '../../server/config';
+import { deliveries, emailOutbox, lots, orderItems, orders, paymentEvents, subscriptions, users } from '../../server/db/schema/index';
+import { createPaymentsGateway, createStripeClient } from '../../server/integrations/payments';
+import { startServer, type RunningServer } from '../../server/index';
+import { createLogger } from '../../server/lib/logger';
+import { createPaymentsRepo } from '../../server/modules/payments/payments.repo';
+import { createPaymentsService } from '../../server/modules/payments/payments.service';
+import { getTestDb } from '../setup/test-db';
+import { testAddress } from './outbox-support';
+
+export const stripeFake = () => stripeFakeControl(inject('stripeFakeUrl'));
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
+    });
+  });
+}
+
+/** The settings a test server runs with: test database, test mail catcher, the tests' payment fake. */
+export function paymentsTestConfig(overrides: Record<string, string> = {}): Config {
+  return loadConfig({
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'silent',
+    STATIC_DIR: 'dist',
+    DATABASE_URL: inject('databaseUrl'),
+    SMTP_URL: inject('smtpUrl'),
+    STRIPE_API_URL: inject('stripeFakeUrl'),
+    STRIPE_WEBHOOK_SECRET: inject('stripeWebhookSecret'),
+    ...overrides,
+  });
+}
+
+export interface PaymentsServer {
+  server: RunningServer;
+  config: Config;
+  stop(): Promise<void>;
+}
+
+/** The whole server (queue, outbox relay) listening on a free port, with the fake's webhooks pointed at it. */
+export async function startPaymentsServer(): Promise<PaymentsServer> {
+  const config = paymentsTestConfig({ PORT: String(await freePort()) });
+  const server = await startServer(config, createLogger(config));
+  await stripeFake().setWebhookEndpoint(`${server.url}/api/payments/webhook`);
+  return {
+    server,
+    config,
+    async stop() {
+      await stripeFake().setWebhookEndpoint(null);
+      await server.stop();
+    },
+  };
+}
+
+/** The real Stripe SDK, talking to the tests' fake as Restday does. */
+export function testStripe(): Stripe {
+  return createStripeClient(paymentsTestConfig());
+}
+
+/** The payments service as the server's own routes would build it (its return URLs point at `config`'s server). */
+export function testPaymentsService(config: Config) {
+  return createPaymentsService({ repo: createPaymentsRepo(getTestDb()), gateway: createPaymentsGateway(config), config });
+}
+
+/** An invented customer (accounts come in a later step, so the row is written directly). */
+export async function createCustomer(tag: string) {
+  const email = testAddress(tag);
+  const [user] = await getTestDb()
+    .insert(users)
+    .values({ email, name: 'Robin Testroaster', passwordHash: 'not-a-password-hash' })
+    .returning({ id: users.id, email: users.email });
+  return user!;
+}
+
+const invented = { name: 'Robin Testroaster', line1: '1 Invented Lane', city: 'Sampleville', region: 'CO', postalCode: '80000', country: 'US' };
+
+export async function createTestLot() {
+  const code = `PAY-${randomUUID().slice(0, 8).toUpperCase()}`;
+  const [lot] = await getTestDb()
+    .insert(lots)
+    .values({
+      code,
+      name: `Invented Ridge ${code}`,
+      origin: 'Testland',
+      region: 'North Ridge',
+      producer: 'Invented Growers Cooperative',
+      variety: 'Bourbon',
+      process: 'washed',
+      altitudeM: 1700,
+      cropYear: 2026,
+      moisturePct: 10.8,
+      suggestedLevel: 'medium',
+      allowedLevels: ['light', 'medium'],
+      stockGrams: 50_000,
+      pricePerKgCents: 4000,
+    })
+    .returning({ id: lots.id, name: lots.name });
+  return lot!;
+}
+
+/** A green order waiting for payment: 1 × 1 lb at $18.99 and 2 × 8 oz at $10.50, plus $8.50 shipping = $48.49. */
+export async function createGreenOrder(userId: string, lotId: string) {
+  const db = getTestDb();
+  const [order] = await db
+    .insert(orders)
+    .values({ userId, kind: 'green', subtotalCents: 3999, shippingCents: 850, totalCents: 4849, shippingAddress: invented })
+    .returning({ id: orders.id, totalCents: orders.totalCents });
+  await db.insert(orderItems).values([
+    { orderId: order!.id, lotId, kind: 'green', size: '1lb', quantity: 1, fillGrams: 454, unitPriceCents: 1899, lineTotalCents: 1899 },
+    { orderId: order!.id, lotId, kind: 'green', size: '8oz', quantity: 2, fillGrams: 227, unitPriceCents: 1050, lineTotalCents: 2100 },
+  ]);
+  return order!;
+}
+
+/** A subscription not started yet (2 × 12 oz, $36.00 every two weeks) with one scheduled delivery. */
+export async function createPendingSubscription(userId: string, lotId: string) {
+  const db = getTestDb();
+  const [subscription] = await db
+    .insert(subscriptions)
+    .values({ userId, lotId, roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2, cadenceWeeks: 2, priceCents: 3600, shippingAddress: invented })
+    .returning({ id: subscriptions.id });
+  const [delivery] = await db
+    .insert(deliveries)
+    .values({ subscriptionId: subscription!.id, sequence: 1, roastDate: '2099-01-06', shipDate: '2099-01-07', readyFrom: '2099-01-08', bestBefore: '2099-02-03' })
+    .returning({ id: deliveries.id });
+  return { id: subscription!.id, deliveryId: delivery!.id };
+}
+
+export async function orderRow(orderId: string) {
+  const [row] = await getTestDb().select().from(orders).where(eq(orders.id, orderId));
+  return row!;
+}
+
+export async function subscriptionRow(subscriptionId: string) {
+  const [row] = await getTestDb().select().from(subscriptions).where(eq(subscriptions.id, subscriptionId));
+  return row!;
+}
+
+export async function deliveryRow(deliveryId: string) {
+  const [row] = await getTestDb().select().from(deliveries).where(eq(deliveries.id, deliveryId));
+  return row!;
+}
+
+export async function orderCount(userId: string) {
+  const [row] = await getTestDb().select({ n: count() }).from(orders).where(eq(orders.userId, userId));
+  return row!.n;
+}
+
+export async function ledgerCount(eventIds: string[]) {
+  if (eventIds.length === 0) return 0;
+  const [row] = await getTestDb().select({ n: count() }).from(paymentEvents).where(inArray(paymentEvents.id, eventIds));
+  return row!.n;
+}
+
+export async function outboxCount(dedupeKey: string) {
+  const [row] = await getTestDb().select({ n: count() }).from(emailOutbox).where(eq(emailOutbox.dedupeKey, dedupeKey));
+  return row!.n;
+}
+
+/** The fake's events about one Stripe object (a session, a charge, an invoice, a subscription). */
+export async function eventsAbout(objectId: string, type?: Parameters<ReturnType<typeof stripeFake>['deliveries']>[0]) {
+  return (await stripeFake().deliveries(type)).filter((delivery) => delivery.objectId === objectId);
+}
+
+/** Lets in-flight deliveries and the relay finish, so "nothing more arrived" means something. */
+export const settle = (ms = 1500) => new Promise((resolve) => setTimeout(resolve, ms));
