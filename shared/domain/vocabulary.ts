@@ -79,3 +79,6 @@ export const weekdayLabels: Record<Weekday, string> = {
   sat: 'Saturday',
   sun: 'Sunday',
 };
+
+/** What a Roaster's Rotation line or subscription is called, since it has no lot of its own. */
+export const roastersRotationName = "Roaster's Rotation";

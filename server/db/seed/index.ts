@@ -10,15 +10,16 @@
 import { sql } from 'drizzle-orm';
 import type { PgTable } from 'drizzle-orm/pg-core';
 import { parseEmailPayload, renderSubject, type EmailPayloads, type EmailTemplateName } from '../../../emails/index';
-import type {
-  BagSize,
-  BrewMethod,
-  Grind,
-  OrderStatus,
-  RoastLevel,
-  RoastedBagSize,
-  Role,
-  SubscriptionStatus,
+import {
+  roastersRotationName,
+  type BagSize,
+  type BrewMethod,
+  type Grind,
+  type OrderStatus,
+  type RoastLevel,
+  type RoastedBagSize,
+  type Role,
+  type SubscriptionStatus,
 } from '../../../shared/domain/vocabulary';
 import type { Db } from '../client';
 import { hashPassword } from '../../lib/password-hashing';
@@ -54,8 +55,6 @@ const GREEN_SHIPPING_CENTS = 850;
 const FREE_SHIPPING_FROM_CENTS = 7500;
 /** Orders and subscriptions take the columns' default currency; the e-mails name it. */
 const CURRENCY = 'usd';
-/** What a Roaster's Rotation line is called, in the same words as the live rows (payments.repo's rotationName). */
-const ROTATION_NAME = "Roaster's Rotation";
 /** Key of the advisory lock that keeps two concurrent seeds from both inserting. */
 const SEED_LOCK_KEY = 7_302_451;
 
@@ -295,7 +294,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     const address = addressByUser.get(userId) as AddressSnapshot;
     const subscriptionId = rng.uuid();
     const name = nameOf(userId);
-    const coffee = lot?.name ?? ROTATION_NAME;
+    const coffee = lot?.name ?? roastersRotationName;
     const emailLine = { description: coffee, size: bagSize, quantity: bagsPerDelivery, lineTotalCents: priceCents, roastLevel, grind };
 
     // Dates: the subscriber's roast weekday, every `cadenceWeeks` weeks; a closure moves a delivery on.

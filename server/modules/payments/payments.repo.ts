@@ -1,10 +1,8 @@
 import { and, asc, desc, eq, gte, sql } from 'drizzle-orm';
 import type { Db, DbOrTx, Tx } from '../../db/client';
 import { deliveries, lots, orderItems, orders, paymentEvents, shopSettings, subscriptions, users } from '../../db/schema/index';
-import type { OrderStatus, SubscriptionStatus } from '@shared/domain/vocabulary';
+import { roastersRotationName, type OrderStatus, type SubscriptionStatus } from '@shared/domain/vocabulary';
 
-/** Shown for a Roaster's Rotation line or subscription, which has no lot of its own. */
-export const rotationName = "Roaster's Rotation";
 
 export interface RecordedEvent {
   id: string;
@@ -52,7 +50,7 @@ function queries(db: DbOrTx) {
         stripeSubscriptionId: subscriptions.stripeSubscriptionId,
         stripeCustomerId: subscriptions.stripeCustomerId,
         stripeCheckoutSessionId: subscriptions.stripeCheckoutSessionId,
-        coffee: sql<string>`coalesce(${lots.name}, ${rotationName})`,
+        coffee: sql<string>`coalesce(${lots.name}, ${roastersRotationName})`,
         customerEmail: users.email,
         customerName: users.name,
       })
@@ -80,7 +78,7 @@ function queries(db: DbOrTx) {
     async orderLines(orderId: string) {
       return db
         .select({
-          description: sql<string>`coalesce(${lots.name}, ${rotationName})`,
+          description: sql<string>`coalesce(${lots.name}, ${roastersRotationName})`,
           size: orderItems.size,
           quantity: orderItems.quantity,
           unitPriceCents: orderItems.unitPriceCents,
