@@ -9,6 +9,7 @@ import type { Database } from './db/client';
 import type { Queue } from './jobs/queue';
 import type { Clock } from './lib/clock';
 import type { Logger } from './lib/logger';
+import { AppError } from './lib/app-error';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { requireClientHeader } from './middleware/require-client-header';
 import { createDevClockRepo } from './modules/dev-clock/dev-clock.repo';
@@ -118,7 +119,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
   // Every other GET is a client-side route: the SPA decides what to show (its own 404 included).
   app.get('/{*splat}', (_req, res, next) => {
-    if (!existsSync(indexHtml)) return next();
+    // Without a build (API-only runs), answer through the error handler so every header still applies.
+    if (!existsSync(indexHtml)) return next(new AppError(404, 'client_not_built', 'The shop client is not built yet: run npm run build.'));
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(indexHtml);
   });
