@@ -349,6 +349,9 @@ describe('password reset by e-mail', () => {
     expect(stored!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(stored!.tokenHash).not.toBe(token);
     expect(stored!.expiresAt.getTime() - stored!.createdAt.getTime()).toBe(30 * MINUTE);
+    // Once sent, the outbox keeps no copy of the link: the token lives only in the customer's inbox.
+    const [sentRow] = await getTestDb().select().from(emailOutbox).where(and(eq(emailOutbox.toAddress, user.email), eq(emailOutbox.status, 'sent')));
+    expect(JSON.stringify(sentRow!.payload)).not.toContain(token);
 
     const confirmed = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'new kettle morning light' });
     expect(confirmed.status).toBe(204);

@@ -44,6 +44,13 @@ export async function queueEmail<T extends EmailTemplateName>(db: DbOrTx, messag
   if (inserted.length > 0) await db.execute(sql`select pg_notify(${OUTBOX_CHANNEL}, '')`);
 }
 
+/**
+ * Links carrying single-use tokens (password reset, invitation). Once a row is sent or given up
+ * on, the outbox forgets them, so a copy of the database never holds a live token.
+ */
+const tokenLinkKeys = ['resetUrl', 'acceptUrl'] as const;
+const payloadWithoutTokenLinks = sql`${emailOutbox.payload} - ${sql.raw(tokenLinkKeys.map((key) => `'${key}'`).join(' - '))}`;
+
 /** A row the relay has claimed: its lease runs until it is marked sent, retried or failed. */
 export interface ClaimedEmail {
   id: string;
@@ -92,7 +99,7 @@ export function createOutboxRepo(db: Db) {
     async markSent(id: string, attempts: number, sentAt: Date): Promise<boolean> {
       const rows = await db
         .update(emailOutbox)
-        .set({ status: 'sent', sentAt, lastError: null })
+        .set({ status: 'sent', sentAt, lastError: null, payload: payloadWithoutTokenLinks })
         .where(and(eq(emailOutbox.id, id), eq(emailOutbox.status, 'sending'), eq(emailOutbox.attempts, attempts)))
         .returning({ id: emailOutbox.id });
       return rows.length > 0;
@@ -111,7 +118,7 @@ export function createOutboxRepo(db: Db) {
     async markFailed(id: string, attempts: number, error: string): Promise<boolean> {
       const rows = await db
         .update(emailOutbox)
-        .set({ status: 'failed', lastError: error })
+        .set({ status: 'failed', lastError: error, payload: payloadWithoutTokenLinks })
         .where(and(eq(emailOutbox.id, id), eq(emailOutbox.status, 'sending'), eq(emailOutbox.attempts, attempts)))
         .returning({ id: emailOutbox.id });
       return rows.length > 0;
