@@ -20,6 +20,13 @@ import { healthRoutes } from './modules/health/health.routes';
 import { createLotsRepo } from './modules/lots/lots.repo';
 import { lotsRoutes } from './modules/lots/lots.routes';
 import { createLotsService } from './modules/lots/lots.service';
+import { createLotsAdminRepo } from './modules/lots/lots-admin.repo';
+import { greenStockRoutes, lotsAdminRoutes } from './modules/lots/lots-admin.routes';
+import { createLotsAdminService } from './modules/lots/lots-admin.service';
+import { createUploadsRepo } from './modules/uploads/uploads.repo';
+import { uploadsRoutes } from './modules/uploads/uploads.routes';
+import { createUploadsService } from './modules/uploads/uploads.service';
+import { createFileStorage } from './integrations/storage';
 import { createOutboxRepo } from './modules/outbox/outbox.repo';
 import { outboxRoutes } from './modules/outbox/outbox.routes';
 import { createOutboxService } from './modules/outbox/outbox.service';
@@ -27,6 +34,13 @@ import { createPaymentsGateway } from './integrations/payments';
 import { createPaymentEventsService } from './modules/payments/payment-events.service';
 import { createPaymentsRepo } from './modules/payments/payments.repo';
 import { paymentsWebhookRoutes } from './modules/payments/payments.routes';
+import { createPaymentsService } from './modules/payments/payments.service';
+import { createCheckoutRepo } from './modules/checkout/checkout.repo';
+import { checkoutRoutes } from './modules/checkout/checkout.routes';
+import { createCheckoutService } from './modules/checkout/checkout.service';
+import { createOrdersRepo } from './modules/orders/orders.repo';
+import { ordersRoutes } from './modules/orders/orders.routes';
+import { createOrdersService } from './modules/orders/orders.service';
 
 export interface AppDeps {
   config: Config;
@@ -104,7 +118,15 @@ export function createApp(deps: AppDeps): Express {
   api.use(accounts.loadSession);
   for (const [mountPath, router] of accounts.routers) api.use(mountPath, router);
   api.use('/lots', lotsRoutes(createLotsService(createLotsRepo(database.db))));
+  const fileStorage = createFileStorage(config.UPLOADS_DIR);
+  const lotsAdmin = createLotsAdminService(createLotsAdminRepo(database.db), fileStorage, deps.clock);
+  api.use('/lots', lotsAdminRoutes(lotsAdmin));
+  api.use('/roastery/green-stock', greenStockRoutes(lotsAdmin));
+  api.use('/uploads', uploadsRoutes(createUploadsService(createUploadsRepo(database.db), fileStorage)));
   api.use('/roastery/outbox', outboxRoutes(createOutboxService(createOutboxRepo(database.db))));
+  const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
+  api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
+  api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
     api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));

@@ -1,6 +1,6 @@
 // Who may call each API route. tests/api/access-control.test.ts reads the app's own route list and
 // fails for any route missing here (and for any rule naming no route): add a row with every new route.
-import { addresses } from '../../server/db/schema/index';
+import { addresses, orders } from '../../server/db/schema/index';
 import { getTestDb } from '../setup/test-db';
 import type { TestUser } from '../setup/test-users';
 
@@ -43,6 +43,21 @@ async function addressOf(owner: TestUser) {
   return { id: row!.id };
 }
 
+async function orderOf(owner: TestUser) {
+  const [row] = await getTestDb()
+    .insert(orders)
+    .values({
+      userId: owner.id,
+      kind: 'green',
+      subtotalCents: 1899,
+      shippingCents: 695,
+      totalCents: 2594,
+      shippingAddress: { name: owner.name, line1: '7 Invented Lane', city: 'Larch Bend', region: 'MT', postalCode: '59701', country: 'US' },
+    })
+    .returning({ id: orders.id });
+  return { id: row!.id };
+}
+
 export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/health', access: 'public' },
   { method: 'POST', path: '/api/payments/webhook', access: 'signed-request' },
@@ -72,6 +87,20 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/lots', access: 'public' },
   { method: 'GET', path: '/api/lots/:code', access: 'public' },
   { method: 'GET', path: '/api/lots/:code/roast-guide', access: 'public' },
+  { method: 'POST', path: '/api/lots', access: 'staff' },
+  { method: 'PATCH', path: '/api/lots/:code', access: 'staff' },
+  { method: 'POST', path: '/api/lots/:code/photos', access: 'staff' },
+  { method: 'DELETE', path: '/api/lots/:code/photos/:id', access: 'staff' },
+  { method: 'POST', path: '/api/lots/:code/spec-sheet', access: 'staff' },
+  { method: 'POST', path: '/api/lots/:code/stock-adjustments', access: 'staff' },
+  { method: 'GET', path: '/api/lots/:code/stock-movements', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/green-stock', access: 'staff' },
+  { method: 'GET', path: '/api/uploads/:id', access: 'public' },
 
   { method: 'GET', path: '/api/roastery/outbox', access: 'staff' },
+
+  { method: 'POST', path: '/api/checkout/green', access: 'signed-in' },
+  { method: 'GET', path: '/api/orders', access: 'signed-in' },
+  { method: 'GET', path: '/api/orders.csv', access: 'staff' },
+  { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
 ];

@@ -32,6 +32,8 @@ export const lots = pgTable(
     suggestedLevel: roastLevelEnum('suggested_level').notNull(),
     allowedLevels: roastLevelEnum('allowed_levels').array().notNull(),
     stockGrams: integer('stock_grams').notNull().default(0),
+    /** Staff want to reorder once stock falls to this many grams (0: no alert). */
+    reorderPointGrams: integer('reorder_point_grams').notNull().default(0),
     pricePerKgCents: integer('price_per_kg_cents').notNull(),
     isListed: boolean('is_listed').notNull().default(true),
     ...timestamps(),
@@ -43,6 +45,7 @@ export const lots = pgTable(
     index('lots_suggested_level_idx').on(t.suggestedLevel),
     check('lots_code_not_blank', sql`length(trim(${t.code})) > 0`),
     check('lots_stock_grams_non_negative', sql`${t.stockGrams} >= 0`),
+    check('lots_reorder_point_non_negative', sql`${t.reorderPointGrams} >= 0`),
     check('lots_price_per_kg_positive', sql`${t.pricePerKgCents} > 0`),
     check('lots_moisture_range', sql`${t.moisturePct} >= 0 and ${t.moisturePct} <= 20`),
     check('lots_cupping_score_range', sql`${t.cuppingScore} is null or (${t.cuppingScore} >= 0 and ${t.cuppingScore} <= 100)`),

@@ -212,7 +212,8 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     lotIdByCode.set(lot.code, id);
     const createdAt = daysAgo(lot.arrivedDaysAgo, 600);
     const { priceBreaks: breaks, arrivedDaysAgo: _arrived, rotation: _rotation, ...columns } = lot;
-    lots.push({ id, ...columns, isListed: true, createdAt, updatedAt: createdAt });
+    // Invented staff habit: reorder once a lot is down to 20 lb (9,072 g), so low lots raise the alert.
+    lots.push({ id, ...columns, reorderPointGrams: 9_072, isListed: true, createdAt, updatedAt: createdAt });
     for (const [minGrams, pricePerKgCents] of breaks) priceBreaks.push({ id: rng.uuid(), lotId: id, minGrams, pricePerKgCents });
   }
   const lotId = (code: string) => lotIdByCode.get(code) as string;
@@ -687,7 +688,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
       lotId: lotId(lot.code),
       deltaGrams: lot.stockGrams - moved,
       reason: 'arrival',
-      note: `${Math.round((lot.stockGrams - moved) / 1000)} kg in GrainPro-lined sacks from the (invented) importer`,
+      note: `${Math.round((lot.stockGrams - moved) / 1000)} kg in hermetic-lined sacks from the (invented) importer`,
       actorId: roasterId,
       createdAt: daysAgo(lot.arrivedDaysAgo, 600),
     });

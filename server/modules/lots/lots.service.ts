@@ -4,12 +4,11 @@ import { bagFillGrams } from '@shared/domain/units';
 import { greenBagSizes } from '@shared/domain/vocabulary';
 import type { LotDetail, LotListQuery, LotSummary, RoastGuideQuery } from '@shared/schemas/lots';
 import { AppError } from '../../lib/app-error';
+import { lotDetailOf, uploadUrl } from './lot-detail';
 import type { LotsRepo } from './lots.repo';
 
 /** A lot is "in stock" while it can fill the smallest green bag sold. */
 const smallestGreenBagGrams = Math.min(...greenBagSizes.map(bagFillGrams));
-
-const uploadUrl = (id: string) => `/api/uploads/${id}`;
 
 export function createLotsService(repo: LotsRepo) {
   return {
@@ -22,32 +21,7 @@ export function createLotsService(repo: LotsRepo) {
     async get(code: string): Promise<LotDetail> {
       const found = await repo.findListedByCode(code);
       if (!found) throw new AppError(404, 'lot_not_found', `No lot with code ${code}.`);
-      const { lot, priceBreaks, files } = found;
-      const specSheet = files.find((file) => file.kind === 'spec_sheet');
-      return {
-        code: lot.code,
-        name: lot.name,
-        origin: lot.origin,
-        region: lot.region,
-        producer: lot.producer,
-        variety: lot.variety,
-        process: lot.process,
-        altitudeM: lot.altitudeM,
-        cropYear: lot.cropYear,
-        moisturePct: lot.moisturePct,
-        densityGPerL: lot.densityGPerL,
-        screenSize: lot.screenSize,
-        cuppingScore: lot.cuppingScore,
-        tastingNotes: lot.tastingNotes,
-        description: lot.description,
-        suggestedLevel: lot.suggestedLevel,
-        allowedLevels: lot.allowedLevels,
-        stockGrams: lot.stockGrams,
-        pricePerKgCents: lot.pricePerKgCents,
-        priceBreaks,
-        photos: files.filter((file) => file.kind === 'photo').map((file) => uploadUrl(file.id)),
-        specSheetUrl: specSheet ? uploadUrl(specSheet.id) : null,
-      };
+      return lotDetailOf(found.lot, found.priceBreaks, found.files);
     },
 
     async roastGuide(code: string, query: RoastGuideQuery): Promise<HomeRoastGuide> {

@@ -5,6 +5,7 @@ import { roastedBagSizes, type BagSize, type RoastedBagSize, type SubscriptionSt
 import type { PaymentsGateway } from '../../integrations/payments';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
+import { cancelUnpaidOrder } from '../checkout/checkout.repo';
 import { queueEmail } from '../outbox/outbox.repo';
 import type { PaymentsRepo, PaymentsTransaction, SubscriptionForPayment } from './payments.repo';
 import { orderIdKey, shopBaseUrl, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
@@ -118,6 +119,18 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
           ...(order.shipDate ? { shipDate: order.shipDate } : {}),
         },
       });
+    };
+  }
+
+  /** An unpaid order's checkout ran out: the order is cancelled and the stock reserved for it goes back. */
+  function expireOrderCheckout(session: Stripe.Checkout.Session): Effect | undefined {
+    const orderId = session.metadata?.[orderIdKey] ?? session.client_reference_id;
+    if (!orderId || !uuidPattern.test(orderId)) return undefined;
+    return async (tx) => {
+      const order = await tx.lockOrder(orderId);
+      // Only the order's current session counts: an older one may expire after a newer one was opened.
+      if (!order || order.stripeCheckoutSessionId !== session.id) return;
+      await cancelUnpaidOrder(tx.tx, order.id, clock.now(), `checkout ${session.id} expired`);
     };
   }
 
@@ -235,6 +248,10 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
       const session = await gateway.retrieveCheckoutSession(idOf(event.data.object as Stripe.Checkout.Session) ?? '');
       if (session.status !== 'complete' || session.payment_status === 'unpaid') return undefined;
       return session.mode === 'subscription' ? completeSubscriptionCheckout(session) : completeOrderCheckout(session);
+    },
+    async 'checkout.session.expired'(event) {
+      const session = await gateway.retrieveCheckoutSession(idOf(event.data.object as Stripe.Checkout.Session) ?? '');
+      return session.status === 'expired' && session.mode === 'payment' ? expireOrderCheckout(session) : undefined;
     },
     'invoice.paid': (event) => invoiceEvent(event, 'paid'),
     'invoice.payment_failed': (event) => invoiceEvent(event, 'failed'),

@@ -1,0 +1,2 @@
+ALTER TABLE "lots" ADD COLUMN "reorder_point_grams" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
+ALTER TABLE "lots" ADD CONSTRAINT "lots_reorder_point_non_negative" CHECK ("lots"."reorder_point_grams" >= 0);

@@ -1,0 +1,17 @@
+import { Router } from 'express';
+import { greenCheckoutRequestSchema, type GreenCheckoutResponse } from '@shared/schemas/checkout';
+import { requireUser } from '../../middleware/require-role';
+import type { CheckoutService } from './checkout.service';
+
+/** `/api/checkout`: buying, for signed-in accounts. */
+export function checkoutRoutes(service: CheckoutService): Router {
+  const router = Router();
+  router.use(requireUser);
+
+  router.post('/green', async (req, res) => {
+    const started = await service.checkoutGreen(req.user!, greenCheckoutRequestSchema.parse(req.body));
+    res.status(201).json(started satisfies GreenCheckoutResponse);
+  });
+
+  return router;
+}

@@ -1,0 +1,88 @@
+import { quoteGreenOrder, type GreenLotPrice } from '@shared/domain/pricing';
+import { bagFillGrams } from '@shared/domain/units';
+import type { GreenCheckoutRequest, GreenCheckoutResponse } from '@shared/schemas/checkout';
+import { defaultShopSettings } from '@shared/schemas/settings';
+import type { Clock } from '../../lib/clock';
+import { AppError } from '../../lib/app-error';
+import type { SessionUser } from '../../middleware/require-role';
+import type { PaymentsService } from '../payments/payments.service';
+import { StockShortfall, type CheckoutRepo } from './checkout.repo';
+
+export interface CheckoutServiceDeps {
+  repo: CheckoutRepo;
+  payments: Pick<PaymentsService, 'createCheckoutForOrder'>;
+  clock: Clock;
+}
+
+const shortOfStock = (lotCode: string) =>
+  AppError.conflict(
+    'insufficient_stock',
+    `There is not enough of lot ${lotCode} left for this order. Nothing was reserved or charged; lower the quantity or choose another lot.`,
+  );
+
+export function createCheckoutService({ repo, payments, clock }: CheckoutServiceDeps) {
+  return {
+    /**
+     * Prices the cart with the trade engine, places the order with its stock reserved (one
+     * transaction), then opens the payment page. If the page cannot be opened, the order is
+     * cancelled and its stock put back before the error goes on.
+     */
+    async checkoutGreen(user: SessionUser, request: GreenCheckoutRequest): Promise<GreenCheckoutResponse> {
+      const codes = [...new Set(request.items.map((item) => item.lotCode))];
+      const lotsForSale = await repo.lotsForSale(codes);
+      const byCode = new Map(lotsForSale.map((lot) => [lot.code, lot]));
+      const fields: Record<string, string> = {};
+      request.items.forEach((item, index) => {
+        if (!byCode.has(item.lotCode)) fields[`items.${index}.lotCode`] = `There is no lot ${item.lotCode} for sale.`;
+      });
+      if (Object.keys(fields).length > 0) throw AppError.badRequest('Some lots in the cart are not for sale.', fields);
+
+      const prices: Record<string, GreenLotPrice> = Object.fromEntries(
+        lotsForSale.map((lot) => [lot.code, { pricePerKgCents: lot.pricePerKgCents, priceBreaks: lot.priceBreaks }]),
+      );
+      const quote = quoteGreenOrder(request.items, prices, defaultShopSettings);
+      const itemLines = quote.lines.filter((line) => line.kind === 'item');
+      const items = request.items.map((item, index) => {
+        const line = itemLines[index]!;
+        return {
+          lotId: byCode.get(item.lotCode)!.id,
+          size: item.size,
+          quantity: item.quantity,
+          fillGrams: bagFillGrams(item.size),
+          unitPriceCents: line.unitCents,
+          lineTotalCents: line.amountCents,
+        };
+      });
+      const gramsPerLot = new Map<string, number>();
+      for (const item of request.items) {
+        gramsPerLot.set(item.lotCode, (gramsPerLot.get(item.lotCode) ?? 0) + bagFillGrams(item.size) * item.quantity);
+      }
+
+      let orderId: string;
+      try {
+        orderId = await repo.placeGreenOrder({
+          userId: user.id,
+          subtotalCents: quote.subtotalCents,
+          shippingCents: quote.shippingCents,
+          totalCents: quote.subtotalCents + quote.shippingCents,
+          shippingAddress: request.shippingAddress,
+          items,
+          reservations: [...gramsPerLot].map(([lotCode, grams]) => ({ lotId: byCode.get(lotCode)!.id, lotCode, grams })),
+        });
+      } catch (error) {
+        if (error instanceof StockShortfall) throw shortOfStock(error.lotCode);
+        throw error;
+      }
+
+      try {
+        const { checkoutUrl } = await payments.createCheckoutForOrder(orderId);
+        return { orderId, checkoutUrl };
+      } catch (error) {
+        await repo.cancelUnpaidOrder(orderId, clock.now(), 'payment page could not be opened');
+        throw error;
+      }
+    },
+  };
+}
+
+export type CheckoutService = ReturnType<typeof createCheckoutService>;

@@ -1,0 +1,130 @@
+import { z } from 'zod';
+import { isIsoDate } from '../domain/shop-time';
+import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
+
+const isoDate = (what: string) => z.string().refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
+
+export const orderSorts = ['newest', 'oldest', 'total-high', 'total-low'] as const;
+export type OrderSort = (typeof orderSorts)[number];
+
+/**
+ * Query string of `GET /api/orders` and `GET /api/orders.csv`. Customers always see only their
+ * own orders; staff see everyone's. `from`/`to` bound the day the order was placed (shop's dates,
+ * both inclusive); `roastDate` is the roast day of roasted orders.
+ */
+export const orderListQuerySchema = z
+  .object({
+    status: z.enum(orderStatuses).optional(),
+    kind: z.enum(orderKinds).optional(),
+    roastDate: isoDate('roast date').optional(),
+    from: isoDate('date').optional(),
+    to: isoDate('date').optional(),
+    sort: z.enum(orderSorts).default('newest'),
+    page: z.coerce.number().int().min(1).default(1),
+    pageSize: z.coerce.number().int().min(1).max(200).default(50),
+  })
+  .refine((query) => !query.from || !query.to || query.from <= query.to, {
+    message: 'The first day must not be after the last.',
+    path: ['to'],
+  });
+export type OrderListQuery = z.infer<typeof orderListQuerySchema>;
+
+export const orderCustomerSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  email: z.string(),
+});
+
+/** One row of an order list. `placedAt` is the UTC instant the order was created. */
+export const orderSummarySchema = z.object({
+  id: z.uuid(),
+  kind: z.enum(orderKinds),
+  status: z.enum(orderStatuses),
+  placedAt: z.iso.datetime({ offset: true }),
+  customer: orderCustomerSchema,
+  bagCount: z.number().int(),
+  totalCents: z.number().int(),
+  roastDate: z.string().nullable(),
+  shipDate: z.string().nullable(),
+});
+export type OrderSummary = z.infer<typeof orderSummarySchema>;
+
+export const orderListResponseSchema = z.object({
+  items: z.array(orderSummarySchema),
+  /** Orders matching the filters, across every page. */
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+});
+export type OrderListResponse = z.infer<typeof orderListResponseSchema>;
+
+export const orderItemSchema = z.object({
+  id: z.uuid(),
+  /** Null for a Roaster's Rotation line until its lot is picked. */
+  lotCode: z.string().nullable(),
+  lotName: z.string().nullable(),
+  size: z.enum(bagSizes),
+  quantity: z.number().int(),
+  fillGrams: z.number().int(),
+  roastLevel: z.enum(roastLevels).nullable(),
+  grind: z.enum(grinds).nullable(),
+  brewMethod: z.enum(brewMethods).nullable(),
+  unitPriceCents: z.number().int(),
+  lineTotalCents: z.number().int(),
+});
+export type OrderItem = z.infer<typeof orderItemSchema>;
+
+export const orderAddressSchema = z.object({
+  name: z.string(),
+  line1: z.string(),
+  line2: z.string().nullable(),
+  city: z.string(),
+  region: z.string(),
+  postalCode: z.string(),
+  country: z.string(),
+});
+
+/** `GET /api/orders/:id` (the customer's own, or any for staff). */
+export const orderDetailSchema = z.object({
+  id: z.uuid(),
+  kind: z.enum(orderKinds),
+  status: z.enum(orderStatuses),
+  placedAt: z.iso.datetime({ offset: true }),
+  customer: orderCustomerSchema,
+  items: z.array(orderItemSchema),
+  subtotalCents: z.number().int(),
+  shippingCents: z.number().int(),
+  totalCents: z.number().int(),
+  refundedCents: z.number().int(),
+  currency: z.string(),
+  shippingAddress: orderAddressSchema,
+  roastDate: z.string().nullable(),
+  shipDate: z.string().nullable(),
+  readyFrom: z.string().nullable(),
+  bestBefore: z.string().nullable(),
+  carrier: z.string().nullable(),
+  trackingNumber: z.string().nullable(),
+  paidAt: z.iso.datetime({ offset: true }).nullable(),
+  shippedAt: z.iso.datetime({ offset: true }).nullable(),
+  cancelledAt: z.iso.datetime({ offset: true }).nullable(),
+});
+export type OrderDetail = z.infer<typeof orderDetailSchema>;
+
+/** Columns of `GET /api/orders.csv`, in order. */
+export const orderCsvColumns = [
+  'order_id',
+  'placed_at',
+  'kind',
+  'status',
+  'customer_name',
+  'customer_email',
+  'bags',
+  'subtotal_cents',
+  'shipping_cents',
+  'total_cents',
+  'refunded_cents',
+  'roast_date',
+  'ship_date',
+  'carrier',
+  'tracking_number',
+] as const;

@@ -1,0 +1,163 @@
+import { count, eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { greenCheckoutResponseSchema } from '@shared/schemas/checkout';
+import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
+import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
+import { apiErrorSchema } from '@shared/schemas/errors';
+import { orderItems, orders } from '../../server/db/schema/index';
+import { createTestApp } from '../setup/test-app';
+import { getTestDb } from '../setup/test-db';
+import { createTestUser, signedInAgent } from '../setup/test-users';
+import { createLotForSale, movementsOf, shipTo, stockOf } from './checkout-support';
+import { waitFor } from './outbox-support';
+import { orderRow, startPaymentsServer, testStripe, type PaymentsServer } from './payments-support';
+
+const app = createTestApp();
+const stripe = testStripe();
+
+async function ordersOf(userId: string) {
+  const [row] = await getTestDb().select({ n: count() }).from(orders).where(eq(orders.userId, userId));
+  return row!.n;
+}
+
+describe('POST /api/checkout/green', () => {
+  it('prices the cart with the trade engine, reserves the stock and answers 201 {orderId, checkoutUrl} on the payment fake', async () => {
+    const lot = await createLotForSale(10_000);
+    const customer = await createTestUser('customer');
+    const agent = await signedInAgent(app, customer);
+    const response = await agent.post('/api/checkout/green').send({
+      items: [
+        { lotCode: lot.code, size: '1lb', quantity: 2 },
+        { lotCode: lot.code, size: '8oz', quantity: 1 },
+      ],
+      shippingAddress: shipTo,
+    });
+    expect(response.status).toBe(201);
+    const { orderId, checkoutUrl } = greenCheckoutResponseSchema.parse(response.body);
+    expect(checkoutUrl.startsWith(`${inject('stripeFakeUrl')}/test-payment/`)).toBe(true);
+
+    // $40.00/kg on the declared weight: 1 lb = 453.59237 g → $18.14, 8 oz → $9.07 (pricing.ts rounds once).
+    // 2 × (454 + 20 g bag) + (227 + 20) + 180 g box = 1,375 g → the ≤ 2 kg band, $11.95 (Restday default bands).
+    const row = await orderRow(orderId);
+    expect(row).toMatchObject({ userId: customer.id, kind: 'green', status: 'pending_payment', subtotalCents: 4535, shippingCents: 1195, totalCents: 5730 });
+    expect(row.shippingAddress).toMatchObject({ ...shipTo, country: 'US' });
+    const lines = await getTestDb().select().from(orderItems).where(eq(orderItems.orderId, orderId));
+    expect(lines.map((line) => [line.size, line.quantity, line.fillGrams, line.unitPriceCents]).sort()).toEqual([
+      ['1lb', 2, 454, 1814],
+      ['8oz', 1, 227, 907],
+    ]);
+
+    // 2 × 454 g + 227 g of fill leave the lot at once, recorded as one 'sale' movement.
+    expect(await stockOf(lot.id)).toBe(10_000 - 1135);
+    expect(await movementsOf(lot.id, orderId)).toEqual({ sum: -1135, count: 1 });
+    const session = await stripe.checkout.sessions.retrieve(row.stripeCheckoutSessionId!);
+    expect(session.amount_total).toBe(5730);
+  });
+
+  it('answers 409 insufficient_stock when a lot cannot cover the cart, and changes nothing', async () => {
+    const plenty = await createLotForSale(50_000);
+    const scarce = await createLotForSale(900);
+    const customer = await createTestUser('customer');
+    const agent = await signedInAgent(app, customer);
+    const response = await agent.post('/api/checkout/green').send({
+      items: [
+        { lotCode: plenty.code, size: '5lb', quantity: 1 },
+        { lotCode: scarce.code, size: '1lb', quantity: 2 },
+      ],
+      shippingAddress: shipTo,
+    });
+    expect(response.status).toBe(409);
+    const { error } = apiErrorSchema.parse(response.body);
+    expect(error.code).toBe('insufficient_stock');
+    expect(error.message).toContain(scarce.code);
+    expect(error.message).toContain('Nothing was reserved or charged');
+
+    expect(await stockOf(plenty.id)).toBe(50_000);
+    expect(await stockOf(scarce.id)).toBe(900);
+    expect(await movementsOf(plenty.id)).toEqual({ sum: 0, count: 0 });
+    expect(await movementsOf(scarce.id)).toEqual({ sum: 0, count: 0 });
+    expect(await ordersOf(customer.id)).toBe(0);
+  });
+
+  it('answers 400 naming each invalid field, and places nothing', async () => {
+    const customer = await createTestUser('customer');
+    const agent = await signedInAgent(app, customer);
+    const response = await agent.post('/api/checkout/green').send({
+      items: [{ lotCode: '', size: '12oz', quantity: 0 }],
+      shippingAddress: { ...shipTo, postalCode: '  ', country: 'United States' },
+    });
+    expect(response.status).toBe(400);
+    const { fields } = apiErrorSchema.parse(response.body).error;
+    expect(Object.keys(fields ?? {}).sort()).toEqual(
+      ['items.0.lotCode', 'items.0.quantity', 'items.0.size', 'shippingAddress.country', 'shippingAddress.postalCode'].sort(),
+    );
+
+    const empty = await agent.post('/api/checkout/green').send({ items: [], shippingAddress: shipTo });
+    expect(empty.status).toBe(400);
+    expect(apiErrorSchema.parse(empty.body).error.fields).toHaveProperty('items');
+    expect(await ordersOf(customer.id)).toBe(0);
+  });
+
+  it('answers 400 naming the line whose lot is not for sale, and 400 for the same lot and size twice', async () => {
+    const lot = await createLotForSale(10_000);
+    const agent = await signedInAgent(app, await createTestUser('customer'));
+    const unknown = await agent.post('/api/checkout/green').send({
+      items: [
+        { lotCode: lot.code, size: '1lb', quantity: 1 },
+        { lotCode: 'NO-SUCH-LOT', size: '1lb', quantity: 1 },
+      ],
+      shippingAddress: shipTo,
+    });
+    expect(unknown.status).toBe(400);
+    expect(apiErrorSchema.parse(unknown.body).error.fields).toEqual({ 'items.1.lotCode': 'There is no lot NO-SUCH-LOT for sale.' });
+
+    const twice = await agent.post('/api/checkout/green').send({
+      items: [
+        { lotCode: lot.code, size: '1lb', quantity: 1 },
+        { lotCode: lot.code, size: '1lb', quantity: 2 },
+      ],
+      shippingAddress: shipTo,
+    });
+    expect(twice.status).toBe(400);
+    expect(apiErrorSchema.parse(twice.body).error.fields).toHaveProperty('items');
+    expect(await stockOf(lot.id)).toBe(10_000);
+  });
+});
+
+describe('after checkout, on the payment fake', () => {
+  let running: PaymentsServer;
+  beforeAll(async () => {
+    running = await startPaymentsServer();
+  });
+  afterAll(async () => {
+    await running.stop();
+  });
+
+  it('the expiry webhook cancels the unpaid order and puts its stock back with a movement', async () => {
+    const lot = await createLotForSale(5_000);
+    const agent = await signedInAgent(app, await createTestUser('customer'));
+    const response = await agent.post('/api/checkout/green').send({ items: [{ lotCode: lot.code, size: '2lb', quantity: 2 }], shippingAddress: shipTo });
+    expect(response.status).toBe(201);
+    const { orderId } = greenCheckoutResponseSchema.parse(response.body);
+    expect(await stockOf(lot.id)).toBe(5_000 - 1816);
+
+    await stripe.checkout.sessions.expire((await orderRow(orderId)).stripeCheckoutSessionId!);
+    const cancelled = await waitFor(() => orderRow(orderId), (row) => row.status === 'cancelled', 10_000, 'the order to be cancelled');
+    expect(cancelled.cancelledAt).toBeInstanceOf(Date);
+    expect(await stockOf(lot.id)).toBe(5_000);
+    expect(await movementsOf(lot.id, orderId)).toEqual({ sum: 0, count: 2 });
+  });
+
+  it('paying keeps the stock taken: the webhook marks the order paid and no movement is added', async () => {
+    const lot = await createLotForSale(5_000);
+    const agent = await signedInAgent(app, await createTestUser('customer'));
+    const response = await agent.post('/api/checkout/green').send({ items: [{ lotCode: lot.code, size: '5lb', quantity: 1 }], shippingAddress: shipTo });
+    expect(response.status).toBe(201);
+    const { orderId, checkoutUrl } = greenCheckoutResponseSchema.parse(response.body);
+
+    expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
+    await waitFor(() => orderRow(orderId), (row) => row.status === 'paid', 10_000, 'the order to be paid');
+    expect(await stockOf(lot.id)).toBe(5_000 - 2268);
+    expect(await movementsOf(lot.id, orderId)).toEqual({ sum: -2268, count: 1 });
+  });
+});
