@@ -11,6 +11,14 @@ export const paths = {
   lot: { path: '/lots/:code', getHref: (code: string) => `/lots/${encodeURIComponent(code)}` },
   roastingBasics: { path: '/roasting-basics', getHref: () => '/roasting-basics' },
   subscribe: { path: '/subscribe', getHref: () => '/subscribe' },
+  cart: { path: '/cart', getHref: () => '/cart' },
+  checkout: { path: '/checkout', getHref: () => '/checkout' },
+  order: {
+    path: '/orders/:id',
+    /** `checkoutComplete`: the page the payment page returns to, which waits for the payment to be confirmed. */
+    getHref: (id: string, { checkoutComplete = false }: { checkoutComplete?: boolean } = {}) =>
+      withSearch(`/orders/${encodeURIComponent(id)}`, checkoutComplete ? new URLSearchParams({ checkout: 'complete' }) : undefined),
+  },
   signIn: {
     path: '/sign-in',
     /** `redirectTo`: the page to return to once signed in. */
@@ -29,6 +37,7 @@ export const paths = {
     overview: { path: '/account', getHref: () => '/account' },
     profile: { path: '/account/profile', getHref: () => '/account/profile' },
     addresses: { path: '/account/addresses', getHref: () => '/account/addresses' },
+    orders: { path: '/account/orders', getHref: () => '/account/orders' },
   },
   roastery: {
     overview: { path: '/roastery', getHref: () => '/roastery' },

@@ -18,6 +18,7 @@ export const clientLoader =
 const accountNav = [
   { to: paths.account.overview.getHref(), label: 'Overview', end: true },
   { to: paths.account.profile.getHref(), label: 'Profile', end: false },
+  { to: paths.account.orders.getHref(), label: 'Orders', end: false },
   { to: paths.account.addresses.getHref(), label: 'Addresses', end: false },
 ];
 

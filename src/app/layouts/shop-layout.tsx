@@ -5,6 +5,7 @@ import { RestdayMark } from '@/components/brand/restday-mark';
 import { paths } from '@/config/paths';
 import { getCurrentUserQueryOptions } from '@/features/auth/api/get-current-user';
 import { AccountMenu } from '@/features/auth/components/account-menu';
+import { CartLink } from '@/features/cart/components/cart-link';
 import { RoasteryLink } from '@/features/auth/components/roastery-link';
 import { NavigationProgress } from './navigation-progress';
 import { SkipLink } from './skip-link';
@@ -53,6 +54,7 @@ export default function ShopLayout() {
           </nav>
           <div className="ml-auto flex items-center gap-1">
             <RoasteryLink />
+            <CartLink />
             <AccountMenu />
           </div>
         </div>

@@ -14,13 +14,13 @@ describe('account area', () => {
     expect(router.state.location.search).toBe('?redirectTo=%2Faccount%2Fprofile%3Ffrom%3Dmenu');
   });
 
-  it('greets the signed-in customer and leads to their profile and addresses', async () => {
+  it('greets the signed-in customer and leads to their profile, orders and addresses', async () => {
     renderApp('/account', { session: makeUser() });
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Hello, Ines Marlow' })).toBeTruthy();
     expect(within(screen.getByRole('main')).getByText('ines.marlow@example.test')).toBeTruthy();
     const nav = screen.getByRole('navigation', { name: 'Account' });
-    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Profile', 'Addresses']);
+    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Profile', 'Orders', 'Addresses']);
     expect(within(nav).getByRole('link', { name: 'Overview' }).getAttribute('aria-current')).toBe('page');
     await waitFor(() => expect(document.title).toBe('Your account · Restday'));
   });

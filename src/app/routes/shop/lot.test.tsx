@@ -1,20 +1,46 @@
 // @vitest-environment happy-dom
-import { cleanup, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { homeRoastGuide } from '@shared/domain/home-roast-guide';
+import { defaultLossModel } from '@shared/domain/roast-loss';
+import { roastLevels } from '@shared/domain/vocabulary';
 import { apiErrorResponse, jsonResponse, makeLotDetail, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
+  window.localStorage.clear();
 });
+
+/** Answers like the server: the lot, and its roast guide computed by the trade engine. */
+function lotServer(lot = makeLotDetail()) {
+  return stubFetch((url) => {
+    if (url.pathname.endsWith('/roast-guide')) {
+      const level = url.searchParams.get('level');
+      return jsonResponse(
+        homeRoastGuide(
+          {
+            device: 'popper',
+            greenGrams: Number(url.searchParams.get('greenGrams')),
+            level: roastLevels.find((each) => each === level) ?? lot.suggestedLevel,
+            suggestedLevel: lot.suggestedLevel,
+          },
+          defaultLossModel,
+        ),
+      );
+    }
+    return jsonResponse(lot);
+  });
+}
 
 describe('lot page', () => {
   it('reads /api/lots/:code and shows the green coffee descriptors', async () => {
-    const fetchMock = stubFetch(() => jsonResponse(makeLotDetail()));
+    const fetchMock = lotServer();
     renderApp('/lots/RD-T01');
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Test Ridge Washed' })).toBeTruthy();
-    expect(requestedUrls(fetchMock)).toEqual(['/api/lots/RD-T01']);
+    await screen.findByRole('table', { name: 'Time after first crack' });
+    expect(requestedUrls(fetchMock)).toEqual(['/api/lots/RD-T01', '/api/lots/RD-T01/roast-guide?device=popper&greenGrams=454&level=light']);
 
     const descriptors = screen.getByRole('region', { name: 'Green coffee descriptors' });
     const value = (term: string) => within(descriptors).getByText(term).nextElementSibling?.textContent;
@@ -39,5 +65,75 @@ describe('lot page', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Lot not found' })).toBeTruthy();
     expect(screen.getByText(/No green lot has the code RD-GONE/)).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Go to the home page' }).getAttribute('href')).toBe('/');
+  });
+
+  it('prices each bag size on its declared weight, with the quantity break, and switches weights to ounces', async () => {
+    lotServer();
+    renderApp('/lots/RD-T01');
+
+    const sizes = await screen.findByRole('group', { name: 'Bag size' });
+    const option = (label: string) => within(sizes).getByLabelText(new RegExp(`^${label}`)).closest('label')?.textContent;
+    // $24.50/kg × exact declared weight (1 lb = 453.59237 g, NIST SP 811), rounded once; 5 lb fills
+    // 2,268 g, which reaches the 2,268 g break at $22.00/kg.
+    expect(option('8 oz')).toBe('8 ozfills 227 g$5.56');
+    expect(option('1 lb')).toBe('1 lbfills 454 g$11.11');
+    expect(option('2 lb')).toBe('2 lbfills 908 g$22.23');
+    expect(option('5 lb')).toBe('5 lbfills 2.3 kg$49.90');
+
+    fireEvent.click(screen.getByRole('button', { name: 'Ounces' }));
+    expect(screen.getByRole('button', { name: 'Ounces' }).getAttribute('aria-pressed')).toBe('true');
+    expect(option('1 lb')).toBe('1 lbfills 16 oz$11.11');
+    expect(option('5 lb')).toBe('5 lbfills 80 oz$49.90');
+    // The guide follows: 454 g green at light (11–14 % loss, TRADE.md from memory) → 390–404 g.
+    expect(await screen.findByText('13.8 oz–14.3 oz')).toBeTruthy();
+
+    fireEvent.click(screen.getByRole('button', { name: 'Grams' }));
+    expect(await screen.findByText('390 g–404 g')).toBeTruthy();
+  });
+
+  it('shows the Home Roast Guide for the chosen size and level, the lot’s suggestion marked', async () => {
+    const fetchMock = lotServer();
+    renderApp('/lots/RD-T01');
+
+    const levels = await screen.findByRole('table', { name: 'Time after first crack' });
+    const lightRow = within(levels).getByRole('rowheader', { name: /Light/ });
+    expect(lightRow.textContent).toContain('Suggested for this lot');
+    // Popper times after first crack (TRADE.md, common practice).
+    expect(within(levels).getByRole('row', { name: /Medium-dark/ }).textContent).toContain('30–40 s');
+    expect(screen.getByText('Never leave the roaster unattended while it runs.')).toBeTruthy();
+    // 454 g at up to 80 g a batch (TRADE.md, common practice) → 6 batches.
+    expect(screen.getByText('Batches for a 1 lb bag').nextElementSibling?.textContent).toBe('6');
+
+    fireEvent.click(screen.getByLabelText(/^5 lb/));
+    fireEvent.change(screen.getByLabelText('Roast level'), { target: { value: 'medium' } });
+    await waitFor(() => expect(screen.getByText('Batches for a 5 lb bag').nextElementSibling?.textContent).toBe('29'));
+    expect(requestedUrls(fetchMock)).toContain('/api/lots/RD-T01/roast-guide?device=popper&greenGrams=2268&level=medium');
+    expect(screen.getAllByRole('listitem').some((item) => item.textContent?.includes('Development.'))).toBe(true);
+  });
+
+  it('adds the chosen size and quantity to the cart, kept in this browser and counted in the header', async () => {
+    lotServer();
+    renderApp('/lots/RD-T01');
+
+    fireEvent.click(await screen.findByLabelText(/^2 lb/));
+    fireEvent.change(screen.getByLabelText('Bags'), { target: { value: '2' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add to cart' }));
+
+    expect(await screen.findByText(/Added 2 × 2 lb to your cart/)).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Cart, 2 bags' })).toBeTruthy();
+    const stored = JSON.parse(window.localStorage.getItem('restday.cart') ?? '{}') as { lines: unknown[] };
+    expect(stored.lines).toEqual([
+      { lotCode: 'RD-T01', lotName: 'Test Ridge Washed', size: '2lb', quantity: 2, pricePerKgCents: 2450, priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2200 }] },
+    ]);
+  });
+
+  it('will not add more than the lot has in stock', async () => {
+    lotServer(makeLotDetail({ stockGrams: 1000 }));
+    renderApp('/lots/RD-T01');
+
+    fireEvent.click(await screen.findByLabelText(/^2 lb/));
+    fireEvent.change(screen.getByLabelText('Bags'), { target: { value: '2' } });
+    expect(screen.getByText(/Only 1 kg left: not enough for 2 × 2 lb/)).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Add to cart' }).hasAttribute('disabled')).toBe(true);
   });
 });

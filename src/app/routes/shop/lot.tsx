@@ -1,14 +1,22 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { ArrowLeft } from 'lucide-react';
+import { useState } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { GreenBagSize, HomeRoastDevice, RoastLevel } from '@shared/domain/vocabulary';
+import type { LotDetail } from '@shared/schemas/lots';
 import { NotFoundMessage } from '@/components/errors/not-found-message';
 import { HomeRoastingCautions } from '@/components/safety/home-roasting-cautions';
 import { PageTitle } from '@/components/seo/page-title';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
+import { useCart } from '@/features/cart/hooks/use-cart';
 import { useLot, getLotQueryOptions } from '@/features/lots/api/get-lot';
+import { HomeRoastGuide } from '@/features/lots/components/home-roast-guide';
 import { LotDetails } from '@/features/lots/components/lot-details';
+import { LotPurchasePanel } from '@/features/lots/components/lot-purchase-panel';
+import { WeightUnitToggle } from '@/features/lots/components/weight-unit-toggle';
+import type { WeightUnit } from '@/features/lots/utils/weight-unit';
 import { ApiError } from '@/lib/api-client';
 
 export const clientLoader =
@@ -35,6 +43,50 @@ function LotPageSkeleton() {
   );
 }
 
+/** The lot, its size picker and its Home Roast Guide, which follow the same bag size and weight unit. */
+function LotPage({ lot }: { lot: LotDetail }) {
+  const cart = useCart();
+  const [size, setSize] = useState<GreenBagSize>('1lb');
+  const [unit, setUnit] = useState<WeightUnit>('g');
+  const [device, setDevice] = useState<HomeRoastDevice>('popper');
+  const [level, setLevel] = useState<RoastLevel>(lot.suggestedLevel);
+
+  const addToCart = (chosen: GreenBagSize, quantity: number) =>
+    cart.add({
+      lotCode: lot.code,
+      lotName: lot.name,
+      size: chosen,
+      quantity,
+      pricePerKgCents: lot.pricePerKgCents,
+      priceBreaks: lot.priceBreaks,
+    });
+
+  return (
+    <>
+      <LotDetails
+        lot={lot}
+        purchase={
+          <>
+            <div className="mb-3">
+              <WeightUnitToggle unit={unit} onChange={setUnit} />
+            </div>
+            <LotPurchasePanel lot={lot} size={size} onSizeChange={setSize} unit={unit} onAddToCart={addToCart} />
+          </>
+        }
+      />
+      <HomeRoastGuide
+        lotCode={lot.code}
+        size={size}
+        unit={unit}
+        device={device}
+        onDeviceChange={setDevice}
+        level={level}
+        onLevelChange={setLevel}
+      />
+    </>
+  );
+}
+
 export default function LotRoute() {
   const { code = '' } = useParams();
   const lotQuery = useLot(code);
@@ -51,7 +103,7 @@ export default function LotRoute() {
       <>
         <PageTitle title={`${lotQuery.data.name} · Green Lots`} />
         {backLink}
-        <LotDetails lot={lotQuery.data} />
+        <LotPage key={lotQuery.data.code} lot={lotQuery.data} />
         <div className="mt-10 max-w-prose">
           <HomeRoastingCautions />
           <p className="mt-3">

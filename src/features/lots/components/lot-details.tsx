@@ -15,8 +15,8 @@ function Descriptor({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
-/** Everything Restday knows about one green lot, as a home roaster reads it. */
-export function LotDetails({ lot }: { lot: LotDetail }) {
+/** Everything Restday knows about one green lot, as a home roaster reads it; `purchase` sits under the price. */
+export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: ReactNode }) {
   const outOfStock = lot.stockGrams <= 0;
   const [firstPhoto = null, ...morePhotos] = lot.photos;
 
@@ -58,6 +58,8 @@ export function LotDetails({ lot }: { lot: LotDetail }) {
               ))}
             </ul>
           ) : null}
+
+          {purchase ? <div className="mt-5">{purchase}</div> : null}
 
           {lot.tastingNotes.length > 0 ? (
             <ul aria-label="Tasting notes" className="mt-5 flex flex-wrap gap-2">

@@ -1,0 +1,163 @@
+import clsx from 'clsx';
+import { useId } from 'react';
+import { homeRoastProfiles, roastGuideDevices } from '@shared/domain/home-roast-guide';
+import { bagFillGrams } from '@shared/domain/units';
+import { roastLevelLabels, roastLevels, type GreenBagSize, type HomeRoastDevice, type RoastLevel } from '@shared/domain/vocabulary';
+import { Badge } from '@/components/ui/badge';
+import { CautionPanel } from '@/components/ui/caution-panel';
+import { ErrorState } from '@/components/ui/error-state';
+import { SelectField } from '@/components/ui/select-field';
+import { Skeleton } from '@/components/ui/skeleton';
+import { formatPercent } from '@/lib/format';
+import { useRoastGuide } from '../api/get-roast-guide';
+import { bagSizeLabel, formatWeight, type WeightUnit } from '../utils/weight-unit';
+
+function formatSeconds({ min, max }: { min: number; max: number }): string {
+  return min === max ? `about ${min} s` : `${min}–${max} s`;
+}
+
+/** [76, 76, 75] → "75–76 g" */
+function formatLoads(loads: number[], unit: WeightUnit): string {
+  const least = Math.min(...loads);
+  const most = Math.max(...loads);
+  return least === most ? formatWeight(least, unit) : `${formatWeight(least, unit)}–${formatWeight(most, unit)}`;
+}
+
+type HomeRoastGuideProps = {
+  lotCode: string;
+  size: GreenBagSize;
+  unit: WeightUnit;
+  device: HomeRoastDevice;
+  onDeviceChange: (device: HomeRoastDevice) => void;
+  level: RoastLevel;
+  onLevelChange: (level: RoastLevel) => void;
+};
+
+/** The Home Roast Guide for the chosen bag size, device and roast level, from the trade engine. */
+export function HomeRoastGuide({ lotCode, size, unit, device, onDeviceChange, level, onLevelChange }: HomeRoastGuideProps) {
+  const headingId = useId();
+  const guideQuery = useRoastGuide({ code: lotCode, device, greenGrams: bagFillGrams(size), level });
+  const guide = guideQuery.data;
+
+  return (
+    <section aria-labelledby={headingId} className="mt-10">
+      <h2 id={headingId} className="text-h2">
+        Home Roast Guide
+      </h2>
+      <div className="mt-3 grid max-w-xl gap-4 sm:grid-cols-2">
+        <SelectField label="Device" value={device} onChange={(event) => onDeviceChange(event.target.value as HomeRoastDevice)}>
+          {roastGuideDevices.map((each) => (
+            <option key={each} value={each}>
+              {homeRoastProfiles[each]?.name ?? each}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField label="Roast level" value={level} onChange={(event) => onLevelChange(event.target.value as RoastLevel)}>
+          {roastLevels.map((each) => (
+            <option key={each} value={each}>
+              {roastLevelLabels[each]}
+            </option>
+          ))}
+        </SelectField>
+      </div>
+
+      {guide ? (
+        <div className={clsx('mt-6 grid gap-8 lg:grid-cols-2', guideQuery.isPlaceholderData && 'opacity-60')} aria-busy={guideQuery.isPlaceholderData}>
+          <div>
+            <dl className="grid gap-3 sm:grid-cols-2">
+              <div className="rounded-card border border-rule bg-sheet p-4">
+                <dt className="text-small text-ink-muted">Batches for a {bagSizeLabel(size)} bag</dt>
+                <dd className="text-h3 font-heading font-semibold">{guide.batches}</dd>
+                <dd className="text-small">
+                  of {formatLoads(guide.batchLoads, unit)} each (a usual load is {formatWeight(guide.batchGrams.min, unit)}–
+                  {formatWeight(guide.batchGrams.max, unit)})
+                </dd>
+              </div>
+              <div className="rounded-card border border-rule bg-sheet p-4">
+                <dt className="text-small text-ink-muted">Expected roasted yield</dt>
+                <dd className="text-h3 font-heading font-semibold">
+                  {formatWeight(guide.expectedRoastedGrams.min, unit)}–{formatWeight(guide.expectedRoastedGrams.max, unit)}
+                </dd>
+                <dd className="text-small">
+                  from {formatWeight(guide.greenGrams, unit)} green, losing {formatPercent(guide.expectedLossPct.min)}–
+                  {formatPercent(guide.expectedLossPct.max)}
+                </dd>
+              </div>
+            </dl>
+            {guide.notes.length > 0 ? (
+              <ul className="mt-4 list-disc space-y-1 pl-5 text-small">
+                {guide.notes.map((note) => (
+                  <li key={note}>{note}</li>
+                ))}
+              </ul>
+            ) : null}
+
+            <h3 className="mt-6 text-h3">Phases and their cues</h3>
+            <ol className="mt-2 space-y-3">
+              {guide.phases.map((phase, index) => (
+                <li key={phase.name} className="flex gap-3">
+                  <span aria-hidden="true" className="flex size-7 shrink-0 items-center justify-center rounded-pill bg-ember-wash font-semibold text-ember">
+                    {index + 1}
+                  </span>
+                  <p>
+                    <strong>{phase.name}.</strong> {phase.cue}
+                  </p>
+                </li>
+              ))}
+            </ol>
+          </div>
+
+          <div>
+            <table className="w-full border-collapse text-left">
+              <caption className="text-left text-h3 font-heading font-semibold">Time after first crack</caption>
+              <thead>
+                <tr className="border-b border-rule-strong text-small text-ink-muted">
+                  <th scope="col" className="py-2 pr-3 font-semibold">
+                    Roast level
+                  </th>
+                  <th scope="col" className="py-2 font-semibold">
+                    Keep roasting
+                  </th>
+                </tr>
+              </thead>
+              <tbody>
+                {guide.levels.map((each) => (
+                  <tr key={each.level} className={clsx('border-b border-rule', each.level === guide.level && 'bg-leaf-wash')}>
+                    <th scope="row" className="py-2 pr-3 font-semibold">
+                      {roastLevelLabels[each.level]}{' '}
+                      {each.suggested ? <Badge tone="ok">Suggested for this lot</Badge> : null}
+                    </th>
+                    <td className="py-2">{formatSeconds(each.afterFirstCrackSeconds)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            <p className="mt-2 text-small text-ink-muted">Times are a starting point ({guide.source}); judge the colour by eye as well.</p>
+
+            <div className="mt-6">
+              <CautionPanel title="Before you roast">
+                <ul className="list-disc space-y-1 pl-5">
+                  {guide.cautions.map((caution) => (
+                    <li key={caution}>{caution}</li>
+                  ))}
+                </ul>
+              </CautionPanel>
+            </div>
+          </div>
+        </div>
+      ) : guideQuery.isError ? (
+        <div className="mt-6">
+          <ErrorState title="The roast guide could not load" error={guideQuery.error} onRetry={() => void guideQuery.refetch()} />
+        </div>
+      ) : (
+        <div className="mt-6 grid gap-3">
+          <p role="status" className="sr-only">
+            Loading the roast guide…
+          </p>
+          <Skeleton className="h-24" />
+          <Skeleton className="h-40" />
+        </div>
+      )}
+    </section>
+  );
+}
