@@ -1,13 +1,12 @@
 import type { Server } from 'node:http';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { createApp } from './app';
-import { ConfigError, loadConfig, type Config } from './config';
+import type { Config } from './config';
 import { createDatabase } from './db/client';
 import { startQueue } from './jobs/queue';
 import { startWorkers, type Workers } from './jobs/workers';
 import { createAdjustableClock, systemClock } from './lib/clock';
 import { createLogger, type Logger } from './lib/logger';
+import { isMainModule, runMain } from './lib/run-main';
 
 export interface RunningServer {
   url: string;
@@ -59,35 +58,4 @@ export async function startServer(config: Config, logger: Logger = createLogger(
   };
 }
 
-async function main() {
-  let config: Config;
-  try {
-    config = loadConfig();
-  } catch (error) {
-    if (error instanceof ConfigError) {
-      console.error(error.message);
-      process.exit(1);
-    }
-    throw error;
-  }
-  const logger = createLogger(config);
-  const running = await startServer(config, logger);
-  let stopping = false;
-  for (const signal of ['SIGINT', 'SIGTERM'] as const) {
-    process.once(signal, () => {
-      if (stopping) return;
-      stopping = true;
-      running.stop().then(
-        () => process.exit(0),
-        (error: unknown) => {
-          logger.error({ err: error }, 'shutdown failed');
-          process.exit(1);
-        },
-      );
-    });
-  }
-}
-
-if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
-  void main();
-}
+if (isMainModule(import.meta.url)) void runMain('Restday', startServer);
