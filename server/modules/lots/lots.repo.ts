@@ -1,4 +1,4 @@
-import { and, asc, eq, gte, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, gte, ilike, or, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lotPriceBreaks, lots, shopSettings, uploads } from '../../db/schema/index';
 import type { LotListQuery } from '@shared/schemas/lots';
@@ -33,9 +33,16 @@ export function createLotsRepo(db: Db) {
       if (filters.level) conditions.push(eq(lots.suggestedLevel, filters.level));
       if (filters.minStockGrams !== undefined) conditions.push(gte(lots.stockGrams, filters.minStockGrams));
 
-      const rows = await db
+      // Each card's first photo comes in the same query, so the list is one round trip.
+      // Written out in full: drizzle leaves columns unqualified in a one-table select, which would
+      // turn the correlation into uploads.lot_id = uploads.id.
+      const firstPhotoId = sql<string | null>`(
+        select u.id from uploads u
+        where u.lot_id = lots.id and u.kind = 'photo'
+        order by u.position, u.created_at
+        limit 1)`;
+      return db
         .select({
-          id: lots.id,
           code: lots.code,
           name: lots.name,
           origin: lots.origin,
@@ -49,23 +56,11 @@ export function createLotsRepo(db: Db) {
           cuppingScore: lots.cuppingScore,
           stockGrams: lots.stockGrams,
           pricePerKgCents: lots.pricePerKgCents,
+          firstPhotoId,
         })
         .from(lots)
         .where(and(...conditions))
         .orderBy(asc(lots.origin), asc(lots.name));
-
-      const firstPhotos = await this.firstPhotoIds(rows.map((row) => row.id));
-      return rows.map(({ id, ...row }) => ({ ...row, firstPhotoId: firstPhotos.get(id) ?? null }));
-    },
-
-    async firstPhotoIds(lotIds: string[]): Promise<Map<string, string>> {
-      if (lotIds.length === 0) return new Map();
-      const photos = await db
-        .selectDistinctOn([uploads.lotId], { lotId: uploads.lotId, id: uploads.id })
-        .from(uploads)
-        .where(and(inArray(uploads.lotId, lotIds), eq(uploads.kind, 'photo')))
-        .orderBy(uploads.lotId, asc(uploads.position), asc(uploads.createdAt));
-      return new Map(photos.flatMap((photo) => (photo.lotId ? [[photo.lotId, photo.id] as const] : [])));
     },
 
     async findListedByCode(code: string) {

@@ -1,19 +1,13 @@
-import type { QueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { UserRound } from 'lucide-react';
-import { NavLink, Outlet, type LoaderFunctionArgs } from 'react-router-dom';
+import { NavLink, Outlet } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { RequireRole } from '@/features/auth/components/require-role';
-import { requireUser } from '@/features/auth/utils/require-user';
+import { signedInLoader } from '@/features/auth/utils/require-user';
 import { everyRole } from '@/features/auth/utils/roles';
 
 /** A visitor is sent to sign in first, and brought back here afterwards. */
-export const clientLoader =
-  (queryClient: QueryClient) =>
-  async ({ request }: LoaderFunctionArgs) => {
-    await requireUser(queryClient, request);
-    return null;
-  };
+export const clientLoader = signedInLoader;
 
 const accountNav = [
   { to: paths.account.overview.getHref(), label: 'Overview', end: true },

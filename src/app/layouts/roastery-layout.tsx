@@ -1,24 +1,18 @@
-import type { QueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { ArrowLeft } from 'lucide-react';
-import { Link, NavLink, Outlet, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, NavLink, Outlet } from 'react-router-dom';
 import { RestdayMark } from '@/components/brand/restday-mark';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/features/auth/api/get-current-user';
 import { AccountMenu } from '@/features/auth/components/account-menu';
 import { RequireRole } from '@/features/auth/components/require-role';
-import { requireUser } from '@/features/auth/utils/require-user';
+import { signedInLoader } from '@/features/auth/utils/require-user';
 import { ownerRoles, roasteryRoles } from '@/features/auth/utils/roles';
 import { NavigationProgress } from './navigation-progress';
 import { SkipLink } from './skip-link';
 
 /** A visitor is sent to sign in first; the page then shows a customer why it is closed to them. */
-export const clientLoader =
-  (queryClient: QueryClient) =>
-  async ({ request }: LoaderFunctionArgs) => {
-    await requireUser(queryClient, request);
-    return null;
-  };
+export const clientLoader = signedInLoader;
 
 /** Pages only the owner may open; the rest of the nav is for all staff. */
 const ownerNav = [{ to: paths.roastery.team.getHref(), label: 'Team', end: false }];

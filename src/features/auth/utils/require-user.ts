@@ -20,3 +20,11 @@ export async function redirectIfSignedIn(queryClient: QueryClient, request: Requ
   if (user) throw redirect(safeRedirectTo(new URL(request.url).searchParams));
   return null;
 }
+
+/** A layout's loader that only guards: a visitor goes to sign in and comes back afterwards. */
+export const signedInLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: { request: Request }): Promise<null> => {
+    await requireUser(queryClient, request);
+    return null;
+  };
