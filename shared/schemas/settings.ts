@@ -9,7 +9,7 @@ import { roastedBagSizes, roastLevels, weekdays } from '../domain/vocabulary';
 /**
  * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET (API.md).
  * Fields beyond API.md's sketch (currency, restAdjustDays, dayCapacityGrams, lossModelMinBatches,
- * roastedBagPriceCents, subscriptionDiscountPct, shipping) default when left out.
+ * roastedBagPriceCents, subscriptionDiscountPct, renewalReminderDays, shipping) default when left out.
  */
 
 const percent = (max: number) =>
@@ -89,6 +89,7 @@ const defaultShipping = {
 };
 const DEFAULT_DAY_CAPACITY_GRAMS = 60_000;
 const DEFAULT_SUBSCRIPTION_DISCOUNT_PCT = 10;
+const DEFAULT_RENEWAL_REMINDER_DAYS = 3;
 
 export const shopSettingsSchema = z
   .object({
@@ -126,6 +127,8 @@ export const shopSettingsSchema = z
       )
       .default(() => ({ ...defaultRoastedBagPriceCents })),
     subscriptionDiscountPct: percent(50).default(DEFAULT_SUBSCRIPTION_DISCOUNT_PCT),
+    /** Days before a subscription's charge that the renewal reminder goes out; 0 sends none. */
+    renewalReminderDays: wholeDays(14).default(DEFAULT_RENEWAL_REMINDER_DAYS),
     shipping: shippingSchema.default(() => ({ ...defaultShipping, bands: defaultShipping.bands.map((band) => ({ ...band })) })),
   })
   .refine((settings) => settings.bestBeforeDays > Math.max(settings.restDays.filter, settings.restDays.espresso), {
@@ -160,5 +163,6 @@ export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
   lossModelMinBatches: DEFAULT_LOSS_MIN_BATCHES,
   roastedBagPriceCents: defaultRoastedBagPriceCents,
   subscriptionDiscountPct: DEFAULT_SUBSCRIPTION_DISCOUNT_PCT,
+  renewalReminderDays: DEFAULT_RENEWAL_REMINDER_DAYS,
   shipping: defaultShipping,
 } satisfies ShopSettingsInput);

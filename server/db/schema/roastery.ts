@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, date, index, integer, jsonb, numeric, pgTable, text, uuid } from 'drizzle-orm/pg-core';
 import { defaultLossModel, type LossModel } from '../../../shared/domain/roast-loss';
+import { defaultShopSettings, type ShopSettings } from '../../../shared/schemas/settings';
 import { users } from './accounts';
 import { lots } from './catalog';
 import { instant, timestamps } from './common';
@@ -38,6 +39,19 @@ export const shopSettings = pgTable(
     /** Green grams the roastery can roast on an open roast day unless roast_days overrides it. */
     dailyCapacityGrams: integer('daily_capacity_grams').notNull().default(48000),
     lossModel: jsonb('loss_model').$type<LossModel>().notNull().default(defaultLossModel),
+    lossModelMinBatches: integer('loss_model_min_batches').notNull().default(defaultShopSettings.lossModelMinBatches),
+    currency: text('currency').notNull().default(defaultShopSettings.currency),
+    /** Days added to the brew method's rest per roast level. */
+    restAdjustDays: jsonb('rest_adjust_days').$type<ShopSettings['restAdjustDays']>().notNull().default(defaultShopSettings.restAdjustDays),
+    roastedBagPriceCents: jsonb('roasted_bag_price_cents')
+      .$type<ShopSettings['roastedBagPriceCents']>()
+      .notNull()
+      .default(defaultShopSettings.roastedBagPriceCents),
+    subscriptionDiscountPct: numeric('subscription_discount_pct', { precision: 5, scale: 2, mode: 'number' })
+      .notNull()
+      .default(defaultShopSettings.subscriptionDiscountPct),
+    renewalReminderDays: integer('renewal_reminder_days').notNull().default(defaultShopSettings.renewalReminderDays),
+    shipping: jsonb('shipping').$type<ShopSettings['shipping']>().notNull().default(defaultShopSettings.shipping),
     updatedAt: instant('updated_at')
       .notNull()
       .defaultNow()
@@ -57,6 +71,10 @@ export const shopSettings = pgTable(
     check('shop_settings_roaster_capacity_positive', sql`${t.roasterCapacityGrams} > 0`),
     check('shop_settings_load_pct_range', sql`${t.minLoadPct} > 0 and ${t.minLoadPct} <= ${t.maxLoadPct} and ${t.maxLoadPct} <= 100`),
     check('shop_settings_daily_capacity_non_negative', sql`${t.dailyCapacityGrams} >= 0`),
+    check('shop_settings_loss_model_min_batches_range', sql`${t.lossModelMinBatches} between 1 and 100`),
+    check('shop_settings_currency_code', sql`${t.currency} ~ '^[a-z]{3}$'`),
+    check('shop_settings_subscription_discount_range', sql`${t.subscriptionDiscountPct} >= 0 and ${t.subscriptionDiscountPct} <= 50`),
+    check('shop_settings_renewal_reminder_days_range', sql`${t.renewalReminderDays} between 0 and 14`),
   ],
 );
 
