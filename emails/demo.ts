@@ -76,6 +76,14 @@ export const demoEmailPayloads: { [T in EmailTemplateName]: EmailPayloads[T] } =
     amountCents: 1950,
     currency: 'usd',
   },
+  'subscription-changed': {
+    name: 'Robin Alder',
+    subscriptionId,
+    coffee: "Roaster's Rotation",
+    change: 'changed',
+    summary: ['Roast level: Medium-dark', 'Grind: Whole bean', 'Delivery: every 3 weeks'],
+    nextDelivery: { roastDate: '2026-12-16', shipDate: '2026-12-17', readyFrom: '2026-12-18' },
+  },
   'payment-failed': {
     name: 'Robin Alder',
     amountCents: 1950,

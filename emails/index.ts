@@ -8,6 +8,7 @@ export {
   emailTemplateNames,
   isEmailTemplateName,
   parseEmailPayload,
+  subscriptionChangeKinds,
   type EmailPayloads,
   type EmailTemplateName,
   type ParsedEmailPayloads,

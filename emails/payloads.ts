@@ -14,6 +14,9 @@ import { z } from 'zod';
 import { isCurrencyCode, type CurrencyCode } from '../shared/domain/money';
 import { bagSizes, brewMethods, grinds, orderKinds, roastLevels, roastedBagSizes } from '../shared/domain/vocabulary';
 
+/** What a subscriber did to their subscription (the `subscription-changed` e-mail). */
+export const subscriptionChangeKinds = ['changed', 'skipped', 'paused', 'resumed', 'cancelled'] as const;
+
 const text = (max = 300) => z.string().trim().max(max);
 /** The recipient's name as the greeting uses it; empty greets them without a name. */
 const name = text(200);
@@ -118,6 +121,20 @@ export const emailPayloadSchemas = {
     renewsOn: isoDate,
     amountCents: minor,
     currency,
+  }),
+  'subscription-changed': z.object({
+    name,
+    subscriptionId: id,
+    /** Lot name, or "Roaster's Rotation". */
+    coffee: text(),
+    change: z.enum(subscriptionChangeKinds),
+    /** What changed, one line each ("Roast level: Dark"). */
+    summary: z.array(text()).max(20).default([]),
+    /** The next delivery that will roast, after the change. */
+    nextDelivery: z.object({ roastDate: isoDate, shipDate: isoDate, readyFrom: isoDate }).optional(),
+    pausedUntil: isoDate.optional(),
+    /** Cancelled at the period's end: the last day the subscription runs. */
+    endsOn: isoDate.optional(),
   }),
   'payment-failed': z.object({
     name,

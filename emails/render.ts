@@ -9,6 +9,7 @@ import { restDay } from './templates/rest-day';
 import { roasted } from './templates/roasted';
 import { shipped } from './templates/shipped';
 import { staffInvitation } from './templates/staff-invitation';
+import { subscriptionChanged } from './templates/subscription-changed';
 import { subscriptionStarted } from './templates/subscription-started';
 
 export type { EmailContext, RenderedEmail } from './parts/layout';
@@ -20,6 +21,7 @@ const templates: { [T in EmailTemplateName]: EmailTemplate<T> } = {
   shipped,
   'rest-day': restDay,
   'renewal-reminder': renewalReminder,
+  'subscription-changed': subscriptionChanged,
   'payment-failed': paymentFailed,
   'password-reset': passwordReset,
   'staff-invitation': staffInvitation,
