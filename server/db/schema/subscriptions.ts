@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
-import { check, date, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, check, date, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { users } from './accounts';
 import { lots } from './catalog';
 import type { AddressSnapshot } from './common';
@@ -36,6 +36,13 @@ export const subscriptions = pgTable(
     currency: text('currency').notNull().default('usd'),
     currentPeriodEnd: instant('current_period_end'),
     cancelledAt: instant('cancelled_at'),
+    /** Nominal roast date of the first delivery; later ones sit every cadence on from it (re-anchored when the cadence changes). */
+    anchorDate: date('anchor_date', { mode: 'string' }),
+    /** The subscriber cancelled: it ends when the paid period does (Stripe's cancel_at_period_end). */
+    cancelAtPeriodEnd: boolean('cancel_at_period_end').notNull().default(false),
+    /** Bumped by every self-service change; Stripe holds the state of `stripeSyncedVersion`. */
+    changeVersion: integer('change_version').notNull().default(0),
+    stripeSyncedVersion: integer('stripe_synced_version').notNull().default(0),
     ...timestamps(),
   },
   (t) => [
@@ -71,10 +78,21 @@ export const deliveries = pgTable(
     readyFrom: date('ready_from', { mode: 'string' }).notNull(),
     bestBefore: date('best_before', { mode: 'string' }).notNull(),
     status: deliveryStatusEnum('status').notNull().default('scheduled'),
+    /** Its place on the subscription's grid (anchor + n × cadence); the roast date may be later (a closure, a late payment). */
+    nominalDate: date('nominal_date', { mode: 'string' }),
+    // What this delivery brings, frozen once its cutoff passes or it is paid; null = the subscription's current choice.
+    roastLevel: roastLevelEnum('roast_level'),
+    bagSize: bagSizeEnum('bag_size'),
+    bagsPerDelivery: integer('bags_per_delivery'),
+    grind: grindEnum('grind'),
+    brewMethod: brewMethodEnum('brew_method'),
+    /** A skipped delivery whose charge Stripe has already moved one cadence on. */
+    chargeDeferred: boolean('charge_deferred').notNull().default(false),
     ...timestamps(),
   },
   (t) => [
     uniqueIndex('deliveries_subscription_id_sequence_key').on(t.subscriptionId, t.sequence),
+    uniqueIndex('deliveries_subscription_id_nominal_date_key').on(t.subscriptionId, t.nominalDate),
     index('deliveries_roast_date_idx').on(t.roastDate),
     uniqueIndex('deliveries_order_id_key').on(t.orderId),
     check('deliveries_sequence_positive', sql`${t.sequence} > 0`),
