@@ -41,6 +41,9 @@ import { createCheckoutService } from './modules/checkout/checkout.service';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
 import { createOrdersService } from './modules/orders/orders.service';
+import { createSubscriptionPreviewRepo } from './modules/subscription-preview/subscription-preview.repo';
+import { subscriptionPreviewRoutes } from './modules/subscription-preview/subscription-preview.routes';
+import { createSubscriptionPreviewService } from './modules/subscription-preview/subscription-preview.service';
 
 export interface AppDeps {
   config: Config;
@@ -127,6 +130,8 @@ export function createApp(deps: AppDeps): Express {
   const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
   api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
   api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));
+  // Before the subscriptions router, so /subscriptions/preview is never read as a subscription id.
+  api.use('/subscriptions', subscriptionPreviewRoutes(createSubscriptionPreviewService({ repo: createSubscriptionPreviewRepo(database.db), clock: deps.clock })));
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
     api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));

@@ -103,4 +103,6 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
   { method: 'GET', path: '/api/orders.csv', access: 'staff' },
   { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
+
+  { method: 'GET', path: '/api/subscriptions/preview', access: 'public' },
 ];
