@@ -43,6 +43,9 @@ import { ordersRoutes } from './modules/orders/orders.routes';
 import { createOrdersService } from './modules/orders/orders.service';
 import { createSubscriptionPreviewRepo } from './modules/subscription-preview/subscription-preview.repo';
 import { subscriptionPreviewRoutes } from './modules/subscription-preview/subscription-preview.routes';
+import { createSubscribersRepo } from './modules/subscribers/subscribers.repo';
+import { subscribersRoutes } from './modules/subscribers/subscribers.routes';
+import { createSubscribersService } from './modules/subscribers/subscribers.service';
 import { createSubscriptionPreviewService } from './modules/subscription-preview/subscription-preview.service';
 
 export interface AppDeps {
@@ -127,6 +130,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/roastery/green-stock', greenStockRoutes(lotsAdmin));
   api.use('/uploads', uploadsRoutes(createUploadsService(createUploadsRepo(database.db), fileStorage)));
   api.use('/roastery/outbox', outboxRoutes(createOutboxService(createOutboxRepo(database.db))));
+  api.use('/roastery', subscribersRoutes(createSubscribersService({ repo: createSubscribersRepo(database.db), clock: deps.clock })));
   const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
   api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
   api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));

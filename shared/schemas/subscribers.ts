@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { bagSizes, brewMethods, deliveryStatuses, grinds, orderStatuses, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
+import { brewMethods, deliveryStatuses, grinds, orderStatuses, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
 import { orderAddressSchema } from './orders';
 
 export const subscriberSorts = ['newest', 'oldest', 'name', 'next-roast'] as const;
@@ -100,7 +100,7 @@ export const subscriberDetailSchema = subscriberSummarySchema.omit({ customerNam
   cancelledAt: z.iso.datetime({ offset: true }).nullable(),
   shippingAddress: orderAddressSchema,
   deliveries: z.array(subscriberDeliverySchema),
-  orders: z.array(subscriberOrderSchema.extend({ bags: z.number().int(), sizes: z.array(z.enum(bagSizes)) })),
+  orders: z.array(subscriberOrderSchema.extend({ bags: z.number().int() })),
 });
 export type SubscriberDetail = z.infer<typeof subscriberDetailSchema>;
 

@@ -105,4 +105,7 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
 
   { method: 'GET', path: '/api/subscriptions/preview', access: 'public' },
+  { method: 'GET', path: '/api/roastery/subscribers', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/subscribers.csv', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },
 ];
