@@ -400,6 +400,8 @@ export function createFakeAccount(options: { store: Store; baseUrl: () => string
       pause_collection: null,
       start_date: start,
       status: 'incomplete',
+      trial_end: null,
+      trial_start: null,
       created: start,
       livemode: false,
     };
@@ -679,9 +681,29 @@ export function createFakeAccount(options: { store: Store; baseUrl: () => string
         subscription.default_payment_method = params.default_payment_method;
       }
 
+      // As in Stripe, a trial end moves the next invoice to it: the period runs from now until then.
+      let trialSet = false;
+      if (params.trial_end !== undefined) {
+        const trialEnd = params.trial_end === 'now' ? now() : params.trial_end;
+        if (params.trial_end !== 'now' && trialEnd <= now()) {
+          throw StripeApiError.invalid('Invalid timestamp: must be an integer Unix timestamp in the future.', 'trial_end');
+        }
+        if (subscription.status !== 'active' && subscription.status !== 'trialing') {
+          throw StripeApiError.invalid(`A subscription that is ${subscription.status} cannot start a trial.`, 'trial_end');
+        }
+        previous.trial_end = subscription.trial_end;
+        previous.status = subscription.status;
+        subscription.trial_start = now();
+        subscription.trial_end = trialEnd;
+        subscription.billing_cycle_anchor = trialEnd;
+        subscription.status = trialEnd > now() ? 'trialing' : 'active';
+        setPeriod(subscription, now(), trialEnd);
+        trialSet = true;
+      }
+
       if (Object.keys(previous).length > 0) emit('customer.subscription.updated', subscription, previous);
-      // As in Stripe, a new billing interval restarts the period now and bills it at once.
-      if (intervalChanged) {
+      // As in Stripe, a new billing interval restarts the period now and bills it at once (unless a trial end postpones it).
+      if (intervalChanged && !trialSet) {
         const { recurring } = periodOf(subscription);
         setPeriod(subscription, now(), addInterval(now(), recurring));
         subscription.billing_cycle_anchor = now();

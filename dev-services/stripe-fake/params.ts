@@ -101,6 +101,8 @@ export const subscriptionUpdateParams = z.strictObject({
     .optional(),
   metadata: metadataParam.optional(),
   proration_behavior: z.enum(['create_prorations', 'none', 'always_invoice']).optional(),
+  /** A Unix time (or `now`): the next invoice waits until then, as at the end of a trial. */
+  trial_end: z.union([z.literal('now'), formInt(1)]).optional(),
   default_payment_method: z.string().optional(),
   expand: expandParam,
 });

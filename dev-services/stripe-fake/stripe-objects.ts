@@ -170,7 +170,7 @@ export interface SubscriptionItem {
   created: number;
 }
 
-export type SubscriptionStatus = 'active' | 'past_due' | 'unpaid' | 'canceled' | 'incomplete';
+export type SubscriptionStatus = 'active' | 'trialing' | 'past_due' | 'unpaid' | 'canceled' | 'incomplete';
 
 export interface PauseCollection {
   behavior: 'keep_as_draft' | 'mark_uncollectible' | 'void';
@@ -195,6 +195,9 @@ export interface Subscription {
   pause_collection: PauseCollection | null;
   start_date: number;
   status: SubscriptionStatus;
+  /** Set while a trial (or a charge moved later with `trial_end`) postpones the next invoice. */
+  trial_end: number | null;
+  trial_start: number | null;
   created: number;
   livemode: false;
 }

@@ -7,6 +7,7 @@ import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
 import { cancelUnpaidOrder } from '../checkout/checkout.repo';
 import { queueEmail } from '../outbox/outbox.repo';
+import { holdUnpaidCycle, recordPaidCycle, type PaidInvoice } from '../subscriptions/subscription-billing';
 import type { PaymentsRepo, PaymentsTransaction, SubscriptionForPayment } from './payments.repo';
 import { orderIdKey, shopBaseUrl, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
 
@@ -49,6 +50,11 @@ function subscriptionStatusOf(subscription: Stripe.Subscription): SubscriptionSt
     default:
       return 'incomplete';
   }
+}
+
+function paidInvoiceOf(invoice: Stripe.Invoice): PaidInvoice {
+  const payment = invoice.payments?.data.find((entry) => entry.status === 'paid');
+  return { id: invoice.id, amountPaidCents: invoice.amount_paid, currency: invoice.currency, paymentIntentId: idOf(payment?.payment.payment_intent) };
 }
 
 function billingOf(subscription: Stripe.Subscription) {
@@ -142,10 +148,14 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
       return undefined;
     }
     const stripeSubscription = await gateway.retrieveSubscription(stripeSubscriptionId);
+    const invoiceId = idOf(session.invoice);
+    const firstInvoice = invoiceId ? await gateway.retrieveInvoice(invoiceId) : undefined;
     return async (tx) => {
       const subscription = await tx.lockSubscription(subscriptionId);
       if (!subscription) return void logger.warn({ subscriptionId }, 'a paid Checkout Session names an unknown subscription');
       await tx.updateSubscriptionBilling(subscription.id, { ...billingOf(stripeSubscription), stripeCheckoutSessionId: session.id });
+      // The first delivery's order, whichever of this event and the first invoice.paid arrives first.
+      if (firstInvoice?.status === 'paid') await recordPaidCycle(tx.tx, subscription.id, paidInvoiceOf(firstInvoice), clock.now(), logger);
       const firstRoastDate = await tx.firstDeliveryRoastDate(subscription.id);
       await queueEmail(tx.tx, {
         template: 'subscription-started',
@@ -200,12 +210,13 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
     const timeZone = (await repo.shopTimeZone()) ?? 'UTC';
     return syncSubscription(stripeSubscriptionId, async (tx, subscription) => {
       if (outcome === 'paid') {
-        await tx.releaseHeldDeliveries(subscription.id);
+        // Each paid invoice is one delivery's order (a held one is released to it); a second delivery of the event finds the order made.
+        if (invoice.status === 'paid') await recordPaidCycle(tx.tx, subscription.id, paidInvoiceOf(invoice), clock.now(), logger);
         return;
       }
       // Only while the invoice is still unpaid: a later payment may have been delivered first.
       if (invoice.status !== 'open') return;
-      await tx.holdNextDelivery(subscription.id, localDateOf(clock.now(), timeZone));
+      await holdUnpaidCycle(tx.tx, subscription.id, clock.now());
       const nextAttempt = fromUnix(invoice.next_payment_attempt);
       await queueEmail(tx.tx, {
         template: 'payment-failed',

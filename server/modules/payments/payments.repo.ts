@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, gte, sql } from 'drizzle-orm';
+import { asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db, DbOrTx, Tx } from '../../db/client';
 import { deliveries, lots, orderItems, orders, paymentEvents, shopSettings, subscriptions, users } from '../../db/schema/index';
 import { roastersRotationName, type OrderStatus, type SubscriptionStatus } from '@shared/domain/vocabulary';
@@ -160,28 +160,6 @@ function queries(db: DbOrTx) {
         .orderBy(asc(deliveries.sequence))
         .limit(1);
       return first?.roastDate;
-    },
-
-    /** Holds the subscription's next scheduled delivery (roast date today or later) until it is paid. */
-    async holdNextDelivery(subscriptionId: string, today: string) {
-      const [next] = await db
-        .select({ id: deliveries.id })
-        .from(deliveries)
-        .where(and(eq(deliveries.subscriptionId, subscriptionId), eq(deliveries.status, 'scheduled'), gte(deliveries.roastDate, today)))
-        .orderBy(asc(deliveries.roastDate))
-        .limit(1)
-        .for('update');
-      if (!next) return undefined;
-      await db.update(deliveries).set({ status: 'held' }).where(eq(deliveries.id, next.id));
-      return next.id;
-    },
-
-    async releaseHeldDeliveries(subscriptionId: string) {
-      return db
-        .update(deliveries)
-        .set({ status: 'scheduled' })
-        .where(and(eq(deliveries.subscriptionId, subscriptionId), eq(deliveries.status, 'held')))
-        .returning({ id: deliveries.id });
     },
 
     async shopTimeZone() {
