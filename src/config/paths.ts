@@ -10,7 +10,16 @@ export const paths = {
   lots: { path: '/lots', getHref: (search?: URLSearchParams) => withSearch('/lots', search) },
   lot: { path: '/lots/:code', getHref: (code: string) => `/lots/${encodeURIComponent(code)}` },
   roastingBasics: { path: '/roasting-basics', getHref: () => '/roasting-basics' },
-  subscribe: { path: '/subscribe', getHref: () => '/subscribe' },
+  /** The Roasted to Order builder; its choices ride in the search (`lot`, `level`, `size`, …). */
+  subscribe: { path: '/subscribe', getHref: (search?: URLSearchParams) => withSearch('/subscribe', search) },
+  /** The builder's second step, where it ships; the same search carries the choices. */
+  subscribeShipping: { path: '/subscribe/shipping', getHref: (search?: URLSearchParams) => withSearch('/subscribe/shipping', search) },
+  subscription: {
+    path: '/subscriptions/:id',
+    /** `checkoutComplete`: the page the payment page returns to, which waits for the subscription to start. */
+    getHref: (id: string, { checkoutComplete = false }: { checkoutComplete?: boolean } = {}) =>
+      withSearch(`/subscriptions/${encodeURIComponent(id)}`, checkoutComplete ? new URLSearchParams({ checkout: 'complete' }) : undefined),
+  },
   cart: { path: '/cart', getHref: () => '/cart' },
   checkout: { path: '/checkout', getHref: () => '/checkout' },
   order: {
@@ -38,10 +47,14 @@ export const paths = {
     profile: { path: '/account/profile', getHref: () => '/account/profile' },
     addresses: { path: '/account/addresses', getHref: () => '/account/addresses' },
     orders: { path: '/account/orders', getHref: () => '/account/orders' },
+    deliveries: { path: '/account/deliveries', getHref: () => '/account/deliveries' },
   },
   roastery: {
     overview: { path: '/roastery', getHref: () => '/roastery' },
     greenStock: { path: '/roastery/green-stock', getHref: () => '/roastery/green-stock' },
     team: { path: '/roastery/team', getHref: () => '/roastery/team' },
+    subscribers: { path: '/roastery/subscribers', getHref: (search?: URLSearchParams) => withSearch('/roastery/subscribers', search) },
+    subscriber: { path: '/roastery/subscribers/:id', getHref: (id: string) => `/roastery/subscribers/${encodeURIComponent(id)}` },
+    rotation: { path: '/roastery/rotation', getHref: () => '/roastery/rotation' },
   },
 } as const;

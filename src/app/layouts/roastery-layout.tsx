@@ -20,6 +20,8 @@ const ownerNav = [{ to: paths.roastery.team.getHref(), label: 'Team', end: false
 const roasteryNav = [
   { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
   { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false },
+  { to: paths.roastery.subscribers.getHref(), label: 'Subscribers', end: false },
+  { to: paths.roastery.rotation.getHref(), label: 'Rotation', end: false },
 ];
 
 function navLinkStyles({ isActive }: { isActive: boolean }): string {

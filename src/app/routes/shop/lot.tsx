@@ -104,6 +104,11 @@ export default function LotRoute() {
         <PageTitle title={`${lotQuery.data.name} · Green Lots`} />
         {backLink}
         <LotPage key={lotQuery.data.code} lot={lotQuery.data} />
+        <p className="mt-8">
+          <Link to={paths.subscribe.getHref(new URLSearchParams({ lot: lotQuery.data.code }))} className="font-semibold text-leaf underline">
+            Subscribe to this lot, roasted to order
+          </Link>
+        </p>
         <div className="mt-10 max-w-prose">
           <HomeRoastingCautions />
           <p className="mt-3">

@@ -1,51 +1,74 @@
-import { Link } from 'react-router-dom';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
-import { buttonStyles } from '@/components/ui/button';
+import { ErrorState } from '@/components/ui/error-state';
+import { FormAlert } from '@/components/ui/form-alert';
 import { PageHeader } from '@/components/ui/page-header';
-import { paths } from '@/config/paths';
+import { Skeleton } from '@/components/ui/skeleton';
+import { useCurrentUser } from '@/features/auth/api/get-current-user';
+import { getLotQueryOptions } from '@/features/lots/api/get-lot';
+import { getLotsQueryOptions, useLots } from '@/features/lots/api/get-lots';
+import { SubscriptionBuilder } from '@/features/subscriptions/components/subscription-builder';
+import { rotationSearchValue } from '@/features/subscriptions/utils/builder-search';
 
-const steps = [
-  {
-    title: 'Choose your coffee',
-    text: 'Pick a lot from the green shelf, or take the Roaster’s Rotation: a different lot chosen by the roaster each time.',
-  },
-  {
-    title: 'Make it yours',
-    text: 'Roast level (among those that suit the lot), bag size of 12 oz, 1 lb or 2 lb, how many bags, and whole bean or a grind for your brew method.',
-  },
-  {
-    title: 'Set the rhythm',
-    text: 'A delivery every 1, 2, 3 or 4 weeks. Skip one, pause until a date, change anything or cancel, whenever you like.',
-  },
-  {
-    title: 'Roasted, rested, ready',
-    text: 'Your order is roasted on the next roast day after the order cutoff, rests while it gives off CO₂, and ships so it is ready to brew when it lands. You get an e-mail when it ships, and another on its rest day, the day it is ready.',
-  },
-];
+function chosenLotCode(search: URLSearchParams): string | null {
+  const code = search.get('lot')?.trim();
+  return code && code !== rotationSearchValue ? code : null;
+}
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ request }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(getLotsQueryOptions());
+    const code = chosenLotCode(new URL(request.url).searchParams);
+    if (code) void queryClient.prefetchQuery(getLotQueryOptions(code));
+    return null;
+  };
+
+function Builder() {
+  const [search] = useSearchParams();
+  const signedIn = Boolean(useCurrentUser().data);
+  const lotsQuery = useLots();
+  const code = chosenLotCode(search);
+  const lotQuery = useQuery({ ...getLotQueryOptions(code ?? ''), enabled: code !== null });
+
+  if (lotsQuery.isError) {
+    return <ErrorState title="The coffees could not load" error={lotsQuery.error} onRetry={() => void lotsQuery.refetch()} />;
+  }
+  if (!lotsQuery.data) {
+    return (
+      <>
+        <p role="status" className="sr-only">
+          Loading the coffees…
+        </p>
+        <Skeleton className="h-96 rounded-card" />
+      </>
+    );
+  }
+  const lots = lotsQuery.data.items.filter((lot) => lot.stockGrams > 0 || lot.code === code);
+  return <SubscriptionBuilder lots={lots} chosenLot={lotQuery.data} signedIn={signedIn} />;
+}
 
 export default function SubscribeRoute() {
+  const [search] = useSearchParams();
+  const [cameBackUnpaid] = useState(() => search.get('checkout') === 'cancelled');
   return (
     <>
       <PageTitle title="Roasted to Order" />
       <PageHeader
         eyebrow="Subscription"
         title="Roasted to Order"
-        lead="Coffee roasted for you on a roast day, not pulled from a shelf, and timed so it reaches you ready to brew."
+        lead="Coffee roasted for you on a roast day, rested, and shipped so it reaches you ready to brew. Skip, pause, change or cancel whenever you like."
       />
+      {cameBackUnpaid ? (
+        <div className="mb-6">
+          <FormAlert>The payment was not completed, so nothing was charged and no subscription started. Your choices are below.</FormAlert>
+        </div>
+      ) : null}
+      <Builder />
 
-      <ol className="grid gap-4 sm:grid-cols-2">
-        {steps.map((step, index) => (
-          <li key={step.title} className="rounded-card border border-rule bg-sheet p-5 shadow-card">
-            <p className="font-heading text-h2 font-semibold text-ember" aria-hidden="true">
-              {index + 1}
-            </p>
-            <h2 className="mt-1 text-h3">{step.title}</h2>
-            <p className="mt-2 text-ink-muted">{step.text}</p>
-          </li>
-        ))}
-      </ol>
-
-      <section aria-labelledby="why-rest" className="mt-10 max-w-prose">
+      <section aria-labelledby="why-rest" className="mt-12 max-w-prose">
         <h2 id="why-rest" className="text-h2">
           Why the rest?
         </h2>
@@ -54,16 +77,6 @@ export default function SubscribeRoute() {
           its roast date and a ready-from date; espresso needs a longer rest than filter, so your brew method sets the date. Each bag
           also shows a best-before date, the end of its best window.
         </p>
-      </section>
-
-      <section className="mt-10 rounded-card bg-leaf-wash p-6 sm:p-8">
-        <h2 className="text-h3">Subscriptions are opening soon</h2>
-        <p className="mt-2 max-w-prose">
-          You cannot start a Roasted to Order subscription here just yet. In the meantime, the green shelf is open.
-        </p>
-        <Link to={paths.lots.getHref()} className={buttonStyles('primary', 'mt-5')}>
-          Browse Green Lots
-        </Link>
       </section>
     </>
   );

@@ -1,0 +1,125 @@
+import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
+import type { SubscriberDetail } from '@shared/schemas/subscribers';
+import { Badge } from '@/components/ui/badge';
+import { formatMoney } from '@/lib/format';
+import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
+
+const instant = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
+
+function addressLines(address: SubscriberDetail['shippingAddress']): string[] {
+  return [address.name, address.line1, address.line2 ?? '', `${address.city}, ${address.region} ${address.postalCode}`, address.country].filter(Boolean);
+}
+
+/** A subscriber's subscription, where it ships, and every delivery with the order it became. */
+export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDetail }) {
+  const status = subscriptionStatusLabels[subscriber.status];
+  const facts: [string, string][] = [
+    ['Coffee', subscriber.lotCode ? `${subscriber.coffee} (${subscriber.lotCode})` : subscriber.coffee],
+    ['Roast level', roastLevelLabels[subscriber.roastLevel]],
+    ['Each delivery', bagsLabel(subscriber.bagsPerDelivery, subscriber.bagSize)],
+    ['Grind', grindLabels[subscriber.grind]],
+    ['Brew method', brewMethodLabels[subscriber.brewMethod]],
+    ['Cadence', cadenceLabel(subscriber.cadenceWeeks)],
+    ['Per delivery', formatMoney(subscriber.priceCents)],
+    ['Subscribed', instant.format(new Date(subscriber.createdAt))],
+    ...(subscriber.pausedUntil ? [['Paused until', formatDeliveryDay(subscriber.pausedUntil)] as [string, string]] : []),
+    ...(subscriber.cancelledAt ? [['Cancelled', instant.format(new Date(subscriber.cancelledAt))] as [string, string]] : []),
+  ];
+  return (
+    <div className="grid gap-8">
+      <div className="grid gap-6 md:grid-cols-[2fr_1fr]">
+        <section aria-labelledby="subscriber-subscription" className="rounded-card border border-rule bg-sheet p-5">
+          <div className="flex flex-wrap items-center gap-3">
+            <h2 id="subscriber-subscription" className="text-h3">
+              Subscription
+            </h2>
+            <Badge tone={status.tone}>{status.label}</Badge>
+          </div>
+          <dl className="mt-3 grid grid-cols-[max-content_1fr] gap-x-6 gap-y-1 text-small">
+            {facts.map(([term, value]) => (
+              <div key={term} className="contents">
+                <dt className="font-semibold text-ink-muted">{term}</dt>
+                <dd>{value}</dd>
+              </div>
+            ))}
+          </dl>
+        </section>
+        <section aria-labelledby="subscriber-address" className="rounded-card border border-rule bg-sheet p-5">
+          <h2 id="subscriber-address" className="text-h3">
+            Ships to
+          </h2>
+          <address className="mt-3 text-small not-italic">
+            {addressLines(subscriber.shippingAddress).map((line) => (
+              <span key={line} className="block">
+                {line}
+              </span>
+            ))}
+          </address>
+          <p className="mt-3 text-small break-all">
+            <a href={`mailto:${subscriber.customer.email}`} className="text-leaf underline">
+              {subscriber.customer.email}
+            </a>
+          </p>
+        </section>
+      </div>
+
+      <section aria-labelledby="subscriber-deliveries">
+        <h2 id="subscriber-deliveries" className="mb-3 text-h2">
+          Deliveries
+        </h2>
+        {subscriber.deliveries.length === 0 ? (
+          <p className="text-ink-muted">No deliveries yet.</p>
+        ) : (
+          <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
+            <table className="w-full min-w-[48rem] border-collapse text-left text-small">
+              <caption className="sr-only">Deliveries of this subscription</caption>
+              <thead className="bg-paper-shade">
+                <tr>
+                  {['#', 'Roasts', 'Ships', 'Ready from', 'Best before', 'Coffee', 'Status', 'Order'].map((column) => (
+                    <th key={column} scope="col" className="px-3 py-2 font-semibold whitespace-nowrap">
+                      {column}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody className="divide-y divide-rule">
+                {subscriber.deliveries.map((delivery) => {
+                  const deliveryStatus = deliveryStatusLabels[delivery.status];
+                  return (
+                    <tr key={delivery.id}>
+                      <td className="px-3 py-2">{delivery.sequence}</td>
+                      <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
+                        {formatDeliveryDay(delivery.roastDate)}
+                      </th>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.readyFrom)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
+                      <td className="px-3 py-2">{delivery.coffee ?? 'Not picked yet'}</td>
+                      <td className="px-3 py-2">
+                        <Badge tone={deliveryStatus.tone}>{deliveryStatus.label}</Badge>
+                      </td>
+                      <td className="px-3 py-2">
+                        {delivery.order ? (
+                          <>
+                            {formatMoney(delivery.order.totalCents)}
+                            {delivery.order.trackingNumber ? (
+                              <span className="block text-caption text-ink-muted">
+                                {delivery.order.carrier} {delivery.order.trackingNumber}
+                              </span>
+                            ) : null}
+                          </>
+                        ) : (
+                          '—'
+                        )}
+                      </td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </div>
+  );
+}

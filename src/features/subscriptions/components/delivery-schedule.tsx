@@ -1,0 +1,80 @@
+import { Lock } from 'lucide-react';
+import type { SubscriptionDelivery } from '@shared/schemas/subscriptions';
+import { Badge } from '@/components/ui/badge';
+import { deliveryStatusLabels, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+
+type DeliveryScheduleProps = {
+  deliveries: readonly SubscriptionDelivery[];
+  /** The table's caption, e.g. "Upcoming deliveries of Roaster's Rotation". */
+  caption: string;
+};
+
+function coffeeOf(delivery: SubscriptionDelivery): string {
+  return delivery.coffee ?? 'Lot chosen nearer the roast day';
+}
+
+/** Each delivery's four dates, its coffee and where it stands; a locked one says why. */
+export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps) {
+  return (
+    <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
+      <table className="w-full min-w-[40rem] border-collapse text-left text-small">
+        <caption className="sr-only">{caption}</caption>
+        <thead className="bg-paper-shade">
+          <tr>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Roasts
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Ships
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Ready from
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Best before
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Coffee
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Status
+            </th>
+          </tr>
+        </thead>
+        <tbody className="divide-y divide-rule">
+          {deliveries.map((delivery) => {
+            const status = deliveryStatusLabels[delivery.status];
+            const skipped = delivery.status === 'skipped';
+            return (
+              <tr key={delivery.roastDate} className={skipped ? 'text-ink-muted' : undefined}>
+                <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
+                  {skipped ? <s>{formatDeliveryDay(delivery.roastDate)}</s> : formatDeliveryDay(delivery.roastDate)}
+                </th>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.readyFrom)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
+                <td className="px-3 py-2">{coffeeOf(delivery)}</td>
+                <td className="px-3 py-2">
+                  <div className="flex flex-wrap items-center gap-1.5">
+                    <Badge tone={status.tone}>{status.label}</Badge>
+                    {delivery.locked && delivery.status === 'scheduled' ? (
+                      <Badge>
+                        <Lock aria-hidden="true" className="size-3" />
+                        Locked
+                      </Badge>
+                    ) : null}
+                  </div>
+                  {delivery.locked && delivery.status === 'scheduled' ? (
+                    <p className="mt-1 text-caption text-ink-muted">
+                      Past its cutoff ({formatCutoff(delivery.cutoffAt)}): it roasts as it is, and changes reach the next delivery.
+                    </p>
+                  ) : null}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

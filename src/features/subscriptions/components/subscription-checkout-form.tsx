@@ -1,0 +1,63 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { FormProvider, useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import type { ShippingAddress } from '@shared/schemas/checkout';
+import { subscriptionCheckoutRequestSchema } from '@shared/schemas/subscriptions';
+import { Button } from '@/components/ui/button';
+import { FormAlert } from '@/components/ui/form-alert';
+import { applyServerErrors } from '@/lib/form-errors';
+import { leaveFor } from '@/lib/leave-for';
+import { useCreateSubscriptionCheckout } from '../api/create-subscription-checkout';
+import type { SubscriptionBuild } from '../utils/subscription-form';
+import { blankShippingAddress, ShippingAddressFields, shippingAddressFieldNames } from './shipping-address-fields';
+
+type CheckoutFields = z.input<typeof subscriptionCheckoutRequestSchema>;
+
+type SubscriptionCheckoutFormProps = {
+  build: SubscriptionBuild;
+  /** The address to start from (the customer's saved default), or blank fields. */
+  initialAddress?: ShippingAddress;
+};
+
+/** Where the deliveries ship; submitting creates the subscription and goes on to the payment page. */
+export function SubscriptionCheckoutForm({ build, initialAddress }: SubscriptionCheckoutFormProps) {
+  const checkout = useCreateSubscriptionCheckout();
+  const [formError, setFormError] = useState<string>();
+  const form = useForm<CheckoutFields, unknown, z.output<typeof subscriptionCheckoutRequestSchema>>({
+    resolver: zodResolver(subscriptionCheckoutRequestSchema),
+    defaultValues: {
+      ...build,
+      shippingAddress: initialAddress ? { ...initialAddress, line2: initialAddress.line2 ?? '' } : blankShippingAddress,
+    },
+  });
+
+  const submit = form.handleSubmit(async (input) => {
+    setFormError(undefined);
+    try {
+      const { checkoutUrl } = await checkout.mutateAsync(input);
+      leaveFor(checkoutUrl);
+    } catch (error) {
+      setFormError(applyServerErrors(error, form.setError, shippingAddressFieldNames));
+    }
+  });
+
+  const busy = form.formState.isSubmitting || checkout.isSuccess;
+  return (
+    <FormProvider {...form}>
+      <form noValidate aria-label="Shipping address" onSubmit={(event) => void submit(event)} className="grid gap-4">
+        {formError ? <FormAlert>{formError}</FormAlert> : null}
+        <ShippingAddressFields />
+        <div>
+          <Button type="submit" disabled={busy}>
+            {busy ? 'Opening the payment page…' : 'Continue to payment'}
+          </Button>
+          <p className="mt-2 text-small text-ink-muted">
+            You pay the first delivery on the next page; later ones are charged as each period starts. Nothing is charged until you
+            confirm there.
+          </p>
+        </div>
+      </form>
+    </FormProvider>
+  );
+}
