@@ -46,6 +46,11 @@ import { subscriptionPreviewRoutes } from './modules/subscription-preview/subscr
 import { createSubscribersRepo } from './modules/subscribers/subscribers.repo';
 import { subscribersRoutes } from './modules/subscribers/subscribers.routes';
 import { createSubscribersService } from './modules/subscribers/subscribers.service';
+import { createAuditRepo } from './modules/audit/audit.repo';
+import { createAuditTrail } from './modules/audit/audit-trail';
+import { createRotationRepo } from './modules/rotation/rotation.repo';
+import { rotationRoutes } from './modules/rotation/rotation.routes';
+import { createRotationService } from './modules/rotation/rotation.service';
 import { createSubscriptionPreviewService } from './modules/subscription-preview/subscription-preview.service';
 
 export interface AppDeps {
@@ -131,6 +136,16 @@ export function createApp(deps: AppDeps): Express {
   api.use('/uploads', uploadsRoutes(createUploadsService(createUploadsRepo(database.db), fileStorage)));
   api.use('/roastery/outbox', outboxRoutes(createOutboxService(createOutboxRepo(database.db))));
   api.use('/roastery', subscribersRoutes(createSubscribersService({ repo: createSubscribersRepo(database.db), clock: deps.clock })));
+  api.use(
+    '/roastery/rotation',
+    rotationRoutes(
+      createRotationService({
+        repo: createRotationRepo(database.db),
+        clock: deps.clock,
+        audit: createAuditTrail({ repo: createAuditRepo(database.db), logger, clock: deps.clock }),
+      }),
+    ),
+  );
   const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
   api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
   api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isIsoDate } from '../domain/shop-time';
+import { daysBetween, isIsoDate } from '../domain/shop-time';
 
 const isoDate = (what: string) => z.string({ error: `Enter a ${what}.` }).refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 
@@ -9,7 +9,11 @@ export const maxRotationSpanDays = 92;
 /** Query string of `GET /api/roastery/rotation` (staff): both days inclusive, shop-local. */
 export const rotationQuerySchema = z
   .object({ from: isoDate('first day'), to: isoDate('last day') })
-  .refine((query) => query.from <= query.to, { message: 'The first day must not be after the last.', path: ['to'] });
+  .refine((query) => query.from <= query.to, { message: 'The first day must not be after the last.', path: ['to'] })
+  .refine((query) => daysBetween(query.from, query.to) < maxRotationSpanDays, {
+    message: `Ask for at most ${maxRotationSpanDays} days at once.`,
+    path: ['to'],
+  });
 export type RotationQuery = z.infer<typeof rotationQuerySchema>;
 
 /**

@@ -108,4 +108,6 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/roastery/subscribers', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers.csv', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/rotation', access: 'staff' },
+  { method: 'PUT', path: '/api/roastery/rotation/:date', access: 'staff', params: { date: '2031-01-06' } },
 ];

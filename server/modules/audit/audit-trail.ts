@@ -20,6 +20,7 @@ export type AuditAction =
   | 'team.role_changed'
   | 'team.disabled'
   | 'team.enabled'
+  | 'rotation.picked'
   | 'access.denied';
 
 export interface AuditEvent {
