@@ -1,0 +1,228 @@
+// @vitest-environment happy-dom
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import type { Subscription, SubscriptionDelivery } from '@shared/schemas/subscriptions';
+import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const subscriptionId = '5a7c9e1b-3d5f-4a6b-8c9d-0e1f2a3b4c5d';
+
+// Invented deliveries of an invented lot: the first is past its cutoff, the second is the next open one.
+function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): SubscriptionDelivery {
+  return {
+    roastDate: '2026-12-09',
+    shipDate: '2026-12-10',
+    readyFrom: '2026-12-14',
+    bestBefore: '2027-01-06',
+    status: 'scheduled',
+    locked: false,
+    cutoffAt: '2026-12-08T19:00:00Z',
+    lotCode: 'RD-T01',
+    coffee: 'Test Ridge Washed',
+    roastLevel: 'light',
+    bagSize: '12oz',
+    bagsPerDelivery: 2,
+    grind: 'whole-bean',
+    brewMethod: 'filter',
+    orderId: null,
+    ...overrides,
+  };
+}
+
+const lockedDelivery = makeDelivery({ roastDate: '2026-12-02', shipDate: '2026-12-03', readyFrom: '2026-12-07', bestBefore: '2026-12-30', locked: true, cutoffAt: '2026-12-01T19:00:00Z' });
+const nextDelivery = makeDelivery();
+const laterDelivery = makeDelivery({ roastDate: '2026-12-16', shipDate: '2026-12-17', readyFrom: '2026-12-21', bestBefore: '2027-01-13', cutoffAt: '2026-12-15T19:00:00Z' });
+
+function makeSubscription(overrides: Partial<Subscription> = {}): Subscription {
+  return {
+    id: subscriptionId,
+    status: 'active',
+    lotCode: 'RD-T01',
+    coffee: 'Test Ridge Washed',
+    roastLevel: 'light',
+    bagSize: '12oz',
+    bagsPerDelivery: 2,
+    grind: 'whole-bean',
+    brewMethod: 'filter',
+    cadenceWeeks: 1,
+    pausedUntil: null,
+    cancelAtPeriodEnd: false,
+    endsOn: null,
+    priceCents: 3935,
+    currency: 'usd',
+    shippingAddress: { name: 'Ines Marlow', line1: '14 Quarry Lane', line2: null, city: 'Ashfield', region: 'OR', postalCode: '97000', country: 'US' },
+    nextDelivery: lockedDelivery,
+    createdAt: '2026-11-20T16:00:00Z',
+    ...overrides,
+  };
+}
+
+/** The subscription as it is after the change, or a refusal. */
+type Answer = (body: Record<string, unknown>) => Subscription | Response;
+
+/**
+ * Answers like the server: the subscription list, its deliveries, the lot, and each change through
+ * `onChange` (keyed by the action: skip, pause, resume, cancel, patch).
+ */
+function deliveriesServer(onChange: Partial<Record<string, Answer>> = {}) {
+  let subscription = makeSubscription();
+  let deliveries = [lockedDelivery, nextDelivery, laterDelivery];
+  const fetchMock = stubFetch((url, init) => {
+    const method = init?.method ?? 'GET';
+    if (url.pathname === '/api/lots/RD-T01') return jsonResponse(makeLotDetail({ allowedLevels: ['light', 'medium'] }));
+    if (method === 'GET' && url.pathname === '/api/subscriptions') return jsonResponse({ items: [subscription] });
+    if (method === 'GET' && url.pathname.endsWith('/deliveries')) return jsonResponse({ items: deliveries });
+    const action = method === 'PATCH' ? 'patch' : (url.pathname.split('/').pop() ?? '');
+    const body = typeof init?.body === 'string' ? (JSON.parse(init.body) as Record<string, unknown>) : {};
+    const answer = onChange[action];
+    if (!answer) return apiErrorResponse(500, 'unexpected', `No answer for ${method} ${url.pathname}`);
+    const answered = answer(body);
+    if (answered instanceof Response) return answered;
+    subscription = answered;
+    if (action === 'skip') deliveries = deliveries.map((each) => (each.roastDate === body.roastDate ? { ...each, status: 'skipped' } : each));
+    if (action === 'patch') deliveries = deliveries.map((each) => (each.locked ? each : { ...each, ...body }));
+    return jsonResponse(subscription);
+  });
+  return { fetchMock };
+}
+
+describe('Deliveries page', () => {
+  it('shows each delivery’s four dates and says a locked one is past its cutoff', async () => {
+    deliveriesServer();
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    const schedule = await screen.findByRole('table', { name: 'Upcoming deliveries of Test Ridge Washed' }, { timeout: 15_000 });
+    const rows = within(schedule).getAllByRole('row');
+    expect(rows).toHaveLength(4);
+    const locked = within(schedule).getByRole('row', { name: /Wed, Dec 2, 2026/ });
+    expect(locked.textContent).toContain('Thu, Dec 3, 2026');
+    expect(locked.textContent).toContain('Mon, Dec 7, 2026');
+    expect(locked.textContent).toContain('Wed, Dec 30, 2026');
+    expect(within(locked).getByText('Locked')).toBeTruthy();
+    expect(locked.textContent).toMatch(/Past its cutoff .*it roasts as it is, and changes reach the next delivery/);
+    expect(within(schedule).getByRole('row', { name: /Wed, Dec 9, 2026/ }).textContent).not.toContain('Locked');
+    expect(screen.getByRole('link', { name: 'Deliveries' }).getAttribute('aria-current')).toBe('page');
+  });
+
+  it('skips the next open delivery, not the locked one, and the schedule shows it at once', async () => {
+    const { fetchMock } = deliveriesServer({ skip: () => makeSubscription({ nextDelivery: lockedDelivery }) });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Skip the delivery roasting Wed, Dec 9, 2026' }, { timeout: 15_000 }));
+
+    const message = await screen.findByText(/Skipped the delivery roasting Wed, Dec 9, 2026/);
+    expect(message.closest('[role="status"]')).toBeTruthy();
+    const [skip] = sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/skip`);
+    expect(skip?.body).toEqual({ roastDate: '2026-12-09' });
+    expect(skip?.headers.get('X-Restday-Client')).toBe('web');
+    const skipped = await screen.findByRole('row', { name: /Dec 9, 2026.*Skipped|Skipped/ });
+    expect(skipped.textContent).toContain('Wed, Dec 9, 2026');
+    expect(requestedUrls(fetchMock).filter((url) => url.startsWith(`/api/subscriptions/${subscriptionId}/deliveries`))).toHaveLength(2);
+  });
+
+  it('says why a skip was refused when the delivery locked meanwhile, and changes nothing', async () => {
+    deliveriesServer({ skip: () => apiErrorResponse(409, 'delivery_locked', 'The delivery roasting Dec 9 is past its cutoff.') });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    fireEvent.click(await screen.findByRole('button', { name: /Skip the delivery roasting/ }, { timeout: 15_000 }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('The delivery roasting Dec 9 is past its cutoff.');
+    expect(alert.textContent).toContain('roasts as it is; nothing was changed');
+    expect(screen.queryByText('Skipped')).toBeNull();
+  });
+
+  it('changes the roast level among the lot’s levels, sending only what changed', async () => {
+    const { fetchMock } = deliveriesServer({ patch: (body) => makeSubscription({ ...body }) });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Change level, size, grind or cadence' }, { timeout: 15_000 }));
+    const form = await screen.findByRole('form', { name: 'Change what each delivery brings' });
+    expect(document.activeElement?.textContent).toBe('Change what each delivery brings');
+    const levels = within(form).getByRole('group', { name: 'Roast level' });
+    expect(within(levels).getAllByRole('radio').map((radio) => radio.getAttribute('value'))).toEqual(['light', 'medium']);
+    fireEvent.click(within(levels).getByRole('radio', { name: 'Medium' }));
+    fireEvent.click(within(form).getByRole('button', { name: 'Save the changes' }));
+
+    expect(await screen.findByText(/Your subscription is changed/)).toBeTruthy();
+    expect(sentRequests(fetchMock, 'PATCH', `/api/subscriptions/${subscriptionId}`).map((request) => request.body)).toEqual([{ roastLevel: 'medium' }]);
+    expect(screen.queryByRole('form', { name: 'Change what each delivery brings' })).toBeNull();
+    await waitFor(() => expect(screen.getByText('Medium', { selector: 'dd' })).toBeTruthy());
+  });
+
+  it('shows the server’s reason on the field it concerns', async () => {
+    deliveriesServer({
+      patch: () => apiErrorResponse(422, 'level_not_allowed', 'Check the highlighted fields.', { roastLevel: 'This lot is not roasted to medium.' }),
+    });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Change level, size, grind or cadence' }, { timeout: 15_000 }));
+    const form = await screen.findByRole('form', { name: 'Change what each delivery brings' });
+    fireEvent.click(within(form).getByRole('radio', { name: 'Medium' }));
+    fireEvent.click(within(form).getByRole('button', { name: 'Save the changes' }));
+
+    const reason = await within(form).findByText('This lot is not roasted to medium.');
+    const group = within(form).getByRole('group', { name: 'Roast level' });
+    expect(group.getAttribute('aria-describedby')).toContain(reason.id);
+    expect(group.getAttribute('aria-invalid')).toBe('true');
+  });
+
+  it('pauses until a date and then offers to resume', async () => {
+    const { fetchMock } = deliveriesServer({
+      pause: (body) => makeSubscription({ status: 'paused', pausedUntil: String(body.until) }),
+      resume: () => makeSubscription(),
+    });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Pause until a date' }, { timeout: 15_000 }));
+    const form = await screen.findByRole('form', { name: 'Pause deliveries' });
+    fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
+    expect(await within(form).findByText('Use a day to resume like 2026-12-01.')).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/pause`)).toHaveLength(0);
+
+    fireEvent.change(within(form).getByLabelText('Pause until'), { target: { value: '2027-01-11' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
+
+    expect(await screen.findByText(/Paused: no delivery roasts before Mon, Jan 11, 2027/, { selector: '[role="status"] *' })).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/pause`)[0]?.body).toEqual({ until: '2027-01-11' });
+
+    fireEvent.click(screen.getByRole('button', { name: 'Resume deliveries' }));
+    expect(await screen.findByText(/Resumed: deliveries start again/)).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/resume`)).toHaveLength(1);
+  });
+
+  it('asks before cancelling, keeps the subscription on “keep”, and cancels at period end on confirm', async () => {
+    const { fetchMock } = deliveriesServer({ cancel: () => makeSubscription({ cancelAtPeriodEnd: true, endsOn: '2026-12-15' }) });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    const cancelButton = await screen.findByRole('button', { name: 'Cancel the subscription' }, { timeout: 15_000 });
+    cancelButton.focus();
+    fireEvent.click(cancelButton);
+    const dialog = await screen.findByRole('dialog', { name: 'Cancel this subscription?' });
+    expect(document.activeElement?.textContent).toBe('Keep my subscription');
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Keep my subscription' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
+    expect(document.activeElement).toBe(cancelButton);
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/cancel`)).toHaveLength(0);
+
+    fireEvent.click(cancelButton);
+    fireEvent.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Cancel at the end of the period' }));
+
+    expect(await screen.findByText(/Cancelled at the end of the paid period\. Deliveries already paid for/, { selector: '[role="status"] *' })).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/cancel`)).toHaveLength(1);
+    expect(screen.getByText(/on Tue, Dec 15, 2026/)).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'Cancel the subscription' })).toBeNull();
+  });
+
+  it('invites a customer with no subscription to build one', async () => {
+    stubFetch(() => jsonResponse({ items: [] }));
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    expect(await screen.findByRole('heading', { name: 'No subscriptions yet' }, { timeout: 15_000 })).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Build a Roasted to Order subscription' }).getAttribute('href')).toBe('/subscribe');
+  });
+});
