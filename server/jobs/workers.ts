@@ -10,13 +10,14 @@ import { startListener } from './listener';
 import { startRelayRunner, type RelayRunner } from './outbox-relay';
 import type { Queue } from './queue';
 import { workJobs, type JobDefinition } from './registry';
+import { renewalRemindersJob } from './renewal-reminders';
 
 /**
  * Every background job Restday runs on pg-boss. Later features add theirs here (defineJob in
  * ./registry). The outbox relay is not among them: it runs beside them (see startWorkers).
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const jobs: JobDefinition<any>[] = [];
+export const jobs: JobDefinition<any>[] = [renewalRemindersJob];
 
 export interface WorkerDeps {
   config: Config;
