@@ -2,7 +2,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { rotationPickResponseSchema, rotationResponseSchema } from '@shared/schemas/rotation';
-import { auditLog, lots, rotationPicks } from '../../server/db/schema/index';
+import { auditLog, deliveries, lots, rotationPicks } from '../../server/db/schema/index';
 import { createAdjustableClock } from '../../server/lib/clock';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
@@ -41,7 +41,9 @@ describe("the Roaster's Rotation", () => {
     await inventDelivery(paused, 1, '2032-03-03');
     await inventDelivery(onLot, 1, '2032-03-03');
     await inventDelivery(skipping, 1, '2032-03-03', 'skipped');
-    await inventDelivery(plain, 2, '2032-03-06');
+    // Its cutoff passed when it brought three bags: the frozen delivery counts, not today's choice.
+    const frozen = await inventDelivery(plain, 2, '2032-03-06');
+    await getTestDb().update(deliveries).set({ bagsPerDelivery: 3, bagSize: '12oz', roastLevel: 'medium' }).where(eq(deliveries.id, frozen));
 
     const staff = await signedInAgent(app, await createTestUser('staff'));
     const response = await staff.get('/api/roastery/rotation').query({ from: '2032-03-01', to: '2032-03-07' });
@@ -51,7 +53,7 @@ describe("the Roaster's Rotation", () => {
     expect(rotationResponseSchema.parse(response.body).days).toEqual([
       { roastDate: '2032-03-01', lotCode: null, coffee: null, note: '', subscribers: 0, bags: 0, roastedGrams: 0 },
       { roastDate: '2032-03-03', lotCode: null, coffee: null, note: '', subscribers: 2, bags: 4, roastedGrams: 1590 },
-      { roastDate: '2032-03-06', lotCode: null, coffee: null, note: '', subscribers: 1, bags: 2, roastedGrams: 682 },
+      { roastDate: '2032-03-06', lotCode: null, coffee: null, note: '', subscribers: 1, bags: 3, roastedGrams: 1023 },
     ]);
 
     const lot = await createLotForSale(10_000);

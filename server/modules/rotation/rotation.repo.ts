@@ -1,4 +1,5 @@
 import { and, between, eq, inArray, isNull, sql } from 'drizzle-orm';
+import type { RoastedBagSize, RoastLevel } from '@shared/domain/vocabulary';
 import type { Db } from '../../db/client';
 import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions } from '../../db/schema/index';
 import { loadShopSettings } from '../settings/settings.repo';
@@ -30,17 +31,18 @@ export function createRotationRepo(db: Db) {
     },
 
     /**
-     * Each delivery of an active Roaster's Rotation subscription roasting between the days, with
-     * the bags its order holds once paid (null before: the subscription's current choice applies).
+     * Each delivery of an active Roaster's Rotation subscription roasting between the days: what it
+     * brings (frozen on the delivery once its cutoff passed, else the subscription's current choice),
+     * and the bags its order holds once paid.
      */
     async rotationDeliveries(from: string, to: string) {
       return db
         .select({
           roastDate: deliveries.roastDate,
           subscriptionId: deliveries.subscriptionId,
-          roastLevel: subscriptions.roastLevel,
-          bagSize: subscriptions.bagSize,
-          bagsPerDelivery: subscriptions.bagsPerDelivery,
+          roastLevel: sql<RoastLevel>`coalesce(${deliveries.roastLevel}, ${subscriptions.roastLevel})`,
+          bagSize: sql<RoastedBagSize>`coalesce(${deliveries.bagSize}, ${subscriptions.bagSize})`,
+          bagsPerDelivery: sql<number>`coalesce(${deliveries.bagsPerDelivery}, ${subscriptions.bagsPerDelivery})`,
           orderBags: sql<number | null>`sum(${orderItems.quantity})::int`,
           orderGrams: sql<number | null>`sum(${orderItems.quantity} * ${orderItems.fillGrams})::int`,
         })
