@@ -152,6 +152,10 @@ describe('Deliveries page', () => {
     expect(sentRequests(fetchMock, 'PATCH', `/api/subscriptions/${subscriptionId}`).map((request) => request.body)).toEqual([{ roastLevel: 'medium' }]);
     expect(screen.queryByRole('form', { name: 'Change what each delivery brings' })).toBeNull();
     await waitFor(() => expect(screen.getByText('Medium', { selector: 'dd' })).toBeTruthy());
+    // The locked delivery keeps its level; the next one brings the new one.
+    const schedule = screen.getByRole('table', { name: 'Upcoming deliveries of Test Ridge Washed' });
+    await waitFor(() => expect(within(schedule).getByRole('row', { name: /Wed, Dec 9, 2026/ }).textContent).toContain('2 × 12 oz bags, Medium, Whole bean'));
+    expect(within(schedule).getByRole('row', { name: /Wed, Dec 2, 2026/ }).textContent).toContain('2 × 12 oz bags, Light, Whole bean');
   });
 
   it('shows the server’s reason on the field it concerns', async () => {

@@ -1,7 +1,8 @@
 import { Lock } from 'lucide-react';
+import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { SubscriptionDelivery } from '@shared/schemas/subscriptions';
 import { Badge } from '@/components/ui/badge';
-import { deliveryStatusLabels, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+import { bagsLabel, deliveryStatusLabels, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
 
 type DeliveryScheduleProps = {
   deliveries: readonly SubscriptionDelivery[];
@@ -13,11 +14,16 @@ function coffeeOf(delivery: SubscriptionDelivery): string {
   return delivery.coffee ?? 'Lot chosen nearer the roast day';
 }
 
+/** "2 × 12 oz bags, Medium, Whole bean": what this delivery was frozen with, or will bring. */
+function contentsOf(delivery: SubscriptionDelivery): string {
+  return `${bagsLabel(delivery.bagsPerDelivery, delivery.bagSize)}, ${roastLevelLabels[delivery.roastLevel]}, ${grindLabels[delivery.grind]}`;
+}
+
 /** Each delivery's four dates, its coffee and where it stands; a locked one says why. */
 export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps) {
   return (
     <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-      <table className="w-full min-w-[40rem] border-collapse text-left text-small">
+      <table className="w-full min-w-[48rem] border-collapse text-left text-small">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-shade">
           <tr>
@@ -37,6 +43,9 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
               Coffee
             </th>
             <th scope="col" className="px-3 py-2 font-semibold">
+              Brings
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
               Status
             </th>
           </tr>
@@ -54,6 +63,7 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
                 <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.readyFrom)}</td>
                 <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
                 <td className="px-3 py-2">{coffeeOf(delivery)}</td>
+                <td className="px-3 py-2">{contentsOf(delivery)}</td>
                 <td className="px-3 py-2">
                   <div className="flex flex-wrap items-center gap-1.5">
                     <Badge tone={status.tone}>{status.label}</Badge>
