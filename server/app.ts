@@ -38,6 +38,11 @@ import { createPaymentsService } from './modules/payments/payments.service';
 import { createCheckoutRepo } from './modules/checkout/checkout.repo';
 import { checkoutRoutes } from './modules/checkout/checkout.routes';
 import { createCheckoutService } from './modules/checkout/checkout.service';
+import { createSubscriptionsRepo } from './modules/subscriptions/subscriptions.repo';
+import { subscriptionCheckoutRoutes, subscriptionsRoutes } from './modules/subscriptions/subscriptions.routes';
+import { createSubscriptionsService } from './modules/subscriptions/subscriptions.service';
+import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
+import { sendJob } from './jobs/registry';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
 import { createOrdersService } from './modules/orders/orders.service';
@@ -148,9 +153,20 @@ export function createApp(deps: AppDeps): Express {
   );
   const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
   api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
+  const subscriptionsService = createSubscriptionsService({
+    repo: createSubscriptionsRepo(database.db),
+    payments,
+    clock: deps.clock,
+    // The Stripe side follows in a job; without a queue (API-only tests) the scheduled sweep or a test pushes it.
+    onChanged: async (subscriptionId) => {
+      if (deps.queue) await sendJob(deps.queue, subscriptionStripeSyncJob, { subscriptionId });
+    },
+  });
+  api.use('/checkout', subscriptionCheckoutRoutes(subscriptionsService));
   api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));
   // Before the subscriptions router, so /subscriptions/preview is never read as a subscription id.
   api.use('/subscriptions', subscriptionPreviewRoutes(createSubscriptionPreviewService({ repo: createSubscriptionPreviewRepo(database.db), clock: deps.clock })));
+  api.use('/subscriptions', subscriptionsRoutes(subscriptionsService));
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
     api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));

@@ -11,13 +11,14 @@ import { startRelayRunner, type RelayRunner } from './outbox-relay';
 import type { Queue } from './queue';
 import { workJobs, type JobDefinition } from './registry';
 import { renewalRemindersJob } from './renewal-reminders';
+import { subscriptionStripeSyncJob } from './subscription-stripe-sync';
 
 /**
  * Every background job Restday runs on pg-boss. Later features add theirs here (defineJob in
  * ./registry). The outbox relay is not among them: it runs beside them (see startWorkers).
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const jobs: JobDefinition<any>[] = [renewalRemindersJob];
+export const jobs: JobDefinition<any>[] = [renewalRemindersJob, subscriptionStripeSyncJob];
 
 export interface WorkerDeps {
   config: Config;

@@ -1,6 +1,6 @@
 // Who may call each API route. tests/api/access-control.test.ts reads the app's own route list and
 // fails for any route missing here (and for any rule naming no route): add a row with every new route.
-import { addresses, orders } from '../../server/db/schema/index';
+import { addresses, orders, subscriptions } from '../../server/db/schema/index';
 import { getTestDb } from '../setup/test-db';
 import type { TestUser } from '../setup/test-users';
 
@@ -58,6 +58,24 @@ async function orderOf(owner: TestUser) {
   return { id: row!.id };
 }
 
+/** An active Roaster's Rotation subscription whose deliveries start in 2031 (nothing about it is locked). */
+async function subscriptionOf(owner: TestUser) {
+  const [row] = await getTestDb()
+    .insert(subscriptions)
+    .values({
+      userId: owner.id,
+      status: 'active',
+      roastLevel: 'medium',
+      bagSize: '12oz',
+      cadenceWeeks: 2,
+      priceCents: 3200,
+      anchorDate: '2031-01-07',
+      shippingAddress: { name: owner.name, line1: '7 Invented Lane', city: 'Larch Bend', region: 'MT', postalCode: '59701', country: 'US' },
+    })
+    .returning({ id: subscriptions.id });
+  return { id: row!.id };
+}
+
 export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/health', access: 'public' },
   { method: 'POST', path: '/api/payments/webhook', access: 'signed-request' },
@@ -105,6 +123,15 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
 
   { method: 'GET', path: '/api/subscriptions/preview', access: 'public' },
+  { method: 'POST', path: '/api/checkout/subscription', access: 'signed-in' },
+  { method: 'GET', path: '/api/subscriptions', access: 'signed-in' },
+  { method: 'GET', path: '/api/subscriptions/:id', access: 'own-record', record: subscriptionOf },
+  { method: 'GET', path: '/api/subscriptions/:id/deliveries', access: 'own-record', record: subscriptionOf },
+  { method: 'PATCH', path: '/api/subscriptions/:id', access: 'own-record', record: subscriptionOf, body: { grind: 'pour-over' } },
+  { method: 'POST', path: '/api/subscriptions/:id/skip', access: 'own-record', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/pause', access: 'own-record', record: subscriptionOf, body: { until: '2031-03-03' } },
+  { method: 'POST', path: '/api/subscriptions/:id/resume', access: 'own-record', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/cancel', access: 'own-record', record: subscriptionOf },
   { method: 'GET', path: '/api/roastery/subscribers', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers.csv', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },

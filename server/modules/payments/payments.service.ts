@@ -118,7 +118,7 @@ export function createPaymentsService({ repo, gateway, config }: PaymentsService
     /** A Checkout Session (`mode: subscription`, a weekly recurring price) for a subscription not started yet. */
     async createCheckoutForSubscription(
       subscriptionId: string,
-      paths: ReturnPaths = { successPath: `/account?checkout=complete&subscription=${subscriptionId}`, cancelPath: '/subscribe?checkout=cancelled' },
+      paths: ReturnPaths = { successPath: `/subscriptions/${subscriptionId}?checkout=complete`, cancelPath: '/subscribe?checkout=cancelled' },
     ): Promise<CheckoutStarted> {
       const subscription = await repo.findSubscription(subscriptionId);
       if (!subscription) throw AppError.notFound('Subscription');

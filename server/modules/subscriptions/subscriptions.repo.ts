@@ -1,11 +1,11 @@
-import { and, asc, desc, eq, gte, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, inArray, sql } from 'drizzle-orm';
 import type { DeliveryChoice, KeptDelivery, PlannedDelivery } from '@shared/domain/delivery-plan';
 import type { CalendarOverride, RoastCalendar, RoastDates } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
 import { roastersRotationName, type DeliveryStatus, type RoastedBagSize, type RoastLevel, type SubscriptionStatus } from '@shared/domain/vocabulary';
 import type { Db, DbOrTx, Tx } from '../../db/client';
 import type { AddressSnapshot } from '../../db/schema/common';
-import { deliveries, lots, orderItems, orders, roastDays, subscriptions, users } from '../../db/schema/index';
+import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions, users } from '../../db/schema/index';
 import { loadShopSettings } from '../settings/settings.repo';
 
 /** A subscription with what Deliveries and the e-mails need around it. */
@@ -186,6 +186,24 @@ export function createSubscriptionsRepo(db: Db) {
         .returning({ id: subscriptions.id });
       if (!row) throw new Error('inserting a subscription returned no row');
       return row.id;
+    },
+
+    async lotLevels(lotId: string) {
+      const [lot] = await db.select({ allowedLevels: lots.allowedLevels }).from(lots).where(eq(lots.id, lotId));
+      return lot?.allowedLevels;
+    },
+
+    /** The Roaster's Rotation lots staff have picked for these roast days. */
+    async rotationPicks(roastDates: readonly IsoDate[]) {
+      const picks = new Map<IsoDate, { code: string; name: string }>();
+      if (roastDates.length === 0) return picks;
+      const rows = await db
+        .select({ roastDate: rotationPicks.roastDate, code: lots.code, name: lots.name })
+        .from(rotationPicks)
+        .innerJoin(lots, eq(lots.id, rotationPicks.lotId))
+        .where(inArray(rotationPicks.roastDate, [...roastDates]));
+      for (const row of rows) picks.set(row.roastDate, { code: row.code, name: row.name });
+      return picks;
     },
 
     async cancelIncomplete(subscriptionId: string, at: Date) {

@@ -1,0 +1,77 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import {
+  subscriptionCheckoutRequestSchema,
+  subscriptionDeliveriesQuerySchema,
+  subscriptionPauseSchema,
+  subscriptionSkipSchema,
+  subscriptionUpdateSchema,
+  type Subscription,
+  type SubscriptionCheckoutResponse,
+  type SubscriptionDeliveriesResponse,
+  type SubscriptionListResponse,
+} from '@shared/schemas/subscriptions';
+import { requireUser } from '../../middleware/require-role';
+import type { SubscriptionsService } from './subscriptions.service';
+
+const subscriptionParams = z.object({ id: z.uuid('No such subscription.') });
+
+/** `/api/subscriptions`: a subscriber's own subscriptions and their deliveries (someone else's answers 404). */
+export function subscriptionsRoutes(service: SubscriptionsService): Router {
+  const router = Router();
+  router.use(requireUser);
+
+  router.get('/', async (req, res) => {
+    res.json({ items: await service.list(req.user!) } satisfies SubscriptionListResponse);
+  });
+
+  router.get('/:id', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    res.json((await service.get(req.user!, id)) satisfies Subscription);
+  });
+
+  router.get('/:id/deliveries', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    const { count } = subscriptionDeliveriesQuerySchema.parse(req.query);
+    res.json({ items: await service.deliveries(req.user!, id, count) } satisfies SubscriptionDeliveriesResponse);
+  });
+
+  router.patch('/:id', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    res.json((await service.update(req.user!, id, subscriptionUpdateSchema.parse(req.body))) satisfies Subscription);
+  });
+
+  router.post('/:id/skip', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    const { roastDate } = subscriptionSkipSchema.parse(req.body ?? {});
+    res.json((await service.skip(req.user!, id, roastDate)) satisfies Subscription);
+  });
+
+  router.post('/:id/pause', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    const { until } = subscriptionPauseSchema.parse(req.body);
+    res.json((await service.pause(req.user!, id, until)) satisfies Subscription);
+  });
+
+  router.post('/:id/resume', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    res.json((await service.resume(req.user!, id)) satisfies Subscription);
+  });
+
+  router.post('/:id/cancel', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    res.json((await service.cancel(req.user!, id)) satisfies Subscription);
+  });
+
+  return router;
+}
+
+/** `POST /api/checkout/subscription`: Roasted to Order's checkout, for signed-in accounts. */
+export function subscriptionCheckoutRoutes(service: SubscriptionsService): Router {
+  const router = Router();
+  router.post('/subscription', requireUser, async (req, res) => {
+    const started = await service.startCheckout(req.user!, subscriptionCheckoutRequestSchema.parse(req.body));
+    res.status(201).json(started satisfies SubscriptionCheckoutResponse);
+  });
+  return router;
+}

@@ -1,0 +1,366 @@
+import { nextDelivery, planDeliveries, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
+import { quoteSubscriptionDelivery } from '@shared/domain/pricing';
+import { datesForRoastDate, type RoastCalendar, type ScheduleSettings } from '@shared/domain/roast-schedule';
+import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
+import { grindLabels, roastLevelLabels, type RoastLevel } from '@shared/domain/vocabulary';
+import type {
+  Subscription,
+  SubscriptionCheckoutRequest,
+  SubscriptionCheckoutResponse,
+  SubscriptionDelivery,
+  SubscriptionUpdate,
+} from '@shared/schemas/subscriptions';
+import type { ShopSettings } from '@shared/schemas/settings';
+import type { Tx } from '../../db/client';
+import type { AddressSnapshot } from '../../db/schema/common';
+import { AppError } from '../../lib/app-error';
+import type { Clock } from '../../lib/clock';
+import type { SessionUser } from '../../middleware/require-role';
+import { queueEmail } from '../outbox/outbox.repo';
+import type { PaymentsService } from '../payments/payments.service';
+import {
+  changeSubscription,
+  choiceOf,
+  keepDelivery,
+  keptDeliveries,
+  loadScheduleContext,
+  lockSubscription,
+  moveOrderToDelivery,
+  reshapePaidOrder,
+  type SubscriptionFieldsChange,
+  type SubscriptionRecord,
+  type SubscriptionsRepo,
+} from './subscriptions.repo';
+
+export interface SubscriptionsServiceDeps {
+  repo: SubscriptionsRepo;
+  payments: Pick<PaymentsService, 'createCheckoutForSubscription'>;
+  clock: Clock;
+  /** Called after a change commits: hands the subscription to the Stripe sync (a queued job). */
+  onChanged?: (subscriptionId: string) => Promise<void>;
+}
+
+/** Deliveries a change looks over: enough to find the next unlocked one past skips. */
+const planLength = 26;
+/** The longest pause a subscriber can set themselves. */
+const maxPauseDays = 366;
+
+const sameAddress = (a: AddressSnapshot, b: AddressSnapshot) =>
+  a.name === b.name && a.line1 === b.line1 && (a.line2 ?? null) === (b.line2 ?? null) && a.city === b.city && a.region === b.region && a.postalCode === b.postalCode && a.country === b.country;
+
+function levelOffered(level: RoastLevel, allowed: readonly RoastLevel[] | null) {
+  return allowed === null || allowed.includes(level);
+}
+
+const levelNotOffered = (level: RoastLevel, allowed: readonly RoastLevel[]) =>
+  new AppError(422, 'roast_level_not_offered', `This coffee is not roasted ${roastLevelLabels[level].toLowerCase()}.`, {
+    roastLevel: `Choose one of: ${allowed.map((each) => roastLevelLabels[each].toLowerCase()).join(', ')}.`,
+  });
+
+/** Price of one delivery: roasted bags less the subscription discount, plus shipping (the trade engine's quote). */
+function deliveryPrice(lotCode: string | null, choice: Pick<DeliveryChoice, 'bagSize' | 'bagsPerDelivery'>, settings: ShopSettings) {
+  return quoteSubscriptionDelivery({ lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings).totalCents;
+}
+
+function planOf(subscription: SubscriptionRecord, kept: Awaited<ReturnType<typeof keptDeliveries>>, settings: ScheduleSettings, calendar: RoastCalendar, now: Date, count: number) {
+  return planDeliveries(
+    {
+      status: subscription.status,
+      anchorDate: subscription.anchorDate ?? kept[0]?.nominalDate ?? null,
+      cadenceWeeks: subscription.cadenceWeeks,
+      pausedUntil: subscription.pausedUntil,
+      cancelAtPeriodEnd: subscription.cancelAtPeriodEnd,
+      choice: choiceOf(subscription),
+    },
+    kept,
+    settings,
+    calendar,
+    now,
+    count,
+  );
+}
+
+function toApiDelivery(delivery: PlannedDelivery, subscription: SubscriptionRecord, picks: ReadonlyMap<IsoDate, { code: string; name: string }>): SubscriptionDelivery {
+  const pick = subscription.lotCode ? { code: subscription.lotCode, name: subscription.coffee } : picks.get(delivery.roastDate);
+  return {
+    roastDate: delivery.roastDate,
+    shipDate: delivery.shipDate,
+    readyFrom: delivery.readyFrom,
+    bestBefore: delivery.bestBefore,
+    status: delivery.status,
+    locked: delivery.locked,
+    cutoffAt: delivery.cutoffAt,
+    lotCode: pick?.code ?? null,
+    coffee: pick?.name ?? null,
+    ...delivery.choice,
+    orderId: delivery.orderId,
+  };
+}
+
+const describeChoice = {
+  roastLevel: (value: RoastLevel) => `Roast level: ${roastLevelLabels[value]}`,
+  grind: (value: DeliveryChoice['grind']) => `Grind: ${grindLabels[value]}`,
+  brewMethod: (value: DeliveryChoice['brewMethod']) => `Brew method: ${value === 'espresso' ? 'Espresso' : 'Filter'}`,
+  bagSize: (value: DeliveryChoice['bagSize']) => `Bag size: ${value}`,
+  bagsPerDelivery: (value: number) => `Bags per delivery: ${value}`,
+  cadenceWeeks: (value: number) => `Every ${value === 1 ? 'week' : `${value} weeks`}`,
+};
+
+type ChangeKind = 'changed' | 'skipped' | 'paused' | 'resumed' | 'cancelled';
+
+interface ChangeContext {
+  tx: Tx;
+  subscription: SubscriptionRecord;
+  plan: PlannedDelivery[];
+  settings: ShopSettings;
+  calendar: RoastCalendar;
+  today: IsoDate;
+  now: Date;
+}
+
+/** What a change wants: the subscription's new fields and the e-mail's lines, or nothing (it is already so). */
+type ChangeOutcome = { fields: SubscriptionFieldsChange; summary: string[] } | 'unchanged';
+
+export function createSubscriptionsService({ repo, payments, clock, onChanged }: SubscriptionsServiceDeps) {
+  async function present(subscription: SubscriptionRecord, count = 1): Promise<{ subscription: Subscription; plan: SubscriptionDelivery[] }> {
+    const now = clock.now();
+    const { settings, calendar } = await repo.scheduleContext(now);
+    const kept = await repo.keptDeliveries(subscription.id);
+    const plan = planOf(subscription, kept, settings, calendar, now, count);
+    const picks = subscription.lotCode ? new Map() : await repo.rotationPicks(plan.map((delivery) => delivery.roastDate));
+    const next = nextDelivery(plan);
+    const apiPlan = plan.map((delivery) => toApiDelivery(delivery, subscription, picks));
+    return {
+      plan: apiPlan,
+      subscription: {
+        id: subscription.id,
+        status: subscription.status,
+        lotCode: subscription.lotCode,
+        coffee: subscription.coffee,
+        ...choiceOf(subscription),
+        cadenceWeeks: subscription.cadenceWeeks,
+        pausedUntil: subscription.pausedUntil,
+        cancelAtPeriodEnd: subscription.cancelAtPeriodEnd,
+        endsOn: subscription.cancelAtPeriodEnd && subscription.currentPeriodEnd ? localDateOf(subscription.currentPeriodEnd, settings.timeZone) : null,
+        priceCents: subscription.priceCents,
+        currency: subscription.currency,
+        shippingAddress: { ...subscription.shippingAddress, line2: subscription.shippingAddress.line2 ?? null },
+        nextDelivery: next ? toApiDelivery(next, subscription, picks) : null,
+        createdAt: subscription.createdAt.toISOString(),
+      },
+    };
+  }
+
+  async function own(user: SessionUser, subscriptionId: string) {
+    const subscription = await repo.findOwn(subscriptionId, user.id);
+    if (!subscription) throw AppError.notFound('Subscription');
+    return subscription;
+  }
+
+  /** Deliveries past their cutoff keep what they bring from now on: a change must never reach them. */
+  async function freezeLocked({ tx, subscription, plan }: ChangeContext) {
+    for (const delivery of plan) {
+      if (!delivery.locked || delivery.frozen || delivery.status === 'skipped') continue;
+      await keepDelivery(tx, subscription.id, delivery, { status: delivery.status, dates: delivery, choice: delivery.choice });
+    }
+  }
+
+  /**
+   * One self-service change, in one transaction with its e-mail: lock the subscription, freeze the
+   * locked deliveries, apply, bump the change version (the Stripe sync's idempotency), queue the
+   * e-mail. A change that is already so changes nothing and sends nothing.
+   */
+  async function change(user: SessionUser, subscriptionId: string, kind: ChangeKind, decide: (context: ChangeContext) => Promise<ChangeOutcome>): Promise<Subscription> {
+    await own(user, subscriptionId);
+    const now = clock.now();
+    const changed = await repo.transaction(async (tx) => {
+      const subscription = await lockSubscription(tx, subscriptionId);
+      if (!subscription || subscription.userId !== user.id) throw AppError.notFound('Subscription');
+      if (subscription.status === 'cancelled') throw AppError.conflict('subscription_ended', 'This subscription has ended; start a new one to receive coffee again.');
+      if (subscription.status === 'incomplete') throw AppError.conflict('subscription_not_started', 'This subscription starts once its first payment goes through.');
+      const { settings, calendar, today } = await loadScheduleContext(tx, now);
+      const plan = planOf(subscription, await keptDeliveries(tx, subscriptionId), settings, calendar, now, planLength);
+      const context: ChangeContext = { tx, subscription, plan, settings, calendar, today, now };
+      await freezeLocked(context);
+      const outcome = await decide(context);
+      if (outcome === 'unchanged') return false;
+      const version = await changeSubscription(tx, subscriptionId, outcome.fields);
+
+      const after = (await lockSubscription(tx, subscriptionId))!;
+      const afterPlan = planOf(after, await keptDeliveries(tx, subscriptionId), settings, calendar, now, planLength);
+      const next = nextDelivery(afterPlan);
+      await queueEmail(tx, {
+        template: 'subscription-changed',
+        to: after.customerEmail,
+        dedupeKey: `subscription-changed:${subscriptionId}:${version}`,
+        payload: {
+          name: after.customerName,
+          subscriptionId,
+          coffee: after.coffee,
+          change: kind,
+          summary: outcome.summary,
+          ...(next ? { nextDelivery: { roastDate: next.roastDate, shipDate: next.shipDate, readyFrom: next.readyFrom } } : {}),
+          ...(kind === 'paused' && after.pausedUntil ? { pausedUntil: after.pausedUntil } : {}),
+          ...(kind === 'cancelled' && after.currentPeriodEnd ? { endsOn: localDateOf(after.currentPeriodEnd, settings.timeZone) } : {}),
+        },
+      });
+      return true;
+    });
+    if (changed) await onChanged?.(subscriptionId);
+    return (await present(await own(user, subscriptionId))).subscription;
+  }
+
+  return {
+    /**
+     * Roasted to Order: checks the coffee and level, prices one delivery with the trade engine,
+     * creates the subscription (incomplete until paid) and opens Stripe's subscription checkout.
+     */
+    async startCheckout(user: SessionUser, request: SubscriptionCheckoutRequest): Promise<SubscriptionCheckoutResponse> {
+      const lot = request.lotCode === null ? null : await repo.lotForSubscription(request.lotCode);
+      if (request.lotCode !== null && !lot) {
+        throw AppError.badRequest('That coffee is not offered.', { lotCode: `There is no lot ${request.lotCode} to subscribe to.` });
+      }
+      if (lot && !levelOffered(request.roastLevel, lot.allowedLevels)) throw levelNotOffered(request.roastLevel, lot.allowedLevels);
+      const { settings } = await repo.scheduleContext(clock.now());
+      const choice: DeliveryChoice = {
+        roastLevel: request.roastLevel,
+        bagSize: request.bagSize,
+        bagsPerDelivery: request.bagsPerDelivery,
+        grind: request.grind,
+        brewMethod: request.brewMethod,
+      };
+      const subscriptionId = await repo.createSubscription({
+        userId: user.id,
+        lotId: lot?.id ?? null,
+        roastLevel: request.roastLevel,
+        choice,
+        cadenceWeeks: request.cadenceWeeks,
+        shippingAddress: request.shippingAddress,
+        priceCents: deliveryPrice(lot?.code ?? null, choice, settings),
+        currency: settings.currency,
+      });
+      try {
+        const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId);
+        return { subscriptionId, checkoutUrl };
+      } catch (error) {
+        await repo.cancelIncomplete(subscriptionId, clock.now());
+        throw error;
+      }
+    },
+
+    async list(user: SessionUser): Promise<Subscription[]> {
+      const rows = await repo.listOwn(user.id);
+      return Promise.all(rows.map(async (row) => (await present(row)).subscription));
+    },
+
+    async get(user: SessionUser, subscriptionId: string): Promise<Subscription> {
+      return (await present(await own(user, subscriptionId))).subscription;
+    },
+
+    async deliveries(user: SessionUser, subscriptionId: string, count: number): Promise<SubscriptionDelivery[]> {
+      return (await present(await own(user, subscriptionId), count)).plan;
+    },
+
+    update(user: SessionUser, subscriptionId: string, update: SubscriptionUpdate) {
+      return change(user, subscriptionId, 'changed', async ({ tx, subscription, plan, settings, calendar }) => {
+        const current = { ...choiceOf(subscription), cadenceWeeks: subscription.cadenceWeeks };
+        const fields: SubscriptionFieldsChange = {};
+        const summary: string[] = [];
+        for (const key of ['roastLevel', 'grind', 'brewMethod', 'bagSize', 'bagsPerDelivery', 'cadenceWeeks'] as const) {
+          const value = update[key];
+          if (value === undefined || value === current[key]) continue;
+          Object.assign(fields, { [key]: value });
+          summary.push((describeChoice[key] as (value: unknown) => string)(value));
+        }
+        const addressChanged = update.shippingAddress !== undefined && !sameAddress(update.shippingAddress, subscription.shippingAddress);
+        if (addressChanged) {
+          fields.shippingAddress = update.shippingAddress;
+          summary.push(`Ship to: ${update.shippingAddress!.line1}, ${update.shippingAddress!.city}`);
+        }
+        if (summary.length === 0) return 'unchanged';
+        if (fields.roastLevel && subscription.lotId) {
+          const allowed = await repo.lotLevels(subscription.lotId);
+          if (allowed && !levelOffered(fields.roastLevel, allowed)) throw levelNotOffered(fields.roastLevel, allowed);
+        }
+        const choice: DeliveryChoice = { ...choiceOf(subscription), ...fields } as DeliveryChoice;
+        if (fields.bagSize || fields.bagsPerDelivery) fields.priceCents = deliveryPrice(subscription.lotCode, choice, settings);
+
+        // A new cadence starts its grid at the first delivery that is not locked.
+        if (fields.cadenceWeeks) {
+          const firstOpen = plan.find((delivery) => !delivery.locked);
+          if (firstOpen) fields.anchorDate = firstOpen.nominalDate;
+        }
+        // Paid deliveries whose cutoff is ahead take what does not change their price.
+        const shippingAddress = fields.shippingAddress ?? subscription.shippingAddress;
+        for (const delivery of plan) {
+          if (delivery.locked || !delivery.orderId || delivery.status !== 'scheduled') continue;
+          const reshaped: DeliveryChoice = { ...delivery.choice, roastLevel: choice.roastLevel, grind: choice.grind, brewMethod: choice.brewMethod };
+          const dates = datesForRoastDate(delivery.roastDate, reshaped, settings, calendar);
+          await keepDelivery(tx, subscription.id, delivery, { status: 'scheduled', dates, choice: reshaped });
+          await reshapePaidOrder(tx, delivery.orderId, { choice: reshaped, dates, shippingAddress });
+        }
+        return { fields, summary };
+      });
+    },
+
+    skip(user: SessionUser, subscriptionId: string, roastDate: IsoDate | undefined) {
+      return change(user, subscriptionId, 'skipped', async ({ tx, subscription, plan, settings, calendar }) => {
+        const target = roastDate
+          ? plan.find((delivery) => delivery.roastDate === roastDate)
+          : plan.find((delivery) => !delivery.locked && (delivery.status === 'scheduled' || delivery.status === 'skipped'));
+        if (!target) {
+          throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', { roastDate: 'Choose the roast date of an upcoming delivery.' });
+        }
+        if (target.locked) {
+          throw AppError.conflict('delivery_locked', `The delivery roasting on ${target.roastDate} is past its cutoff and can no longer be skipped.`);
+        }
+        if (target.status === 'skipped') return 'unchanged';
+        if (target.status === 'held') throw AppError.conflict('delivery_held', 'This delivery is waiting for its payment; update your card instead of skipping it.');
+        if (target.status !== 'scheduled') throw AppError.conflict('delivery_locked', 'This delivery is already roasted.');
+
+        await keepDelivery(tx, subscription.id, target, { status: 'skipped', dates: target, choice: null, orderId: null, chargeDeferred: false });
+        // Already paid: the payment carries over to the next delivery, and Stripe's next charge moves one cadence on.
+        if (target.orderId) {
+          const following = plan.find((delivery) => delivery.roastDate > target.roastDate && delivery.status === 'scheduled' && !delivery.orderId);
+          if (!following) throw AppError.conflict('delivery_locked', 'There is no later delivery to carry this payment to.');
+          const dates = datesForRoastDate(following.roastDate, target.choice, settings, calendar);
+          const deliveryId = await keepDelivery(tx, subscription.id, following, { status: 'scheduled', dates, choice: target.choice, orderId: target.orderId });
+          await moveOrderToDelivery(tx, target.orderId, deliveryId, dates);
+        }
+        return { fields: {}, summary: [`Skipped: the delivery roasting on ${target.roastDate}`] };
+      });
+    },
+
+    pause(user: SessionUser, subscriptionId: string, until: IsoDate) {
+      return change(user, subscriptionId, 'paused', async ({ subscription, today }) => {
+        if (until <= today) throw AppError.badRequest('Choose a day after today.', { until: 'Choose a day after today.' });
+        if (until > addDays(today, maxPauseDays)) throw AppError.badRequest('Pause for at most a year.', { until: `Choose a day within ${maxPauseDays} days.` });
+        if (subscription.pausedUntil === until) return 'unchanged';
+        return {
+          fields: { pausedUntil: until, status: subscription.status === 'active' ? 'paused' : subscription.status },
+          summary: [`Paused until ${until}`],
+        };
+      });
+    },
+
+    resume(user: SessionUser, subscriptionId: string) {
+      return change(user, subscriptionId, 'resumed', async ({ subscription, today }) => {
+        const paused = subscription.pausedUntil !== null && subscription.pausedUntil > today;
+        if (!paused && !subscription.cancelAtPeriodEnd) return 'unchanged';
+        return {
+          fields: { pausedUntil: null, cancelAtPeriodEnd: false, status: subscription.status === 'paused' ? 'active' : subscription.status },
+          summary: [subscription.cancelAtPeriodEnd && !paused ? 'Cancellation withdrawn' : 'Deliveries resume'],
+        };
+      });
+    },
+
+    cancel(user: SessionUser, subscriptionId: string) {
+      return change(user, subscriptionId, 'cancelled', async ({ subscription }) => {
+        if (subscription.cancelAtPeriodEnd) return 'unchanged';
+        return { fields: { cancelAtPeriodEnd: true }, summary: ['Cancelled at the end of the paid period'] };
+      });
+    },
+  };
+}
+
+export type SubscriptionsService = ReturnType<typeof createSubscriptionsService>;
