@@ -51,6 +51,7 @@ export interface InventedSubscription {
   cadenceWeeks?: number;
   priceCents?: number;
   pausedUntil?: string | null;
+  anchorDate?: string | null;
   currentPeriodEnd?: Date | null;
   cancelledAt?: Date | null;
   createdAt?: Date;
@@ -72,6 +73,7 @@ export async function inventSubscription(owner: TestUser, fields: InventedSubscr
       cadenceWeeks: fields.cadenceWeeks ?? 2,
       priceCents: fields.priceCents ?? 2315,
       pausedUntil: fields.pausedUntil ?? null,
+      anchorDate: fields.anchorDate ?? null,
       currentPeriodEnd: fields.currentPeriodEnd ?? null,
       cancelledAt: fields.cancelledAt ?? null,
       shippingAddress: { ...shipTo, line2: null, country: 'US' },

@@ -1,11 +1,8 @@
-import { and, between, eq, inArray, isNull, sql } from 'drizzle-orm';
-import type { RoastedBagSize, RoastLevel } from '@shared/domain/vocabulary';
+import { and, asc, between, eq, gte, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions } from '../../db/schema/index';
 import { loadShopSettings } from '../settings/settings.repo';
 
-/** Deliveries that roast on their day: not skipped, and not held for an unpaid renewal. */
-const roastingDeliveryStatuses = ['scheduled', 'roasted', 'shipped'] as const;
 /** Orders whose coffee has been roasted already. */
 const roastedOrderStatuses = ['roasted', 'packed', 'shipped'] as const;
 
@@ -15,11 +12,12 @@ export function createRotationRepo(db: Db) {
       return (await loadShopSettings(db)).settings;
     },
 
-    async calendarOverrides(from: string, to: string) {
+    /** Roast Calendar overrides from `from` on (a delivery's search for an open day runs past any range). */
+    async calendarOverrides(from: string) {
       return db
         .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
         .from(roastDays)
-        .where(between(roastDays.date, from, to));
+        .where(gte(roastDays.date, from));
     },
 
     async picks(from: string, to: string) {
@@ -30,34 +28,53 @@ export function createRotationRepo(db: Db) {
         .where(between(rotationPicks.roastDate, from, to));
     },
 
-    /**
-     * Each delivery of an active Roaster's Rotation subscription roasting between the days: what it
-     * brings (frozen on the delivery once its cutoff passed, else the subscription's current choice),
-     * and the bags its order holds once paid.
-     */
-    async rotationDeliveries(from: string, to: string) {
+    /** Roaster's Rotation subscriptions that roast now or after a pause, with what they bring. */
+    async rotationSubscriptions() {
       return db
         .select({
-          roastDate: deliveries.roastDate,
+          id: subscriptions.id,
+          status: subscriptions.status,
+          anchorDate: subscriptions.anchorDate,
+          cadenceWeeks: subscriptions.cadenceWeeks,
+          pausedUntil: subscriptions.pausedUntil,
+          cancelAtPeriodEnd: subscriptions.cancelAtPeriodEnd,
+          roastLevel: subscriptions.roastLevel,
+          bagSize: subscriptions.bagSize,
+          bagsPerDelivery: subscriptions.bagsPerDelivery,
+          grind: subscriptions.grind,
+          brewMethod: subscriptions.brewMethod,
+        })
+        .from(subscriptions)
+        .where(and(isNull(subscriptions.lotId), inArray(subscriptions.status, ['active', 'paused'])));
+    },
+
+    /** The kept delivery rows of those subscriptions, with the bags and roasted grams each one's order holds once paid. */
+    async keptDeliveries(subscriptionIds: string[]) {
+      if (subscriptionIds.length === 0) return [];
+      return db
+        .select({
+          id: deliveries.id,
           subscriptionId: deliveries.subscriptionId,
-          roastLevel: sql<RoastLevel>`coalesce(${deliveries.roastLevel}, ${subscriptions.roastLevel})`,
-          bagSize: sql<RoastedBagSize>`coalesce(${deliveries.bagSize}, ${subscriptions.bagSize})`,
-          bagsPerDelivery: sql<number>`coalesce(${deliveries.bagsPerDelivery}, ${subscriptions.bagsPerDelivery})`,
+          nominalDate: deliveries.nominalDate,
+          roastDate: deliveries.roastDate,
+          shipDate: deliveries.shipDate,
+          readyFrom: deliveries.readyFrom,
+          bestBefore: deliveries.bestBefore,
+          status: deliveries.status,
+          orderId: deliveries.orderId,
+          roastLevel: deliveries.roastLevel,
+          bagSize: deliveries.bagSize,
+          bagsPerDelivery: deliveries.bagsPerDelivery,
+          grind: deliveries.grind,
+          brewMethod: deliveries.brewMethod,
           orderBags: sql<number | null>`sum(${orderItems.quantity})::int`,
           orderGrams: sql<number | null>`sum(${orderItems.quantity} * ${orderItems.fillGrams})::int`,
         })
         .from(deliveries)
-        .innerJoin(subscriptions, eq(subscriptions.id, deliveries.subscriptionId))
         .leftJoin(orderItems, eq(orderItems.orderId, deliveries.orderId))
-        .where(
-          and(
-            between(deliveries.roastDate, from, to),
-            inArray(deliveries.status, [...roastingDeliveryStatuses]),
-            isNull(subscriptions.lotId),
-            eq(subscriptions.status, 'active'),
-          ),
-        )
-        .groupBy(deliveries.id, subscriptions.id);
+        .where(inArray(deliveries.subscriptionId, subscriptionIds))
+        .groupBy(deliveries.id)
+        .orderBy(asc(deliveries.roastDate));
     },
 
     async findLot(code: string) {

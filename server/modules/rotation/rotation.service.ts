@@ -1,6 +1,8 @@
 import { greenNeededForRoasted } from '@shared/domain/roast-loss';
-import { isOpenRoastDay, roastCalendarDays, type CalendarOverride, type RoastCalendar } from '@shared/domain/roast-schedule';
-import { localDateOf } from '@shared/domain/shop-time';
+import { planDeliveries, type DeliveryChoice, type KeptDelivery } from '@shared/domain/delivery-plan';
+import { isOpenRoastDay, roastCalendarDays, SEARCH_HORIZON_DAYS, type CalendarOverride, type RoastCalendar } from '@shared/domain/roast-schedule';
+import { addDays, daysBetween, localDateOf } from '@shared/domain/shop-time';
+import type { DeliveryStatus, RoastedBagSize, RoastLevel } from '@shared/domain/vocabulary';
 import { bagFillGrams } from '@shared/domain/units';
 import type { RotationPick, RotationPickResponse, RotationQuery, RotationResponse } from '@shared/schemas/rotation';
 import { AppError } from '../../lib/app-error';
@@ -16,25 +18,85 @@ interface DayNeed {
   greenGrams: number;
 }
 
+/** A grid delivery's roast date can be moved by closures up to the engine's search horizon, so look back that far. */
+const lookBackDays = SEARCH_HORIZON_DAYS;
+const earliest = (a: string, b: string) => (a < b ? a : b);
+
+/** Kept rows that roast on their day: not skipped, and not held for an unpaid renewal. */
+const roastingStatuses: ReadonlySet<DeliveryStatus> = new Set(['scheduled', 'roasted', 'shipped']);
+
+type Settings = Awaited<ReturnType<RotationRepo['shopSettings']>>;
+
+/** Subscriptions sell roasted sizes only (a CHECK constraint keeps it so). */
+const roastedSize = (size: string) => size as RoastedBagSize;
+
 export function createRotationService({ repo, clock, audit }: { repo: RotationRepo; clock: Clock; audit: AuditTrail }) {
-  async function calendarBetween(from: string, to: string): Promise<RoastCalendar> {
+  async function calendarFrom(from: string): Promise<RoastCalendar> {
     const overrides: Record<string, CalendarOverride> = {};
-    for (const row of await repo.calendarOverrides(from, to)) overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
+    for (const row of await repo.calendarOverrides(from)) overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
     return { overrides };
   }
 
-  /** What the rotation subscribers need each day: bags and roasted grams, and green grams by each level's default loss. */
-  async function needsBetween(from: string, to: string, settings: Awaited<ReturnType<RotationRepo['shopSettings']>>) {
+  /**
+   * What the rotation subscribers need each roast day between the two days: their kept delivery
+   * rows (a paid one counts its order's bags, a frozen one what it froze), and the deliveries only
+   * the schedule grid knows yet (the subscription's current choice), as Deliveries shows them.
+   */
+  async function needsBetween(from: string, to: string, settings: Settings, calendar: RoastCalendar, now: Date) {
+    const today = localDateOf(now, settings.timeZone);
+    const subscriptions = await repo.rotationSubscriptions();
+    const keptRows = await repo.keptDeliveries(subscriptions.map((subscription) => subscription.id));
     const needs = new Map<string, DayNeed>();
-    for (const row of await repo.rotationDeliveries(from, to)) {
-      const need = needs.get(row.roastDate) ?? { subscribers: new Set<string>(), bags: 0, roastedGrams: 0, greenGrams: 0 };
-      const bags = row.orderBags ?? row.bagsPerDelivery;
-      const roastedGrams = row.orderGrams ?? row.bagsPerDelivery * bagFillGrams(row.bagSize);
-      need.subscribers.add(row.subscriptionId);
+    const add = (roastDate: string, subscriptionId: string, level: RoastLevel, bags: number, roastedGrams: number) => {
+      const need = needs.get(roastDate) ?? { subscribers: new Set<string>(), bags: 0, roastedGrams: 0, greenGrams: 0 };
+      need.subscribers.add(subscriptionId);
       need.bags += bags;
       need.roastedGrams += roastedGrams;
-      need.greenGrams += greenNeededForRoasted(roastedGrams, settings.lossModel[row.roastLevel].defaultPct, settings.overagePct);
-      needs.set(row.roastDate, need);
+      need.greenGrams += greenNeededForRoasted(roastedGrams, settings.lossModel[level].defaultPct, settings.overagePct);
+      needs.set(roastDate, need);
+    };
+    const inRange = (date: string) => date >= from && date <= to;
+
+    for (const subscription of subscriptions) {
+      const choice: DeliveryChoice = {
+        roastLevel: subscription.roastLevel,
+        bagSize: roastedSize(subscription.bagSize),
+        bagsPerDelivery: subscription.bagsPerDelivery,
+        grind: subscription.grind,
+        brewMethod: subscription.brewMethod,
+      };
+      const rows = keptRows.filter((row) => row.subscriptionId === subscription.id);
+      const kept: KeptDelivery[] = rows.map((row) => ({
+        ...row,
+        nominalDate: row.nominalDate ?? row.roastDate,
+        choice:
+          row.roastLevel && row.bagSize && row.bagsPerDelivery && row.grind && row.brewMethod
+            ? { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod }
+            : null,
+      }));
+      const pausedOn = (date: string) => subscription.pausedUntil !== null && date < subscription.pausedUntil;
+      for (const [index, row] of rows.entries()) {
+        if (!inRange(row.roastDate) || !roastingStatuses.has(row.status)) continue;
+        // A paid delivery roasts whatever happened since; an unpaid one not while the subscription is paused.
+        if (row.orderId === null && pausedOn(kept[index]!.nominalDate)) continue;
+        const brings = kept[index]!.choice ?? choice;
+        const bags = row.orderBags ?? brings.bagsPerDelivery;
+        add(row.roastDate, subscription.id, brings.roastLevel, bags, row.orderGrams ?? bags * bagFillGrams(brings.bagSize));
+      }
+      if (to < today) continue;
+      const gridLength = kept.length + Math.ceil(daysBetween(today, to) / (subscription.cadenceWeeks * 7)) + 2;
+      const plan = planDeliveries(
+        { ...subscription, anchorDate: subscription.anchorDate ?? kept[0]?.nominalDate ?? null, choice },
+        kept,
+        settings,
+        calendar,
+        now,
+        gridLength,
+      );
+      for (const delivery of plan) {
+        if (delivery.keptId !== null || !inRange(delivery.roastDate)) continue;
+        add(delivery.roastDate, subscription.id, choice.roastLevel, choice.bagsPerDelivery, choice.bagsPerDelivery * bagFillGrams(choice.bagSize));
+      }
     }
     return needs;
   }
@@ -43,11 +105,9 @@ export function createRotationService({ repo, clock, audit }: { repo: RotationRe
     /** Every open roast day between the two days, with its pick and what its rotation subscribers need. */
     async days(query: RotationQuery): Promise<RotationResponse> {
       const settings = await repo.shopSettings();
-      const [calendar, picks, needs] = await Promise.all([
-        calendarBetween(query.from, query.to),
-        repo.picks(query.from, query.to),
-        needsBetween(query.from, query.to, settings),
-      ]);
+      const now = clock.now();
+      const calendar = await calendarFrom(earliest(query.from, addDays(localDateOf(now, settings.timeZone), -lookBackDays)));
+      const [picks, needs] = await Promise.all([repo.picks(query.from, query.to), needsBetween(query.from, query.to, settings, calendar, now)]);
       const pickByDate = new Map(picks.map((pick) => [pick.roastDate, pick]));
       return {
         days: roastCalendarDays(query.from, query.to, settings, calendar)
@@ -75,8 +135,11 @@ export function createRotationService({ repo, clock, audit }: { repo: RotationRe
      */
     async pick(user: SessionUser, roastDate: string, input: RotationPick, context: { ip?: string | null }): Promise<RotationPickResponse> {
       const settings = await repo.shopSettings();
-      if (roastDate < localDateOf(clock.now(), settings.timeZone)) throw AppError.conflict('roast_day_past', 'That roast day is over.');
-      if (!isOpenRoastDay(roastDate, settings, await calendarBetween(roastDate, roastDate))) {
+      const now = clock.now();
+      const today = localDateOf(now, settings.timeZone);
+      if (roastDate < today) throw AppError.conflict('roast_day_past', 'That roast day is over.');
+      const calendar = await calendarFrom(addDays(today, -lookBackDays));
+      if (!isOpenRoastDay(roastDate, settings, calendar)) {
         throw AppError.conflict('not_a_roast_day', 'The roastery does not roast that day.');
       }
       if (await repo.rotationRoasted(roastDate)) {
@@ -87,7 +150,7 @@ export function createRotationService({ repo, clock, audit }: { repo: RotationRe
 
       const warnings: RotationPickResponse['warnings'] = [];
       if (!lot.isListed) warnings.push({ code: 'lot_not_listed', message: `${lot.name} is not listed in Green Lots.` });
-      const greenGrams = (await needsBetween(roastDate, roastDate, settings)).get(roastDate)?.greenGrams ?? 0;
+      const greenGrams = (await needsBetween(roastDate, roastDate, settings, calendar, now)).get(roastDate)?.greenGrams ?? 0;
       if (greenGrams > lot.stockGrams) {
         warnings.push({
           code: 'short_of_stock',
