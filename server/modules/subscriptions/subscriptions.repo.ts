@@ -45,6 +45,10 @@ function subscriptionSelect(db: DbOrTx) {
 
 export type SubscriptionRecord = NonNullable<Awaited<ReturnType<ReturnType<typeof subscriptionSelect>['execute']>>[number]>;
 
+type DeliveryDays = Pick<RoastDates, 'roastDate' | 'shipDate' | 'readyFrom' | 'bestBefore'>;
+/** Only the four day columns, whatever else the dates object carries. */
+const dayColumns = ({ roastDate, shipDate, readyFrom, bestBefore }: DeliveryDays): DeliveryDays => ({ roastDate, shipDate, readyFrom, bestBefore });
+
 /** Subscriptions sell roasted sizes only (a CHECK constraint keeps it so). */
 const roastedSize = (size: string) => size as RoastedBagSize;
 
@@ -112,7 +116,7 @@ export interface KeptChange {
 export async function keepDelivery(db: DbOrTx, subscriptionId: string, delivery: Pick<PlannedDelivery, 'nominalDate' | 'keptId'>, change: KeptChange) {
   const values = {
     status: change.status,
-    ...change.dates,
+    ...dayColumns(change.dates),
     ...(change.choice !== undefined
       ? {
           roastLevel: change.choice?.roastLevel ?? null,
@@ -311,13 +315,13 @@ export async function reshapePaidOrder(
     .where(eq(orderItems.orderId, orderId));
   await db
     .update(orders)
-    .set({ ...change.dates, shippingAddress: change.shippingAddress })
+    .set({ ...dayColumns(change.dates), shippingAddress: change.shippingAddress })
     .where(and(eq(orders.id, orderId), sql`${orders.status} in ('paid', 'held')`));
 }
 
 /** Moves a paid order to another delivery (a skipped one's payment covers the next). */
 export async function moveOrderToDelivery(db: DbOrTx, orderId: string, deliveryId: string, dates: Pick<RoastDates, 'roastDate' | 'shipDate' | 'readyFrom' | 'bestBefore'>) {
-  await db.update(orders).set({ deliveryId, ...dates }).where(eq(orders.id, orderId));
+  await db.update(orders).set({ deliveryId, ...dayColumns(dates) }).where(eq(orders.id, orderId));
 }
 
 export async function markSynced(db: DbOrTx, subscriptionId: string, version: number, deferredSkipIds: readonly string[]) {
@@ -366,7 +370,7 @@ export async function createDeliveryOrder(db: DbOrTx, order: NewDeliveryOrder): 
       totalCents: order.totalCents,
       currency: order.currency,
       shippingAddress: order.shippingAddress,
-      ...order.dates,
+      ...dayColumns(order.dates),
       stripeInvoiceId: order.stripeInvoiceId,
       stripePaymentIntentId: order.stripePaymentIntentId,
       paidAt: order.paidAt,
