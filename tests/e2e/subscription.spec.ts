@@ -149,4 +149,50 @@ describe('Roasted to Order in a real browser', () => {
     expect(subjects.length).toBeGreaterThanOrEqual(3);
     expect(problems).toEqual([]);
   }, 90_000);
+
+  it('the roastery finds the new subscriber with their deliveries, and picks the Roaster’s Rotation lot for a roast day', async () => {
+    const staffContext = await browser.newContext({ bypassCSP: true });
+    const staffPage = await staffContext.newPage();
+    staffPage.setDefaultTimeout(15_000);
+    const staffProblems: string[] = [];
+    staffPage.on('console', (message) => {
+      if (isVisitorSessionCheck(message)) return;
+      if (message.type() === 'error' || message.type() === 'warning') staffProblems.push(`${message.type()}: ${message.text()} (${message.location().url})`);
+    });
+    try {
+      // A member of the invented demo team.
+      await staffPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/subscribers')}`);
+      await staffPage.getByLabel('E-mail').fill('roaster@wrenfield.test');
+      await staffPage.getByLabel('Password', { exact: true }).fill('restday-demo');
+      await staffPage.getByRole('button', { name: 'Sign in', exact: true }).click();
+      await staffPage.getByRole('heading', { level: 1, name: 'Subscribers' }).waitFor();
+
+      await staffPage.getByLabel('Name or e-mail').fill(customer.email);
+      await staffPage.waitForURL((url) => url.searchParams.get('q') === customer.email);
+      await staffPage.getByRole('table', { name: /^Subscribers, page 1 of 1/ }).getByRole('link', { name: customer.name }).waitFor();
+      expect(await staffPage.getByRole('link', { name: 'Download these as CSV' }).getAttribute('href')).toBe(
+        `/api/roastery/subscribers.csv?q=${encodeURIComponent(customer.email).replaceAll('%20', '+')}`,
+      );
+      expect(await new AxeBuilder({ page: staffPage }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze().then((r) => r.violations.map((v) => v.id))).toEqual([]);
+
+      await staffPage.getByRole('link', { name: customer.name }).click();
+      await staffPage.getByRole('heading', { level: 1, name: customer.name }).waitFor();
+      const deliveries = staffPage.getByRole('table', { name: 'Deliveries of this subscription' });
+      await deliveries.waitFor();
+      expect(await deliveries.getByRole('row').filter({ hasText: 'Skipped' }).count()).toBe(1);
+
+      await staffPage.getByRole('navigation', { name: 'Roastery' }).getByRole('link', { name: 'Rotation' }).click();
+      const day = staffPage.getByRole('list', { name: 'Roast days' }).getByRole('listitem').first();
+      await day.waitFor();
+      const lot = day.getByLabel('Lot');
+      const firstLot = await lot.locator('option').nth(1).getAttribute('value');
+      await lot.selectOption(firstLot ?? '');
+      await day.getByRole('button', { name: 'Save the pick' }).click();
+      await day.getByText(/is the Roaster’s Rotation on /).waitFor();
+      expect(await new AxeBuilder({ page: staffPage }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze().then((r) => r.violations.map((v) => v.id))).toEqual([]);
+      expect(staffProblems).toEqual([]);
+    } finally {
+      await staffContext.close();
+    }
+  }, 90_000);
 });
