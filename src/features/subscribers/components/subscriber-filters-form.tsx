@@ -1,5 +1,5 @@
 import { cadences, roastersRotationName, roastLevelLabels, roastLevels, subscriptionStatuses } from '@shared/domain/vocabulary';
-import { rotationLotFilter } from '@shared/schemas/subscribers';
+import { rotationLotFilter, type SubscriberSort } from '@shared/schemas/subscribers';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { cadenceLabel, subscriptionStatusLabels } from '@/lib/subscription-labels';
@@ -12,10 +12,17 @@ type SubscriberFiltersFormProps = {
   onChange: (change: Partial<SubscriberFilters>) => void;
 };
 
+const sortLabels: Record<SubscriberSort, string> = {
+  newest: 'Newest first',
+  oldest: 'Oldest first',
+  name: 'Name',
+  'next-roast': 'Next roast day',
+};
+
 /** Each filter applies as soon as it changes and lives in the URL, so a filtered view can be shared. */
 export function SubscriberFiltersForm({ filters, lots, onChange }: SubscriberFiltersFormProps) {
   return (
-    <form role="search" aria-label="Filter subscribers" className="grid gap-4 sm:grid-cols-2 lg:grid-cols-5" onSubmit={(event) => event.preventDefault()}>
+    <form role="search" aria-label="Filter subscribers" className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3 xl:grid-cols-6" onSubmit={(event) => event.preventDefault()}>
       <TextField
         label="Name or e-mail"
         type="search"
@@ -56,6 +63,17 @@ export function SubscriberFiltersForm({ filters, lots, onChange }: SubscriberFil
         {lots.map((lot) => (
           <option key={lot.code} value={lot.code}>
             {lot.name} ({lot.code})
+          </option>
+        ))}
+      </SelectField>
+      <SelectField
+        label="Sort by"
+        value={filters.sort ?? 'newest'}
+        onChange={(event) => onChange({ sort: event.target.value === 'newest' ? undefined : (event.target.value as SubscriberSort), page: 1 })}
+      >
+        {Object.entries(sortLabels).map(([sort, label]) => (
+          <option key={sort} value={sort}>
+            {label}
           </option>
         ))}
       </SelectField>

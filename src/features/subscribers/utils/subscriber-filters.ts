@@ -1,9 +1,9 @@
 import { subscriberListQuerySchema, type SubscriberListQuery } from '@shared/schemas/subscribers';
 
 /** The Subscribers table's filters and page, as kept in the page URL and sent to the API. */
-export type SubscriberFilters = Partial<Pick<SubscriberListQuery, 'status' | 'level' | 'cadence' | 'lot' | 'q'>> & { page: number };
+export type SubscriberFilters = Partial<Pick<SubscriberListQuery, 'status' | 'level' | 'cadence' | 'lot' | 'q' | 'sort'>> & { page: number };
 
-const filterKeys = ['status', 'level', 'cadence', 'lot', 'q'] as const;
+const filterKeys = ['status', 'level', 'cadence', 'lot', 'q', 'sort'] as const;
 
 /** Reads the filters from the URL; a value the API would refuse is dropped rather than sent. */
 export function parseSubscriberFilters(search: URLSearchParams): SubscriberFilters {
@@ -15,6 +15,8 @@ export function parseSubscriberFilters(search: URLSearchParams): SubscriberFilte
     const parsed = shape[key].safeParse(raw);
     if (parsed.success && parsed.data !== undefined) Object.assign(filters, { [key]: parsed.data });
   }
+  // Newest first is the API's own order, so it stays out of the URL.
+  if (filters.sort === 'newest') delete filters.sort;
   const page = shape.page.safeParse(search.get('page') ?? undefined);
   if (page.success) filters.page = page.data;
   return filters;

@@ -9,8 +9,6 @@ import { bagSizeNetLabel, bagSizeShort, brewMethodLabels, cadenceLabel } from '@
 type SubscriptionChoiceFieldsProps = {
   /** The levels the coffee may be roasted to. */
   allowedLevels: readonly RoastLevel[];
-  /** Per-bag price to show beside each size, when known. */
-  bagPriceLabel?: (size: (typeof roastedBagSizes)[number]) => string | undefined;
   /** Keeps radio names unique when two forms share a page. */
   idPrefix: string;
 };
@@ -19,7 +17,7 @@ type SubscriptionChoiceFieldsProps = {
  * Roast level, bag size, bags, brew method, grind and cadence, each a labelled group, inside the
  * builder's or the change form's `FormProvider` (both hold these fields).
  */
-export function SubscriptionChoiceFieldset({ allowedLevels, bagPriceLabel, idPrefix }: SubscriptionChoiceFieldsProps) {
+export function SubscriptionChoiceFieldset({ allowedLevels, idPrefix }: SubscriptionChoiceFieldsProps) {
   const { control, register, formState } = useFormContext<SubscriptionChoiceFields>();
   const { errors } = formState;
   return (
@@ -46,7 +44,7 @@ export function SubscriptionChoiceFieldset({ allowedLevels, bagPriceLabel, idPre
           <ChoiceGroup
             legend="Bag size"
             name={`${idPrefix}-bag-size`}
-            choices={roastedBagSizes.map((size) => ({ value: size, label: bagSizeShort(size), detail: [bagSizeNetLabel(size), bagPriceLabel?.(size)].filter(Boolean).join(' · ') }))}
+            choices={roastedBagSizes.map((size) => ({ value: size, label: bagSizeShort(size), detail: bagSizeNetLabel(size) }))}
             value={field.value as (typeof roastedBagSizes)[number] | undefined}
             onChange={field.onChange}
             error={errors.bagSize?.message}
