@@ -30,7 +30,10 @@ export const subscriberListQuerySchema = z.object({
 });
 export type SubscriberListQuery = z.infer<typeof subscriberListQuerySchema>;
 
-/** One row of the Subscribers table. `coffee` is the lot's name or "Roaster's Rotation"; `nextRoastDate` the next scheduled delivery's. */
+/**
+ * One row of the Subscribers table. `coffee` is the lot's name or "Roaster's Rotation";
+ * `nextRoastDate` is the next delivery's (scheduled or held) as Deliveries shows it, null when none is due.
+ */
 export const subscriberSummarySchema = z.object({
   id: z.uuid(),
   customerName: z.string(),
@@ -96,6 +99,8 @@ export const subscriberDetailSchema = subscriberSummarySchema.omit({ customerNam
   customer: z.object({ id: z.uuid(), name: z.string(), email: z.string() }),
   currency: z.string(),
   pausedUntil: z.string().nullable(),
+  /** The subscriber cancelled: it ends with the paid period (always sent; optional for older readers). */
+  cancelAtPeriodEnd: z.boolean().optional(),
   currentPeriodEnd: z.iso.datetime({ offset: true }).nullable(),
   cancelledAt: z.iso.datetime({ offset: true }).nullable(),
   shippingAddress: orderAddressSchema,

@@ -2,7 +2,8 @@ import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { subscriberCsvColumns, subscriberDetailSchema, subscriberListResponseSchema } from '@shared/schemas/subscribers';
-import { rotationPicks } from '../../server/db/schema/index';
+import { eq } from 'drizzle-orm';
+import { rotationPicks, subscriptions } from '../../server/db/schema/index';
 import { createAdjustableClock } from '../../server/lib/clock';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
@@ -75,6 +76,23 @@ describe('GET /api/roastery/subscribers', () => {
     const secondPage = await list({ sort: 'oldest', pageSize: '2', page: '2' });
     expect(secondPage).toMatchObject({ total: 3, page: 2, pageSize: 2 });
     expect(secondPage.items.map((item) => item.id)).toEqual([paused]);
+  });
+
+  it('reads the next roast date from the schedule grid when no delivery row is kept yet', async () => {
+    const { tag, people } = await customers('Gale', 'Harper');
+    // Every 2 weeks from Mon 3 Mar 2031: today (Tue 4 Mar) the next is Mon 17 Mar.
+    const gridOnly = await inventSubscription(people[0]!, { anchorDate: '2031-03-03', cadenceWeeks: 2 });
+    // The same, but ending with its paid period: nothing more is due.
+    const ending = await inventSubscription(people[1]!, { anchorDate: '2031-03-03', cadenceWeeks: 2 });
+    await getTestDb().update(subscriptions).set({ cancelAtPeriodEnd: true }).where(eq(subscriptions.id, ending));
+    const staff = await signedInAgent(app, await createTestUser('staff'));
+    const list = subscriberListResponseSchema.parse((await staff.get('/api/roastery/subscribers').query({ q: tag, sort: 'name' })).body);
+    expect(list.items.map((item) => [item.id, item.nextRoastDate])).toEqual([
+      [gridOnly, '2031-03-17'],
+      [ending, null],
+    ]);
+    const detail = subscriberDetailSchema.parse((await staff.get(`/api/roastery/subscribers/${ending}`)).body);
+    expect(detail).toMatchObject({ cancelAtPeriodEnd: true, nextRoastDate: null, deliveries: [] });
   });
 
   it('answers 400 naming each bad filter', async () => {

@@ -1,9 +1,9 @@
-import { and, asc, count, desc, eq, gte, ilike, inArray, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, ilike, inArray, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { RoastLevel, SubscriptionStatus } from '@shared/domain/vocabulary';
 import type { SubscriberSort } from '@shared/schemas/subscribers';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../db/client';
-import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions, users } from '../../db/schema/index';
+import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions, users } from '../../db/schema/index';
 import { loadShopSettings } from '../settings/settings.repo';
 
 export interface SubscriberFilters {
@@ -13,20 +13,9 @@ export interface SubscriberFilters {
   /** A lot code, or `{rotation: true}` for the Roaster's Rotation. */
   lot?: { code: string } | { rotation: true };
   q?: string;
-  sort: SubscriberSort;
-  /** Shop-local today: the next roast date is the first scheduled delivery on or after it. */
-  today: string;
+  /** The database's part of the order; the next roast date is the delivery plan's, sorted by the service. */
+  sort: Exclude<SubscriberSort, 'next-roast'>;
 }
-
-/** Deliveries still to roast for the subscriber (a held one roasts once paid). */
-const upcomingStatuses = ['scheduled', 'held'] as const;
-
-const nextRoastDate = (today: string) =>
-  sql<string | null>`(select min(${deliveries.roastDate})::text from ${deliveries} where ${and(
-    eq(deliveries.subscriptionId, subscriptions.id),
-    inArray(deliveries.status, [...upcomingStatuses]),
-    gte(deliveries.roastDate, today),
-  )})`;
 
 /** The lot a Roaster's Rotation delivery gets: the one picked for its roast day. */
 const pickedLots = alias(lots, 'picked_lots');
@@ -44,39 +33,32 @@ function conditionsOf(filters: SubscriberFilters): SQL | undefined {
   return and(...conditions);
 }
 
-function summaryColumns(today: string) {
-  return {
-    id: subscriptions.id,
-    customerId: users.id,
-    customerName: users.name,
-    email: users.email,
-    status: subscriptions.status,
-    lotCode: lots.code,
-    lotName: lots.name,
-    roastLevel: subscriptions.roastLevel,
-    bagSize: subscriptions.bagSize,
-    bagsPerDelivery: subscriptions.bagsPerDelivery,
-    grind: subscriptions.grind,
-    brewMethod: subscriptions.brewMethod,
-    cadenceWeeks: subscriptions.cadenceWeeks,
-    priceCents: subscriptions.priceCents,
-    nextRoastDate: nextRoastDate(today),
-    createdAt: subscriptions.createdAt,
-  };
-}
+const summaryColumns = {
+  id: subscriptions.id,
+  customerId: users.id,
+  customerName: users.name,
+  email: users.email,
+  status: subscriptions.status,
+  lotCode: lots.code,
+  lotName: lots.name,
+  roastLevel: subscriptions.roastLevel,
+  bagSize: subscriptions.bagSize,
+  bagsPerDelivery: subscriptions.bagsPerDelivery,
+  grind: subscriptions.grind,
+  brewMethod: subscriptions.brewMethod,
+  cadenceWeeks: subscriptions.cadenceWeeks,
+  priceCents: subscriptions.priceCents,
+  anchorDate: subscriptions.anchorDate,
+  pausedUntil: subscriptions.pausedUntil,
+  cancelAtPeriodEnd: subscriptions.cancelAtPeriodEnd,
+  createdAt: subscriptions.createdAt,
+};
 
-function sortOrder(sort: SubscriberSort, today: string): SQL[] {
-  switch (sort) {
-    case 'newest':
-      return [desc(subscriptions.createdAt), desc(subscriptions.id)];
-    case 'oldest':
-      return [asc(subscriptions.createdAt), asc(subscriptions.id)];
-    case 'name':
-      return [asc(users.name), asc(subscriptions.id)];
-    case 'next-roast':
-      return [sql`${nextRoastDate(today)} asc nulls last`, asc(subscriptions.id)];
-  }
-}
+const sortOrder: Record<SubscriberFilters['sort'], SQL[]> = {
+  newest: [desc(subscriptions.createdAt), desc(subscriptions.id)],
+  oldest: [asc(subscriptions.createdAt), asc(subscriptions.id)],
+  name: [asc(users.name), asc(subscriptions.id)],
+};
 
 const orderColumns = {
   id: orders.id,
@@ -92,35 +74,59 @@ const orderColumns = {
 
 export function createSubscribersRepo(db: Db) {
   return {
-    async shopTimeZone() {
-      return (await loadShopSettings(db)).settings.timeZone;
+    async shopSettings() {
+      return (await loadShopSettings(db)).settings;
     },
 
-    /** One page of subscriptions, and how many match across every page. `page` absent: every match (the CSV export). */
-    async list(filters: SubscriberFilters, page?: { limit: number; offset: number }) {
-      const where = conditionsOf(filters);
-      const query = db
-        .select(summaryColumns(filters.today))
+    /** Every subscription matching the filters, in the filters' order. */
+    async list(filters: SubscriberFilters) {
+      return db
+        .select(summaryColumns)
         .from(subscriptions)
         .innerJoin(users, eq(users.id, subscriptions.userId))
         .leftJoin(lots, eq(lots.id, subscriptions.lotId))
-        .where(where)
-        .orderBy(...sortOrder(filters.sort, filters.today));
-      const rows = page ? await query.limit(page.limit).offset(page.offset) : await query;
-      const [total] = await db
-        .select({ n: count() })
-        .from(subscriptions)
-        .innerJoin(users, eq(users.id, subscriptions.userId))
-        .leftJoin(lots, eq(lots.id, subscriptions.lotId))
-        .where(where);
-      return { rows, total: total!.n };
+        .where(conditionsOf(filters))
+        .orderBy(...sortOrder[filters.sort]);
+    },
+
+    /** The kept delivery rows of these subscriptions, by roast date, as the delivery plan reads them. */
+    async keptDeliveries(subscriptionIds: string[]) {
+      if (subscriptionIds.length === 0) return [];
+      return db
+        .select({
+          id: deliveries.id,
+          subscriptionId: deliveries.subscriptionId,
+          nominalDate: deliveries.nominalDate,
+          roastDate: deliveries.roastDate,
+          shipDate: deliveries.shipDate,
+          readyFrom: deliveries.readyFrom,
+          bestBefore: deliveries.bestBefore,
+          status: deliveries.status,
+          orderId: deliveries.orderId,
+          roastLevel: deliveries.roastLevel,
+          bagSize: deliveries.bagSize,
+          bagsPerDelivery: deliveries.bagsPerDelivery,
+          grind: deliveries.grind,
+          brewMethod: deliveries.brewMethod,
+        })
+        .from(deliveries)
+        .where(inArray(deliveries.subscriptionId, subscriptionIds))
+        .orderBy(asc(deliveries.roastDate));
+    },
+
+    /** Roast Calendar overrides from `from` on. */
+    async calendarOverrides(from: string) {
+      return db
+        .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
+        .from(roastDays)
+        .where(gte(roastDays.date, from));
     },
 
     /** A subscription with its customer, its materialized deliveries (with the order each became) and its orders. */
-    async find(subscriptionId: string, today: string) {
+    async find(subscriptionId: string) {
       const [subscription] = await db
         .select({
-          ...summaryColumns(today),
+          ...summaryColumns,
           currency: subscriptions.currency,
           pausedUntil: subscriptions.pausedUntil,
           currentPeriodEnd: subscriptions.currentPeriodEnd,
@@ -163,5 +169,6 @@ export function createSubscribersRepo(db: Db) {
 }
 
 export type SubscribersRepo = ReturnType<typeof createSubscribersRepo>;
-export type SubscriberRow = Awaited<ReturnType<SubscribersRepo['list']>>['rows'][number];
+export type SubscriberRow = Awaited<ReturnType<SubscribersRepo['list']>>[number];
+export type KeptDeliveryRow = Awaited<ReturnType<SubscribersRepo['keptDeliveries']>>[number];
 export type SubscriberRecord = NonNullable<Awaited<ReturnType<SubscribersRepo['find']>>>;

@@ -1,6 +1,8 @@
 import { stringify } from 'csv-stringify/sync';
-import { localDateOf } from '@shared/domain/shop-time';
-import { roastersRotationName } from '@shared/domain/vocabulary';
+import { nextDelivery, planDeliveries, type KeptDelivery } from '@shared/domain/delivery-plan';
+import { SEARCH_HORIZON_DAYS, type CalendarOverride } from '@shared/domain/roast-schedule';
+import { addDays, localDateOf } from '@shared/domain/shop-time';
+import { roastersRotationName, type RoastedBagSize } from '@shared/domain/vocabulary';
 import {
   rotationLotFilter,
   subscriberCsvColumns,
@@ -13,7 +15,13 @@ import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SubscriberFilters, SubscriberRow, SubscribersRepo } from './subscribers.repo';
 
-const summaryOf = (row: SubscriberRow): SubscriberSummary => ({
+/** Subscriptions sell roasted sizes only (a CHECK constraint keeps it so). */
+const roastedSize = (size: string) => size as RoastedBagSize;
+
+/** A closure can move a delivery up to the engine's search horizon, so the calendar is read from that far back. */
+const lookBackDays = SEARCH_HORIZON_DAYS;
+
+const summaryOf = (row: SubscriberRow, nextRoastDate: string | null): SubscriberSummary => ({
   id: row.id,
   customerName: row.customerName,
   email: row.email,
@@ -21,13 +29,13 @@ const summaryOf = (row: SubscriberRow): SubscriberSummary => ({
   coffee: row.lotName ?? roastersRotationName,
   lotCode: row.lotCode,
   roastLevel: row.roastLevel,
-  bagSize: row.bagSize as SubscriberSummary['bagSize'],
+  bagSize: roastedSize(row.bagSize),
   bagsPerDelivery: row.bagsPerDelivery,
   grind: row.grind,
   brewMethod: row.brewMethod,
   cadenceWeeks: row.cadenceWeeks,
   priceCents: row.priceCents,
-  nextRoastDate: row.nextRoastDate,
+  nextRoastDate,
   createdAt: row.createdAt.toISOString(),
 });
 
@@ -38,39 +46,72 @@ function spreadsheetSafe(text: string | null): string {
 }
 
 export function createSubscribersService({ repo, clock }: { repo: SubscribersRepo; clock: Clock }) {
-  async function today(): Promise<string> {
-    return localDateOf(clock.now(), await repo.shopTimeZone());
+  /** Each subscription's next roast date as Deliveries shows it: its kept rows laid over the schedule grid. */
+  async function nextRoastDates(rows: readonly SubscriberRow[]): Promise<Map<string, string | null>> {
+    const now = clock.now();
+    const settings = await repo.shopSettings();
+    const overrides: Record<string, CalendarOverride> = {};
+    for (const row of await repo.calendarOverrides(addDays(localDateOf(now, settings.timeZone), -lookBackDays))) {
+      overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
+    }
+    const keptBySubscription = new Map<string, KeptDelivery[]>();
+    for (const row of await repo.keptDeliveries(rows.map((subscription) => subscription.id))) {
+      const kept = keptBySubscription.get(row.subscriptionId) ?? [];
+      kept.push({
+        ...row,
+        nominalDate: row.nominalDate ?? row.roastDate,
+        choice:
+          row.roastLevel && row.bagSize && row.bagsPerDelivery && row.grind && row.brewMethod
+            ? { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod }
+            : null,
+      });
+      keptBySubscription.set(row.subscriptionId, kept);
+    }
+    return new Map(
+      rows.map((row) => {
+        const kept = keptBySubscription.get(row.id) ?? [];
+        const choice = { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod };
+        const plan = planDeliveries({ ...row, anchorDate: row.anchorDate ?? kept[0]?.nominalDate ?? null, choice }, kept, settings, { overrides }, now, kept.length + 3);
+        return [row.id, nextDelivery(plan)?.roastDate ?? null];
+      }),
+    );
   }
 
-  async function filtersOf(query: SubscriberListQuery): Promise<SubscriberFilters> {
-    return {
+  /** Every matching subscription with its next roast date, in the asked order. */
+  async function matching(query: SubscriberListQuery): Promise<SubscriberSummary[]> {
+    const filters: SubscriberFilters = {
       status: query.status,
       level: query.level,
       cadenceWeeks: query.cadence,
       lot: query.lot === undefined ? undefined : query.lot === rotationLotFilter ? { rotation: true } : { code: query.lot },
       q: query.q || undefined,
-      sort: query.sort,
-      today: await today(),
+      sort: query.sort === 'next-roast' ? 'newest' : query.sort,
     };
+    const rows = await repo.list(filters);
+    const next = await nextRoastDates(rows);
+    const summaries = rows.map((row) => summaryOf(row, next.get(row.id) ?? null));
+    // The date comes from the delivery plan, not a column, so this order is kept here; none sorts last.
+    if (query.sort === 'next-roast') summaries.sort((a, b) => (a.nextRoastDate ?? '9999-12-31').localeCompare(b.nextRoastDate ?? '9999-12-31'));
+    return summaries;
   }
 
   return {
     async list(query: SubscriberListQuery): Promise<SubscriberListResponse> {
-      const { rows, total } = await repo.list(await filtersOf(query), { limit: query.pageSize, offset: (query.page - 1) * query.pageSize });
-      return { items: rows.map(summaryOf), total, page: query.page, pageSize: query.pageSize };
+      const all = await matching(query);
+      const start = (query.page - 1) * query.pageSize;
+      return { items: all.slice(start, start + query.pageSize), total: all.length, page: query.page, pageSize: query.pageSize };
     },
 
     /** Every subscription matching the filters (all pages), one CSV row each, columns as `subscriberCsvColumns`. */
     async csv(query: SubscriberListQuery): Promise<string> {
-      const { rows } = await repo.list(await filtersOf(query));
       return stringify(
-        rows.map((row) => ({
+        (await matching(query)).map((row) => ({
           subscription_id: row.id,
-          created_at: row.createdAt.toISOString(),
+          created_at: row.createdAt,
           status: row.status,
           customer_name: spreadsheetSafe(row.customerName),
           customer_email: spreadsheetSafe(row.email),
-          coffee: spreadsheetSafe(row.lotName ?? roastersRotationName),
+          coffee: spreadsheetSafe(row.coffee),
           lot_code: spreadsheetSafe(row.lotCode),
           roast_level: row.roastLevel,
           bag_size: row.bagSize,
@@ -86,10 +127,11 @@ export function createSubscribersService({ repo, clock }: { repo: SubscribersRep
     },
 
     async get(subscriptionId: string): Promise<SubscriberDetail> {
-      const record = await repo.find(subscriptionId, await today());
+      const record = await repo.find(subscriptionId);
       if (!record) throw AppError.notFound('Subscription');
       const { subscription } = record;
-      const { customerName, email, ...summary } = summaryOf(subscription);
+      const next = await nextRoastDates([subscription]);
+      const { customerName, email, ...summary } = summaryOf(subscription, next.get(subscription.id) ?? null);
       const toOrder = (order: (typeof record.orders)[number]) => ({
         id: order.id,
         status: order.status,
@@ -102,17 +144,18 @@ export function createSubscribersService({ repo, clock }: { repo: SubscribersRep
         trackingNumber: order.trackingNumber,
       });
       const ordersById = new Map(record.orders.map((order) => [order.id, order]));
+      const rotation = subscription.lotCode === null;
       return {
         ...summary,
         customer: { id: subscription.customerId, name: customerName, email },
         currency: subscription.currency,
         pausedUntil: subscription.pausedUntil,
+        cancelAtPeriodEnd: subscription.cancelAtPeriodEnd,
         currentPeriodEnd: subscription.currentPeriodEnd?.toISOString() ?? null,
         cancelledAt: subscription.cancelledAt?.toISOString() ?? null,
         shippingAddress: { ...subscription.shippingAddress, line2: subscription.shippingAddress.line2 ?? null },
         deliveries: record.deliveries.map((delivery) => {
           const order = delivery.orderId ? ordersById.get(delivery.orderId) : undefined;
-          const rotation = subscription.lotCode === null;
           return {
             id: delivery.id,
             sequence: delivery.sequence,
