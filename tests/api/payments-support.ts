@@ -2,7 +2,7 @@
 // SDK pointed at the fake, and invented customers, lots, orders and subscriptions written directly.
 import { randomUUID } from 'node:crypto';
 import { createServer } from 'node:net';
-import { count, eq, inArray } from 'drizzle-orm';
+import { asc, count, eq, inArray } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { inject } from 'vitest';
 import { stripeFakeControl } from '../../dev-services/stripe-fake/control-client';
@@ -124,18 +124,13 @@ export async function createGreenOrder(userId: string, lotId: string) {
   return order!;
 }
 
-/** A subscription not started yet (2 × 12 oz, $36.00 every two weeks) with one scheduled delivery. */
-export async function createPendingSubscription(userId: string, lotId: string) {
-  const db = getTestDb();
-  const [subscription] = await db
+/** A subscription not started yet (2 × 12 oz, $36.00 every two weeks); its deliveries come with its first payment. */
+export async function createPendingSubscription(userId: string, lotId: string | null) {
+  const [subscription] = await getTestDb()
     .insert(subscriptions)
     .values({ userId, lotId, roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2, cadenceWeeks: 2, priceCents: 3600, shippingAddress: invented })
     .returning({ id: subscriptions.id });
-  const [delivery] = await db
-    .insert(deliveries)
-    .values({ subscriptionId: subscription!.id, sequence: 1, roastDate: '2099-01-06', shipDate: '2099-01-07', readyFrom: '2099-01-08', bestBefore: '2099-02-03' })
-    .returning({ id: deliveries.id });
-  return { id: subscription!.id, deliveryId: delivery!.id };
+  return { id: subscription!.id };
 }
 
 export async function orderRow(orderId: string) {
@@ -148,9 +143,14 @@ export async function subscriptionRow(subscriptionId: string) {
   return row!;
 }
 
-export async function deliveryRow(deliveryId: string) {
-  const [row] = await getTestDb().select().from(deliveries).where(eq(deliveries.id, deliveryId));
-  return row!;
+/** A subscription's delivery rows by roast date. */
+export async function deliveryRows(subscriptionId: string) {
+  return getTestDb().select().from(deliveries).where(eq(deliveries.subscriptionId, subscriptionId)).orderBy(asc(deliveries.roastDate));
+}
+
+/** A subscription's delivery orders, oldest first. */
+export async function subscriptionOrders(subscriptionId: string) {
+  return getTestDb().select().from(orders).where(eq(orders.subscriptionId, subscriptionId)).orderBy(asc(orders.createdAt));
 }
 
 export async function orderCount(userId: string) {

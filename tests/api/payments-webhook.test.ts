@@ -11,7 +11,7 @@ import {
   createGreenOrder,
   createPendingSubscription,
   createTestLot,
-  deliveryRow,
+  deliveryRows,
   eventsAbout,
   ledgerCount,
   orderCount,
@@ -200,7 +200,12 @@ describe('subscriptions renewing on the fake clock', () => {
     const renewal = await fake.advanceClock({ days: 14 });
     expect(renewal.renewals).toContainEqual(expect.objectContaining({ subscription: stripeSubscriptionId, outcome: 'failed' }));
     await waitFor(() => subscriptionRow(subscription.id), (row) => row.status === 'past_due', 10_000, 'past_due');
-    await waitFor(() => deliveryRow(subscription.deliveryId), (row) => row.status === 'held', 10_000, 'the delivery to be held');
+    const [held] = await waitFor(
+      () => deliveryRows(subscription.id),
+      (rows) => rows.some((row) => row.status === 'held'),
+      10_000,
+      'the delivery to be held',
+    ).then((rows) => rows.filter((row) => row.status === 'held'));
     const failedInvoice = renewal.renewals.find((entry) => entry.subscription === stripeSubscriptionId)!.invoice!;
     const failedMail = await waitFor(
       () => inboxOf(mailCatcherUrl, customer.email),
@@ -219,7 +224,13 @@ describe('subscriptions renewing on the fake clock', () => {
     await fake.setCustomerCard(stripeCustomerId, succeedingTestCard);
     await stripe.invoices.pay(failedInvoice);
     await waitFor(() => subscriptionRow(subscription.id), (row) => row.status === 'active', 10_000, 'active again');
-    await waitFor(() => deliveryRow(subscription.deliveryId), (row) => row.status === 'scheduled', 10_000, 'the delivery to be released');
+    const released = await waitFor(
+      () => deliveryRows(subscription.id),
+      (rows) => rows.some((row) => row.id === held!.id && row.status === 'scheduled' && row.orderId !== null),
+      10_000,
+      'the delivery to be released with its order',
+    );
+    expect(released.filter((row) => row.status === 'held')).toEqual([]);
     const inbox = await inboxOf(mailCatcherUrl, customer.email);
     expect(inbox.filter((mail) => mail.subject === 'We could not take your payment')).toHaveLength(1);
   });
@@ -238,7 +249,7 @@ describe('subscriptions renewing on the fake clock', () => {
       expect((await fake.deliverEvent(paid)).statusCode).toBe(200);
       expect((await fake.deliverEvent(failed)).statusCode).toBe(200);
       expect(await subscriptionRow(subscription.id)).toMatchObject({ status: 'active' });
-      expect((await deliveryRow(subscription.deliveryId)).status).toBe('scheduled');
+      expect((await deliveryRows(subscription.id)).filter((row) => row.status === 'held')).toEqual([]);
       expect(await outboxCount(`payment-failed:${invoice}`)).toBe(0);
     });
   });

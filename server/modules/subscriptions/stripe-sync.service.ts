@@ -5,7 +5,7 @@ import type { Db } from '../../db/client';
 import type { PaymentsGateway } from '../../integrations/payments';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
-import { choiceOf, createSubscriptionsRepo, keptDeliveries, markSynced, skipsAwaitingStripe } from './subscriptions.repo';
+import { choiceOf, createSubscriptionsRepo, deferredSkipCount, keptDeliveries, markSynced, skipsAwaitingStripe } from './subscriptions.repo';
 
 /** Metadata on the Stripe subscription naming the Restday state it holds, so a retried push after a crash is recognised. */
 export const syncMarkerKey = 'restday_sync';
@@ -59,7 +59,8 @@ export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps)
     const skips = canMoveCharge
       ? (await skipsAwaitingStripe(db, subscriptionId, today)).filter((skip) => !toCharge || skip.roastDate < toCharge.roastDate)
       : [];
-    const marker = `v${subscription.changeVersion}${skips.map((skip) => `-s${skip.nominalDate ?? skip.roastDate}`).join('')}`;
+    // The state pushed: the change version and how many charges skips have moved in all.
+    const marker = `v${subscription.changeVersion}-m${(await deferredSkipCount(db, subscriptionId)) + skips.length}`;
 
     if (stripeSubscription.status === 'canceled' || stripeSubscription.metadata?.[syncMarkerKey] === marker) {
       await markSynced(db, subscriptionId, subscription.changeVersion, skips.map((skip) => skip.id));

@@ -156,6 +156,15 @@ export async function skipsAwaitingStripe(db: DbOrTx, subscriptionId: string, to
     .orderBy(asc(deliveries.roastDate));
 }
 
+/** How many skips Stripe has moved a charge for, over the subscription's life. */
+export async function deferredSkipCount(db: DbOrTx, subscriptionId: string) {
+  const [row] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(deliveries)
+    .where(and(eq(deliveries.subscriptionId, subscriptionId), eq(deliveries.chargeDeferred, true)));
+  return row?.n ?? 0;
+}
+
 export function createSubscriptionsRepo(db: Db) {
   return {
     async lotForSubscription(code: string) {
