@@ -69,7 +69,8 @@ export const subscriptionChanged: EmailTemplate<'subscription-changed'> = {
     }
     const button = p.change === 'cancelled' ? 'See your subscription' : 'Manage your subscription';
     blocks.push(
-      { kind: 'button', label: button, url: shopLink(context, '/account') },
+      // Deliveries, where the subscriber sees the schedule and changes it.
+      { kind: 'button', label: button, url: shopLink(context, '/account/deliveries') },
       { kind: 'note', text: 'You get this e-mail whenever your subscription changes. If you did not make this change, please let us know.' },
     );
     return { heading, preheader: text, blocks };

@@ -16,6 +16,7 @@ describe('the subscription-changed e-mail', () => {
     expect(email.text).toContain('Roast day: Wednesday, December 16, 2026');
     expect(email.text).toContain('Ready to brew from: Friday, December 18, 2026');
     expect(email.html).toContain('Roast level: Medium-dark');
+    expect(email.text).toContain('Manage your subscription:\nhttp://127.0.0.1:3000/account/deliveries');
   });
 
   it('names the next roast day when a delivery is skipped', () => {
