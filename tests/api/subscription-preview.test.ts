@@ -57,6 +57,19 @@ describe('GET /api/subscriptions/preview', () => {
     expect(subscriptionPreviewSchema.parse(response.body)).toMatchObject({ priceCents: 2515, regularPriceCents: 2695, shippingCents: 895 });
   });
 
+  it('starts on the next roast day until its cutoff, and on the one after from the cutoff on', async () => {
+    // Wed 12 Mar 2031's cutoff is Tue 11 Mar 12:00 EDT (clocks went forward on 9 Mar) = 16:00Z.
+    const at = async (instant: string) => {
+      const atClock = createAdjustableClock();
+      atClock.set(new Date(instant));
+      const body = subscriptionPreviewSchema.parse((await request(createTestApp({ clock: atClock })).get('/api/subscriptions/preview').query(choice)).body);
+      return body.deliveries[0]?.roastDate;
+    };
+    expect(await at('2031-03-11T15:59:00Z')).toBe('2031-03-12');
+    // At the cutoff the next open roast day is Fri 14 Mar.
+    expect(await at('2031-03-11T16:00:00Z')).toBe('2031-03-14');
+  });
+
   it('moves the first delivery past a closed roast day and a day with no capacity left, and keeps the rest on the grid', async () => {
     await override('2031-03-05', { open: false, note: 'Roaster service' });
     // Friday 7 Mar can roast only 500 g; two 12 oz bags at medium need more green coffee than that
