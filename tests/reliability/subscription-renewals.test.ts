@@ -204,4 +204,15 @@ describe('subscription renewals on the payment fake’s clock', () => {
     const synced = await subscriptionRow(id);
     expect(synced.stripeSyncedVersion).toBe(synced.changeVersion);
   });
+
+  it('a subscription Stripe does not know (the demo seed’s invented ids) is recorded as pushed instead of retried forever', async () => {
+    const customer = await createTestUser('customer');
+    const [row] = await getTestDb()
+      .insert(subscriptions)
+      .values({ userId: customer.id, status: 'active', roastLevel: 'medium', bagSize: '12oz', cadenceWeeks: 1, priceCents: 2315, anchorDate: '2031-01-06', changeVersion: 2, stripeSubscriptionId: 'sub_demo_invented01', shippingAddress: invented })
+      .returning({ id: subscriptions.id });
+    const sync = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig()), clock: systemClock, logger: createLogger(paymentsTestConfig()) });
+    expect(await sync.push(row!.id)).toBe('nothing');
+    expect(await subscriptionRow(row!.id)).toMatchObject({ stripeSyncedVersion: 2 });
+  });
 });

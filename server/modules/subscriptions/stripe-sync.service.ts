@@ -1,4 +1,4 @@
-import type Stripe from 'stripe';
+import Stripe from 'stripe';
 import { deliveryToCharge, planDeliveries } from '@shared/domain/delivery-plan';
 import { instantAt } from '@shared/domain/shop-time';
 import type { Db } from '../../db/client';
@@ -53,7 +53,18 @@ export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps)
       26,
     );
     const toCharge = deliveryToCharge(plan);
-    const stripeSubscription = await gateway.retrieveSubscription(subscription.stripeSubscriptionId);
+    let stripeSubscription: Stripe.Subscription;
+    try {
+      stripeSubscription = await gateway.retrieveSubscription(subscription.stripeSubscriptionId);
+    } catch (error) {
+      // Stripe has no such subscription (the demo seed's invented ids): nothing to push to, so stop asking.
+      if (error instanceof Stripe.errors.StripeInvalidRequestError && error.statusCode === 404) {
+        logger.warn({ subscriptionId, stripeSubscriptionId: subscription.stripeSubscriptionId }, 'Stripe does not know this subscription; its changes stay in Restday');
+        await markSynced(db, subscriptionId, subscription.changeVersion, (await skipsAwaitingStripe(db, subscriptionId, today)).map((skip) => skip.id));
+        return 'nothing';
+      }
+      throw error;
+    }
     // A charge can only be moved on while the subscription is in good standing (not past due).
     const canMoveCharge = stripeSubscription.status === 'active' || stripeSubscription.status === 'trialing';
     const skips = canMoveCharge
