@@ -40,7 +40,16 @@ import { checkoutRoutes } from './modules/checkout/checkout.routes';
 import { createCheckoutService } from './modules/checkout/checkout.service';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
+import { createRoasteryServices, roasteryRoutes } from './modules/roastery/roastery.routes';
 import { createOrdersService } from './modules/orders/orders.service';
+import { createPackingRepo } from './modules/packing/packing.repo';
+import { packingRoutes } from './modules/packing/packing.routes';
+import { createPackingService } from './modules/packing/packing.service';
+import { createRefundsRepo } from './modules/packing/refunds.repo';
+import { createRefundsService } from './modules/packing/refunds.service';
+import { createTraceRepo } from './modules/trace/trace.repo';
+import { traceRoutes } from './modules/trace/trace.routes';
+import { createTraceService } from './modules/trace/trace.service';
 
 export interface AppDeps {
   config: Config;
@@ -127,6 +136,14 @@ export function createApp(deps: AppDeps): Express {
   const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
   api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
   api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));
+  api.use('/roastery', roasteryRoutes(createRoasteryServices(database.db)));
+  api.use(
+    packingRoutes(
+      createPackingService({ repo: createPackingRepo(database.db), clock: deps.clock }),
+      createRefundsService({ repo: createRefundsRepo(database.db), gateway: paymentsGateway }),
+    ),
+  );
+  api.use(traceRoutes(createTraceService(createTraceRepo(database.db))));
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
     api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));
