@@ -99,6 +99,16 @@ export const accessRules: AccessRule[] = [
 
   { method: 'GET', path: '/api/roastery/outbox', access: 'staff' },
 
+  { method: 'GET', path: '/api/roastery/settings', access: 'staff' },
+  { method: 'PUT', path: '/api/roastery/settings', access: 'owner' },
+  { method: 'GET', path: '/api/roastery/calendar', access: 'staff' },
+  { method: 'PUT', path: '/api/roastery/calendar/:date', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/roast-list', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/roast-list.csv', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/roast-list.pdf', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'POST', path: '/api/roastery/batches', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/days/:date/batches', access: 'staff', params: { date: '2026-12-08' } },
+
   { method: 'POST', path: '/api/checkout/green', access: 'signed-in' },
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
   { method: 'GET', path: '/api/orders.csv', access: 'staff' },
