@@ -9,6 +9,7 @@ import { createOutboxRelay, type RelayPolicy } from '../modules/outbox/outbox.se
 import { startListener } from './listener';
 import { startRelayRunner, type RelayRunner } from './outbox-relay';
 import type { Queue } from './queue';
+import { restDayEmailsJob } from './rest-day-emails';
 import { workJobs, type JobDefinition } from './registry';
 
 /**
@@ -16,7 +17,7 @@ import { workJobs, type JobDefinition } from './registry';
  * ./registry). The outbox relay is not among them: it runs beside them (see startWorkers).
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const jobs: JobDefinition<any>[] = [];
+export const jobs: JobDefinition<any>[] = [restDayEmailsJob];
 
 export interface WorkerDeps {
   config: Config;

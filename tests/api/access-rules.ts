@@ -113,4 +113,11 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
   { method: 'GET', path: '/api/orders.csv', access: 'staff' },
   { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
+  { method: 'POST', path: '/api/orders/:id/pack', access: 'staff' },
+  { method: 'POST', path: '/api/orders/:id/ship', access: 'staff', body: { carrier: 'Invented Parcel Co', trackingNumber: 'TEST123' } },
+  { method: 'POST', path: '/api/orders/:id/refund', access: 'owner' },
+  { method: 'GET', path: '/api/orders/:id/trace', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/batches/:id/trace', access: 'staff' },
 ];
