@@ -43,5 +43,21 @@ export const paths = {
     overview: { path: '/roastery', getHref: () => '/roastery' },
     greenStock: { path: '/roastery/green-stock', getHref: () => '/roastery/green-stock' },
     team: { path: '/roastery/team', getHref: () => '/roastery/team' },
+    calendar: {
+      path: '/roastery/calendar',
+      /** `month`: YYYY-MM; the current month when left out. */
+      getHref: (month?: string) => withSearch('/roastery/calendar', month ? new URLSearchParams({ month }) : undefined),
+    },
+    /** The Day Sheet of the shop's today: it forwards to the dated address. */
+    daySheetToday: { path: '/roastery/days', getHref: () => '/roastery/days' },
+    daySheet: {
+      path: '/roastery/days/:date',
+      /** `tab`: the Roast List unless `pack`. */
+      getHref: (date: string, tab: 'roast' | 'pack' = 'roast') =>
+        withSearch(`/roastery/days/${encodeURIComponent(date)}`, tab === 'pack' ? new URLSearchParams({ tab }) : undefined),
+    },
+    batch: { path: '/roastery/batches/:id', getHref: (id: string) => `/roastery/batches/${encodeURIComponent(id)}` },
+    orderTrace: { path: '/roastery/orders/:id/trace', getHref: (id: string) => `/roastery/orders/${encodeURIComponent(id)}/trace` },
+    settings: { path: '/roastery/settings', getHref: () => '/roastery/settings' },
   },
 } as const;
