@@ -84,6 +84,18 @@ export const refundOrderBodySchema = z.object({
 export type RefundOrderBody = z.infer<typeof refundOrderBodySchema>;
 
 /**
+ * Optional `Idempotency-Key` header of `POST /api/orders/:id/refund`: one key per refund the owner
+ * means to make (e.g. a UUID made when the refund form opens). The same key again answers with the
+ * refund already made instead of refunding twice.
+ */
+export const refundRequestHeadersSchema = z.object({
+  'idempotency-key': z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{8,100}$/, 'Send the Idempotency-Key header as 8 to 100 letters, digits, dashes or underscores.')
+    .optional(),
+});
+
+/**
  * 202 answer of `POST /api/orders/:id/refund`. Stripe has accepted the refund; the order's own
  * `refundedCents` and `status` change when Stripe's `charge.refunded` webhook arrives, so these are
  * the order's figures as they stand now. `requestedCents` is the amount this request asked for.

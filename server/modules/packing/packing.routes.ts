@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { packDayParamsSchema, refundOrderBodySchema, shipOrderBodySchema, type PackListResponse, type PackOrder, type RefundResponse } from '@shared/schemas/packing';
+import { packDayParamsSchema, refundOrderBodySchema, refundRequestHeadersSchema, shipOrderBodySchema, type PackListResponse, type PackOrder, type RefundResponse } from '@shared/schemas/packing';
 import { requireRole } from '../../middleware/require-role';
 import type { PackingService } from './packing.service';
 import type { RefundsService } from './refunds.service';
@@ -41,7 +41,9 @@ export function packingRoutes(packing: PackingService, refunds: RefundsService):
 
   router.post('/orders/:id/refund', requireRole('owner'), async (req, res) => {
     const { id } = orderParams.parse(req.params);
-    res.status(202).json((await refunds.refund(id, refundOrderBodySchema.parse(req.body ?? {}), req.user!.id)) satisfies RefundResponse);
+    const body = refundOrderBodySchema.parse(req.body ?? {});
+    const requestKey = refundRequestHeadersSchema.parse(req.headers)['idempotency-key'];
+    res.status(202).json((await refunds.refund(id, body, req.user!.id, requestKey)) satisfies RefundResponse);
   });
 
   return router;

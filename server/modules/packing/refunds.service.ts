@@ -5,6 +5,9 @@ import { AppError } from '../../lib/app-error';
 import { orderIdKey } from '../payments/payments.service';
 import type { RefundsRepo } from './refunds.repo';
 
+/** Metadata key on a Stripe refund holding the client's Idempotency-Key, so a repeated request finds its refund. */
+export const refundRequestKey = 'restday_refund_request';
+
 const idOf = (value: string | { id: string } | null | undefined) => (typeof value === 'string' ? value : (value?.id ?? null));
 
 export interface RefundsDeps {
@@ -22,20 +25,41 @@ export function createRefundsService({ repo, gateway }: RefundsDeps) {
   async function chargeOf(paymentIntentId: string) {
     const intent = await gateway.retrievePaymentIntent(paymentIntentId);
     const chargeId = idOf(intent.latest_charge);
-    if (!chargeId) throw AppError.conflict('not_paid', 'This order has no payment to refund.');
-    const charge = await gateway.retrieveCharge(chargeId);
-    if (charge.status !== 'succeeded') throw AppError.conflict('not_paid', 'This order has no payment to refund.');
+    const charge = chargeId ? await gateway.retrieveCharge(chargeId) : undefined;
+    if (!charge || charge.status !== 'succeeded') throw AppError.conflict('not_paid', 'This order has no payment to refund.');
     return charge;
   }
 
+  /** The refund an earlier request with the same Idempotency-Key made, if any. */
+  async function earlierRefund(paymentIntentId: string, requestKey: string) {
+    for await (const refund of gateway.stripe.refunds.list({ payment_intent: paymentIntentId, limit: 100 })) {
+      if (refund.metadata?.[refundRequestKey] === requestKey) return refund;
+    }
+    return undefined;
+  }
+
+  async function answer(orderId: string, requestedCents: number): Promise<RefundResponse> {
+    const current = await repo.findOrder(orderId);
+    return { refundedCents: current!.refundedCents, status: current!.status, requestedCents };
+  }
+
   return {
-    async refund(orderId: string, body: RefundOrderBody, actorId: string): Promise<RefundResponse> {
+    /**
+     * `requestKey` is the request's Idempotency-Key header: the same key again answers with the
+     * refund it made instead of refunding twice (a double click, a retry after a lost answer).
+     */
+    async refund(orderId: string, body: RefundOrderBody, actorId: string, requestKey?: string): Promise<RefundResponse> {
       const order = await repo.findOrder(orderId);
       if (!order) throw AppError.notFound('Order');
       if (!order.stripePaymentIntentId || order.status === 'pending_payment' || order.status === 'cancelled') {
         throw AppError.conflict('not_paid', 'This order has no payment to refund.');
       }
-      const charge = await chargeOf(order.stripePaymentIntentId);
+      const paymentIntentId = order.stripePaymentIntentId;
+      if (requestKey) {
+        const earlier = await earlierRefund(paymentIntentId, requestKey);
+        if (earlier) return answer(order.id, earlier.amount);
+      }
+      const charge = await chargeOf(paymentIntentId);
       const remaining = charge.amount - charge.amount_refunded;
       if (remaining <= 0) {
         // A retry after the refund went through but the stock step failed still puts the stock back (once).
@@ -49,13 +73,13 @@ export function createRefundsService({ repo, gateway }: RefundsDeps) {
       try {
         await gateway.stripe.refunds.create(
           {
-            payment_intent: order.stripePaymentIntentId,
+            payment_intent: paymentIntentId,
             amount,
             ...(body.reason ? { reason: body.reason } : {}),
-            metadata: { [orderIdKey]: order.id },
+            metadata: { [orderIdKey]: order.id, ...(requestKey ? { [refundRequestKey]: requestKey } : {}) },
           },
-          // The same request again (a double click, a retry) is the same refund; a further refund after it is a new key.
-          { idempotencyKey: `order-${order.id}-refund-${amount}-after-${charge.amount_refunded}` },
+          // Two requests racing with one key, or the same figures against the same refunded total, make one refund.
+          { idempotencyKey: requestKey ? `order-${order.id}-refund-${requestKey}` : `order-${order.id}-refund-${amount}-after-${charge.amount_refunded}` },
         );
       } catch (error) {
         if (error instanceof Stripe.errors.StripeInvalidRequestError || error instanceof Stripe.errors.StripeIdempotencyError) {
@@ -64,8 +88,7 @@ export function createRefundsService({ repo, gateway }: RefundsDeps) {
         throw error;
       }
       if (order.kind === 'green' && amount === remaining) await repo.returnUnshippedStock(order.id, actorId);
-      const current = await repo.findOrder(orderId);
-      return { refundedCents: current!.refundedCents, status: current!.status, requestedCents: amount };
+      return answer(order.id, amount);
     },
   };
 }
