@@ -85,14 +85,21 @@ export interface DayUpdateResult {
 
 /** The Roast Calendar's reads, and changing a day (with the moves a closure makes) in one transaction. */
 export function createCalendarRepo(db: Db) {
-  async function context(tx: DbOrTx, from: IsoDate, to: IsoDate): Promise<CalendarContext> {
-    const [{ settings }, overrides, groups, history] = await Promise.all([
-      loadShopSettings(tx),
-      overridesBetween(tx, from, to),
-      plannedGroups(tx, from, to),
-      lossHistory(tx),
-    ]);
-    return { settings, overrides, groups, lossHistory: history };
+  /** Reads in parallel on the pool; one after another inside a transaction (a connection runs one query at a time). */
+  async function context(handle: DbOrTx, from: IsoDate, to: IsoDate, inTransaction = false): Promise<CalendarContext> {
+    if (!inTransaction) {
+      const [{ settings }, overrides, groups, history] = await Promise.all([
+        loadShopSettings(handle),
+        overridesBetween(handle, from, to),
+        plannedGroups(handle, from, to),
+        lossHistory(handle),
+      ]);
+      return { settings, overrides, groups, lossHistory: history };
+    }
+    const { settings } = await loadShopSettings(handle);
+    const overrides = await overridesBetween(handle, from, to);
+    const groups = await plannedGroups(handle, from, to);
+    return { settings, overrides, groups, lossHistory: await lossHistory(handle) };
   }
 
   /** The paid or held roasted orders on the day, with their lines and customer, locked for the move. */
@@ -211,7 +218,7 @@ export function createCalendarRepo(db: Db) {
             .onConflictDoUpdate({ target: roastDays.date, set: { open: override.open, capacityGrams: override.capacityGrams, note: override.note } });
         }
         const empty: ClosurePlan = { orders: [], deliveries: [], emails: [] };
-        const ctx = await context(tx, date, horizonEnd);
+        const ctx = await context(tx, date, horizonEnd, true);
         if (override.open) return { override, context: ctx, plan: empty };
 
         const movingOrders = await ordersOn(tx, date);
@@ -234,7 +241,7 @@ export function createCalendarRepo(db: Db) {
         }
         for (const move of moves.deliveries) await tx.update(deliveries).set(move.dates).where(eq(deliveries.id, move.id));
         for (const email of moves.emails) await queueEmail(tx, { template: 'roast-day-moved', ...email });
-        return { override, context: await context(tx, date, date), plan: moves };
+        return { override, context: await context(tx, date, date, true), plan: moves };
       });
     },
   };
