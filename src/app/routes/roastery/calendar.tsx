@@ -9,30 +9,33 @@ import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import { browserToday } from '@/features/day-sheet/utils/browser-today';
 import { getRoastCalendarQueryOptions, useRoastCalendar } from '@/features/roast-calendar/api/get-roast-calendar';
 import { RoastCalendarMonth } from '@/features/roast-calendar/components/roast-calendar-month';
 import { RoastDayEditor } from '@/features/roast-calendar/components/roast-day-editor';
 import { addMonths, formatMonth, monthOf, monthRange, parseMonth } from '@/features/roast-calendar/utils/calendar-month';
+import { getShopSettingsQueryOptions, useShopSettings } from '@/features/shop-settings/api/get-shop-settings';
+import { shopToday } from '@/features/shop-settings/utils/shop-today';
 
-function monthFrom(search: URLSearchParams): string {
-  return parseMonth(search.get('month')) ?? monthOf(browserToday());
+function monthFrom(search: URLSearchParams, today: string): string {
+  return parseMonth(search.get('month')) ?? monthOf(today);
 }
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   ({ request }: LoaderFunctionArgs) => {
-    void queryClient.prefetchQuery(getRoastCalendarQueryOptions(monthRange(monthFrom(new URL(request.url).searchParams))));
+    const month = monthFrom(new URL(request.url).searchParams, shopToday(queryClient.getQueryData(getShopSettingsQueryOptions().queryKey)));
+    void queryClient.prefetchQuery(getRoastCalendarQueryOptions(monthRange(month)));
+    void queryClient.prefetchQuery(getShopSettingsQueryOptions());
     return null;
   };
 
 export default function RoastCalendarRoute() {
   const [search] = useSearchParams();
-  const month = monthFrom(search);
+  const today = shopToday(useShopSettings().data);
+  const month = monthFrom(search, today);
   const calendar = useRoastCalendar(monthRange(month));
   const [selectedDate, setSelectedDate] = useState<string>();
   const selected: CalendarDay | undefined = calendar.data?.days.find((day) => day.date === selectedDate);
-  const today = browserToday();
 
   return (
     <>

@@ -4,7 +4,7 @@ import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { RoastListLine, RoastListResponse } from '@shared/schemas/roastery';
 import { Button, buttonStyles } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
-import { roastListPath } from '../api/get-roast-list';
+import { roastListPath, roastListPdfPath } from '../api/get-roast-list';
 import { formatExactGrams, formatLossPct } from '../utils/roast-day-format';
 import { RecordBatchForm } from './record-batch-form';
 
@@ -126,9 +126,13 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
           <Download aria-hidden="true" className="size-4" />
           Roast List (CSV)
         </a>
-        <a href={roastListPath(date, 'pdf')} download className={buttonStyles('secondary')}>
+        <a href={roastListPdfPath(date, 'letter')} download className={buttonStyles('secondary')}>
           <Download aria-hidden="true" className="size-4" />
-          Roast List (PDF)
+          Roast List (PDF, Letter)
+        </a>
+        <a href={roastListPdfPath(date, 'a4')} download className={buttonStyles('secondary')}>
+          <Download aria-hidden="true" className="size-4" />
+          Roast List (PDF, A4)
         </a>
       </div>
 
