@@ -29,7 +29,7 @@ export interface RoastDayGroup {
  * The orders a roast day roasts: roasted-coffee orders paid or held with that roast date. A
  * Roaster's Rotation line (no lot) takes the lot picked for the day, when there is one.
  */
-export const roastDayOrdersWhere = (roastDate: string) => sql`
+const roastDayOrdersWhere = (roastDate: string) => sql`
   o.roast_date = ${roastDate} and o.kind = 'roasted' and o.status in ('paid', 'held') and oi.kind = 'roasted'`;
 
 export function createRoastListRepo(db: Db) {
@@ -40,13 +40,18 @@ export function createRoastListRepo(db: Db) {
      */
     async dayGroups(roastDate: string): Promise<RoastDayGroup[]> {
       const result = await db.execute<Record<string, string | number | null>>(sql`
-        with day_lines as (
-          select coalesce(oi.lot_id, rp.lot_id) as lot_id, oi.roast_level, oi.fill_grams, sum(oi.quantity)::int8 as bags
+        with summed as (
+          select oi.lot_id, oi.roast_level, oi.fill_grams, sum(oi.quantity)::int8 as bags
           from orders o
           join order_items oi on oi.order_id = o.id
-          left join rotation_picks rp on oi.lot_id is null and rp.roast_date = o.roast_date
           where ${roastDayOrdersWhere(roastDate)}
           group by 1, 2, 3
+        ),
+        -- The day's rotation pick joins the few summed groups, not every line.
+        day_lines as (
+          select coalesce(s.lot_id, rp.lot_id) as lot_id, s.roast_level, s.fill_grams, s.bags
+          from summed s
+          left join rotation_picks rp on s.lot_id is null and rp.roast_date = ${roastDate}
         ),
         history as (
           select b.lot_id, b.roast_level,
