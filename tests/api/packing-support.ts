@@ -112,8 +112,9 @@ export async function allocationsOf(orderId: string) {
   return getTestDb()
     .select({ batchId: bagAllocations.batchId, orderItemId: bagAllocations.orderItemId, bags: bagAllocations.bags, grams: bagAllocations.grams })
     .from(bagAllocations)
+    .innerJoin(batches, eq(batches.id, bagAllocations.batchId))
     .where(eq(bagAllocations.orderId, orderId))
-    .orderBy(asc(bagAllocations.createdAt));
+    .orderBy(asc(batches.createdAt), asc(batches.id));
 }
 
 export async function orderStatusOf(orderId: string) {

@@ -62,8 +62,10 @@ function queries(db: DbOrTx) {
       db
         .select({ orderItemId: bagAllocations.orderItemId, batchId: bagAllocations.batchId, bags: bagAllocations.bags })
         .from(bagAllocations)
+        .innerJoin(batches, eq(batches.id, bagAllocations.batchId))
         .where(inArray(bagAllocations.orderId, ids))
-        .orderBy(asc(bagAllocations.createdAt), asc(bagAllocations.id)),
+        // Bags are filled from the oldest batch first (allocateBags), so bag 1 names the oldest batch.
+        .orderBy(asc(batches.createdAt), asc(batches.id)),
     ]);
     return found.map((order) => {
       const orderLines = lines.filter((line) => line.orderId === order.id);

@@ -1,4 +1,4 @@
-import { and, asc, eq, isNull, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { bagAllocations, batches, lots, orderItems, orders, rotationPicks, users } from '../../db/schema/index';
 
@@ -40,7 +40,7 @@ export function createTraceRepo(db: Db) {
         .leftJoin(rotationPicks, and(isNull(orderItems.lotId), eq(rotationPicks.roastDate, orders.roastDate)))
         .leftJoin(lots, eq(lots.id, sql`coalesce(${orderItems.lotId}, ${rotationPicks.lotId})`))
         .where(eq(orderItems.orderId, orderId))
-        .orderBy(asc(lots.name), asc(orderItems.id));
+        .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id));
     },
 
     /** The order's bag allocations with the batch and the lot the batch roasted. */
@@ -60,7 +60,8 @@ export function createTraceRepo(db: Db) {
         .innerJoin(batches, eq(batches.id, bagAllocations.batchId))
         .innerJoin(lots, eq(lots.id, batches.lotId))
         .where(eq(bagAllocations.orderId, orderId))
-        .orderBy(asc(bagAllocations.createdAt), asc(bagAllocations.id));
+        // Bags are filled from the oldest batch first, so this is also the order they were filled in.
+        .orderBy(asc(batches.createdAt), asc(batches.id));
     },
 
     async batch(batchId: string) {
