@@ -133,7 +133,11 @@ describe('PUT /api/roastery/calendar/:date', () => {
     } finally {
       mailer.close();
     }
-    const [inboxA, inboxB, inboxC] = await Promise.all([customerA, customerB, customerC].map((customer) => inboxOf(mailCatcherUrl, customer.email)));
+    const [inboxA, inboxB, inboxC] = await Promise.all([
+      inboxOf(mailCatcherUrl, customerA.email),
+      inboxOf(mailCatcherUrl, customerB.email),
+      inboxOf(mailCatcherUrl, customerC.email),
+    ]);
     expect(inboxA).toHaveLength(1);
     expect(inboxB).toHaveLength(1);
     expect(inboxC).toEqual([]);
