@@ -105,8 +105,8 @@ describe('a roast day in a real browser', () => {
     await page.getByText('Safety before you start the roaster').waitFor();
 
     const level = roastLevelLabels[line.roastLevel];
-    await page.getByRole('button', { name: `Record batch of ${line.lotName}, ${level}` }).click();
-    const form = page.getByRole('form', { name: `Record a batch of ${line.lotName}, ${level}` });
+    await page.getByRole('button', { name: `Record batch of ${line.lotName}, ${level}`, exact: true }).click();
+    const form = page.getByRole('form', { name: `Record a batch of ${line.lotName}, ${level}`, exact: true });
     const greenIn = Number(await form.getByLabel('Green in (g)').inputValue());
     expect(greenIn).toBe(line.batches[line.recorded.batches]?.greenGrams);
     // A loss of exactly the planned percentage, whole grams: roasted = round(green × (1 − loss)).
@@ -179,6 +179,8 @@ describe('a roast day in a real browser', () => {
   });
 
   describe('accessibility (axe-core, WCAG 2.2 AA tags)', () => {
+    // Each page loads, then axe walks its whole DOM: slow on a busy machine.
+    const auditTimeout = 120_000;
     const tags = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 
     async function violationsOn(page: Page, path: string, ready: () => Promise<void>) {
@@ -203,7 +205,7 @@ describe('a roast day in a real browser', () => {
       expect(violations).toEqual([]);
       expect(audit.problems).toEqual([]);
       await audit.context.close();
-    });
+    }, auditTimeout);
 
     it('finds no violations on the owner’s shop settings', async () => {
       const audit = await signedIn(owner, { bypassCSP: true });
@@ -211,6 +213,6 @@ describe('a roast day in a real browser', () => {
       expect(violations).toEqual([]);
       expect(audit.problems).toEqual([]);
       await audit.context.close();
-    });
+    }, auditTimeout);
   });
 });
