@@ -1,8 +1,10 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { localDateOf } from '@shared/domain/shop-time';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
 import type { Batch, BatchCreated, RoastListResponse } from '@shared/schemas/roastery';
+import { defaultShopSettings } from '@shared/schemas/settings';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
 
 beforeEach(() => window.localStorage.clear());
@@ -301,5 +303,35 @@ describe('Day Sheet tabs and Pack List', () => {
       trackingNumber: 'WR12345678',
     });
     await waitFor(() => expect(within(order).getByText('Shipped', { selector: 'span' })).toBeTruthy());
+  });
+});
+
+describe('Reaching the Day Sheet', () => {
+  it('opens today’s sheet in the shop’s time zone from the navigation', async () => {
+    const fetchMock = stubFetch((url) => {
+      if (url.pathname === '/api/roastery/settings') return jsonResponse({ ...defaultShopSettings, timeZone: 'Pacific/Kiritimati' });
+      if (url.pathname.endsWith('/batches')) return jsonResponse({ items: [] });
+      if (url.pathname.endsWith('/roast-list')) {
+        const date = url.pathname.split('/')[4] ?? '';
+        return jsonResponse({ ...roastList, date, lines: [], pull: [], warnings: [] });
+      }
+      return apiErrorResponse(404, 'not_found', 'No fake');
+    });
+    const { router } = renderApp('/roastery', { session: staff });
+
+    const nav = await screen.findByRole('navigation', { name: 'Roastery' }, { timeout: 15_000 });
+    fireEvent.click(within(nav).getByRole('link', { name: 'Day Sheet' }));
+    // UTC+14 all year (IANA tz database): a day no browser in a test run is likely to share with UTC.
+    const today = localDateOf(new Date(), 'Pacific/Kiritimati');
+    await waitFor(() => expect(router.state.location.pathname).toBe(`/roastery/days/${today}`));
+    expect(await screen.findByText('Nothing to roast')).toBeTruthy();
+    expect(sentRequests(fetchMock, 'GET', `/api/roastery/days/${today}/roast-list`).length).toBeGreaterThan(0);
+    expect(within(nav).getByRole('link', { name: 'Day Sheet' }).getAttribute('aria-current')).toBe('page');
+  });
+
+  it('answers an address that is not a date with the not-found page', async () => {
+    daySheetServer();
+    renderApp('/roastery/days/someday', { session: staff });
+    expect(await screen.findByRole('heading', { level: 1, name: 'Page not found' }, { timeout: 15_000 })).toBeTruthy();
   });
 });
