@@ -3,6 +3,7 @@ import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { defaultLossModel } from '@shared/domain/roast-loss';
 import { addDays } from '@shared/domain/shop-time';
 import { apiErrorSchema } from '@shared/schemas/errors';
+import type { ShopSettings } from '@shared/schemas/settings';
 import { calendarDayUpdateResponseSchema, calendarResponseSchema, roastListResponseSchema } from '@shared/schemas/roastery';
 import { deliveries, emailOutbox, orders, roastDays } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
@@ -33,26 +34,28 @@ async function movedEmailsTo(addresses: string[]) {
   return getTestDb().select().from(emailOutbox).where(inArray(emailOutbox.toAddress, addresses));
 }
 
+// The schedule the expected dates below are worked from: roast Monday, Wednesday and Friday;
+// ship Monday to Friday; one day's degassing hold; rest 2 days for filter and 7 for espresso;
+// best before 28 days after roasting (TRADE.md product defaults).
+const shopSettingsForDates = {
+  timeZone: 'America/Denver',
+  roastWeekdays: ['mon', 'wed', 'fri'],
+  shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'],
+  degasHoldDays: 1,
+  restDays: { filter: 2, espresso: 7 },
+  restAdjustDays: { light: 0, medium: 0, 'medium-dark': 0, dark: 0, french: 0 },
+  bestBeforeDays: 28,
+  overagePct: 2,
+  dayCapacityGrams: 60_000,
+  roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
+  lossModel: defaultLossModel,
+} satisfies Partial<ShopSettings>;
+
 beforeAll(async () => {
   app = createTestApp();
   staff = await createTestUser('staff').then((user) => signedInAgent(app, user));
   lotId = await insertLot(`${tag}-CAL`, { name: 'Invented Saddle Washed', stockGrams: 50_000 });
-  // The schedule the expected dates below are worked from: roast Monday, Wednesday and Friday;
-  // ship Monday to Friday; one day's degassing hold; rest 2 days for filter and 7 for espresso;
-  // best before 28 days after roasting (TRADE.md product defaults).
-  await useShopSettings({
-    timeZone: 'America/Denver',
-    roastWeekdays: ['mon', 'wed', 'fri'],
-    shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'],
-    degasHoldDays: 1,
-    restDays: { filter: 2, espresso: 7 },
-    restAdjustDays: { light: 0, medium: 0, 'medium-dark': 0, dark: 0, french: 0 },
-    bestBeforeDays: 28,
-    overagePct: 2,
-    dayCapacityGrams: 60_000,
-    roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
-    lossModel: defaultLossModel,
-  });
+  await useShopSettings(shopSettingsForDates);
 });
 
 describe('PUT /api/roastery/calendar/:date', () => {
@@ -172,6 +175,24 @@ describe('PUT /api/roastery/calendar/:date', () => {
     const queued = await movedEmailsTo([customer.email]);
     expect(queued).toHaveLength(1);
     expect((queued[0]!.payload as { items: unknown[] }).items).toHaveLength(2);
+  });
+
+  it('answers 409 when no later roast day has room for an order, and leaves the day open and the order where it was', async () => {
+    const day = '2031-05-19'; // a Monday
+    const customer = await createTestUser('customer');
+    const order = await insertRoastedOrder({ userId: customer.id, roastDate: day, dates: datesAfter(day), lines: [{ lotId, size: '2lb', quantity: 3, roastLevel: 'medium' }] });
+    // 3 × 908 g = 2,724 g roasted needs more than a 2,000 g day can roast, on any day.
+    await useShopSettings({ ...shopSettingsForDates, dayCapacityGrams: 2_000 });
+    try {
+      const response = await staff.put(`/api/roastery/calendar/${day}`).send({ open: false });
+      expect(response.status).toBe(409);
+      expect(apiErrorSchema.parse(response.body).error.code).toBe('no_roast_day');
+    } finally {
+      await useShopSettings(shopSettingsForDates);
+    }
+    expect(await getTestDb().select().from(roastDays).where(eq(roastDays.date, day))).toEqual([]);
+    expect((await orderDates([order]))[order]).toEqual({ roastDate: day, ...datesAfter(day) });
+    expect(await movedEmailsTo([customer.email])).toEqual([]);
   });
 
   it('reopening a day that roasts by the weekly settings removes the change, and it plans again', async () => {
