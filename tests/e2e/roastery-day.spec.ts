@@ -143,6 +143,17 @@ describe('a roast day in a real browser', () => {
     // What the roaster needs is still on the page.
     expect(await page.getByRole('heading', { level: 2, name: 'Pull list' }).isVisible()).toBe(true);
     expect(await page.getByRole('heading', { level: 2, name: 'By lot and roast level' }).isVisible()).toBe(true);
+
+    // The printable width of A4 (210 mm) and Letter (8.5 in) inside the stylesheet's 12 mm margins, at 96 px an inch:
+    // nothing may run off the side of either sheet.
+    const screenViewport = page.viewportSize();
+    for (const [paper, widthMm] of [['A4', 210], ['Letter', 215.9]] as const) {
+      await page.setViewportSize({ width: Math.floor(((widthMm - 24) / 25.4) * 96), height: 1000 });
+      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      expect(overflow, `${paper} overflows by ${overflow}px`).toBeLessThanOrEqual(0);
+      await page.pdf({ path: `${screenshotDir}/roast-list-${paper.toLowerCase()}.pdf`, format: paper, printBackground: false });
+    }
+    if (screenViewport) await page.setViewportSize(screenViewport);
     await page.emulateMedia({ media: 'screen' });
     expect(await page.locator('button:visible').count()).toBeGreaterThan(0);
     expect(problems).toEqual([]);
