@@ -307,7 +307,7 @@ describe('Day Sheet tabs and Pack List', () => {
 });
 
 describe('Reaching the Day Sheet', () => {
-  it('opens today’s sheet in the shop’s time zone from the navigation', async () => {
+  it('opens today’s sheet in the shop’s time zone from the navigation and the overview', async () => {
     const fetchMock = stubFetch((url) => {
       if (url.pathname === '/api/roastery/settings') return jsonResponse({ ...defaultShopSettings, timeZone: 'Pacific/Kiritimati' });
       if (url.pathname.endsWith('/batches')) return jsonResponse({ items: [] });
@@ -320,6 +320,7 @@ describe('Reaching the Day Sheet', () => {
     const { router } = renderApp('/roastery', { session: staff });
 
     const nav = await screen.findByRole('navigation', { name: 'Roastery' }, { timeout: 15_000 });
+    expect((await screen.findByRole('link', { name: 'Open today’s Day Sheet' })).getAttribute('href')).toBe('/roastery/days');
     fireEvent.click(within(nav).getByRole('link', { name: 'Day Sheet' }));
     // UTC+14 all year (IANA tz database): a day no browser in a test run is likely to share with UTC.
     const today = localDateOf(new Date(), 'Pacific/Kiritimati');
