@@ -195,6 +195,23 @@ describe('PUT /api/roastery/calendar/:date', () => {
     expect(await movedEmailsTo([customer.email])).toEqual([]);
   });
 
+  it('two closures at once never fill the same later day past its capacity', async () => {
+    // Monday June 16 and Wednesday June 18 close together; Friday June 20 takes 600 g. Each day holds
+    // one order of 1 × 341 g at medium: ceil(341 × 1.02 ÷ 0.85) = 410 g of green, so Friday has room for one.
+    const customer = await createTestUser('customer');
+    expect((await staff.put('/api/roastery/calendar/2031-06-20').send({ open: true, capacityGrams: 600 })).status).toBe(200);
+    const monday = await insertRoastedOrder({ userId: customer.id, roastDate: '2031-06-16', dates: datesAfter('2031-06-16'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const wednesday = await insertRoastedOrder({ userId: customer.id, roastDate: '2031-06-18', dates: datesAfter('2031-06-18'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const responses = await Promise.all(['2031-06-16', '2031-06-18'].map((date) => staff.put(`/api/roastery/calendar/${date}`).send({ open: false })));
+    expect(responses.map((response) => response.status)).toEqual([200, 200]);
+    const dates = await orderDates([monday, wednesday]);
+    const roastDates = [dates[monday]!.roastDate, dates[wednesday]!.roastDate].sort();
+    // One on Friday, the other on the next open day, Monday June 23.
+    expect(roastDates).toEqual(['2031-06-20', '2031-06-23']);
+    const { days } = calendarResponseSchema.parse((await staff.get('/api/roastery/calendar?from=2031-06-20&to=2031-06-20')).body);
+    expect(days[0]).toMatchObject({ capacityGrams: 600, plannedGreenGrams: 410, ordersCount: 1 });
+  });
+
   it('reopening a day that roasts by the weekly settings removes the change, and it plans again', async () => {
     const response = await staff.put('/api/roastery/calendar/2031-05-28').send({ open: false });
     expect(response.status).toBe(200);
