@@ -114,7 +114,12 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
     doc.font(bold ? 'Helvetica-Bold' : 'Helvetica').fontSize(9);
     const heights = columns.map((column, index) => doc.heightOfString(cells[index] ?? '', { width: column.width * width - 6 }));
     const height = Math.max(...heights) + 4;
-    if (doc.y + height > bottom()) doc.addPage();
+    if (doc.y + height > bottom()) {
+      doc.addPage();
+      // A table that runs onto a new page repeats its column titles there.
+      if (!bold) row(columns, columns.map((column) => column.title), true);
+      doc.font('Helvetica').fontSize(9);
+    }
     const top = doc.y;
     let x = left;
     columns.forEach((column, index) => {
