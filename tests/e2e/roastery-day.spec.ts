@@ -133,6 +133,7 @@ describe('a roast day in a real browser', () => {
     await page.goto(`${baseUrl}/roastery/days/${roastDate}`);
     await page.getByRole('heading', { level: 2, name: 'Pull list' }).waitFor();
     expect(await page.getByRole('navigation', { name: 'Roastery' }).isVisible()).toBe(true);
+    await page.screenshot({ path: `${screenshotDir}/roast-list-screen.png`, fullPage: true });
 
     await page.emulateMedia({ media: 'print' });
     await page.screenshot({ path: `${screenshotDir}/roast-list-print.png`, fullPage: true });

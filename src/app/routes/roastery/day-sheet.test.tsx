@@ -284,6 +284,9 @@ describe('Day Sheet tabs and Pack List', () => {
     expect(within(order).getByText('Net Wt 12 oz (340 g)')).toBeTruthy();
     expect(within(order).queryByRole('button', { name: 'Mark shipped' })).toBeNull();
     expect(screen.getByRole('link', { name: 'Labels (PDF)' }).getAttribute('href')).toBe(`/api/roastery/days/${day}/labels.pdf`);
+    expect(within(order).getByRole('link', { name: 'Trace this order for Juno Reed' }).getAttribute('href')).toBe(
+      '/roastery/orders/6b2c3d4e-5f6a-4b7c-9d8e-0f1a2b3c4d5e/trace',
+    );
 
     fireEvent.click(within(order).getByRole('button', { name: 'Mark packed' }));
     await waitFor(() => expect(within(order).getByText('Packed', { selector: 'span' })).toBeTruthy());

@@ -108,7 +108,7 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
           {failure}
         </p>
       ) : null}
-      <div className="mt-4 flex flex-wrap gap-2 print:hidden">
+      <div className="mt-4 flex flex-wrap items-center gap-2 print:hidden">
         {canPack(order.status) ? (
           <Button variant="secondary" disabled={markPacked.isPending} aria-describedby={headingId} onClick={() => void pack()}>
             <PackageCheck aria-hidden="true" className="size-4" />
@@ -121,6 +121,9 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
             Mark shipped
           </Button>
         ) : null}
+        <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="ml-auto font-semibold text-leaf underline">
+          Trace this order<span className="sr-only"> for {order.customerName}</span>
+        </Link>
       </div>
     </li>
   );
