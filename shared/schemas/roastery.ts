@@ -149,6 +149,11 @@ export type RoastListResponse = z.infer<typeof roastListResponseSchema>;
  * (roasted below green, first crack before the end) are `batchMetrics` in shared/domain/roast-metrics.
  */
 export const batchCreateSchema = z.object({
+  /**
+   * Chosen by the client (a fresh UUID per batch) so a retried request records the batch once:
+   * the same id again answers with the batch already recorded.
+   */
+  id: z.uuid('Use a UUID.').optional(),
   roastDate: isoDate('roast date'),
   lotCode: z.string().trim().min(1, 'Choose a lot.').max(40),
   roastLevel: z.enum(roastLevels),

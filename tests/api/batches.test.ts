@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { defaultLossModel } from '@shared/domain/roast-loss';
@@ -146,6 +147,27 @@ describe('POST /api/roastery/batches', () => {
     const response = await staff.post('/api/roastery/batches').send({ roastDate, lotCode: `${tag}-NONE`, roastLevel: 'medium', greenGramsIn: 1_000, roastedGramsOut: 850 });
     expect(response.status).toBe(404);
     expect(apiErrorSchema.parse(response.body).error.fields).toHaveProperty('lotCode');
+  });
+
+  it('records a batch once when the same request comes again with its id, at once or later', async () => {
+    const code = `${tag}-RETRY`;
+    const lotId = await insertLot(code, { stockGrams: 20_000 });
+    const body = { id: randomUUID(), roastDate, lotCode: code, roastLevel: 'medium', greenGramsIn: 6_000, roastedGramsOut: 5_100 };
+    const [first, racing] = await Promise.all([staff.post('/api/roastery/batches').send(body), staff.post('/api/roastery/batches').send(body)]);
+    const later = await staff.post('/api/roastery/batches').send(body);
+    expect([first.status, racing.status, later.status]).toEqual([201, 201, 201]);
+    const replies = [first, racing, later].map((response) => batchCreatedSchema.parse(response.body));
+    // 20,000 g − 6,000 g, taken once.
+    expect(replies.map((reply) => [reply.id, reply.lossPct, reply.stockGrams])).toEqual(Array(3).fill([body.id, 15, 14_000]));
+    const state = await lotState(lotId);
+    expect(state.stockGrams).toBe(14_000);
+    expect(state.batches.map((batch) => batch.id)).toEqual([body.id]);
+    expect(state.movements.filter((movement) => movement.reason === 'roast')).toHaveLength(1);
+
+    const other = await staff.post('/api/roastery/batches').send({ ...body, roastedGramsOut: 5_000 });
+    expect(other.status).toBe(409);
+    expect(apiErrorSchema.parse(other.body).error).toMatchObject({ code: 'batch_id_taken', fields: { id: expect.any(String) } });
+    expect((await lotState(lotId)).stockGrams).toBe(14_000);
   });
 
   it('keeps two batches racing for the last green from taking stock below zero', async () => {
