@@ -132,12 +132,6 @@ function queries(db: DbOrTx) {
         .map((batch) => ({ batchId: batch.id, lotId: batch.lotId, roastLevel: batch.roastLevel, freeGrams: batch.roastedGramsOut - (takenBy.get(batch.id) ?? 0) }));
     },
 
-    async lotCodes(lotIds: string[]) {
-      if (lotIds.length === 0) return new Map<string, string>();
-      const rows = await db.select({ id: lots.id, code: lots.code }).from(lots).where(inArray(lots.id, lotIds));
-      return new Map(rows.map((row) => [row.id, row.code]));
-    },
-
     async insertAllocations(orderId: string, allocations: { orderItemId: string; batchId: string; bags: number; grams: number }[]) {
       if (allocations.length === 0) return;
       await db.insert(bagAllocations).values(allocations.map((allocation) => ({ ...allocation, orderId })));

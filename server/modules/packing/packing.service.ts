@@ -55,7 +55,7 @@ function packOrderOf(order: PackListRow): PackOrder {
 
 const grams = (value: number) => `${value.toLocaleString('en-US')} g`;
 
-function shortfallMessage(shortfalls: Shortfall[], lotCodes: Map<string, string>, roastDate: string): string {
+function shortfallMessage(shortfalls: Shortfall[], lotCodes: Map<string | null, string | null>, roastDate: string): string {
   const parts = shortfalls.map(
     (short) =>
       `${lotCodes.get(short.lotId) ?? 'the lot'} at ${roastLevelLabels[short.roastLevel].toLowerCase()} needs ${grams(short.neededGrams)} in whole bags and its batches have ${grams(short.freeGrams)} left`,
@@ -89,7 +89,7 @@ export function createPackingService({ repo, clock }: PackingDeps) {
     const lotLevels = [...new Map(toFill.map((line) => [`${line.lotId}|${line.roastLevel}`, { lotId: line.lotId, roastLevel: line.roastLevel }])).values()];
     const plan = allocateBags(toFill, await tx.lockBatchRoom(order.roastDate, lotLevels));
     if (!plan.ok) {
-      const lotCodes = await tx.lotCodes(plan.shortfalls.map((short) => short.lotId));
+      const lotCodes = new Map(lines.map((line) => [line.lotId, line.lotCode]));
       throw AppError.conflict('batches_short', shortfallMessage(plan.shortfalls, lotCodes, order.roastDate));
     }
     await tx.insertAllocations(order.id, plan.allocations);
