@@ -115,6 +115,7 @@ function daySheetServer({ batchAnswer }: { batchAnswer?: () => Response } = {}) 
   return stubFetch((url, init) => {
     const method = init?.method ?? 'GET';
     const path = url.pathname;
+    if (path === '/api/roastery/settings') return jsonResponse({ ...defaultShopSettings, timeZone: 'America/Denver' });
     if (path === `/api/roastery/days/${day}/roast-list`) return jsonResponse(roastList);
     if (path === `/api/roastery/days/${day}/batches`) return jsonResponse({ items: batches });
     if (path === `/api/roastery/days/${day}/pack-list`) return jsonResponse({ date: day, orders: [order] } satisfies PackListResponse);
@@ -216,6 +217,8 @@ describe('Day Sheet → Roast List', () => {
     const row = within(recorded).getByRole('row', { name: /Test Ridge Washed/ });
     expect(row.textContent).toContain('Within expected');
     expect(row.textContent).toContain('11:45 total');
+    // Recorded at 15:20 UTC: 8:20 in the morning in Denver (UTC−7 in December; IANA tz database).
+    await waitFor(() => expect(row.textContent).toContain('8:20 AM'));
   });
 
   it('refuses a roasted weight above the green before sending anything, and shows a server refusal on its field', async () => {

@@ -16,6 +16,7 @@ import { RoastListView } from '@/features/day-sheet/components/roast-list-view';
 import { formatRoastDay } from '@/features/day-sheet/utils/roast-day-format';
 import { getPackListQueryOptions, usePackList } from '@/features/packing/api/get-pack-list';
 import { PackListView } from '@/features/packing/components/pack-list-view';
+import { useShopSettings } from '@/features/shop-settings/api/get-shop-settings';
 
 function tabOf(search: URLSearchParams): DaySheetTab {
   return search.get('tab') === 'pack' ? 'pack' : 'roast';
@@ -49,6 +50,7 @@ function Loading({ what }: { what: string }) {
 function RoastListPanel({ date }: { date: string }) {
   const roastList = useRoastList(date);
   const batches = useDayBatches(date);
+  const timeZone = useShopSettings().data?.timeZone;
   if (roastList.isError) return <ErrorState title="The Roast List could not load" error={roastList.error} onRetry={() => void roastList.refetch()} />;
   if (!roastList.data) return <Loading what="Roast List" />;
   return (
@@ -61,7 +63,7 @@ function RoastListPanel({ date }: { date: string }) {
         {batches.isError ? (
           <ErrorState title="The day’s batches could not load" error={batches.error} onRetry={() => void batches.refetch()} />
         ) : batches.data ? (
-          <DayBatches batches={batches.data.items} />
+          <DayBatches batches={batches.data.items} timeZone={timeZone} />
         ) : (
           <Loading what="batches" />
         )}

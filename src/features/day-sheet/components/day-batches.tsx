@@ -6,11 +6,14 @@ import { paths } from '@/config/paths';
 import { formatExactGrams, formatLossPct, formatMinutesSeconds } from '../utils/roast-day-format';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
-const numberCell = `${cell} text-right tabular-nums`;
-const time = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit' });
+const numberCell = `${cell} whitespace-nowrap text-right tabular-nums`;
 
-/** The batches recorded for the day, each with its loss, its flag and a way to trace it. */
-export function DayBatches({ batches }: { batches: Batch[] }) {
+/**
+ * The batches recorded for the day, each with its loss, its flag and a way to trace it. Times read
+ * in `timeZone`, the shop's, when known.
+ */
+export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?: string }) {
+  const time = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit', timeZone });
   if (batches.length === 0) return <p className="text-ink-muted">No batches recorded for this day yet.</p>;
   return (
     <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">

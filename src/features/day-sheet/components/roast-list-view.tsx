@@ -10,7 +10,7 @@ import { RecordBatchForm } from './record-batch-form';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
 const headCell = `${cell} text-small font-semibold`;
-const numberCell = `${cell} text-right tabular-nums`;
+const numberCell = `${cell} whitespace-nowrap text-right tabular-nums`;
 
 /** "2 × 4,200 g" when the loads are equal, else each load. */
 function describeLoads(batches: RoastListLine['batches']): string {
@@ -56,7 +56,7 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
           ) : null}
         </td>
         <td className={`${cell} print:hidden`}>
-          <Button variant="secondary" aria-expanded={recording} aria-controls={formRowId} onClick={() => setRecording((open) => !open)}>
+          <Button variant="secondary" className="whitespace-nowrap" aria-expanded={recording} aria-controls={formRowId} onClick={() => setRecording((open) => !open)}>
             {recording ? 'Close' : 'Record batch'}
             <span className="sr-only">
               {' '}
