@@ -207,7 +207,6 @@ export function createCalendarRepo(db: Db) {
           capacityGrams: update.capacityGrams ?? null,
           note: update.note ?? existing?.note ?? '',
         };
-        const horizonEnd = addDays(date, SEARCH_HORIZON_DAYS);
         const { settings } = await loadShopSettings(tx);
         if (isWeeklyDefault(override, settings)) {
           await tx.delete(roastDays).where(eq(roastDays.date, date));
@@ -217,22 +216,17 @@ export function createCalendarRepo(db: Db) {
             .values(override)
             .onConflictDoUpdate({ target: roastDays.date, set: { open: override.open, capacityGrams: override.capacityGrams, note: override.note } });
         }
-        const empty: ClosurePlan = { orders: [], deliveries: [], emails: [] };
-        const ctx = await context(tx, date, horizonEnd, true);
-        if (override.open) return { override, context: ctx, plan: empty };
+        const unchanged = async () => ({ override, context: await context(tx, date, date, true), plan: { orders: [], deliveries: [], emails: [] } });
+        if (override.open) return unchanged();
 
         const movingOrders = await ordersOn(tx, date);
         const carried = new Set(movingOrders.flatMap((order) => (order.deliveryId ? [order.deliveryId] : [])));
         const movingDeliveries = await deliveriesOn(tx, date, carried);
-        if (movingOrders.length === 0 && movingDeliveries.length === 0) return { override, context: ctx, plan: empty };
+        if (movingOrders.length === 0 && movingDeliveries.length === 0) return unchanged();
 
-        const moves = plan({
-          closedDate: date,
-          orders: movingOrders,
-          deliveries: movingDeliveries,
-          // What the days after the closed one already hold.
-          context: { ...ctx, groups: ctx.groups.filter((group) => group.roastDate > date) },
-        });
+        // What the days after the closed one already hold, as far ahead as a move may go.
+        const ahead = await context(tx, addDays(date, 1), addDays(date, SEARCH_HORIZON_DAYS), true);
+        const moves = plan({ closedDate: date, orders: movingOrders, deliveries: movingDeliveries, context: ahead });
         for (const move of moves.orders) {
           await tx.update(orders).set(move.dates).where(eq(orders.id, move.id));
           if (move.deliveryId) {
