@@ -34,7 +34,10 @@ export const calendarDaySchema = z.object({
   open: z.boolean(),
   /** Green grams the day can roast: the day's own figure or the shop's daily capacity; 0 when closed. */
   capacityGrams: wholeGrams,
-  /** Green grams the day's paid, unroasted roasted-coffee orders need (the Roast List's total). */
+  /**
+   * Green grams the day's paid and held roasted-coffee orders need, planned as the Roast List plans
+   * them; Roaster's Rotation bags with no lot picked yet count at their level's default loss.
+   */
   plannedGreenGrams: wholeGrams,
   note: z.string().nullable(),
   /** Paid or held roasted-coffee orders with this roast date. */
