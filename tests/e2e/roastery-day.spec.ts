@@ -198,6 +198,8 @@ describe('a roast day in a real browser', () => {
     async function violationsOn(page: Page, path: string, ready: () => Promise<void>) {
       await page.goto(`${baseUrl}${path}`);
       await ready();
+      // A picture of each audited page for review, named after its address.
+      await page.screenshot({ path: `${screenshotDir}/${path.replace(/[^a-z0-9]+/gi, '-').replace(/^-|-$/g, '')}.png`, fullPage: true });
       const results = await new AxeBuilder({ page }).withTags(tags).analyze();
       return results.violations.map((violation) => `${path}: ${violation.id} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`);
     }
