@@ -2,7 +2,6 @@ import clsx from 'clsx';
 import { Link } from 'react-router-dom';
 import { weekdayLabels, weekdays } from '@shared/domain/vocabulary';
 import type { CalendarDay } from '@shared/schemas/roastery';
-import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
 import { formatCalendarDay, formatLoad } from '../utils/calendar-format';
 import { monthWeeks } from '../utils/calendar-month';
@@ -53,18 +52,13 @@ function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isT
         </p>
       ) : null}
       {day.note ? <p className="mt-1 line-clamp-2 text-caption text-ink-muted">{day.note}</p> : null}
-      <div className="mt-1 flex flex-wrap gap-x-2">
+      <div className="mt-1 flex flex-wrap items-baseline gap-x-3">
         <Link to={paths.roastery.daySheet.getHref(day.date)} className="text-caption font-semibold text-leaf underline">
           Day Sheet<span className="sr-only"> for {formatCalendarDay(day.date)}</span>
         </Link>
-        <Button
-          variant="secondary"
-          className="min-h-0 border-0 bg-transparent p-0 text-caption text-leaf underline hover:bg-transparent"
-          aria-pressed={isSelected}
-          onClick={onChange}
-        >
+        <button type="button" className="cursor-pointer text-caption font-semibold text-leaf underline" aria-pressed={isSelected} onClick={onChange}>
           Change<span className="sr-only"> {formatCalendarDay(day.date)}</span>
-        </Button>
+        </button>
       </div>
     </td>
   );
