@@ -82,6 +82,21 @@ async function packDayWithOrder(page: Page): Promise<{ date: string; order: Pack
   throw new Error('The demo seed has no order to pack in the next two weeks.');
 }
 
+/** A seeded order of the last two weeks whose bags were filled from a batch, for the trace pages. */
+async function tracedOrder(page: Page): Promise<{ orderId: string; batchId: string }> {
+  const days = await shopDays(page);
+  const today = days[0] as string;
+  for (let back = 1; back <= 14; back += 1) {
+    const date = addDays(today, -back);
+    const packList = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
+    for (const order of packList.orders) {
+      const batchId = order.bags.find((bag) => bag.batchId)?.batchId;
+      if (batchId) return { orderId: order.orderId, batchId };
+    }
+  }
+  throw new Error('The demo seed has no order filled from a batch in the last two weeks.');
+}
+
 describe('a roast day in a real browser', () => {
   let session: Session;
   let recordedBatchId: string | undefined;
@@ -215,6 +230,11 @@ describe('a roast day in a real browser', () => {
         ...(await violationsOn(page, `/roastery/days/${roastDate}?tab=pack`, () => page.getByRole('link', { name: 'Labels (PDF)' }).waitFor())),
       ];
       if (recordedBatchId) violations.push(...(await violationsOn(page, `/roastery/batches/${recordedBatchId}`, heading(2, 'Orders from this batch'))));
+      const traced = await tracedOrder(page);
+      violations.push(
+        ...(await violationsOn(page, `/roastery/batches/${traced.batchId}`, () => page.getByRole('link', { name: traced.orderId.slice(0, 8).toUpperCase() }).waitFor())),
+        ...(await violationsOn(page, `/roastery/orders/${traced.orderId}/trace`, () => page.getByRole('link', { name: /^Open batch/ }).first().waitFor())),
+      );
       expect(recordedBatchId).toBeTruthy();
       expect(violations).toEqual([]);
       expect(audit.problems).toEqual([]);
