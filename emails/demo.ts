@@ -102,4 +102,11 @@ export const demoEmailPayloads: { [T in EmailTemplateName]: EmailPayloads[T] } =
     acceptUrl: 'http://127.0.0.1:3000/accept-invitation?token=demo-token-not-real',
     expiresAt: '2026-12-15T17:30:00.000Z',
   },
+  'roast-day-moved': {
+    name: 'Robin Alder',
+    closedDate: '2026-12-24',
+    items: [
+      { orderId, coffee: 'Keraba Ridge', roastDate: '2026-12-28', shipDate: '2026-12-29', readyFrom: '2026-12-30', bestBefore: '2027-01-25' },
+    ],
+  },
 };

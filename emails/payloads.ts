@@ -158,6 +158,27 @@ export const emailPayloadSchemas = {
     acceptUrl: link,
     expiresAt: instant,
   }),
+  /** A closed roast day moved the customer's coffee: one e-mail per customer, each moved order or delivery with its new dates. */
+  'roast-day-moved': z.object({
+    name,
+    /** The roast day the shop closed. */
+    closedDate: isoDate,
+    items: z
+      .array(
+        z.object({
+          /** Absent for a subscription delivery not yet paid (no order yet). */
+          orderId: id.optional(),
+          /** Lot name, or "Roaster's Rotation". */
+          coffee: text(),
+          roastDate: isoDate,
+          shipDate: isoDate,
+          readyFrom: isoDate,
+          bestBefore: isoDate,
+        }),
+      )
+      .min(1)
+      .max(50),
+  }),
 } as const;
 
 export type EmailTemplateName = keyof typeof emailPayloadSchemas;

@@ -6,6 +6,7 @@ import { passwordReset } from './templates/password-reset';
 import { paymentFailed } from './templates/payment-failed';
 import { renewalReminder } from './templates/renewal-reminder';
 import { restDay } from './templates/rest-day';
+import { roastDayMoved } from './templates/roast-day-moved';
 import { roasted } from './templates/roasted';
 import { shipped } from './templates/shipped';
 import { staffInvitation } from './templates/staff-invitation';
@@ -25,6 +26,7 @@ const templates: { [T in EmailTemplateName]: EmailTemplate<T> } = {
   'payment-failed': paymentFailed,
   'password-reset': passwordReset,
   'staff-invitation': staffInvitation,
+  'roast-day-moved': roastDayMoved,
 };
 
 /** A header-safe one-line subject. */

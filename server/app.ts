@@ -45,6 +45,7 @@ import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
 import { sendJob } from './jobs/registry';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
+import { createRoasteryServices, roasteryRoutes } from './modules/roastery/roastery.routes';
 import { createOrdersService } from './modules/orders/orders.service';
 import { createSubscriptionPreviewRepo } from './modules/subscription-preview/subscription-preview.repo';
 import { subscriptionPreviewRoutes } from './modules/subscription-preview/subscription-preview.routes';
@@ -57,6 +58,14 @@ import { createRotationRepo } from './modules/rotation/rotation.repo';
 import { rotationRoutes } from './modules/rotation/rotation.routes';
 import { createRotationService } from './modules/rotation/rotation.service';
 import { createSubscriptionPreviewService } from './modules/subscription-preview/subscription-preview.service';
+import { createPackingRepo } from './modules/packing/packing.repo';
+import { packingRoutes } from './modules/packing/packing.routes';
+import { createPackingService } from './modules/packing/packing.service';
+import { createRefundsRepo } from './modules/packing/refunds.repo';
+import { createRefundsService } from './modules/packing/refunds.service';
+import { createTraceRepo } from './modules/trace/trace.repo';
+import { traceRoutes } from './modules/trace/trace.routes';
+import { createTraceService } from './modules/trace/trace.service';
 
 export interface AppDeps {
   config: Config;
@@ -167,6 +176,14 @@ export function createApp(deps: AppDeps): Express {
   // Before the subscriptions router, so /subscriptions/preview is never read as a subscription id.
   api.use('/subscriptions', subscriptionPreviewRoutes(createSubscriptionPreviewService({ repo: createSubscriptionPreviewRepo(database.db), clock: deps.clock })));
   api.use('/subscriptions', subscriptionsRoutes(subscriptionsService));
+  api.use('/roastery', roasteryRoutes(createRoasteryServices(database.db)));
+  api.use(
+    packingRoutes(
+      createPackingService({ repo: createPackingRepo(database.db), clock: deps.clock }),
+      createRefundsService({ repo: createRefundsRepo(database.db), gateway: paymentsGateway }),
+    ),
+  );
+  api.use(traceRoutes(createTraceService(createTraceRepo(database.db))));
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
     api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));

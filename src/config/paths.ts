@@ -56,5 +56,21 @@ export const paths = {
     subscribers: { path: '/roastery/subscribers', getHref: (search?: URLSearchParams) => withSearch('/roastery/subscribers', search) },
     subscriber: { path: '/roastery/subscribers/:id', getHref: (id: string) => `/roastery/subscribers/${encodeURIComponent(id)}` },
     rotation: { path: '/roastery/rotation', getHref: () => '/roastery/rotation' },
+    calendar: {
+      path: '/roastery/calendar',
+      /** `month`: YYYY-MM; the current month when left out. */
+      getHref: (month?: string) => withSearch('/roastery/calendar', month ? new URLSearchParams({ month }) : undefined),
+    },
+    /** The Day Sheet of the shop's today: it forwards to the dated address. */
+    daySheetToday: { path: '/roastery/days', getHref: () => '/roastery/days' },
+    daySheet: {
+      path: '/roastery/days/:date',
+      /** `tab`: the Roast List unless `pack`. */
+      getHref: (date: string, tab: 'roast' | 'pack' = 'roast') =>
+        withSearch(`/roastery/days/${encodeURIComponent(date)}`, tab === 'pack' ? new URLSearchParams({ tab }) : undefined),
+    },
+    batch: { path: '/roastery/batches/:id', getHref: (id: string) => `/roastery/batches/${encodeURIComponent(id)}` },
+    orderTrace: { path: '/roastery/orders/:id/trace', getHref: (id: string) => `/roastery/orders/${encodeURIComponent(id)}/trace` },
+    settings: { path: '/roastery/settings', getHref: () => '/roastery/settings' },
   },
 } as const;

@@ -117,6 +117,16 @@ export const accessRules: AccessRule[] = [
 
   { method: 'GET', path: '/api/roastery/outbox', access: 'staff' },
 
+  { method: 'GET', path: '/api/roastery/settings', access: 'staff' },
+  { method: 'PUT', path: '/api/roastery/settings', access: 'owner' },
+  { method: 'GET', path: '/api/roastery/calendar', access: 'staff' },
+  { method: 'PUT', path: '/api/roastery/calendar/:date', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/roast-list', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/roast-list.csv', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/roast-list.pdf', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'POST', path: '/api/roastery/batches', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/days/:date/batches', access: 'staff', params: { date: '2026-12-08' } },
+
   { method: 'POST', path: '/api/checkout/green', access: 'signed-in' },
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
   { method: 'GET', path: '/api/orders.csv', access: 'staff' },
@@ -137,4 +147,11 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },
   { method: 'GET', path: '/api/roastery/rotation', access: 'staff' },
   { method: 'PUT', path: '/api/roastery/rotation/:date', access: 'staff', params: { date: '2031-01-06' } },
+  { method: 'POST', path: '/api/orders/:id/pack', access: 'staff' },
+  { method: 'POST', path: '/api/orders/:id/ship', access: 'staff', body: { carrier: 'Invented Parcel Co', trackingNumber: 'TEST123' } },
+  { method: 'POST', path: '/api/orders/:id/refund', access: 'owner' },
+  { method: 'GET', path: '/api/orders/:id/trace', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/batches/:id/trace', access: 'staff' },
 ];

@@ -15,13 +15,18 @@ import { SkipLink } from './skip-link';
 export const clientLoader = signedInLoader;
 
 /** Pages only the owner may open; the rest of the nav is for all staff. */
-const ownerNav = [{ to: paths.roastery.team.getHref(), label: 'Team', end: false }];
+const ownerNav = [
+  { to: paths.roastery.team.getHref(), label: 'Team', end: false },
+  { to: paths.roastery.settings.getHref(), label: 'Settings', end: false },
+];
 
 const roasteryNav = [
   { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
   { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false },
   { to: paths.roastery.subscribers.getHref(), label: 'Subscribers', end: false },
   { to: paths.roastery.rotation.getHref(), label: 'Rotation', end: false },
+  { to: paths.roastery.calendar.getHref(), label: 'Roast Calendar', end: false },
+  { to: paths.roastery.daySheetToday.getHref(), label: 'Day Sheet', end: false },
 ];
 
 function navLinkStyles({ isActive }: { isActive: boolean }): string {
@@ -39,7 +44,7 @@ export default function RoasteryLayout() {
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
       <NavigationProgress />
-      <header className="bg-ink text-paper [&_:focus-visible]:outline-crema">
+      <header className="bg-ink text-paper print:hidden [&_:focus-visible]:outline-crema">
         <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 sm:flex-nowrap sm:px-6">
           <Link to={paths.roastery.overview.getHref()} className="mr-2 inline-flex min-h-11 items-center gap-2 font-heading font-semibold text-h3 text-paper no-underline">
             <RestdayMark className="size-8" />

@@ -3,6 +3,7 @@ import { ArrowRight } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
+import { buttonStyles } from '@/components/ui/button';
 import { CautionPanel } from '@/components/ui/caution-panel';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
@@ -47,6 +48,13 @@ export default function RoasteryOverviewRoute() {
         title="Roastery"
         lead="Where the shop plans its roast days, keeps its green coffee and gets bags out of the door."
       />
+
+      <p className="mb-10">
+        <Link to={paths.roastery.daySheetToday.getHref()} className={buttonStyles('primary')}>
+          Open today&rsquo;s Day Sheet
+          <ArrowRight aria-hidden="true" className="size-4" />
+        </Link>
+      </p>
 
       <section aria-labelledby="green-stock" className="mb-10">
         <div className="mb-4 flex flex-wrap items-end justify-between gap-2">

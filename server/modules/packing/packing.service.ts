@@ -1,0 +1,188 @@
+import { bagNetWeightLabel } from '@shared/domain/labels';
+import { roastLevelLabels, type OrderStatus } from '@shared/domain/vocabulary';
+import type { PackBag, PackListResponse, PackOrder } from '@shared/schemas/packing';
+import { AppError } from '../../lib/app-error';
+import type { Clock } from '../../lib/clock';
+import { queueEmail } from '../outbox/outbox.repo';
+import { allocateBags, type LineToFill, type Shortfall } from './bag-allocation';
+import { renderLabelsPdf } from './labels-pdf';
+import type { PackingRepo, PackingTransaction, PackListRow } from './packing.repo';
+
+/** Statuses an order may be packed from; a roasted order still 'paid' is proven roasted by its batches. */
+const packableStatuses: readonly OrderStatus[] = ['paid', 'roasted'];
+
+/** One entry per bag, each carrying the batch it was filled from once the order is packed. */
+function bagsOf(order: PackListRow): PackBag[] {
+  const bags: PackBag[] = [];
+  for (const line of order.lines) {
+    const batchIds = line.allocations.flatMap((allocation) => Array<string>(allocation.bags).fill(allocation.batchId));
+    const roasted = order.kind === 'roasted';
+    for (let n = 0; n < line.quantity; n++) {
+      bags.push({
+        orderItemId: line.id,
+        bagNumber: bags.length + 1,
+        coffee: line.coffee,
+        lotCode: line.lotCode,
+        roastLevel: line.roastLevel,
+        grind: line.grind,
+        size: line.size,
+        netGrams: line.fillGrams,
+        netLabel: bagNetWeightLabel(line.size),
+        roastDate: roasted ? order.roastDate : null,
+        readyFrom: roasted ? order.readyFrom : null,
+        bestBefore: roasted ? order.bestBefore : null,
+        batchId: batchIds[n] ?? null,
+      });
+    }
+  }
+  return bags;
+}
+
+function packOrderOf(order: PackListRow): PackOrder {
+  return {
+    orderId: order.id,
+    customerName: order.customerName,
+    kind: order.kind,
+    status: order.status,
+    shipDate: order.shipDate,
+    packedAt: order.packedAt?.toISOString() ?? null,
+    shippedAt: order.shippedAt?.toISOString() ?? null,
+    carrier: order.carrier,
+    trackingNumber: order.trackingNumber,
+    bags: bagsOf(order),
+  };
+}
+
+const grams = (value: number) => `${value.toLocaleString('en-US')} g`;
+
+function shortfallMessage(shortfalls: Shortfall[], lotCodes: Map<string | null, string | null>, roastDate: string): string {
+  const parts = shortfalls.map(
+    (short) =>
+      `${lotCodes.get(short.lotId) ?? 'the lot'} at ${roastLevelLabels[short.roastLevel].toLowerCase()} needs ${grams(short.neededGrams)} in whole bags and its batches have ${grams(short.freeGrams)} left`,
+  );
+  return `The batches recorded for ${roastDate} cannot fill this order: ${parts.join('; ')}. Record the batch first.`;
+}
+
+export interface PackingDeps {
+  repo: PackingRepo;
+  clock: Clock;
+}
+
+export function createPackingService({ repo, clock }: PackingDeps) {
+  async function currentOrder(orderId: string): Promise<PackOrder> {
+    const order = await repo.packOrder(orderId);
+    if (!order) throw AppError.notFound('Order');
+    return packOrderOf(order);
+  }
+
+  /** Fills each roasted bag from the roast day's batches of its lot and level, or refuses with what is short. */
+  async function allocateRoastedBags(tx: PackingTransaction, order: { id: string; roastDate: string | null }) {
+    const lines = await tx.lines(order.id);
+    if (!order.roastDate) throw AppError.conflict('no_roast_date', 'This order has no roast date, so no batch can fill it.');
+    const toFill: LineToFill[] = lines.map((line) => {
+      if (!line.lotId) {
+        throw AppError.conflict('rotation_not_picked', `No lot is picked for Roaster's Rotation on ${order.roastDate}. Pick it, roast it, then pack.`);
+      }
+      if (!line.roastLevel) throw new Error(`roasted order line ${line.id} has no roast level`);
+      return { orderItemId: line.id, lotId: line.lotId, roastLevel: line.roastLevel, bags: line.quantity, fillGrams: line.fillGrams };
+    });
+    const lotLevels = [...new Map(toFill.map((line) => [`${line.lotId}|${line.roastLevel}`, { lotId: line.lotId, roastLevel: line.roastLevel }])).values()];
+    const plan = allocateBags(toFill, await tx.lockBatchRoom(order.roastDate, lotLevels));
+    if (!plan.ok) {
+      const lotCodes = new Map(lines.map((line) => [line.lotId, line.lotCode]));
+      throw AppError.conflict('batches_short', shortfallMessage(plan.shortfalls, lotCodes, order.roastDate));
+    }
+    await tx.insertAllocations(order.id, plan.allocations);
+    return lines;
+  }
+
+  return {
+    async packList(date: string): Promise<PackListResponse> {
+      return { date, orders: (await repo.packList(date)).map(packOrderOf) };
+    },
+
+    /** One label per bag of the day's Pack List, as a PDF. */
+    async labelsPdf(date: string): Promise<Buffer> {
+      const [shopName, orders] = await Promise.all([repo.shopName(), repo.packList(date)]);
+      return renderLabelsPdf({ shopName, date, orders: orders.map(packOrderOf) });
+    },
+
+    /**
+     * Marks an order packed: roasted bags are allocated to batches (in the same transaction, under
+     * row locks) and the customer gets the roasted e-mail. Packing a packed order changes nothing.
+     */
+    async pack(orderId: string): Promise<PackOrder> {
+      await repo.transaction(async (tx) => {
+        const order = await tx.lockOrder(orderId);
+        if (!order) throw AppError.notFound('Order');
+        if (order.status === 'packed' || order.status === 'shipped') return;
+        if (!packableStatuses.includes(order.status)) {
+          throw AppError.conflict('not_packable', `An order that is ${order.status.replace('_', ' ')} cannot be packed.`);
+        }
+        if (order.kind === 'roasted') {
+          const lines = await allocateRoastedBags(tx, order);
+          await tx.setDeliveryStatus(order.id, 'roasted', ['scheduled']);
+          await queueEmail(tx.tx, {
+            template: 'roasted',
+            to: order.customerEmail,
+            dedupeKey: `roasted:${order.id}`,
+            payload: {
+              name: order.customerName,
+              orderId: order.id,
+              roastDate: order.roastDate!,
+              lines: lines.map((line) => ({
+                description: line.coffee,
+                size: line.size,
+                quantity: line.quantity,
+                ...(line.roastLevel ? { roastLevel: line.roastLevel } : {}),
+                ...(line.grind ? { grind: line.grind } : {}),
+              })),
+              ...(order.shipDate ? { shipDate: order.shipDate } : {}),
+              ...(order.readyFrom ? { readyFrom: order.readyFrom } : {}),
+            },
+          });
+        }
+        await tx.markPacked(order.id, clock.now());
+      });
+      return currentOrder(orderId);
+    },
+
+    /**
+     * Marks a packed order shipped and e-mails the tracking number (and, for roasted coffee, the
+     * ready-from date). The same carrier and number again is a no-op; different ones are refused.
+     */
+    async ship(orderId: string, { carrier, trackingNumber }: { carrier: string; trackingNumber: string }): Promise<PackOrder> {
+      await repo.transaction(async (tx) => {
+        const order = await tx.lockOrder(orderId);
+        if (!order) throw AppError.notFound('Order');
+        if (order.status === 'shipped') {
+          if (order.carrier === carrier && order.trackingNumber === trackingNumber) return;
+          throw AppError.conflict('already_shipped', `This order already shipped with ${order.carrier}, tracking number ${order.trackingNumber}.`);
+        }
+        if (order.status !== 'packed') {
+          throw AppError.conflict('not_packed', `Mark the order packed before shipping it (it is ${order.status.replace('_', ' ')}).`);
+        }
+        await tx.markShipped(order.id, { carrier, trackingNumber, shippedAt: clock.now() });
+        await tx.setDeliveryStatus(order.id, 'shipped', ['scheduled', 'roasted']);
+        const roasted = order.kind === 'roasted';
+        await queueEmail(tx.tx, {
+          template: 'shipped',
+          to: order.customerEmail,
+          dedupeKey: `shipped:${order.id}`,
+          payload: {
+            name: order.customerName,
+            orderId: order.id,
+            kind: order.kind,
+            carrier,
+            trackingNumber,
+            ...(roasted && order.readyFrom ? { readyFrom: order.readyFrom } : {}),
+            ...(roasted && order.bestBefore ? { bestBefore: order.bestBefore } : {}),
+          },
+        });
+      });
+      return currentOrder(orderId);
+    },
+  };
+}
+
+export type PackingService = ReturnType<typeof createPackingService>;

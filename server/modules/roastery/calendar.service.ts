@@ -1,0 +1,67 @@
+import { roastCalendarDays, ScheduleError, type CalendarOverride } from '@shared/domain/roast-schedule';
+import { weekdayOf, type IsoDate } from '@shared/domain/shop-time';
+import type { CalendarDay, CalendarDayUpdate, CalendarDayUpdateResponse, CalendarQuery, CalendarResponse } from '@shared/schemas/roastery';
+import type { ShopSettings } from '@shared/schemas/settings';
+import { AppError } from '../../lib/app-error';
+import { lossHistoryOf, planClosureMoves, plannedGreenByDay, type ClosurePlan } from './calendar-planning';
+import { overrideOf, type CalendarContext, type CalendarRepo, type MovingCoffee, type OverrideRow } from './calendar.repo';
+
+function calendarOf(context: CalendarContext) {
+  const overrides: Record<IsoDate, CalendarOverride> = Object.fromEntries(context.overrides.map((row) => [row.date, overrideOf(row)]));
+  const plannedGreenGrams = plannedGreenByDay(context.groups, context.settings, lossHistoryOf(context.lossHistory));
+  return { overrides, plannedGreenGrams };
+}
+
+function daysOf(from: IsoDate, to: IsoDate, context: CalendarContext, orderCounts: ReadonlyMap<IsoDate, number>): CalendarDay[] {
+  const calendar = calendarOf(context);
+  return roastCalendarDays(from, to, context.settings, calendar).map((day) => ({
+    ...day,
+    ordersCount: orderCounts.get(day.date) ?? 0,
+    overridden: Object.hasOwn(calendar.overrides, day.date),
+  }));
+}
+
+/** A row that says only what the weekly settings already say is no override at all. */
+function isWeeklyDefault(override: OverrideRow, settings: ShopSettings): boolean {
+  return (
+    override.open === settings.roastWeekdays.includes(weekdayOf(override.date)) && override.capacityGrams === null && override.note === ''
+  );
+}
+
+function planMoves({ closedDate, orders, deliveries, context }: MovingCoffee): ClosurePlan {
+  const { overrides, plannedGreenGrams } = calendarOf(context);
+  try {
+    return planClosureMoves({ closedDate, orders, deliveries, settings: context.settings, overrides, plannedGreenGrams });
+  } catch (error) {
+    if (error instanceof ScheduleError) {
+      throw new AppError(409, 'no_roast_day', `${error.message} Open another roast day or raise a day's capacity first.`, {
+        open: 'no later roast day can take this day\u2019s orders',
+      });
+    }
+    throw error;
+  }
+}
+
+export function createCalendarService(repo: CalendarRepo) {
+  return {
+    async calendar({ from, to }: CalendarQuery): Promise<CalendarResponse> {
+      const [context, counts] = await Promise.all([repo.context(from, to), repo.orderCounts(from, to)]);
+      return { days: daysOf(from, to, context, counts) };
+    },
+
+    /** Opens, closes or re-sizes a day; closing it moves its coffee to later roast days and tells each customer. */
+    async updateDay(date: IsoDate, update: CalendarDayUpdate): Promise<CalendarDayUpdateResponse> {
+      const result = await repo.updateDay(date, update, isWeeklyDefault, planMoves);
+      const counts = await repo.orderCounts(date, date);
+      const [day] = daysOf(date, date, result.context, counts);
+      if (!day) throw new Error(`the calendar has no entry for ${date}`);
+      return {
+        ...day,
+        moved: result.plan.orders.map((move) => ({ orderId: move.id, from: date, to: move.dates.roastDate })),
+        movedDeliveries: result.plan.deliveries.map((move) => ({ deliveryId: move.id, subscriptionId: move.subscriptionId, from: date, to: move.dates.roastDate })),
+      };
+    },
+  };
+}
+
+export type CalendarService = ReturnType<typeof createCalendarService>;

@@ -1,0 +1,106 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import {
+  batchCreateSchema,
+  calendarDayUpdateSchema,
+  calendarQuerySchema,
+  roastDayParamsSchema,
+  type BatchCreated,
+  type BatchListResponse,
+  type CalendarDayUpdateResponse,
+  type CalendarResponse,
+  type RoastListResponse,
+} from '@shared/schemas/roastery';
+import { shopSettingsSchema, type ShopSettings } from '@shared/schemas/settings';
+import type { Db } from '../../db/client';
+import { requireRole } from '../../middleware/require-role';
+import { createBatchesRepo } from './batches.repo';
+import { createBatchesService, type BatchesService } from './batches.service';
+import { createCalendarRepo } from './calendar.repo';
+import { createCalendarService, type CalendarService } from './calendar.service';
+import { paperSizes, roastListCsv, roastListPdf } from './roast-list-documents';
+import { createRoastListRepo } from './roast-list.repo';
+import { createRoastListService, type RoastListService } from './roast-list.service';
+import { createRoasterySettingsRepo } from './settings.repo';
+import { createRoasterySettingsService, type RoasterySettingsService } from './settings.service';
+
+const staffOnly = requireRole('staff', 'owner');
+const ownerOnly = requireRole('owner');
+const paperQuerySchema = z.object({ paper: z.enum(Object.keys(paperSizes) as [keyof typeof paperSizes]).default('letter') });
+
+export interface RoasteryServices {
+  settings: RoasterySettingsService;
+  calendar: CalendarService;
+  roastList: RoastListService;
+  batches: BatchesService;
+}
+
+/**
+ * The Roastery's settings, Roast Calendar, Roast List and batches, mounted on `/api/roastery`.
+ * Each route carries its own guard: other Roastery routers share the mount path.
+ */
+export function roasteryRoutes(services: RoasteryServices): Router {
+  const router = Router();
+  const noStore = { 'Cache-Control': 'no-store' };
+
+  router.get('/settings', staffOnly, async (_req, res) => {
+    res.set(noStore).json((await services.settings.get()) satisfies ShopSettings);
+  });
+
+  router.put('/settings', ownerOnly, async (req, res) => {
+    const settings = shopSettingsSchema.parse(req.body);
+    res.json((await services.settings.replace(settings, { id: req.user!.id, ip: req.ip ?? null })) satisfies ShopSettings);
+  });
+
+  router.get('/calendar', staffOnly, async (req, res) => {
+    res.set(noStore).json((await services.calendar.calendar(calendarQuerySchema.parse(req.query))) satisfies CalendarResponse);
+  });
+
+  router.put('/calendar/:date', staffOnly, async (req, res) => {
+    const { date } = roastDayParamsSchema.parse(req.params);
+    res.json((await services.calendar.updateDay(date, calendarDayUpdateSchema.parse(req.body))) satisfies CalendarDayUpdateResponse);
+  });
+
+  router.get('/days/:date/roast-list', staffOnly, async (req, res) => {
+    const { date } = roastDayParamsSchema.parse(req.params);
+    res.set(noStore).json((await services.roastList.roastList(date)).list satisfies RoastListResponse);
+  });
+
+  router.get('/days/:date/roast-list.csv', staffOnly, async (req, res) => {
+    const { date } = roastDayParamsSchema.parse(req.params);
+    const { list } = await services.roastList.roastList(date);
+    res.set({ ...noStore, 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="roast-list-${date}.csv"` });
+    res.send(roastListCsv(list));
+  });
+
+  router.get('/days/:date/roast-list.pdf', staffOnly, async (req, res) => {
+    const { date } = roastDayParamsSchema.parse(req.params);
+    const { paper } = paperQuerySchema.parse(req.query);
+    const { shopName, list } = await services.roastList.roastList(date);
+    const pdf = await roastListPdf(list, shopName, paper);
+    res.set({ ...noStore, 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="roast-list-${date}.pdf"` });
+    res.send(pdf);
+  });
+
+  router.post('/batches', staffOnly, async (req, res) => {
+    const batch = await services.batches.record(batchCreateSchema.parse(req.body), req.user!.id);
+    res.status(201).json(batch satisfies BatchCreated);
+  });
+
+  router.get('/days/:date/batches', staffOnly, async (req, res) => {
+    const { date } = roastDayParamsSchema.parse(req.params);
+    res.set(noStore).json((await services.batches.onDay(date)) satisfies BatchListResponse);
+  });
+
+  return router;
+}
+
+/** The Roastery's services on one database. */
+export function createRoasteryServices(db: Db): RoasteryServices {
+  return {
+    settings: createRoasterySettingsService(createRoasterySettingsRepo(db)),
+    calendar: createCalendarService(createCalendarRepo(db)),
+    roastList: createRoastListService(createRoastListRepo(db)),
+    batches: createBatchesService(createBatchesRepo(db)),
+  };
+}

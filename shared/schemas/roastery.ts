@@ -1,0 +1,211 @@
+import { z } from 'zod';
+import { MAX_CALENDAR_SPAN_DAYS } from '../domain/roast-schedule';
+import { daysBetween, isIsoDate } from '../domain/shop-time';
+import { roastLevels, weekdays } from '../domain/vocabulary';
+
+/**
+ * The Roastery's API shapes (API.md "Roastery"): the Roast Calendar, the Roast List of a roast day
+ * and the batches staff record. The shop settings are `shopSettingsSchema` in ./settings.
+ */
+
+const isoDate = (what: string) => z.string().refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
+const wholeGrams = z.number().int().min(0);
+
+/** Path parameter of every `/api/roastery/days/:date/…` and `/api/roastery/calendar/:date` route. */
+export const roastDayParamsSchema = z.object({ date: isoDate('date') });
+export type RoastDayParams = z.infer<typeof roastDayParamsSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Roast Calendar
+
+/** Query string of `GET /api/roastery/calendar`: both days inclusive, at most a year apart. */
+export const calendarQuerySchema = z
+  .object({ from: isoDate('date'), to: isoDate('date') })
+  .refine((query) => query.from <= query.to, { message: 'The first day must not be after the last.', path: ['to'] })
+  .refine((query) => query.from > query.to || daysBetween(query.from, query.to) < MAX_CALENDAR_SPAN_DAYS, {
+    message: `Ask for at most ${MAX_CALENDAR_SPAN_DAYS} days at a time.`,
+    path: ['to'],
+  });
+export type CalendarQuery = z.infer<typeof calendarQuerySchema>;
+
+export const calendarDaySchema = z.object({
+  date: z.string(),
+  weekday: z.enum(weekdays),
+  open: z.boolean(),
+  /** Green grams the day can roast: the day's own figure or the shop's daily capacity; 0 when closed. */
+  capacityGrams: wholeGrams,
+  /**
+   * Green grams the day's paid and held roasted-coffee orders need, planned as the Roast List plans
+   * them; Roaster's Rotation bags with no lot picked yet count at their level's default loss.
+   */
+  plannedGreenGrams: wholeGrams,
+  note: z.string().nullable(),
+  /** Paid or held roasted-coffee orders with this roast date. */
+  ordersCount: z.number().int().min(0),
+  /** True when staff changed this day (a roast_days row); false when it follows the weekly settings. */
+  overridden: z.boolean(),
+});
+export type CalendarDay = z.infer<typeof calendarDaySchema>;
+
+/** `GET /api/roastery/calendar?from&to` (staff). */
+export const calendarResponseSchema = z.object({ days: z.array(calendarDaySchema) });
+export type CalendarResponse = z.infer<typeof calendarResponseSchema>;
+
+/**
+ * Body of `PUT /api/roastery/calendar/:date`. `capacityGrams` null (or left out) uses the shop's
+ * daily capacity; `note` left out keeps the day's note.
+ */
+export const calendarDayUpdateSchema = z.object({
+  open: z.boolean(),
+  capacityGrams: z.number().int().min(0).max(10_000_000).nullable().optional(),
+  note: z.string().trim().max(200, 'Keep the note to 200 characters.').optional(),
+});
+export type CalendarDayUpdate = z.infer<typeof calendarDayUpdateSchema>;
+
+/** An order a closure moved to another roast day. */
+export const movedOrderSchema = z.object({ orderId: z.uuid(), from: z.string(), to: z.string() });
+export type MovedOrder = z.infer<typeof movedOrderSchema>;
+
+/** A subscription delivery (not yet an order) a closure moved to another roast day. */
+export const movedDeliverySchema = z.object({ deliveryId: z.uuid(), subscriptionId: z.uuid(), from: z.string(), to: z.string() });
+export type MovedDelivery = z.infer<typeof movedDeliverySchema>;
+
+/** Reply of `PUT /api/roastery/calendar/:date`: the day as it now stands and what closing it moved. */
+export const calendarDayUpdateResponseSchema = calendarDaySchema.extend({
+  moved: z.array(movedOrderSchema),
+  movedDeliveries: z.array(movedDeliverySchema),
+});
+export type CalendarDayUpdateResponse = z.infer<typeof calendarDayUpdateResponseSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Roast List
+
+export const roastListWarningCodes = [
+  'over_day_capacity',
+  'below_preferred_load',
+  'below_minimum_load',
+  'green_shortfall',
+  /** Roaster's Rotation bags on a day with no lot picked: they are not on the list. */
+  'rotation_not_picked',
+  /** The day is closed on the Roast Calendar but still has orders. */
+  'day_closed',
+] as const;
+export type RoastListWarningCode = (typeof roastListWarningCodes)[number];
+
+export const roastListWarningSchema = z.object({
+  code: z.enum(roastListWarningCodes),
+  message: z.string(),
+  lotCode: z.string().optional(),
+  roastLevel: z.enum(roastLevels).optional(),
+});
+export type RoastListWarning = z.infer<typeof roastListWarningSchema>;
+
+export const roastListLineSchema = z.object({
+  lotCode: z.string(),
+  lotName: z.string(),
+  roastLevel: z.enum(roastLevels),
+  /** Bags of every size at this lot and level. */
+  bags: z.number().int().min(0),
+  roastedGrams: wholeGrams,
+  /** Loss planned with, % to two decimals. */
+  lossPct: z.number(),
+  /** "level": the level's default from the loss model; "lot": the lot's own measured loss. */
+  lossSource: z.enum(['level', 'lot']),
+  /** ceil(roasted × (1 + overage) ÷ (1 − loss)). */
+  greenGrams: wholeGrams,
+  /** Green load of each planned batch, largest first. */
+  batches: z.array(z.object({ greenGrams: wholeGrams })),
+  /** Below the hard floor (25 % of capacity): raising each batch to the floor, and what that adds. */
+  floorProposal: z
+    .object({ batchGreenGrams: wholeGrams, extraGreenGrams: wholeGrams, extraRoastedGrams: wholeGrams })
+    .optional(),
+  /** Batches already recorded for this day, lot and level. */
+  recorded: z.object({ batches: z.number().int().min(0), greenGrams: wholeGrams, roastedGrams: wholeGrams }),
+});
+export type RoastListLine = z.infer<typeof roastListLineSchema>;
+
+export const pullLineSchema = z.object({
+  lotCode: z.string(),
+  lotName: z.string(),
+  greenGrams: wholeGrams,
+  stockGrams: wholeGrams,
+  shortfallGrams: wholeGrams,
+});
+export type PullLine = z.infer<typeof pullLineSchema>;
+
+/** `GET /api/roastery/days/:date/roast-list` (staff). */
+export const roastListResponseSchema = z.object({
+  date: z.string(),
+  day: z.object({ open: z.boolean(), capacityGrams: wholeGrams }),
+  lines: z.array(roastListLineSchema),
+  pull: z.array(pullLineSchema),
+  totals: z.object({ roastedGrams: wholeGrams, greenGrams: wholeGrams, batches: z.number().int().min(0) }),
+  warnings: z.array(roastListWarningSchema),
+});
+export type RoastListResponse = z.infer<typeof roastListResponseSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Batches
+
+/**
+ * Body of `POST /api/roastery/batches`. Whole grams and whole seconds; the cross-field rules
+ * (roasted below green, first crack before the end) are `batchMetrics` in shared/domain/roast-metrics.
+ */
+export const batchCreateSchema = z.object({
+  /**
+   * Chosen by the client (a fresh UUID per batch) so a retried request records the batch once:
+   * the same id again answers with the batch already recorded.
+   */
+  id: z.uuid('Use a UUID.').optional(),
+  roastDate: isoDate('roast date'),
+  lotCode: z.string().trim().min(1, 'Choose a lot.').max(40),
+  roastLevel: z.enum(roastLevels),
+  greenGramsIn: z.number().int('Whole grams.').positive('More than 0 g.').max(500_000),
+  roastedGramsOut: z.number().int('Whole grams.').positive('More than 0 g.').max(500_000),
+  totalSeconds: z.number().int('Whole seconds.').positive('More than 0 seconds.').max(7_200).optional(),
+  firstCrackSeconds: z.number().int('Whole seconds.').positive('More than 0 seconds.').max(7_200).optional(),
+  notes: z.string().trim().max(1_000, 'Keep the notes to 1,000 characters.').optional(),
+});
+export type BatchCreate = z.infer<typeof batchCreateSchema>;
+
+/** Reply of `POST /api/roastery/batches` (201). */
+export const batchCreatedSchema = z.object({
+  id: z.uuid(),
+  lossPct: z.number(),
+  withinExpected: z.boolean(),
+  /** Where the loss falls against the level's range in the shop's loss model. */
+  lossPosition: z.enum(['below', 'within', 'above']),
+  expectedLossPct: z.object({ min: z.number(), max: z.number() }),
+  developmentSeconds: z.number().int().optional(),
+  /** Development time ÷ total roast time, % to two decimals; only with both times. */
+  developmentTimeRatio: z.number().optional(),
+  /** The loss the Roast List now plans this lot and level with, and its source. */
+  lossSource: z.enum(['level', 'lot']),
+  plannedLossPct: z.number(),
+  /** The lot's green stock after this batch took its green. */
+  stockGrams: wholeGrams,
+});
+export type BatchCreated = z.infer<typeof batchCreatedSchema>;
+
+export const batchSchema = z.object({
+  id: z.uuid(),
+  roastDate: z.string(),
+  lotCode: z.string(),
+  lotName: z.string(),
+  roastLevel: z.enum(roastLevels),
+  greenGramsIn: z.number().int(),
+  roastedGramsOut: z.number().int(),
+  totalSeconds: z.number().int().nullable(),
+  firstCrackSeconds: z.number().int().nullable(),
+  lossPct: z.number(),
+  withinExpected: z.boolean(),
+  developmentTimeRatio: z.number().nullable(),
+  operatorName: z.string().nullable(),
+  notes: z.string(),
+  createdAt: z.iso.datetime({ offset: true }),
+});
+export type Batch = z.infer<typeof batchSchema>;
+
+/** `GET /api/roastery/days/:date/batches` (staff): the day's batches in the order they were recorded. */
+export const batchListResponseSchema = z.object({ items: z.array(batchSchema) });
+export type BatchListResponse = z.infer<typeof batchListResponseSchema>;

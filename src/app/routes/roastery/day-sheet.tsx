@@ -1,0 +1,104 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { isIsoDate } from '@shared/domain/shop-time';
+import { NotFoundMessage } from '@/components/errors/not-found-message';
+import { PageTitle } from '@/components/seo/page-title';
+import { ErrorState } from '@/components/ui/error-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { Skeleton } from '@/components/ui/skeleton';
+import { getDayBatchesQueryOptions, useDayBatches } from '@/features/day-sheet/api/get-day-batches';
+import { getRoastListQueryOptions, useRoastList } from '@/features/day-sheet/api/get-roast-list';
+import { DateSwitcher } from '@/features/day-sheet/components/date-switcher';
+import { DayBatches } from '@/features/day-sheet/components/day-batches';
+import { DaySheetTabs, type DaySheetTab } from '@/features/day-sheet/components/day-sheet-tabs';
+import { RoastDayCautions } from '@/features/day-sheet/components/roast-day-cautions';
+import { RoastListView } from '@/features/day-sheet/components/roast-list-view';
+import { formatRoastDay } from '@/features/day-sheet/utils/roast-day-format';
+import { getPackListQueryOptions, usePackList } from '@/features/packing/api/get-pack-list';
+import { PackListView } from '@/features/packing/components/pack-list-view';
+import { useShopSettings } from '@/features/shop-settings/api/get-shop-settings';
+
+function tabOf(search: URLSearchParams): DaySheetTab {
+  return search.get('tab') === 'pack' ? 'pack' : 'roast';
+}
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params, request }: LoaderFunctionArgs) => {
+    const date = params.date;
+    if (!date || !isIsoDate(date)) return null;
+    if (tabOf(new URL(request.url).searchParams) === 'pack') {
+      void queryClient.prefetchQuery(getPackListQueryOptions(date));
+    } else {
+      void queryClient.prefetchQuery(getRoastListQueryOptions(date));
+      void queryClient.prefetchQuery(getDayBatchesQueryOptions(date));
+    }
+    return null;
+  };
+
+function Loading({ what }: { what: string }) {
+  return (
+    <div>
+      <p role="status" className="sr-only">
+        Loading the {what}…
+      </p>
+      <Skeleton className="h-64 rounded-card" />
+    </div>
+  );
+}
+
+function RoastListPanel({ date }: { date: string }) {
+  const roastList = useRoastList(date);
+  const batches = useDayBatches(date);
+  const timeZone = useShopSettings().data?.timeZone;
+  if (roastList.isError) return <ErrorState title="The Roast List could not load" error={roastList.error} onRetry={() => void roastList.refetch()} />;
+  if (!roastList.data) return <Loading what="Roast List" />;
+  return (
+    <>
+      <RoastListView roastList={roastList.data} />
+      <section aria-labelledby="day-batches" className="print-section">
+        <h2 id="day-batches" className="mb-3 text-h3">
+          Batches recorded
+        </h2>
+        {batches.isError ? (
+          <ErrorState title="The day’s batches could not load" error={batches.error} onRetry={() => void batches.refetch()} />
+        ) : batches.data ? (
+          <DayBatches batches={batches.data.items} timeZone={timeZone} />
+        ) : (
+          <Loading what="batches" />
+        )}
+      </section>
+    </>
+  );
+}
+
+function PackListPanel({ date }: { date: string }) {
+  const packList = usePackList(date);
+  if (packList.isError) return <ErrorState title="The Pack List could not load" error={packList.error} onRetry={() => void packList.refetch()} />;
+  if (!packList.data) return <Loading what="Pack List" />;
+  return <PackListView packList={packList.data} />;
+}
+
+export default function DaySheetRoute() {
+  const { date = '' } = useParams();
+  const [search, setSearch] = useSearchParams();
+  if (!isIsoDate(date)) return <NotFoundMessage />;
+  const tab = tabOf(search);
+  const dayName = formatRoastDay(date);
+
+  return (
+    <>
+      <PageTitle title={`Day Sheet ${date} · Roastery`} />
+      <PageHeader eyebrow="Roastery · Day Sheet" title={dayName} lead="What to roast and pull, the batches as they come off the roaster, and the bags to pack and ship." />
+      <RoastDayCautions />
+      <div className="mb-6">
+        <DateSwitcher key={date} date={date} tab={tab} />
+      </div>
+      <DaySheetTabs
+        selected={tab}
+        onSelect={(next) => setSearch(next === 'pack' ? { tab: 'pack' } : {}, { replace: true })}
+        panels={{ roast: <RoastListPanel date={date} />, pack: <PackListPanel date={date} /> }}
+      />
+    </>
+  );
+}

@@ -1,0 +1,86 @@
+// @vitest-environment happy-dom
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { defaultShopSettings, type ShopSettings } from '@shared/schemas/settings';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const owner = makeUser({ role: 'owner', name: 'Wren Calloway', email: 'wren@example.test' });
+const stored: ShopSettings = { ...defaultShopSettings, timeZone: 'America/Denver' };
+
+function settingsServer(put: (body: ShopSettings) => Response = (body) => jsonResponse(body)) {
+  return stubFetch((url, init) => {
+    if (url.pathname !== '/api/roastery/settings') return apiErrorResponse(404, 'not_found', 'No fake');
+    if ((init?.method ?? 'GET') === 'PUT') return put(JSON.parse(String(init?.body)) as ShopSettings);
+    return jsonResponse(stored);
+  });
+}
+
+describe('Shop settings', () => {
+  it('shows every setting and saves the whole set as the server’s schema expects', async () => {
+    const fetchMock = settingsServer();
+    renderApp('/roastery/settings', { session: owner });
+
+    const timeZone = await screen.findByLabelText('Time zone', {}, { timeout: 15_000 });
+    expect((timeZone as HTMLInputElement).value).toBe('America/Denver');
+    const roastDays = screen.getByRole('group', { name: 'Roast days' });
+    expect((within(roastDays).getByLabelText('Wednesday') as HTMLInputElement).checked).toBe(true);
+    expect((screen.getByLabelText('Roasted 12 oz bag') as HTMLInputElement).value).toBe('18.00');
+    expect(screen.getByRole('list', { name: 'Weight bands' }).children).toHaveLength(5);
+
+    fireEvent.click(within(roastDays).getByLabelText('Saturday'));
+    fireEvent.change(screen.getByLabelText('Overage (%)'), { target: { value: '3' } });
+    const medium = screen.getByRole('group', { name: 'Medium' });
+    fireEvent.change(within(medium).getByLabelText('Planned loss (%)'), { target: { value: '15.5' } });
+    fireEvent.change(screen.getByLabelText('Roasted 12 oz bag'), { target: { value: '19.50' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+
+    expect(await screen.findByText('Settings saved.')).toBeTruthy();
+    const body = sentRequests(fetchMock, 'PUT', '/api/roastery/settings')[0]?.body as ShopSettings;
+    expect(body.roastWeekdays).toEqual(['mon', 'wed', 'fri', 'sat']);
+    expect(body.overagePct).toBe(3);
+    expect(body.lossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15.5 });
+    expect(body.roastedBagPriceCents['12oz']).toBe(1950);
+    expect(body.shipping.bands).toEqual(stored.shipping.bands);
+  });
+
+  it('checks the form with the shared schema before sending', async () => {
+    const fetchMock = settingsServer();
+    renderApp('/roastery/settings', { session: owner });
+
+    const medium = await screen.findByRole('group', { name: 'Medium' }, { timeout: 15_000 });
+    const planned = within(medium).getByLabelText('Planned loss (%)');
+    fireEvent.change(planned, { target: { value: '18' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+
+    await waitFor(() => expect(planned.getAttribute('aria-invalid')).toBe('true'));
+    expect(within(medium).getByText('The default must lie between the minimum and the maximum.')).toBeTruthy();
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/settings')).toHaveLength(0);
+  });
+
+  it('puts the server’s reasons on their fields', async () => {
+    settingsServer(() => apiErrorResponse(400, 'validation_failed', 'Check the highlighted fields.', { 'roaster.capacityGrams': 'Too small for a shop roaster.' }));
+    renderApp('/roastery/settings', { session: owner });
+
+    const capacity = await screen.findByLabelText('Roaster capacity (g of green a batch)', {}, { timeout: 15_000 });
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+    await waitFor(() => expect(capacity.getAttribute('aria-invalid')).toBe('true'));
+    expect(screen.getByText('Too small for a shop roaster.')).toBeTruthy();
+  });
+
+  it('stays closed to staff, whose browser never asks for it, and out of their navigation', async () => {
+    const fetchMock = settingsServer();
+    renderApp('/roastery/settings', { session: makeUser({ role: 'staff' }) });
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Settings are for the owner' }, { timeout: 15_000 })).toBeTruthy();
+    const nav = screen.getByRole('navigation', { name: 'Roastery' });
+    expect(within(nav).queryByRole('link', { name: 'Settings' })).toBeNull();
+    expect(within(nav).getByRole('link', { name: 'Day Sheet' })).toBeTruthy();
+    expect(within(nav).getByRole('link', { name: 'Roast Calendar' })).toBeTruthy();
+    expect(requestedUrls(fetchMock)).not.toContain('/api/roastery/settings');
+  });
+});

@@ -1,0 +1,23 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { packListResponseSchema, type PackListResponse } from '@shared/schemas/packing';
+import { apiRequest } from '@/lib/api-client';
+
+export function labelsPdfPath(date: string): string {
+  return `/api/roastery/days/${encodeURIComponent(date)}/labels.pdf`;
+}
+
+/** The orders that ship on `date`, each bag with what its label says. */
+export function getPackList({ date, signal }: { date: string; signal?: AbortSignal }): Promise<PackListResponse> {
+  return apiRequest(`/api/roastery/days/${encodeURIComponent(date)}/pack-list`, { schema: packListResponseSchema, signal });
+}
+
+export function getPackListQueryOptions(date: string) {
+  return queryOptions({
+    queryKey: ['roastery', 'pack-list', date],
+    queryFn: ({ signal }) => getPackList({ date, signal }),
+  });
+}
+
+export function usePackList(date: string) {
+  return useQuery(getPackListQueryOptions(date));
+}

@@ -1,0 +1,168 @@
+import { FileDown, PackageCheck, Truck } from 'lucide-react';
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
+import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
+import { Badge } from '@/components/ui/badge';
+import { Button, buttonStyles } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { FormAlert } from '@/components/ui/form-alert';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { labelsPdfPath } from '../api/get-pack-list';
+import { useMarkPacked } from '../api/mark-packed';
+import { canPack, packStatusLabels } from '../utils/pack-status';
+import { ShipOrderDialog } from './ship-order-dialog';
+
+const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
+const shortDate = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+function day(date: string | null): string {
+  return date ? shortDate.format(new Date(`${date}T00:00:00Z`)) : '—';
+}
+
+function shortId(orderId: string): string {
+  return orderId.slice(0, 8).toUpperCase();
+}
+
+function OrderBags({ order }: { order: PackOrder }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full border-collapse">
+        <caption className="sr-only">Bags of order {shortId(order.orderId)}</caption>
+        <thead>
+          <tr>
+            {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
+              <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+                {heading}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {order.bags.map((bag) => (
+            <tr key={`${bag.orderItemId}-${bag.bagNumber}`}>
+              <td className={cell}>
+                {bag.bagNumber} of {order.bags.length}
+              </td>
+              <th scope="row" className={`${cell} font-semibold`}>
+                {bag.coffee}
+                {bag.lotCode ? <span className="block text-small font-normal text-ink-muted">{bag.lotCode}</span> : null}
+              </th>
+              <td className={cell}>{bag.roastLevel ? roastLevelLabels[bag.roastLevel] : 'Green'}</td>
+              <td className={cell}>{bag.grind ? grindLabels[bag.grind] : '—'}</td>
+              <td className={cell}>{bag.netLabel}</td>
+              <td className={cell}>{day(bag.roastDate)}</td>
+              <td className={cell}>{day(bag.readyFrom)}</td>
+              <td className={cell}>{day(bag.bestBefore)}</td>
+              <td className={cell}>
+                {bag.batchId ? (
+                  <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
+                    Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
+                  </Link>
+                ) : (
+                  '—'
+                )}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void }) {
+  const markPacked = useMarkPacked(date);
+  const [failure, setFailure] = useState<string>();
+  const status = packStatusLabels[order.status];
+  const headingId = `pack-order-${order.orderId}`;
+
+  async function pack() {
+    setFailure(undefined);
+    try {
+      await markPacked.mutateAsync(order.orderId);
+    } catch (error) {
+      setFailure(error instanceof ApiError ? error.message : 'That did not work. Please try again.');
+    }
+  }
+
+  return (
+    <li aria-labelledby={headingId} className="rounded-card border border-rule bg-sheet p-5 shadow-card print:break-inside-avoid print:shadow-none">
+      <div className="flex flex-wrap items-center gap-2">
+        <h2 id={headingId} className="text-h3">
+          {order.customerName} <span className="font-body text-small font-semibold text-ink-muted">order {shortId(order.orderId)}</span>
+        </h2>
+        <Badge tone={status.tone}>{status.label}</Badge>
+      </div>
+      {order.status === 'shipped' ? (
+        <p className="mt-1 text-small">
+          Shipped with {order.carrier}, tracking {order.trackingNumber}.
+        </p>
+      ) : null}
+      <div className="mt-3">
+        <OrderBags order={order} />
+      </div>
+      {failure ? (
+        <p role="alert" className="mt-3 text-small font-semibold text-alert">
+          {failure}
+        </p>
+      ) : null}
+      <div className="mt-4 flex flex-wrap items-center gap-2 print:hidden">
+        {canPack(order.status) ? (
+          <Button variant="secondary" disabled={markPacked.isPending} aria-describedby={headingId} onClick={() => void pack()}>
+            <PackageCheck aria-hidden="true" className="size-4" />
+            {markPacked.isPending ? 'Marking…' : 'Mark packed'}
+          </Button>
+        ) : null}
+        {order.status === 'packed' ? (
+          <Button aria-describedby={headingId} onClick={() => onShip(order)}>
+            <Truck aria-hidden="true" className="size-4" />
+            Mark shipped
+          </Button>
+        ) : null}
+        <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="ml-auto font-semibold text-leaf underline">
+          Trace this order<span className="sr-only"> for {order.customerName}</span>
+        </Link>
+      </div>
+    </li>
+  );
+}
+
+/** The day's orders to pack and ship, bag by bag, with the labels to print for them. */
+export function PackListView({ packList }: { packList: PackListResponse }) {
+  const [shipping, setShipping] = useState<PackOrder>();
+  const [shipped, setShipped] = useState<PackOrder>();
+  const { date, orders } = packList;
+
+  return (
+    <div>
+      <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
+        <a href={labelsPdfPath(date)} download className={buttonStyles('secondary')}>
+          <FileDown aria-hidden="true" className="size-4" />
+          Labels (PDF)
+        </a>
+        <p className="text-small text-ink-muted">One label a bag, with both net weights.</p>
+      </div>
+      {shipped ? (
+        <div className="mb-4">
+          <FormAlert tone="status">
+            {shipped.customerName}&rsquo;s order is marked shipped ({shipped.carrier} {shipped.trackingNumber}); the shipped e-mail is on its way.
+          </FormAlert>
+        </div>
+      ) : null}
+      {orders.length === 0 ? (
+        <EmptyState title="Nothing ships this day">Orders appear here on the day they are due to ship.</EmptyState>
+      ) : (
+        <ul aria-label="Orders to pack" className="grid gap-4">
+          {orders.map((order) => (
+            <PackOrderCard key={order.orderId} order={order} date={date} onShip={setShipping} />
+          ))}
+        </ul>
+      )}
+      {shipping ? (
+        <ShipOrderDialog order={shipping} date={date} onClose={() => setShipping(undefined)} onShipped={setShipped} />
+      ) : null}
+    </div>
+  );
+}

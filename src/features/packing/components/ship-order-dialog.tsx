@@ -1,0 +1,88 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, useId, useRef, useState } from 'react';
+import { useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { shipOrderBodySchema, type PackOrder } from '@shared/schemas/packing';
+import { Button } from '@/components/ui/button';
+import { FormAlert } from '@/components/ui/form-alert';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useShipOrder } from '../api/ship-order';
+
+type ShipFields = z.input<typeof shipOrderBodySchema>;
+
+type ShipOrderDialogProps = {
+  order: PackOrder;
+  date: string;
+  onClose: () => void;
+  onShipped: (order: PackOrder) => void;
+};
+
+/** A modal form for the carrier and tracking number; Escape or Cancel closes it and focus goes back. */
+export function ShipOrderDialog({ order, date, onClose, onShipped }: ShipOrderDialogProps) {
+  const dialogRef = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+  const ship = useShipOrder(date);
+  const [formError, setFormError] = useState<string>();
+  const form = useForm<ShipFields, unknown, z.output<typeof shipOrderBodySchema>>({
+    resolver: zodResolver(shipOrderBodySchema),
+    defaultValues: { carrier: '', trackingNumber: '' },
+  });
+  const { errors } = form.formState;
+
+  const [done, setDone] = useState(false);
+
+  useEffect(() => {
+    const dialog = dialogRef.current;
+    if (dialog && !dialog.open) dialog.showModal();
+  }, []);
+  // Closing (not unmounting) gives the focus back to the button that opened the dialog.
+  useEffect(() => {
+    if (done) dialogRef.current?.close();
+  }, [done]);
+
+  const submit = form.handleSubmit(async (shipment) => {
+    setFormError(undefined);
+    try {
+      const shipped = await ship.mutateAsync({ orderId: order.orderId, shipment });
+      onShipped(shipped);
+      setDone(true);
+    } catch (error) {
+      setFormError(applyServerErrors(error, form.setError, ['carrier', 'trackingNumber']));
+    }
+  });
+
+  return (
+    <dialog
+      ref={dialogRef}
+      aria-labelledby={titleId}
+      onClose={onClose}
+      className="m-auto w-[min(32rem,calc(100%-2rem))] rounded-card border border-rule bg-sheet p-6 text-ink shadow-card backdrop:bg-ink/50"
+    >
+      <h2 id={titleId} className="text-h3">
+        Mark {order.customerName}&rsquo;s order shipped
+      </h2>
+      <p className="mt-1 text-small text-ink-muted">The customer gets the shipped e-mail with the tracking number and the day their coffee is ready.</p>
+      <form noValidate onSubmit={(event) => void submit(event)} className="mt-4 grid gap-4">
+        {formError ? <FormAlert>{formError}</FormAlert> : null}
+        <TextField label="Carrier" autoComplete="off" error={errors.carrier?.message} {...form.register('carrier')} />
+        <TextField
+          label="Tracking number"
+          autoComplete="off"
+          autoCapitalize="characters"
+          spellCheck={false}
+          error={errors.trackingNumber?.message}
+          {...form.register('trackingNumber')}
+        />
+        <div className="flex flex-wrap gap-2">
+          <Button type="submit" disabled={form.formState.isSubmitting}>
+            {form.formState.isSubmitting ? 'Saving…' : 'Mark shipped'}
+          </Button>
+          <Button variant="secondary" onClick={() => dialogRef.current?.close()}>
+            Cancel
+          </Button>
+        </div>
+      </form>
+    </dialog>
+  );
+}

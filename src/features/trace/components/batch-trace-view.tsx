@@ -1,0 +1,75 @@
+import { roastLevelLabels } from '@shared/domain/vocabulary';
+import type { BatchTrace } from '@shared/schemas/packing';
+import { Link } from 'react-router-dom';
+import { EmptyState } from '@/components/ui/empty-state';
+import { paths } from '@/config/paths';
+import { formatTraceDay, formatTraceGrams, shortOrderId, traceStatusLabels } from '../utils/trace-format';
+
+const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
+
+/** A batch and every order it went into: who to reach in a recall. */
+export function BatchTraceView({ trace }: { trace: BatchTrace }) {
+  const { batch, orders } = trace;
+  const facts = [
+    ['Lot', `${batch.lotName} (${batch.lotCode})`],
+    ['Roast level', roastLevelLabels[batch.roastLevel]],
+    ['Roast day', formatTraceDay(batch.roastDate)],
+    ['Green in', formatTraceGrams(batch.greenGramsIn)],
+    ['Roasted out', formatTraceGrams(batch.roastedGramsOut)],
+    ['Filled into bags', formatTraceGrams(batch.allocatedGrams)],
+  ] as const;
+  return (
+    <>
+      <dl className="mb-8 grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        {facts.map(([label, value]) => (
+          <div key={label} className="rounded-card border border-rule bg-sheet p-4">
+            <dt className="text-small text-ink-muted">{label}</dt>
+            <dd className="font-semibold">{value}</dd>
+          </div>
+        ))}
+      </dl>
+      <section aria-labelledby="batch-orders">
+        <h2 id="batch-orders" className="mb-3 text-h2">
+          Orders from this batch
+        </h2>
+        {orders.length === 0 ? (
+          <EmptyState title="No bags filled from this batch yet">Bags are filled from a batch when their order is packed.</EmptyState>
+        ) : (
+          <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
+            <table className="w-full border-collapse">
+              <thead>
+                <tr>
+                  {['Order', 'Customer', 'Bags', 'Status', 'Ship day'].map((heading) => (
+                    <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+                      {heading}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {orders.map((order) => (
+                  <tr key={order.orderId}>
+                    <th scope="row" className={cell}>
+                      <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="font-semibold text-leaf underline">
+                        {shortOrderId(order.orderId)}
+                      </Link>
+                    </th>
+                    <td className={cell}>
+                      {order.customerName}
+                      <span className="block break-all text-small text-ink-muted">{order.customerEmail}</span>
+                    </td>
+                    <td className={cell}>
+                      {order.bags} ({formatTraceGrams(order.grams)})
+                    </td>
+                    <td className={cell}>{traceStatusLabels[order.status]}</td>
+                    <td className={cell}>{formatTraceDay(order.shipDate)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,248 @@
+import { eq } from 'drizzle-orm';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { apiErrorSchema } from '@shared/schemas/errors';
+import { packListResponseSchema, packOrderSchema } from '@shared/schemas/packing';
+import { deliveries, subscriptions } from '../../server/db/schema/index';
+import { createTestApp } from '../setup/test-app';
+import { getTestDb } from '../setup/test-db';
+import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
+import { createLotForSale, shipTo } from './checkout-support';
+import { outboxRows } from './outbox-support';
+import {
+  allocationsOf,
+  createGreenOrderShipping,
+  createRoastedOrder,
+  orderStatusOf,
+  pickRotationLot,
+  recordBatch,
+  uniqueDay,
+} from './packing-support';
+
+const app = createTestApp();
+let staff: Awaited<ReturnType<typeof signedInAgent>>;
+let customer: TestUser;
+
+beforeAll(async () => {
+  staff = await signedInAgent(app, await createTestUser('staff'));
+  customer = await createTestUser('customer', { name: 'Robin Packtest' });
+});
+
+// Net weights: 1 oz = 28.349523125 g and 1 lb = 453.59237 g exactly (NIST SP 811, App. B). Label
+// form "Net Wt 12 oz (340 g)" per the FPLA and FDA 21 CFR 101.105. Fill weights are the declared
+// mass rounded up to a whole gram (PRODUCT.md):
+//   12 oz = 340.194 g → label 340 g, fill 341 g;  1 lb = 453.592 g → label 454 g, fill 454 g;
+//   8 oz = 226.796 g → label 227 g, fill 227 g.
+const twelveOunce = { netLabel: 'Net Wt 12 oz (340 g)', netGrams: 341 };
+const onePound = { netLabel: 'Net Wt 1 lb (454 g)', netGrams: 454 };
+const eightOunce = { netLabel: 'Net Wt 8 oz (227 g)', netGrams: 227 };
+
+async function packList(date: string) {
+  const response = await staff.get(`/api/roastery/days/${date}/pack-list`);
+  expect(response.status, JSON.stringify(response.body)).toBe(200);
+  return packListResponseSchema.parse(response.body);
+}
+
+describe('GET /api/roastery/days/:date/pack-list', () => {
+  it('lists the orders that ship that day with one entry per bag and its label data, and leaves out unpaid, cancelled, refunded and other days’ orders', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    const roasted = await createRoastedOrder(customer.id, {
+      roastDate,
+      lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'medium', grind: 'pour-over', brewMethod: 'filter' }],
+    });
+    const green = await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!);
+    const left = [
+      await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!, 'pending_payment'),
+      await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!, 'cancelled'),
+      await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!, 'refunded'),
+      await createGreenOrderShipping(customer.id, lot.id, uniqueDay()),
+    ];
+
+    const list = await packList(roasted.shipDate!);
+
+    expect(list.orders.map((order) => order.orderId).sort()).toEqual([roasted.id, green.id].sort());
+    for (const order of left) expect(list.orders.map((entry) => entry.orderId)).not.toContain(order.id);
+    const roastedEntry = list.orders.find((order) => order.orderId === roasted.id)!;
+    expect(roastedEntry).toMatchObject({ customerName: 'Robin Packtest', kind: 'roasted', status: 'roasted', shipDate: roasted.shipDate, packedAt: null });
+    expect(roastedEntry.bags).toHaveLength(2);
+    expect(roastedEntry.bags.map((bag) => bag.bagNumber)).toEqual([1, 2]);
+    for (const bag of roastedEntry.bags) {
+      expect(bag).toMatchObject({
+        coffee: lot.name,
+        lotCode: lot.code,
+        roastLevel: 'medium',
+        grind: 'pour-over',
+        size: '12oz',
+        ...twelveOunce,
+        roastDate,
+        readyFrom: roasted.readyFrom,
+        bestBefore: roasted.bestBefore,
+        batchId: null,
+      });
+    }
+    const greenEntry = list.orders.find((order) => order.orderId === green.id)!;
+    expect(greenEntry.kind).toBe('green');
+    expect(greenEntry.bags.map((bag) => ({ size: bag.size, netLabel: bag.netLabel, netGrams: bag.netGrams }))).toEqual([
+      { size: '1lb', ...onePound },
+      { size: '8oz', ...eightOunce },
+      { size: '8oz', ...eightOunce },
+    ]);
+    for (const bag of greenEntry.bags) expect(bag).toMatchObject({ lotCode: lot.code, roastLevel: null, grind: null, roastDate: null, readyFrom: null, bestBefore: null });
+  });
+
+  it('shows a Roaster’s Rotation bag as the lot picked for its roast day', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    await pickRotationLot(roastDate, lot.id);
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: null, size: '1lb', quantity: 1, roastLevel: 'dark' }] });
+
+    const [entry] = (await packList(order.shipDate!)).orders;
+
+    expect(entry!.bags).toEqual([expect.objectContaining({ coffee: lot.name, lotCode: lot.code, roastLevel: 'dark', ...onePound })]);
+  });
+
+  it('answers 400 naming the date when the day is not written YYYY-MM-DD', async () => {
+    const response = await staff.get('/api/roastery/days/12-08-2026/pack-list');
+    expect(response.status).toBe(400);
+    expect(apiErrorSchema.parse(response.body).error.fields).toHaveProperty('date');
+  });
+});
+
+describe('POST /api/orders/:id/pack', () => {
+  it('allocates each roasted bag to a batch of its lot, level and roast day, marks it packed and queues one roasted e-mail; packing again changes nothing', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'medium' }] });
+    const batch = await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'medium', roastedGramsOut: 3000 });
+
+    const first = await staff.post(`/api/orders/${order.id}/pack`);
+
+    expect(first.status, JSON.stringify(first.body)).toBe(200);
+    const packed = packOrderSchema.parse(first.body);
+    expect(packed).toMatchObject({ orderId: order.id, status: 'packed' });
+    expect(packed.packedAt).not.toBeNull();
+    expect(packed.bags.map((bag) => bag.batchId)).toEqual([batch.id, batch.id]);
+    // 2 bags × 341 g fill = 682 g taken from the batch.
+    expect(await allocationsOf(order.id)).toEqual([expect.objectContaining({ batchId: batch.id, bags: 2, grams: 682 })]);
+    const [roastedEmail] = await outboxRows([`roasted:${order.id}`]);
+    expect(roastedEmail).toMatchObject({ template: 'roasted', toAddress: customer.email });
+    expect(roastedEmail!.payload).toMatchObject({ orderId: order.id, roastDate, readyFrom: order.readyFrom, shipDate: order.shipDate });
+    expect((await packList(order.shipDate!)).orders[0]!.bags.map((bag) => bag.batchId)).toEqual([batch.id, batch.id]);
+
+    const again = await staff.post(`/api/orders/${order.id}/pack`);
+
+    expect(again.status).toBe(200);
+    expect(packOrderSchema.parse(again.body).packedAt).toBe(packed.packedAt);
+    expect(await allocationsOf(order.id)).toHaveLength(1);
+    expect(await outboxRows([`roasted:${order.id}`])).toHaveLength(1);
+  });
+
+  it('fills bags whole from the oldest batch first and carries the rest to the next batch', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    // The first batch holds two 341 g bags (682 g of 700 g); the third bag comes from the second batch.
+    const older = await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'light', roastedGramsOut: 700 });
+    const newer = await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'light', roastedGramsOut: 2000 });
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 3, roastLevel: 'light' }] });
+
+    const response = await staff.post(`/api/orders/${order.id}/pack`);
+
+    expect(response.status, JSON.stringify(response.body)).toBe(200);
+    expect(packOrderSchema.parse(response.body).bags.map((bag) => bag.batchId)).toEqual([older.id, older.id, newer.id]);
+    expect(await allocationsOf(order.id)).toEqual([
+      expect.objectContaining({ batchId: older.id, bags: 2, grams: 682 }),
+      expect.objectContaining({ batchId: newer.id, bags: 1, grams: 341 }),
+    ]);
+  });
+
+  it('answers 409 naming the lot when the recorded batches cannot fill the bags, and changes nothing', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    // Plenty of coffee, but at another level or on another day: neither may fill these bags.
+    await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'dark', roastedGramsOut: 5000 });
+    await recordBatch({ lotId: lot.id, roastDate: '2039-12-31', roastLevel: 'medium', roastedGramsOut: 5000 });
+    await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'medium', roastedGramsOut: 500 });
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'medium' }] });
+
+    const response = await staff.post(`/api/orders/${order.id}/pack`);
+
+    expect(response.status).toBe(409);
+    const { error } = apiErrorSchema.parse(response.body);
+    expect(error.code).toBe('batches_short');
+    expect(error.message).toContain(lot.code);
+    expect(error.message).toContain('682 g'); // 2 × 341 g
+    expect(error.message).toContain('500 g');
+    expect(await allocationsOf(order.id)).toEqual([]);
+    expect(await orderStatusOf(order.id)).toMatchObject({ status: 'roasted', packedAt: null });
+    expect(await outboxRows([`roasted:${order.id}`])).toEqual([]);
+  });
+
+  it('never lets two packers at once take more roasted coffee than a batch yielded', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    // 700 g holds two 341 g bags: exactly one of two 2-bag orders can have it.
+    const batch = await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'medium', roastedGramsOut: 700 });
+    const orders = [
+      await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'medium' }] }),
+      await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'medium' }] }),
+    ];
+    const secondPacker = await signedInAgent(app, await createTestUser('staff'));
+
+    const responses = await Promise.all([staff.post(`/api/orders/${orders[0]!.id}/pack`), secondPacker.post(`/api/orders/${orders[1]!.id}/pack`)]);
+
+    expect(responses.map((response) => response.status).sort()).toEqual([200, 409]);
+    const taken = [...(await allocationsOf(orders[0]!.id)), ...(await allocationsOf(orders[1]!.id))];
+    expect(taken.every((allocation) => allocation.batchId === batch.id)).toBe(true);
+    expect(taken.reduce((sum, allocation) => sum + allocation.grams, 0)).toBe(682);
+  });
+
+  it('packs a green order without any batch, and moves a subscription delivery to roasted when its order is packed', async () => {
+    const lot = await createLotForSale(20_000);
+    const shipDate = uniqueDay();
+    const green = await createGreenOrderShipping(customer.id, lot.id, shipDate);
+
+    const greenPacked = await staff.post(`/api/orders/${green.id}/pack`);
+
+    expect(greenPacked.status).toBe(200);
+    expect(packOrderSchema.parse(greenPacked.body).status).toBe('packed');
+    expect(await allocationsOf(green.id)).toEqual([]);
+    expect(await outboxRows([`roasted:${green.id}`])).toEqual([]);
+
+    const roastDate = uniqueDay();
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '1lb', quantity: 1, roastLevel: 'medium' }] });
+    await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'medium', roastedGramsOut: 1000 });
+    const delivery = await deliveryFor(order.id, roastDate, lot.id);
+    expect((await staff.post(`/api/orders/${order.id}/pack`)).status).toBe(200);
+    const [row] = await getTestDb().select({ status: deliveries.status }).from(deliveries).where(eq(deliveries.id, delivery));
+    expect(row!.status).toBe('roasted');
+  });
+
+  it('refuses with 409 to pack an order that is unpaid or cancelled, and changes nothing', async () => {
+    const lot = await createLotForSale(20_000);
+    for (const status of ['pending_payment', 'cancelled'] as const) {
+      const order = await createGreenOrderShipping(customer.id, lot.id, uniqueDay(), status);
+      const response = await staff.post(`/api/orders/${order.id}/pack`);
+      expect(response.status).toBe(409);
+      expect(apiErrorSchema.parse(response.body).error.code).toBe('not_packable');
+      expect(await orderStatusOf(order.id)).toMatchObject({ status, packedAt: null });
+    }
+  });
+
+  it('answers 404 for an order that does not exist', async () => {
+    expect((await staff.post('/api/orders/5f0c2f1e-0000-4000-8000-000000000000/pack')).status).toBe(404);
+  });
+});
+
+/** A subscription delivery whose order is `orderId` (as the subscription step links them). */
+async function deliveryFor(orderId: string, roastDate: string, lotId: string) {
+  const db = getTestDb();
+  const [subscription] = await db
+    .insert(subscriptions)
+    .values({ userId: customer.id, lotId, roastLevel: 'medium', bagSize: '1lb', cadenceWeeks: 2, priceCents: 1500, shippingAddress: { ...shipTo, line2: null, country: 'US' } })
+    .returning({ id: subscriptions.id });
+  const [delivery] = await db
+    .insert(deliveries)
+    .values({ subscriptionId: subscription!.id, orderId, sequence: 1, roastDate, shipDate: roastDate, readyFrom: roastDate, bestBefore: roastDate })
+    .returning({ id: deliveries.id });
+  return delivery!.id;
+}

@@ -1,0 +1,79 @@
+import { and, desc, eq } from 'drizzle-orm';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { apiErrorSchema } from '@shared/schemas/errors';
+import { defaultShopSettings, shopSettingsSchema } from '@shared/schemas/settings';
+import { auditLog } from '../../server/db/schema/index';
+import { createTestApp } from '../setup/test-app';
+import { getTestDb } from '../setup/test-db';
+import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
+import { useShopSettings } from './roastery-support';
+
+let app: ReturnType<typeof createTestApp>;
+let staff: Awaited<ReturnType<typeof signedInAgent>>;
+let owner: Awaited<ReturnType<typeof signedInAgent>>;
+let ownerUser: TestUser;
+
+async function lastSettingsAudit(actorId: string) {
+  const [row] = await getTestDb()
+    .select()
+    .from(auditLog)
+    .where(and(eq(auditLog.action, 'settings.changed'), eq(auditLog.actorId, actorId)))
+    .orderBy(desc(auditLog.at))
+    .limit(1);
+  return row;
+}
+
+beforeAll(async () => {
+  app = createTestApp();
+  ownerUser = await createTestUser('owner');
+  [staff, owner] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), signedInAgent(app, ownerUser)]);
+  await useShopSettings();
+});
+
+describe('GET /api/roastery/settings', () => {
+  it('shows staff the shop settings as the API shapes them', async () => {
+    const response = await staff.get('/api/roastery/settings');
+    expect(response.status).toBe(200);
+    expect(response.headers['cache-control']).toBe('no-store');
+    expect(shopSettingsSchema.parse(response.body)).toEqual(defaultShopSettings);
+  });
+});
+
+describe('PUT /api/roastery/settings', () => {
+  it('saves the owner’s settings, which the next read returns, and records who changed which settings', async () => {
+    const changed = {
+      ...defaultShopSettings,
+      timeZone: 'America/Denver',
+      roastWeekdays: ['tue', 'thu'],
+      overagePct: 3.5,
+      roaster: { capacityGrams: 15_000, minLoadPct: 40, maxLoadPct: 85 },
+    };
+    const response = await owner.put('/api/roastery/settings').send(changed);
+    expect(response.status).toBe(200);
+    expect(shopSettingsSchema.parse(response.body)).toEqual(changed);
+    expect(shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body)).toEqual(changed);
+    const audit = await lastSettingsAudit(ownerUser.id);
+    expect(audit?.detail).toEqual({ changed: 'timeZone,roastWeekdays,overagePct,roaster' });
+  });
+
+  it('answers 400 naming each field that is wrong, and changes nothing', async () => {
+    const before = (await staff.get('/api/roastery/settings')).body as unknown;
+    const response = await owner.put('/api/roastery/settings').send({
+      ...defaultShopSettings,
+      timeZone: 'Mars/Olympus_Mons',
+      cutoff: { time: '25:00', daysBefore: 1 },
+      roaster: { capacityGrams: 12_000, minLoadPct: 90, maxLoadPct: 80 },
+    });
+    expect(response.status).toBe(400);
+    const fields = apiErrorSchema.parse(response.body).error.fields ?? {};
+    expect(Object.keys(fields)).toEqual(expect.arrayContaining(['timeZone', 'cutoff.time', 'roaster.minLoadPct']));
+    expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
+  });
+
+  it('is the owner’s alone: staff get 403 and the settings stay as they were', async () => {
+    const before = (await staff.get('/api/roastery/settings')).body as unknown;
+    const response = await staff.put('/api/roastery/settings').send({ ...defaultShopSettings, overagePct: 9 });
+    expect(response.status).toBe(403);
+    expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
+  });
+});

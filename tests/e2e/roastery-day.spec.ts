@@ -1,0 +1,252 @@
+import { mkdirSync } from 'node:fs';
+import AxeBuilder from '@axe-core/playwright';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { addDays, localDateOf } from '../../shared/domain/shop-time';
+import { roastLevelLabels } from '../../shared/domain/vocabulary';
+import type { PackListResponse } from '../../shared/schemas/packing';
+import type { BatchListResponse, RoastListResponse } from '../../shared/schemas/roastery';
+import type { ShopSettings } from '../../shared/schemas/settings';
+import { launchChromium } from '../setup/chromium';
+
+const baseUrl = inject('baseUrl');
+// The demo seed's invented team (server/db/seed): every account shares the demo password.
+const roaster = { email: 'roaster@wrenfield.test', password: 'restday-demo' };
+const owner = { email: 'owner@wrenfield.test', password: 'restday-demo' };
+const screenshotDir = 'test-results';
+
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchChromium();
+  mkdirSync(screenshotDir, { recursive: true });
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+type Session = { context: BrowserContext; page: Page; problems: string[] };
+
+/** A fresh browser profile signed in through the sign-in page; any console error or warning is kept. */
+async function signedIn(account: { email: string; password: string }, options: { bypassCSP?: boolean } = {}): Promise<Session> {
+  const context = await browser.newContext(options);
+  const page = await context.newPage();
+  page.setDefaultTimeout(10_000);
+  const problems: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()} (${message.location().url})`);
+  });
+  page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
+  await page.goto(`${baseUrl}/sign-in?redirectTo=%2Froastery`);
+  await page.getByLabel('E-mail').fill(account.email);
+  await page.getByLabel('Password', { exact: true }).fill(account.password);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await page.getByRole('heading', { level: 1, name: 'Roastery' }).waitFor();
+  // The sign-in page's own check of who is signed in answers 401 before signing in; only what follows counts.
+  problems.length = 0;
+  return { context, page, problems };
+}
+
+async function getJson<T>(page: Page, path: string): Promise<T> {
+  const response = await page.request.get(`${baseUrl}${path}`);
+  expect(response.status(), path).toBe(200);
+  return (await response.json()) as T;
+}
+
+/** The shop's today and the next two weeks, in the shop's own time zone. */
+async function shopDays(page: Page): Promise<string[]> {
+  const settings = await getJson<ShopSettings>(page, '/api/roastery/settings');
+  const today = localDateOf(new Date(), settings.timeZone);
+  return Array.from({ length: 15 }, (_unused, index) => addDays(today, index));
+}
+
+/** A seeded roast day ahead with a line whose green is all in stock (so a batch of it can be recorded). */
+async function roastDayWithStock(page: Page): Promise<{ date: string; roastList: RoastListResponse; line: RoastListResponse['lines'][number] }> {
+  for (const date of await shopDays(page)) {
+    const roastList = await getJson<RoastListResponse>(page, `/api/roastery/days/${date}/roast-list`);
+    const line = roastList.lines.find(
+      (candidate) => candidate.batches.length > 0 && roastList.pull.some((pull) => pull.lotCode === candidate.lotCode && pull.shortfallGrams === 0),
+    );
+    if (line) return { date, roastList, line };
+  }
+  throw new Error('The demo seed has no roast day with stock in the next two weeks.');
+}
+
+/** A ship day ahead with an order still to pack or ship. */
+async function packDayWithOrder(page: Page): Promise<{ date: string; order: PackListResponse['orders'][number] }> {
+  for (const date of await shopDays(page)) {
+    const packList = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
+    const order = packList.orders.find((candidate) => candidate.status === 'roasted' || candidate.status === 'packed');
+    if (order) return { date, order };
+  }
+  throw new Error('The demo seed has no order to pack in the next two weeks.');
+}
+
+/** A seeded order of the last two weeks whose bags were filled from a batch, for the trace pages. */
+async function tracedOrder(page: Page): Promise<{ orderId: string; batchId: string }> {
+  const days = await shopDays(page);
+  const today = days[0] as string;
+  for (let back = 1; back <= 14; back += 1) {
+    const date = addDays(today, -back);
+    const packList = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
+    for (const order of packList.orders) {
+      const batchId = order.bags.find((bag) => bag.batchId)?.batchId;
+      if (batchId) return { orderId: order.orderId, batchId };
+    }
+  }
+  throw new Error('The demo seed has no order filled from a batch in the last two weeks.');
+}
+
+describe('a roast day in a real browser', () => {
+  let session: Session;
+  let recordedBatchId: string | undefined;
+  let roastDate = '';
+
+  beforeAll(async () => {
+    session = await signedIn(roaster);
+  });
+  afterAll(async () => {
+    await session?.context.close();
+  });
+
+  it('a roaster opens the Day Sheet of a seeded roast day and records a batch with its loss checked', async () => {
+    const { page, problems } = session;
+    const { date, line } = await roastDayWithStock(page);
+    roastDate = date;
+    const before = await getJson<BatchListResponse>(page, `/api/roastery/days/${date}/batches`);
+
+    await page.goto(`${baseUrl}/roastery/days/${date}`);
+    await page.getByRole('heading', { level: 2, name: 'By lot and roast level' }).waitFor();
+    await page.getByText('Safety before you start the roaster').waitFor();
+
+    const level = roastLevelLabels[line.roastLevel];
+    await page.getByRole('button', { name: `Record batch of ${line.lotName}, ${level}`, exact: true }).click();
+    const form = page.getByRole('form', { name: `Record a batch of ${line.lotName}, ${level}`, exact: true });
+    const greenIn = Number(await form.getByLabel('Green in (g)').inputValue());
+    expect(greenIn).toBe(line.batches[line.recorded.batches]?.greenGrams);
+    // A loss of exactly the planned percentage, whole grams: roasted = round(green × (1 − loss)).
+    const roastedOut = Math.round(greenIn * (1 - line.lossPct / 100));
+    await form.getByLabel('Roasted out (g)').fill(String(roastedOut));
+    await form.getByLabel('Total time (mm:ss)').fill('11:45');
+    await form.getByLabel('First crack at (mm:ss)').fill('9:15');
+    // (705 − 555) ÷ 705 = 21.28 % (S. Rao, development time ratio).
+    await form.getByText('development time ratio 21.28 %').waitFor();
+    await form.getByRole('button', { name: 'Save batch' }).click();
+
+    await form.getByText(/Batch recorded/).waitFor();
+    const traceHref = await form.getByRole('link', { name: 'Trace this batch' }).getAttribute('href');
+    recordedBatchId = traceHref?.split('/').pop();
+    const after = await getJson<BatchListResponse>(page, `/api/roastery/days/${date}/batches`);
+    expect(after.items).toHaveLength(before.items.length + 1);
+    expect(after.items.at(-1)).toMatchObject({ id: recordedBatchId, greenGramsIn: greenIn, roastedGramsOut: roastedOut, totalSeconds: 705, firstCrackSeconds: 555 });
+    await page.getByRole('table', { name: 'Batches recorded for the day' }).getByRole('row', { name: new RegExp(line.lotName) }).first().waitFor();
+    expect(problems).toEqual([]);
+  });
+
+  it('prints the Roast List without navigation or buttons', async () => {
+    const { page, problems } = session;
+    await page.goto(`${baseUrl}/roastery/days/${roastDate}`);
+    await page.getByRole('heading', { level: 2, name: 'Pull list' }).waitFor();
+    expect(await page.getByRole('navigation', { name: 'Roastery' }).isVisible()).toBe(true);
+    await page.screenshot({ path: `${screenshotDir}/roast-list-screen.png`, fullPage: true });
+
+    await page.emulateMedia({ media: 'print' });
+    await page.screenshot({ path: `${screenshotDir}/roast-list-print.png`, fullPage: true });
+    expect(await page.getByRole('navigation', { name: 'Roastery' }).isVisible()).toBe(false);
+    expect(await page.getByRole('banner').first().isVisible()).toBe(false);
+    expect(await page.locator('button:visible').count()).toBe(0);
+    expect(await page.getByRole('tablist').isVisible()).toBe(false);
+    // What the roaster needs is still on the page.
+    expect(await page.getByRole('heading', { level: 2, name: 'Pull list' }).isVisible()).toBe(true);
+    expect(await page.getByRole('heading', { level: 2, name: 'By lot and roast level' }).isVisible()).toBe(true);
+
+    // The printable width of A4 (210 mm) and Letter (8.5 in) inside the stylesheet's 12 mm margins, at 96 px an inch:
+    // nothing may run off the side of either sheet.
+    const screenViewport = page.viewportSize();
+    for (const [paper, widthMm] of [['A4', 210], ['Letter', 215.9]] as const) {
+      await page.setViewportSize({ width: Math.floor(((widthMm - 24) / 25.4) * 96), height: 1000 });
+      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      expect(overflow, `${paper} overflows by ${overflow}px`).toBeLessThanOrEqual(0);
+      await page.pdf({ path: `${screenshotDir}/roast-list-${paper.toLowerCase()}.pdf`, format: paper, printBackground: false });
+    }
+    if (screenViewport) await page.setViewportSize(screenViewport);
+    await page.emulateMedia({ media: 'screen' });
+    expect(await page.locator('button:visible').count()).toBeGreaterThan(0);
+    expect(problems).toEqual([]);
+  });
+
+  it('packs an order and marks it shipped from the Pack List', async () => {
+    const { page, problems } = session;
+    const { date, order } = await packDayWithOrder(page);
+    await page.goto(`${baseUrl}/roastery/days/${date}`);
+    await page.getByRole('tab', { name: 'Pack List' }).click();
+    expect(new URL(page.url()).searchParams.get('tab')).toBe('pack');
+
+    const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });
+    if (order.status === 'roasted') {
+      await card.getByRole('button', { name: 'Mark packed' }).click();
+      await card.getByText('Packed', { exact: true }).waitFor();
+    }
+    await card.getByRole('button', { name: 'Mark shipped' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Carrier').fill('USPS');
+    // An invented tracking number.
+    await dialog.getByLabel('Tracking number').fill('wr e2e 0042');
+    await dialog.getByRole('button', { name: 'Mark shipped' }).click();
+    await page.getByText(/order is marked shipped \(USPS WRE2E0042\)/).waitFor();
+    await card.getByText('Shipped', { exact: true }).waitFor();
+
+    const packList = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
+    expect(packList.orders.find((candidate) => candidate.orderId === order.orderId)).toMatchObject({
+      status: 'shipped',
+      carrier: 'USPS',
+      trackingNumber: 'WRE2E0042',
+    });
+    expect(problems).toEqual([]);
+  });
+
+  describe('accessibility (axe-core, WCAG 2.2 AA tags)', () => {
+    // Each page loads, then axe walks its whole DOM: slow on a busy machine.
+    const auditTimeout = 120_000;
+    const tags = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
+
+    async function violationsOn(page: Page, path: string, ready: () => Promise<void>) {
+      await page.goto(`${baseUrl}${path}`);
+      await ready();
+      // A picture of each audited page for review, named after its address.
+      await page.screenshot({ path: `${screenshotDir}/${path.replace(/[^a-z0-9]+/gi, '-').replace(/^-|-$/g, '')}.png`, fullPage: true });
+      const results = await new AxeBuilder({ page }).withTags(tags).analyze();
+      return results.violations.map((violation) => `${path}: ${violation.id} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`);
+    }
+
+    it('finds no violations on the staff’s Roastery pages', async () => {
+      const audit = await signedIn(roaster, { bypassCSP: true });
+      const { page } = audit;
+      const heading = (level: number, name: string | RegExp) => () => page.getByRole('heading', { level, name }).waitFor();
+      const violations = [
+        ...(await violationsOn(page, '/roastery', heading(1, 'Roastery'))),
+        ...(await violationsOn(page, '/roastery/calendar', () => page.getByRole('table', { name: 'Roast days in the month, Monday first' }).waitFor())),
+        ...(await violationsOn(page, `/roastery/days/${roastDate}`, heading(2, 'By lot and roast level'))),
+        ...(await violationsOn(page, `/roastery/days/${roastDate}?tab=pack`, () => page.getByRole('link', { name: 'Labels (PDF)' }).waitFor())),
+      ];
+      if (recordedBatchId) violations.push(...(await violationsOn(page, `/roastery/batches/${recordedBatchId}`, heading(2, 'Orders from this batch'))));
+      const traced = await tracedOrder(page);
+      violations.push(
+        ...(await violationsOn(page, `/roastery/batches/${traced.batchId}`, () => page.getByRole('link', { name: traced.orderId.slice(0, 8).toUpperCase() }).waitFor())),
+        ...(await violationsOn(page, `/roastery/orders/${traced.orderId}/trace`, () => page.getByRole('link', { name: /^Open batch/ }).first().waitFor())),
+      );
+      expect(recordedBatchId).toBeTruthy();
+      expect(violations).toEqual([]);
+      expect(audit.problems).toEqual([]);
+      await audit.context.close();
+    }, auditTimeout);
+
+    it('finds no violations on the owner’s shop settings', async () => {
+      const audit = await signedIn(owner, { bypassCSP: true });
+      const violations = await violationsOn(audit.page, '/roastery/settings', () => audit.page.getByLabel('Time zone').waitFor());
+      expect(violations).toEqual([]);
+      expect(audit.problems).toEqual([]);
+      await audit.context.close();
+    }, auditTimeout);
+  });
+});
