@@ -1,10 +1,13 @@
 import { randomBytes } from 'node:crypto';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { greenOrderDates } from '@shared/domain/roast-schedule';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { webhookReceiptSchema } from '@shared/schemas/payments';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
+import { loadCalendarOverrides, loadShopSettings } from '../../server/modules/settings/settings.repo';
+import { getTestDb } from '../setup/test-db';
 import { inboxOf, waitFor } from './outbox-support';
 import {
   createCustomer,
@@ -134,7 +137,11 @@ describe('duplicates and order', () => {
       return held;
     });
 
-    expect((await orderRow(order.id)).status).toBe('paid');
+    const paid = await orderRow(order.id);
+    expect(paid.status).toBe('paid');
+    // A paid green order gets its ship day at once, so it reaches that day's Pack List.
+    const { settings } = await loadShopSettings(getTestDb());
+    expect(paid.shipDate).toBe(greenOrderDates(paid.paidAt!, settings, { overrides: await loadCalendarOverrides(getTestDb(), '2000-01-01') }).shipDate);
     expect(await ledgerCount([completedEventId])).toBe(1);
     expect(await outboxCount(`order-confirmed:${order.id}`)).toBe(1);
     await waitFor(() => inboxOf(mailCatcherUrl, customer.email), (mails) => mails.length > 0, 15_000, 'the order-confirmed e-mail');

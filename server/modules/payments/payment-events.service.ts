@@ -1,4 +1,5 @@
 import Stripe from 'stripe';
+import { greenOrderDates } from '@shared/domain/roast-schedule';
 import { localDateOf } from '@shared/domain/shop-time';
 import type { WebhookReceipt } from '@shared/schemas/payments';
 import { roastedBagSizes, type BagSize, type RoastedBagSize, type SubscriptionStatus } from '@shared/domain/vocabulary';
@@ -7,6 +8,7 @@ import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
 import { cancelUnpaidOrder } from '../checkout/checkout.repo';
 import { queueEmail } from '../outbox/outbox.repo';
+import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
 import { holdUnpaidCycle, recordPaidCycle, type PaidInvoice } from '../subscriptions/subscription-billing';
 import type { PaymentsRepo, PaymentsTransaction, SubscriptionForPayment } from './payments.repo';
 import { orderIdKey, shopBaseUrl, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
@@ -69,6 +71,12 @@ function billingOf(subscription: Stripe.Subscription) {
   };
 }
 
+async function greenShipDate(tx: PaymentsTransaction, paidAt: Date): Promise<string> {
+  const { settings } = await loadShopSettings(tx.tx);
+  const overrides = await loadCalendarOverrides(tx.tx, localDateOf(paidAt, settings.timeZone));
+  return greenOrderDates(paidAt, settings, { overrides }).shipDate;
+}
+
 /**
  * Applies Stripe's webhooks. Each event id is claimed in the payment_events ledger in the same
  * transaction as its effect, so a redelivered event changes nothing. Events arrive in any order, so
@@ -97,8 +105,18 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
       }
       // A refund can arrive before the payment it refunds; an order refunded in full is never confirmed.
       const refundedInFull = order.refundedCents >= order.totalCents;
-      await tx.markOrderPaid(order.id, { status: refundedInFull ? 'refunded' : 'paid', paidAt: clock.now(), checkoutSessionId: session.id, paymentIntentId });
+      const paidAt = clock.now();
+      // A green order ships on the first ship day from payment (the next one after the cutoff).
+      const shipDate = order.kind === 'green' && !refundedInFull ? await greenShipDate(tx, paidAt) : undefined;
+      await tx.markOrderPaid(order.id, {
+        status: refundedInFull ? 'refunded' : 'paid',
+        paidAt,
+        checkoutSessionId: session.id,
+        paymentIntentId,
+        ...(shipDate ? { shipDate } : {}),
+      });
       if (refundedInFull) return;
+      const confirmedShipDate = shipDate ?? order.shipDate;
       const lines = await tx.orderLines(order.id);
       await queueEmail(tx.tx, {
         template: 'order-confirmed',
@@ -122,7 +140,7 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
           currency: order.currency,
           shipTo: order.shippingAddress,
           ...(order.roastDate ? { roastDate: order.roastDate } : {}),
-          ...(order.shipDate ? { shipDate: order.shipDate } : {}),
+          ...(confirmedShipDate ? { shipDate: confirmedShipDate } : {}),
         },
       });
     };

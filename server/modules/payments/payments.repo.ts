@@ -97,12 +97,16 @@ function queries(db: DbOrTx) {
       await db.update(orders).set({ stripeCheckoutSessionId: sessionId }).where(eq(orders.id, orderId));
     },
 
-    async markOrderPaid(orderId: string, change: { status: OrderStatus; paidAt: Date; checkoutSessionId: string; paymentIntentId: string | null }) {
+    async markOrderPaid(
+      orderId: string,
+      change: { status: OrderStatus; paidAt: Date; checkoutSessionId: string; paymentIntentId: string | null; shipDate?: string },
+    ) {
       await db
         .update(orders)
         .set({
           status: change.status,
           paidAt: change.paidAt,
+          ...(change.shipDate ? { shipDate: change.shipDate } : {}),
           stripeCheckoutSessionId: change.checkoutSessionId,
           ...(change.paymentIntentId ? { stripePaymentIntentId: change.paymentIntentId } : {}),
         })

@@ -1,8 +1,10 @@
-import { eq } from 'drizzle-orm';
+import { eq, gte } from 'drizzle-orm';
+import type { CalendarOverride } from '@shared/domain/roast-schedule';
+import type { IsoDate } from '@shared/domain/shop-time';
 import { weekdays, type Weekday } from '@shared/domain/vocabulary';
 import { defaultShopSettings, type ShopSettings } from '@shared/schemas/settings';
 import type { DbOrTx } from '../../db/client';
-import { shopSettings } from '../../db/schema/index';
+import { roastDays, shopSettings } from '../../db/schema/index';
 
 type SettingsRow = typeof shopSettings.$inferSelect;
 
@@ -92,4 +94,13 @@ export async function saveShopSettings(db: DbOrTx, settings: ShopSettings, shopN
     .returning();
   if (!row) throw new Error('saving the shop settings returned no row');
   return { shopName: row.shopName, settings: toSettings(row) };
+}
+
+/** Roast Calendar overrides (closures, other capacities) from a date on, keyed by date. */
+export async function loadCalendarOverrides(db: DbOrTx, from: IsoDate): Promise<Record<IsoDate, CalendarOverride>> {
+  const rows = await db
+    .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
+    .from(roastDays)
+    .where(gte(roastDays.date, from));
+  return Object.fromEntries(rows.map(({ date, ...override }) => [date, override]));
 }
