@@ -1,10 +1,20 @@
-import { and, asc, eq, gte, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, ilike, lte, or, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lotPriceBreaks, lots, shopSettings, uploads } from '../../db/schema/index';
-import type { LotListQuery } from '@shared/schemas/lots';
+import type { LotListQuery, LotSort } from '@shared/schemas/lots';
 
 /** The query's filters, with "in stock" already turned into a gram threshold by the service. */
 export type LotFilters = Omit<LotListQuery, 'inStock'> & { minStockGrams?: number };
+
+/** Each sort ends on the code, so lots that tie keep one order from page to page. */
+const lotOrderings: Record<LotSort, SQL[]> = {
+  origin: [asc(lots.origin), asc(lots.name), asc(lots.code)],
+  name: [asc(lots.name), asc(lots.code)],
+  'price-asc': [asc(lots.pricePerKgCents), asc(lots.name), asc(lots.code)],
+  'price-desc': [desc(lots.pricePerKgCents), asc(lots.name), asc(lots.code)],
+  newest: [desc(lots.cropYear), desc(lots.createdAt), asc(lots.code)],
+  altitude: [desc(lots.altitudeM), asc(lots.name), asc(lots.code)],
+};
 
 function escapeLike(text: string) {
   return text.replace(/[\\%_]/g, (character) => `\\${character}`);
@@ -32,6 +42,8 @@ export function createLotsRepo(db: Db) {
       if (filters.process) conditions.push(eq(lots.process, filters.process));
       if (filters.level) conditions.push(eq(lots.suggestedLevel, filters.level));
       if (filters.minStockGrams !== undefined) conditions.push(gte(lots.stockGrams, filters.minStockGrams));
+      if (filters.minPricePerKgCents !== undefined) conditions.push(gte(lots.pricePerKgCents, filters.minPricePerKgCents));
+      if (filters.maxPricePerKgCents !== undefined) conditions.push(lte(lots.pricePerKgCents, filters.maxPricePerKgCents));
 
       // Each card's first photo comes in the same query, so the list is one round trip.
       // Written out in full: drizzle leaves columns unqualified in a one-table select, which would
@@ -60,7 +72,7 @@ export function createLotsRepo(db: Db) {
         })
         .from(lots)
         .where(and(...conditions))
-        .orderBy(asc(lots.origin), asc(lots.name));
+        .orderBy(...lotOrderings[filters.sort ?? 'origin']);
     },
 
     async findListedByCode(code: string) {
