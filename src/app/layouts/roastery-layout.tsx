@@ -20,6 +20,7 @@ const ownerNav = [{ to: paths.roastery.team.getHref(), label: 'Team', end: false
 const roasteryNav = [
   { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
   { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false },
+  { to: paths.roastery.orders.getHref(), label: 'Orders', end: false },
 ];
 
 function navLinkStyles({ isActive }: { isActive: boolean }): string {

@@ -22,7 +22,7 @@ describe('Roastery', () => {
     renderApp('/roastery', { session: staff });
 
     const nav = await screen.findByRole('navigation', { name: 'Roastery' });
-    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Green Stock']);
+    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Green Stock', 'Orders']);
 
     const figure = async (label: string) => (await screen.findByText(label)).nextElementSibling?.textContent;
     expect(await figure('Lots listed')).toBe('3');
