@@ -1,14 +1,40 @@
+import { useLayoutEffect, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { lotFiltersToSearchParams, parseLotFilters, type LotFilters } from '../utils/lot-filters';
+import { isPriceUnit, type PriceUnit } from '../utils/price-per-unit';
 
-/** The Green Lots filters live in the URL, so a filtered list can be bookmarked and shared. */
+const priceUnitParam = 'priceUnit';
+
+function priceUnitOf(search: URLSearchParams): PriceUnit {
+  const unit = search.get(priceUnitParam);
+  return isPriceUnit(unit) ? unit : 'kg';
+}
+
+/**
+ * The Green Lots filters live in the URL, so a filtered list can be bookmarked and shared. The
+ * unit prices are read in (`priceUnit=lb`) rides along but is never sent to the API.
+ */
 export function useLotFilters() {
   const [searchParams, setSearchParams] = useSearchParams();
-  const filters = parseLotFilters(searchParams);
+  // The last URL written, so a second change made before the page re-renders builds on the first.
+  const latest = useRef(searchParams);
+  useLayoutEffect(() => {
+    latest.current = searchParams;
+  }, [searchParams]);
 
-  function updateFilters(change: Partial<LotFilters>): void {
-    setSearchParams(lotFiltersToSearchParams({ ...filters, ...change }));
+  function write(change: Partial<LotFilters>, unit?: PriceUnit): void {
+    const current = latest.current;
+    const search = lotFiltersToSearchParams({ ...parseLotFilters(current), ...change });
+    const nextUnit = unit ?? priceUnitOf(current);
+    if (nextUnit !== 'kg') search.set(priceUnitParam, nextUnit);
+    latest.current = search;
+    setSearchParams(search);
   }
 
-  return { filters, updateFilters };
+  return {
+    filters: parseLotFilters(searchParams),
+    priceUnit: priceUnitOf(searchParams),
+    updateFilters: (change: Partial<LotFilters>) => write(change),
+    setPriceUnit: (unit: PriceUnit) => write({}, unit),
+  };
 }
