@@ -139,6 +139,7 @@ describe('Roastery orders table', () => {
     expect(document.getElementById(errorId)?.textContent).toBe('The first day must not be after the last.');
     expect(screen.getByRole('heading', { name: 'Check the dates' })).toBeTruthy();
     expect(screen.queryByRole('link', { name: 'Download CSV' })).toBeNull();
+    expect((screen.getByRole('button', { name: 'Download CSV' }) as HTMLButtonElement).disabled).toBe(true);
     expect(apiListRequests(fetchMock)).toEqual([]);
   });
 

@@ -29,9 +29,12 @@ export function StockHistoryTable({ code }: { code: string }) {
   if (movements.length === 0) return <EmptyState title="No stock movements yet">Record the first arrival above; sales and roasts appear here too.</EmptyState>;
 
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-sheet" aria-busy={movementsQuery.isFetching}>
+    // Focusable so a keyboard can scroll the table sideways on a narrow screen.
+    <div role="region" aria-labelledby="stock-history-caption" tabIndex={0} className="overflow-x-auto rounded-card border border-rule bg-sheet" aria-busy={movementsQuery.isFetching}>
       <table className="w-full min-w-[40rem] border-collapse text-left text-small">
-        <caption className="sr-only">Stock history of {code}, newest first</caption>
+        <caption id="stock-history-caption" className="sr-only">
+          Stock history of {code}, newest first
+        </caption>
         <thead className="bg-paper-shade">
           <tr>
             <th scope="col" className="px-3 py-3 font-semibold">

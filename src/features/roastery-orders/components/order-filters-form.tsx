@@ -4,7 +4,7 @@ import { useId } from 'react';
 import { Link } from 'react-router-dom';
 import { orderSorts, type OrderSort } from '@shared/schemas/orders';
 import { orderKinds, orderStatuses, type OrderKind, type OrderStatus } from '@shared/domain/vocabulary';
-import { buttonStyles } from '@/components/ui/button';
+import { Button, buttonStyles } from '@/components/ui/button';
 import { controlStyles } from '@/components/ui/control-styles';
 import { Field, fieldDescribedBy } from '@/components/ui/field';
 import { SelectField } from '@/components/ui/select-field';
@@ -81,10 +81,10 @@ export function OrderFiltersForm({ filters, onChange }: OrderFiltersFormProps) {
           <span className="text-small text-ink-muted">Showing every order.</span>
         )}
         {Object.keys(problems).length > 0 ? (
-          <span aria-disabled="true" className={buttonStyles('secondary', 'cursor-not-allowed opacity-60')}>
+          <Button variant="secondary" disabled>
             <Download aria-hidden="true" className="size-4" />
             Download CSV
-          </span>
+          </Button>
         ) : (
           // A plain link: the browser downloads the file with the session cookie.
           <a href={ordersCsvHref(filters)} download className={buttonStyles('secondary')}>

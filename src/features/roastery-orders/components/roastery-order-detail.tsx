@@ -77,9 +77,12 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
           </span>
         </div>
 
-        <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
+        {/* Focusable so a keyboard can scroll the table sideways on a narrow screen. */}
+        <div role="region" aria-labelledby="order-bags-caption" tabIndex={0} className="overflow-x-auto rounded-card border border-rule bg-sheet">
           <table className="w-full min-w-[36rem] border-collapse text-left text-small">
-            <caption className="px-4 pt-3 text-left font-heading text-h3 font-semibold">Bags</caption>
+            <caption id="order-bags-caption" className="px-4 pt-3 text-left font-heading text-h3 font-semibold">
+              Bags
+            </caption>
             <thead>
               <tr className="border-b border-rule">
                 <th scope="col" className="px-4 py-2 font-semibold">
