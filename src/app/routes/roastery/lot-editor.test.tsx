@@ -214,8 +214,14 @@ describe('Lot page in Green Stock: descriptors', () => {
     fireEvent.click(within(form).getByRole('button', { name: 'Save changes' }));
 
     expect(await within(form).findByText('Saved. The lot page shows the changes now.')).toBeTruthy();
+
+    // A second save sends only what changed since the first.
+    fireEvent.change(within(form).getByLabelText('Region'), { target: { value: 'Upper Sidama' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect(sentRequests(fetchMock, 'PATCH', '/api/lots/RD-T01')).toHaveLength(2));
     expect(sentRequests(fetchMock, 'PATCH', '/api/lots/RD-T01').map((request) => request.body)).toEqual([
       { name: 'Test Ridge Washed, Second Pick', tastingNotes: ['bergamot', 'apricot', 'honey'], pricePerKgCents: 2680 },
+      { region: 'Upper Sidama' },
     ]);
   });
 

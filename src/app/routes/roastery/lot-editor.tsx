@@ -150,7 +150,8 @@ export default function LotEditorRoute() {
       <BackToGreenStock />
       <PageHeader eyebrow={`Green Stock · ${item.code}`} title={item.name} />
       {created ? <CreatedNotice /> : null}
-      <div className="grid gap-12">
+      {/* Keyed by lot, so moving to another lot starts its forms afresh. */}
+      <div key={item.code} className="grid gap-12">
         <Section id="lot-stock" title="Stock">
           <LotStockSettings item={item} windowDays={stockQuery.data.windowDays} />
           <div className="rounded-card border border-rule bg-sheet p-4 sm:p-5">

@@ -64,7 +64,8 @@ export function NewLotForm({ onCreated }: { onCreated: (lot: LotStaffDetail) => 
 
 /** An existing lot's descriptors; only what changed is sent. */
 export function LotDescriptorsForm({ lot, settings }: { lot: LotDetail; settings: { reorderPointGrams: number; isListed: boolean } }) {
-  const [original] = useState(() => lotFormValuesOf(lot, settings));
+  // The lot as last loaded or saved: a save sends only what differs from it.
+  const [original, setOriginal] = useState(() => lotFormValuesOf(lot, settings));
   const form = useLotForm(original);
   const updateLot = useUpdateLot();
   const [message, setMessage] = useState<{ tone: 'alert' | 'status'; text: string }>();
@@ -78,7 +79,9 @@ export function LotDescriptorsForm({ lot, settings }: { lot: LotDetail; settings
     }
     try {
       const saved = await updateLot.mutateAsync({ code: lot.code, patch });
-      form.reset(lotFormValuesOf(saved, { reorderPointGrams: saved.reorderPointGrams, isListed: saved.isListed }));
+      const savedValues = lotFormValuesOf(saved, { reorderPointGrams: saved.reorderPointGrams, isListed: saved.isListed });
+      setOriginal(savedValues);
+      form.reset(savedValues);
       setMessage({ tone: 'status', text: 'Saved. The lot page shows the changes now.' });
     } catch (error) {
       const left = applyServerErrors(error, form.setError, fieldNamesOf(form.getValues()));
