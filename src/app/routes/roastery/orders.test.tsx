@@ -191,6 +191,7 @@ describe('Roastery order detail', () => {
     const bags = screen.getByRole('table', { name: 'Bags' });
     const line = within(bags).getByRole('row', { name: /Test Ridge Washed/ });
     expect(within(line).getByText('$39.80')).toBeTruthy();
+    expect(within(line).getByRole('link', { name: 'RD-T01' }).getAttribute('href')).toBe('/roastery/green-stock/RD-T01');
     expect(within(bags).getByRole('row', { name: /Total \(USD\)/ }).textContent).toContain('$59.80');
     expect(within(bags).getByRole('row', { name: /Refunded/ }).textContent).toContain('$19.90');
 

@@ -1,7 +1,9 @@
 import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
+import { paths } from '@/config/paths';
 import { formatGrams, formatMoney } from '@/lib/format';
 import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { orderKindLabels, paymentState } from '../utils/order-labels';
@@ -104,7 +106,14 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
                 <tr key={item.id} className="border-t border-rule">
                   <th scope="row" className="px-4 py-3 text-left font-normal">
                     <span className="font-semibold">{item.lotName ?? roastersRotationName}</span>
-                    {item.lotCode ? <span className="text-ink-muted"> · {item.lotCode}</span> : null}
+                    {item.lotCode ? (
+                      <>
+                        {' · '}
+                        <Link to={paths.roastery.lot.getHref(item.lotCode)} className="text-leaf underline">
+                          {item.lotCode}
+                        </Link>
+                      </>
+                    ) : null}
                     <span className="block text-caption text-ink-muted">{lineDetails(item)}</span>
                   </th>
                   <td className="px-4 py-3 text-right tabular-nums">{item.quantity}</td>
