@@ -145,7 +145,7 @@ describe('Green Lots page', () => {
     // the lowest bound rounds up and the highest down, so no lot outside the typed range gets in.
     await waitFor(() => expect(router.state.location.search).toBe('?minPricePerKgCents=2205&maxPricePerKgCents=2755&priceUnit=lb'));
     await waitFor(() => expect(requestedUrls(fetchMock)).toContain('/api/lots?minPricePerKgCents=2205&maxPricePerKgCents=2755'));
-    expect((screen.getByLabelText('Lowest ($ per lb)') as HTMLInputElement).value).toBe('10.00');
+    await waitFor(() => expect((screen.getByLabelText('Lowest ($ per lb)') as HTMLInputElement).value).toBe('10.00'));
     expect((screen.getByLabelText('Highest ($ per lb)') as HTMLInputElement).value).toBe('12.50');
 
     fireEvent.change(screen.getByLabelText('Prices'), { target: { value: 'kg' } });

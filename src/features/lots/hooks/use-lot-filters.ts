@@ -16,9 +16,13 @@ function priceUnitOf(search: URLSearchParams): PriceUnit {
  */
 export function useLotFilters() {
   const [searchParams, setSearchParams] = useSearchParams();
-  // The last URL written, so a second change made before the page re-renders builds on the first.
+  // The last URL written, so a second change made before the page re-renders builds on the first;
+  // a render of an older URL (the first change landing after the second was made) must not undo it.
   const latest = useRef(searchParams);
+  const pending = useRef<string | null>(null);
   useLayoutEffect(() => {
+    if (pending.current !== null && pending.current !== searchParams.toString()) return;
+    pending.current = null;
     latest.current = searchParams;
   }, [searchParams]);
 
@@ -28,6 +32,7 @@ export function useLotFilters() {
     const nextUnit = unit ?? priceUnitOf(current);
     if (nextUnit !== 'kg') search.set(priceUnitParam, nextUnit);
     latest.current = search;
+    pending.current = search.toString();
     setSearchParams(search);
   }
 
