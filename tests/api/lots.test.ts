@@ -86,6 +86,14 @@ describe('GET /api/lots', () => {
     expect(await listCodes({ q: '%' })).toEqual([]);
   });
 
+  it('lets browsers and shared caches keep the list for 10 s, and answers a revalidation with 304', async () => {
+    const first = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}` });
+    expect(first.headers['cache-control']).toBe('public, max-age=10');
+    expect(first.headers.etag).toBeTruthy();
+    const again = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}` }).set('If-None-Match', first.headers.etag!);
+    expect(again.status).toBe(304);
+  });
+
   it('gives each card its first photo by position', async () => {
     const response = await request(app).get('/api/lots').query({ q: `${tag}-A` });
     const [lot] = lotListResponseSchema.parse(response.body).items;
