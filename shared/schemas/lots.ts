@@ -6,14 +6,33 @@ const booleanFlag = z
   .enum(['true', 'false', '1', '0'])
   .transform((value) => value === 'true' || value === '1');
 
-/** Query string of `GET /api/lots`. */
-export const lotListQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
-  origin: z.string().trim().max(60).optional(),
-  process: z.enum(processes).optional(),
-  level: z.enum(roastLevels).optional(),
-  inStock: booleanFlag.optional(),
-});
+const pricePerKgBound = z.coerce
+  .number({ error: 'must be a whole number of cents per kg' })
+  .int('must be a whole number of cents per kg')
+  .min(0, 'must not be negative')
+  .max(10_000_000, 'must be at most 10000000');
+
+/** How `GET /api/lots` orders its items; `origin` (then name) when none is asked for. */
+export const lotSorts = ['origin', 'name', 'price-asc', 'price-desc', 'newest', 'altitude'] as const;
+export type LotSort = (typeof lotSorts)[number];
+
+/** Query string of `GET /api/lots`. Prices are the lot's list price per kg, bounds inclusive. */
+export const lotListQuerySchema = z
+  .object({
+    q: z.string().trim().max(100).optional(),
+    origin: z.string().trim().max(60).optional(),
+    process: z.enum(processes).optional(),
+    level: z.enum(roastLevels).optional(),
+    inStock: booleanFlag.optional(),
+    minPricePerKgCents: pricePerKgBound.optional(),
+    maxPricePerKgCents: pricePerKgBound.optional(),
+    sort: z.enum(lotSorts).optional(),
+  })
+  .refine(
+    (query) =>
+      query.minPricePerKgCents === undefined || query.maxPricePerKgCents === undefined || query.minPricePerKgCents <= query.maxPricePerKgCents,
+    { path: ['minPricePerKgCents'], message: 'must not be more than maxPricePerKgCents' },
+  );
 export type LotListQuery = z.infer<typeof lotListQuerySchema>;
 
 export const lotSummarySchema = z.object({

@@ -4,7 +4,8 @@ import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels }
 
 const isoDate = (what: string) => z.string().refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 
-export const orderSorts = ['newest', 'oldest', 'total-high', 'total-low'] as const;
+/** `status` follows an order's life (awaiting payment first, refunded last); roast-date sorts put orders without a roast date last. */
+export const orderSorts = ['newest', 'oldest', 'total-high', 'total-low', 'roast-date-soonest', 'roast-date-latest', 'status'] as const;
 export type OrderSort = (typeof orderSorts)[number];
 
 /**

@@ -76,6 +76,10 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 { index: true, lazy: () => import('./routes/roastery/overview').then(load) },
                 { path: paths.roastery.greenStock.path, lazy: () => import('./routes/roastery/green-stock').then(load) },
+                { path: paths.roastery.newLot.path, lazy: () => import('./routes/roastery/lot-editor-new').then(load) },
+                { path: paths.roastery.lot.path, lazy: () => import('./routes/roastery/lot-editor').then(load) },
+                { path: paths.roastery.orders.path, lazy: () => import('./routes/roastery/orders').then(load) },
+                { path: paths.roastery.order.path, lazy: () => import('./routes/roastery/order').then(load) },
                 { path: paths.roastery.team.path, lazy: () => import('./routes/roastery/team').then(load) },
                 { path: paths.roastery.subscribers.path, lazy: () => import('./routes/roastery/subscribers').then(load) },
                 { path: paths.roastery.subscriber.path, lazy: () => import('./routes/roastery/subscriber').then(load) },

@@ -52,6 +52,10 @@ export const paths = {
   roastery: {
     overview: { path: '/roastery', getHref: () => '/roastery' },
     greenStock: { path: '/roastery/green-stock', getHref: () => '/roastery/green-stock' },
+    newLot: { path: '/roastery/green-stock/new', getHref: () => '/roastery/green-stock/new' },
+    lot: { path: '/roastery/green-stock/:code', getHref: (code: string) => `/roastery/green-stock/${encodeURIComponent(code)}` },
+    orders: { path: '/roastery/orders', getHref: (search?: URLSearchParams) => withSearch('/roastery/orders', search) },
+    order: { path: '/roastery/orders/:id', getHref: (id: string) => `/roastery/orders/${encodeURIComponent(id)}` },
     team: { path: '/roastery/team', getHref: () => '/roastery/team' },
     subscribers: { path: '/roastery/subscribers', getHref: (search?: URLSearchParams) => withSearch('/roastery/subscribers', search) },
     subscriber: { path: '/roastery/subscribers/:id', getHref: (id: string) => `/roastery/subscribers/${encodeURIComponent(id)}` },

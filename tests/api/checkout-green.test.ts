@@ -71,11 +71,47 @@ describe('POST /api/checkout/green', () => {
     expect(error.code).toBe('insufficient_stock');
     expect(error.message).toContain(scarce.code);
     expect(error.message).toContain('Nothing was reserved or charged');
+    // 1 lb bags are filled to 454 g (PRODUCT.md), so 900 g fills one of them.
+    expect(error.fields).toEqual({ 'items.1.quantity': 'Only 900 g in stock, enough for 1 bag of this size.' });
 
     expect(await stockOf(plenty.id)).toBe(50_000);
     expect(await stockOf(scarce.id)).toBe(900);
     expect(await movementsOf(plenty.id)).toEqual({ sum: 0, count: 0 });
     expect(await movementsOf(scarce.id)).toEqual({ sum: 0, count: 0 });
+    expect(await ordersOf(customer.id)).toBe(0);
+  });
+
+  it('answers 409 with a reason on the quantity of every line whose lot is short, and takes nothing from any lot', async () => {
+    const plenty = await createLotForSale(50_000);
+    const scarce = await createLotForSale(1_000);
+    const nearlyGone = await createLotForSale(200);
+    const customer = await createTestUser('customer');
+    const agent = await signedInAgent(app, customer);
+    const response = await agent.post('/api/checkout/green').send({
+      items: [
+        { lotCode: plenty.code, size: '1lb', quantity: 2 },
+        { lotCode: scarce.code, size: '8oz', quantity: 3 },
+        { lotCode: scarce.code, size: '2lb', quantity: 1 },
+        { lotCode: nearlyGone.code, size: '8oz', quantity: 1 },
+      ],
+      shippingAddress: shipTo,
+    });
+    expect(response.status).toBe(409);
+    const { error } = apiErrorSchema.parse(response.body);
+    expect(error.code).toBe('insufficient_stock');
+    // Fill weights 8 oz → 227 g, 2 lb → 908 g (PRODUCT.md): 1,000 g fills 4 small bags or 1 large one; 200 g fills none.
+    expect(error.fields).toEqual({
+      'items.1.quantity': 'Only 1,000 g in stock, enough for 4 bags of this size.',
+      'items.2.quantity': 'Only 1,000 g in stock, enough for 1 bag of this size.',
+      'items.3.quantity': 'Only 200 g in stock, not enough for one bag of this size.',
+    });
+    expect(error.message).toContain(scarce.code);
+    expect(error.message).toContain(nearlyGone.code);
+
+    expect(await stockOf(plenty.id)).toBe(50_000);
+    expect(await stockOf(scarce.id)).toBe(1_000);
+    expect(await stockOf(nearlyGone.id)).toBe(200);
+    expect(await movementsOf(plenty.id)).toEqual({ sum: 0, count: 0 });
     expect(await ordersOf(customer.id)).toBe(0);
   });
 

@@ -43,6 +43,11 @@ beforeAll(async () => {
       lotRow({ code: `${tag}-D`, origin: `Tagland ${tag}`, isListed: false }),
     ])
     .returning({ id: lots.id, code: lots.code });
+  await db.insert(lots).values([
+    lotRow({ code: `${tag}-P1`, name: 'Cedar', origin: `Priceland ${tag}`, pricePerKgCents: 1800, altitudeM: 1400, cropYear: 2025 }),
+    lotRow({ code: `${tag}-P2`, name: 'Alder', origin: `Priceland ${tag}`, pricePerKgCents: 2205, altitudeM: 2100, cropYear: 2026 }),
+    lotRow({ code: `${tag}-P3`, name: 'Birch', origin: `Priceland ${tag}`, pricePerKgCents: 3100, altitudeM: 1750, cropYear: 2024 }),
+  ]);
   const lotA = inserted.find((lot) => lot.code === `${tag}-A`)!;
   await db.insert(lotPriceBreaks).values([
     { lotId: lotA.id, minGrams: 9072, pricePerKgCents: 2000 },
@@ -81,6 +86,14 @@ describe('GET /api/lots', () => {
     expect(await listCodes({ q: '%' })).toEqual([]);
   });
 
+  it('lets browsers and shared caches keep the list for 10 s, and answers a revalidation with 304', async () => {
+    const first = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}` });
+    expect(first.headers['cache-control']).toBe('public, max-age=10');
+    expect(first.headers.etag).toBeTruthy();
+    const again = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}` }).set('If-None-Match', first.headers.etag!);
+    expect(again.status).toBe(304);
+  });
+
   it('gives each card its first photo by position', async () => {
     const response = await request(app).get('/api/lots').query({ q: `${tag}-A` });
     const [lot] = lotListResponseSchema.parse(response.body).items;
@@ -93,6 +106,41 @@ describe('GET /api/lots', () => {
     const body = apiErrorSchema.parse(response.body);
     expect(body.error.code).toBe('invalid_input');
     expect(Object.keys(body.error.fields ?? {}).sort()).toEqual(['inStock', 'level']);
+  });
+});
+
+describe('GET /api/lots — price range and sort', () => {
+  async function listInOrder(query: Record<string, string>) {
+    const response = await request(app).get('/api/lots').query({ origin: `Priceland ${tag}`, ...query });
+    expect(response.status).toBe(200);
+    return lotListResponseSchema.parse(response.body).items.map((item) => item.code.slice(-2));
+  }
+
+  it('keeps lots whose list price per kg lies within the bounds, both ends included', async () => {
+    expect(await listInOrder({ minPricePerKgCents: '2205', sort: 'price-asc' })).toEqual(['P2', 'P3']);
+    expect(await listInOrder({ maxPricePerKgCents: '2205', sort: 'price-asc' })).toEqual(['P1', 'P2']);
+    expect(await listInOrder({ minPricePerKgCents: '2000', maxPricePerKgCents: '3000' })).toEqual(['P2']);
+    expect(await listInOrder({ minPricePerKgCents: '3101' })).toEqual([]);
+  });
+
+  it('sorts by name, price either way, newest crop and highest altitude', async () => {
+    expect(await listInOrder({ sort: 'name' })).toEqual(['P2', 'P3', 'P1']);
+    expect(await listInOrder({ sort: 'price-asc' })).toEqual(['P1', 'P2', 'P3']);
+    expect(await listInOrder({ sort: 'price-desc' })).toEqual(['P3', 'P2', 'P1']);
+    expect(await listInOrder({ sort: 'newest' })).toEqual(['P2', 'P1', 'P3']);
+    expect(await listInOrder({ sort: 'altitude' })).toEqual(['P2', 'P3', 'P1']);
+  });
+
+  it('when the minimum price is above the maximum, then 400 naming minPricePerKgCents', async () => {
+    const response = await request(app).get('/api/lots').query({ minPricePerKgCents: '3000', maxPricePerKgCents: '2000' });
+    expect(response.status).toBe(400);
+    expect(apiErrorSchema.parse(response.body).error.fields).toEqual({ minPricePerKgCents: 'must not be more than maxPricePerKgCents' });
+  });
+
+  it('when a price bound is not whole cents or the sort is unknown, then 400 naming each field', async () => {
+    const response = await request(app).get('/api/lots').query({ minPricePerKgCents: '12.5', maxPricePerKgCents: 'cheap', sort: 'random' });
+    expect(response.status).toBe(400);
+    expect(Object.keys(apiErrorSchema.parse(response.body).error.fields ?? {}).sort()).toEqual(['maxPricePerKgCents', 'minPricePerKgCents', 'sort']);
   });
 });
 

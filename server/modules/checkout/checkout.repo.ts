@@ -15,10 +15,16 @@ export interface NewGreenOrder {
   reservations: { lotId: string; lotCode: string; grams: number }[];
 }
 
-/** Thrown inside the order's transaction when a lot cannot cover its reservation; the whole transaction rolls back. */
+export interface ShortLot {
+  lotCode: string;
+  /** What the lot held when the order tried to take its grams. */
+  stockGrams: number;
+}
+
+/** Thrown inside the order's transaction when lots cannot cover their reservations; the whole transaction rolls back. */
 export class StockShortfall extends Error {
-  constructor(readonly lotCode: string) {
-    super(`Lot ${lotCode} cannot cover the order`);
+  constructor(readonly shortLots: ShortLot[]) {
+    super(`Lots ${shortLots.map((lot) => lot.lotCode).join(', ')} cannot cover the order`);
     this.name = 'StockShortfall';
   }
 }
@@ -81,7 +87,7 @@ export function createCheckoutRepo(db: Db) {
     /**
      * One transaction: the order, its lines, and each lot's stock taken with a conditional decrement
      * (`stock_grams >= n`, so concurrent checkouts queue on the lot's row and the loser finds it
-     * short) plus its 'sale' movement. Throws StockShortfall, changing nothing, when a lot is short.
+     * short) plus its 'sale' movement. Throws StockShortfall, changing nothing, when any lot is short.
      */
     async placeGreenOrder(order: NewGreenOrder): Promise<string> {
       return db.transaction(async (tx) => {
@@ -100,15 +106,22 @@ export function createCheckoutRepo(db: Db) {
         await tx.insert(orderItems).values(order.items.map((item) => ({ ...item, orderId, kind: 'green' as const })));
         // A fixed lock order (by lot id) so two multi-lot checkouts never deadlock.
         const reservations = [...order.reservations].sort((a, b) => (a.lotId < b.lotId ? -1 : a.lotId > b.lotId ? 1 : 0));
+        // Every lot is tried, so the answer names each short one, not just the first.
+        const shortLots: ShortLot[] = [];
         for (const { lotId, lotCode, grams } of reservations) {
           const taken = await tx
             .update(lots)
             .set({ stockGrams: sql`${lots.stockGrams} - ${grams}` })
             .where(and(eq(lots.id, lotId), gte(lots.stockGrams, grams)))
             .returning({ id: lots.id });
-          if (taken.length === 0) throw new StockShortfall(lotCode);
+          if (taken.length === 0) {
+            const [lot] = await tx.select({ stockGrams: lots.stockGrams }).from(lots).where(eq(lots.id, lotId));
+            shortLots.push({ lotCode, stockGrams: lot?.stockGrams ?? 0 });
+            continue;
+          }
           await tx.insert(stockMovements).values({ lotId, orderId, actorId: order.userId, deltaGrams: -grams, reason: 'sale', note: 'reserved at checkout' });
         }
+        if (shortLots.length > 0) throw new StockShortfall(shortLots);
         return orderId;
       });
     },

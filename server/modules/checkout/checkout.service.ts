@@ -6,7 +6,7 @@ import type { Clock } from '../../lib/clock';
 import { AppError } from '../../lib/app-error';
 import type { SessionUser } from '../../middleware/require-role';
 import type { PaymentsService } from '../payments/payments.service';
-import { StockShortfall, type CheckoutRepo } from './checkout.repo';
+import { StockShortfall, type CheckoutRepo, type ShortLot } from './checkout.repo';
 
 export interface CheckoutServiceDeps {
   repo: CheckoutRepo;
@@ -14,11 +14,27 @@ export interface CheckoutServiceDeps {
   clock: Clock;
 }
 
-const shortOfStock = (lotCode: string) =>
-  AppError.conflict(
+const grams = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+
+/** One reason per cart line of a short lot, on its quantity, saying what is left and how many such bags that fills. */
+function shortOfStock(items: GreenCheckoutRequest['items'], shortLots: ShortLot[]): AppError {
+  const stockByCode = new Map(shortLots.map((lot) => [lot.lotCode, lot.stockGrams]));
+  const fields: Record<string, string> = {};
+  items.forEach((item, index) => {
+    const stockGrams = stockByCode.get(item.lotCode);
+    if (stockGrams === undefined) return;
+    const bags = Math.floor(stockGrams / bagFillGrams(item.size));
+    const fills = bags === 0 ? 'not enough for one bag of this size' : `enough for ${bags} ${bags === 1 ? 'bag' : 'bags'} of this size`;
+    fields[`items.${index}.quantity`] = `Only ${grams.format(stockGrams)} g in stock, ${fills}.`;
+  });
+  const codes = shortLots.map((lot) => lot.lotCode).join(', ');
+  return new AppError(
+    409,
     'insufficient_stock',
-    `There is not enough of lot ${lotCode} left for this order. Nothing was reserved or charged; lower the quantity or choose another lot.`,
+    `There is not enough of ${shortLots.length === 1 ? 'lot' : 'lots'} ${codes} left for this order. Nothing was reserved or charged; lower the quantity or choose another lot.`,
+    fields,
   );
+}
 
 export function createCheckoutService({ repo, payments, clock }: CheckoutServiceDeps) {
   return {
@@ -70,7 +86,7 @@ export function createCheckoutService({ repo, payments, clock }: CheckoutService
           reservations: [...gramsPerLot].map(([lotCode, grams]) => ({ lotId: byCode.get(lotCode)!.id, lotCode, grams })),
         });
       } catch (error) {
-        if (error instanceof StockShortfall) throw shortOfStock(error.lotCode);
+        if (error instanceof StockShortfall) throw shortOfStock(request.items, error.shortLots);
         throw error;
       }
 

@@ -10,6 +10,9 @@ export function lotsRoutes(service: LotsService): Router {
 
   router.get('/', async (req, res) => {
     const items = await service.list(lotListQuerySchema.parse(req.query));
+    // The same for every visitor, so browsers and any shared cache may keep it briefly; stock shown
+    // a few seconds old is safe, because checkout takes stock only if it is really there.
+    res.setHeader('Cache-Control', 'public, max-age=10');
     res.json({ items } satisfies LotListResponse);
   });
 

@@ -22,6 +22,10 @@ const sortOrder: Record<OrderSort, SQL[]> = {
   oldest: [asc(orders.createdAt), asc(orders.id)],
   'total-high': [desc(orders.totalCents), desc(orders.createdAt)],
   'total-low': [asc(orders.totalCents), desc(orders.createdAt)],
+  'roast-date-soonest': [sql`${orders.roastDate} asc nulls last`, desc(orders.createdAt)],
+  'roast-date-latest': [sql`${orders.roastDate} desc nulls last`, desc(orders.createdAt)],
+  // The enum's declared order is the order's life, from awaiting payment to refunded.
+  status: [asc(orders.status), desc(orders.createdAt)],
 };
 
 const summaryColumns = {

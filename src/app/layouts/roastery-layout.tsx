@@ -22,11 +22,12 @@ const ownerNav = [
 
 const roasteryNav = [
   { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
+  { to: paths.roastery.daySheetToday.getHref(), label: 'Day Sheet', end: false },
+  { to: paths.roastery.calendar.getHref(), label: 'Roast Calendar', end: false },
+  { to: paths.roastery.orders.getHref(), label: 'Orders', end: false },
   { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false },
   { to: paths.roastery.subscribers.getHref(), label: 'Subscribers', end: false },
   { to: paths.roastery.rotation.getHref(), label: 'Rotation', end: false },
-  { to: paths.roastery.calendar.getHref(), label: 'Roast Calendar', end: false },
-  { to: paths.roastery.daySheetToday.getHref(), label: 'Day Sheet', end: false },
 ];
 
 function navLinkStyles({ isActive }: { isActive: boolean }): string {

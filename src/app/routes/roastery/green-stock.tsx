@@ -1,32 +1,66 @@
 import type { QueryClient } from '@tanstack/react-query';
+import { Plus } from 'lucide-react';
+import { Link, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
+import { buttonStyles } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
-import { getLotsQueryOptions, useLots } from '@/features/lots/api/get-lots';
-import { LotStockTable } from '@/features/lots/components/lot-stock-table';
+import { paths } from '@/config/paths';
+import { requireUser } from '@/features/auth/utils/require-user';
+import { roasteryRoles } from '@/features/auth/utils/roles';
+import { getGreenStockQueryOptions, useGreenStock } from '@/features/green-stock/api/get-green-stock';
+import { GreenStockFigures, GreenStockTable } from '@/features/green-stock/components/green-stock-table';
 
-export const clientLoader = (queryClient: QueryClient) => () => {
-  void queryClient.prefetchQuery(getLotsQueryOptions());
-  return null;
-};
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const user = await requireUser(queryClient, request);
+    if (roasteryRoles.includes(user.role)) void queryClient.prefetchQuery(getGreenStockQueryOptions());
+    return null;
+  };
 
-function StockTable() {
-  const lotsQuery = useLots();
-  if (lotsQuery.data) {
-    if (lotsQuery.data.items.length === 0) return <EmptyState title="No lots yet">Lots appear here once they are listed.</EmptyState>;
-    return <LotStockTable lots={lotsQuery.data.items} />;
+function NewLotLink() {
+  return (
+    <Link to={paths.roastery.newLot.getHref()} className={buttonStyles('primary')}>
+      <Plus aria-hidden="true" className="size-4" />
+      New lot
+    </Link>
+  );
+}
+
+function GreenStock() {
+  const stockQuery = useGreenStock();
+  if (stockQuery.isError) {
+    return <ErrorState title="Green Stock could not load" error={stockQuery.error} onRetry={() => void stockQuery.refetch()} />;
   }
-  if (lotsQuery.isError) {
-    return <ErrorState title="Green stock could not load" error={lotsQuery.error} onRetry={() => void lotsQuery.refetch()} />;
+  if (!stockQuery.data) {
+    return (
+      <div className="grid gap-6">
+        <p role="status" className="sr-only">
+          Loading green stock…
+        </p>
+        <Skeleton className="h-24 rounded-card" />
+        <Skeleton className="h-72 rounded-card" />
+      </div>
+    );
+  }
+  const { items, windowDays } = stockQuery.data;
+  if (items.length === 0) {
+    return (
+      <EmptyState title="No lots yet" action={<NewLotLink />}>
+        Add the first lot, then record its arrival to put it in stock.
+      </EmptyState>
+    );
   }
   return (
-    <div>
-      <p role="status" className="sr-only">
-        Loading green stock…
+    <div className="grid gap-6">
+      <GreenStockFigures items={items} />
+      <p className="text-small text-ink-muted">
+        Days of cover: grams on hand at the pace of the last {windowDays} days’ sales and roasts. Samples, losses and counts are not use.
       </p>
-      <Skeleton className="h-72 rounded-card" />
+      <GreenStockTable items={items} windowDays={windowDays} />
     </div>
   );
 }
@@ -35,12 +69,11 @@ export default function GreenStockRoute() {
   return (
     <>
       <PageTitle title="Green Stock · Roastery" />
-      <PageHeader
-        eyebrow="Roastery"
-        title="Green Stock"
-        lead="Green coffee on hand for every listed lot, the lowest first. Editing lots, stock adjustments with their reasons, reorder points and days of cover are the next things to arrive here."
-      />
-      <StockTable />
+      <div className="flex flex-wrap items-start justify-between gap-4">
+        <PageHeader eyebrow="Roastery" title="Green Stock" lead="Every lot, listed or not: what is on hand, how long it lasts, and what to reorder. Open a lot to record stock, edit it or add photos." />
+        <NewLotLink />
+      </div>
+      <GreenStock />
     </>
   );
 }

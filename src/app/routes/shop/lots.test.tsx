@@ -128,6 +128,60 @@ describe('Green Lots page', () => {
     await waitFor(() => expect(router.state.location.search).toBe('?q=cocoa&origin=Brazil&process=natural&level=medium-dark'));
   });
 
+  it('keeps a price range typed per lb in the URL as cents per kg, converted exactly, and shows it back per lb', async () => {
+    const fetchMock = stubFetch(() => jsonResponse({ items: [ethiopia] }));
+    const { router } = renderApp('/lots');
+    await screen.findAllByTestId('lot-card');
+
+    fireEvent.change(screen.getByLabelText('Prices'), { target: { value: 'lb' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?priceUnit=lb'));
+
+    const range = screen.getByRole('form', { name: 'Price range' });
+    fireEvent.change(within(range).getByLabelText('Lowest ($ per lb)'), { target: { value: '10' } });
+    fireEvent.change(within(range).getByLabelText('Highest ($ per lb)'), { target: { value: '12.50' } });
+    fireEvent.submit(range);
+
+    // $10/lb = 2204.62 cents/kg, $12.50/lb = 2755.78 cents/kg (1 lb = 453.59237 g, NIST SP 811 App. B):
+    // the lowest bound rounds up and the highest down, so no lot outside the typed range gets in.
+    await waitFor(() => expect(router.state.location.search).toBe('?minPricePerKgCents=2205&maxPricePerKgCents=2755&priceUnit=lb'));
+    await waitFor(() => expect(requestedUrls(fetchMock)).toContain('/api/lots?minPricePerKgCents=2205&maxPricePerKgCents=2755'));
+    await waitFor(() => expect((screen.getByLabelText('Lowest ($ per lb)') as HTMLInputElement).value).toBe('10.00'));
+    expect((screen.getByLabelText('Highest ($ per lb)') as HTMLInputElement).value).toBe('12.50');
+
+    fireEvent.change(screen.getByLabelText('Prices'), { target: { value: 'kg' } });
+    await waitFor(() => expect((screen.getByLabelText('Lowest ($ per kg)') as HTMLInputElement).value).toBe('22.05'));
+    expect(router.state.location.search).toBe('?minPricePerKgCents=2205&maxPricePerKgCents=2755');
+  });
+
+  it('says which price bound is wrong and changes nothing when the lowest is above the highest', async () => {
+    stubFetch(() => jsonResponse({ items: [ethiopia] }));
+    const { router } = renderApp('/lots');
+    await screen.findAllByTestId('lot-card');
+
+    const range = screen.getByRole('form', { name: 'Price range' });
+    fireEvent.change(within(range).getByLabelText('Lowest ($ per kg)'), { target: { value: '30' } });
+    fireEvent.change(within(range).getByLabelText('Highest ($ per kg)'), { target: { value: '20' } });
+    fireEvent.submit(range);
+
+    const lowest = await screen.findByLabelText('Lowest ($ per kg)');
+    expect(lowest.getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText('The lowest price must not be above the highest.')).toBeTruthy();
+    expect(router.state.location.search).toBe('');
+  });
+
+  it('keeps the chosen sort in the URL and asks the API for it', async () => {
+    const fetchMock = stubFetch(() => jsonResponse({ items: [ethiopia, brazil] }));
+    const { router } = renderApp('/lots?process=washed');
+    await screen.findAllByTestId('lot-card');
+
+    fireEvent.change(screen.getByLabelText('Sort by'), { target: { value: 'price-asc' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?process=washed&sort=price-asc'));
+    await waitFor(() => expect(requestedUrls(fetchMock)).toContain('/api/lots?process=washed&sort=price-asc'));
+
+    fireEvent.change(screen.getByLabelText('Sort by'), { target: { value: 'origin' } });
+    await waitFor(() => expect(router.state.location.search).toBe('?process=washed'));
+  });
+
   it('ignores a filter value the API would refuse', async () => {
     const fetchMock = stubFetch(() => jsonResponse({ items: [ethiopia] }));
     renderApp('/lots?level=charcoal&process=washed');

@@ -17,7 +17,7 @@ export const clientLoader =
   };
 
 export default function LotsRoute() {
-  const { filters, updateFilters } = useLotFilters();
+  const { filters, updateFilters, priceUnit, setPriceUnit } = useLotFilters();
   const origins = useLotOrigins();
 
   return (
@@ -29,7 +29,7 @@ export default function LotsRoute() {
         lead="Unroasted coffee, sold by weight. Each lot lists what a roaster looks for first, and the roast level we suggest."
       />
       <div className="grid gap-6">
-        <LotFiltersForm filters={filters} origins={origins} onChange={updateFilters} />
+        <LotFiltersForm filters={filters} origins={origins} onChange={updateFilters} priceUnit={priceUnit} onPriceUnitChange={setPriceUnit} />
         <LotList filters={filters} />
       </div>
     </>

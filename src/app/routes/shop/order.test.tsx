@@ -1,5 +1,5 @@
 // @vitest-environment happy-dom
-import { cleanup, screen } from '@testing-library/react';
+import { act, cleanup, fireEvent, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { OrderDetail } from '@shared/schemas/orders';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
@@ -82,6 +82,28 @@ describe('order page', () => {
     expect(requestedUrls(fetchMock)).toEqual([`/api/orders/${orderId}`, `/api/orders/${orderId}`]);
     expect(window.localStorage.getItem('restday.cart')).toBeNull();
     expect(screen.getByRole('link', { name: 'Cart, empty' })).toBeTruthy();
+  });
+
+  it('when no confirmation has come after 20 s, says so plainly, keeps asking, and asks at once on request', async () => {
+    const fetchMock = stubFetch(() => jsonResponse(makeOrder()));
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    try {
+      renderApp(`/orders/${orderId}?checkout=complete`, { session: makeUser() });
+      await screen.findByText('Waiting for the payment to be confirmed…', undefined, { timeout: 15_000 });
+      expect(screen.queryByText(/taking longer than usual/)).toBeNull();
+      await act(() => vi.advanceTimersByTimeAsync(20_000));
+    } finally {
+      vi.useRealTimers();
+    }
+    expect(screen.getByText(/taking longer than usual/)).toBeTruthy();
+    expect(screen.getByText('Waiting for the payment to be confirmed…')).toBeTruthy();
+    // Every 2 s while waiting (PAYMENT_POLL_MS), so the page kept asking through those 20 s.
+    const askedWhileWaiting = requestedUrls(fetchMock).length;
+    expect(askedWhileWaiting).toBeGreaterThanOrEqual(5);
+
+    fireEvent.click(screen.getByRole('button', { name: 'Check again now' }));
+    await vi.waitFor(() => expect(requestedUrls(fetchMock).length).toBeGreaterThan(askedWhileWaiting));
+    expect(screen.queryByText(/Payment confirmed/)).toBeNull();
   });
 
   it('shows an order’s bags, totals, dates and tracking without asking again', async () => {

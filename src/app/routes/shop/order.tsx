@@ -42,7 +42,7 @@ export default function OrderRoute() {
         <PageHeader title="Your order" />
         {returningFromPayment ? (
           <div className="mb-6">
-            <PaymentStatusPanel order={order} />
+            <PaymentStatusPanel order={order} onCheckAgain={() => void orderQuery.refetch()} />
           </div>
         ) : null}
         <OrderDetailView order={order} />

@@ -55,9 +55,26 @@ export default function RoastingBasicsRoute() {
         <p className="mt-3">
           <Source>common practice</Source>
         </p>
+      </section>
+
+      <section aria-labelledby="cracks" className="mt-10">
+        <h2 id="cracks" className="text-h2">
+          First and second crack
+        </h2>
         <p className="mt-4">
-          First crack comes at a bean temperature of roughly 196–205 °C and second crack at roughly 224–230 °C; what a probe reads
-          varies from machine to machine. <Source>ChartsBin, Degree of Coffee Roasting; the lower figures from memory</Source>
+          First crack is the popping, like quiet popcorn, as steam and gas burst out of the beans; it comes at a bean temperature of
+          roughly 196–205 °C. Second crack is faster and sharper, like crackling twigs, at roughly 224–230 °C; oil starts to show on the
+          beans and the smoke thickens, so a dark roast stops soon after it begins. What a probe reads varies from machine to
+          machine. <Source>ChartsBin, Degree of Coffee Roasting; the 196 °C and 224 °C figures from memory</Source>
+        </p>
+        <p className="mt-3">
+          Development time is the time from first crack to the end of the roast, and the development time ratio is that time divided
+          by the whole roast; drum roasters often aim for 20–25%. <Source>S. Rao, Development Time Ratio, 2016</Source>
+        </p>
+        <p className="mt-3">
+          Beans lose weight as they roast, mostly water: typically 14–20% in all, more the darker the roast.{' '}
+          <Source>Barista Hustle, RS 3.05 Mass Loss, citing Schenker 2000 and Clarke 1987</Source> So 80 g of green beans come out
+          at roughly 64–69 g roasted.
         </p>
       </section>
 
@@ -105,7 +122,7 @@ export default function RoastingBasicsRoute() {
 
       <section aria-labelledby="after" className="mt-10">
         <h2 id="after" className="text-h2">
-          Cooling, chaff and rest
+          Cooling and chaff
         </h2>
         <ul className="mt-4 list-disc space-y-2 pl-5">
           <li>
@@ -115,12 +132,47 @@ export default function RoastingBasicsRoute() {
           <li>
             Chaff, the papery skin, flies off during the roast. Catch it and clear it away. <Source>common practice</Source>
           </li>
+        </ul>
+      </section>
+
+      <section aria-labelledby="rest" className="mt-10">
+        <h2 id="rest" className="text-h2">
+          Rest and storage
+        </h2>
+        <ul className="mt-4 list-disc space-y-2 pl-5">
           <li>
             Fresh beans give off CO₂ for about the first 24–48 hours; taste them from about a day after roasting, and keep them in a
-            bag with a one-way valve or one that is loosely closed. <Source>common practice</Source> Degassing goes on for days to weeks,
-            faster for darker roasts and for ground coffee. <Source>Smrke et al., J. Agric. Food Chem. 2017</Source>
+            bag with a one-way valve or one that is loosely closed. <Source>common practice</Source>
+          </li>
+          <li>
+            Degassing goes on for days to weeks, faster for darker roasts and for ground coffee.{' '}
+            <Source>Smrke et al., J. Agric. Food Chem. 2017; X. Wang, PhD thesis, University of Guelph, 2014</Source>
+          </li>
+          <li>
+            For brewing, filter coffee is usually rested 2–7 days and espresso 7–14 days, and is at its best roughly from day 4 to
+            day 21, within about four weeks in a valve bag. <Source>from memory</Source>
+          </li>
+          <li>
+            Keep green beans cool and dry, at about 20 °C and 60–65% relative humidity, where they keep well for up to about a
+            year. <Source>general food press; guidelines in ISO 8455</Source> Mould cannot grow below a water activity of about
+            0.68. <Source>ICO, Good Hygiene Practices</Source>
           </li>
         </ul>
+      </section>
+
+      <section aria-labelledby="larger" className="mt-10">
+        <h2 id="larger" className="text-h2">
+          Roasting beyond the kitchen
+        </h2>
+        <p className="mt-4">
+          Bigger roasters bring bigger hazards: chaff fires in the roaster and its ducts, smoke, and carbon monoxide, which roasted
+          coffee keeps giving off in storage (35–150+ ppm has been measured near large totes).{' '}
+          <Source>Fire Engineering, carbon monoxide at a roasted coffee facility</Source> Grinding and packing raise exposure to
+          diacetyl and 2,3-pentanedione, which have recommended limits of 5 ppb and 9.3 ppb over an 8-hour day.{' '}
+          <Source>NIOSH, flavorings-related lung disease exposure limits</Source> Air permits depend on the local air-quality district,
+          and gas appliances on local codes: these are matters for local rules and licensed installers, not for this page.{' '}
+          <Source>Sacramento Metropolitan AQMD, Coffee Bean Roasting Operations, as one district&rsquo;s example</Source>
+        </p>
       </section>
 
       <section aria-labelledby="sources" className="mt-10 border-t border-rule pt-6">
@@ -130,9 +182,17 @@ export default function RoastingBasicsRoute() {
         <ul className="mt-2 list-disc space-y-1 pl-5 text-small text-ink-muted">
           <li>NFPA, Home Fires Involving Cooking Equipment (2017).</li>
           <li>ChartsBin, Degree of Coffee Roasting.</li>
+          <li>S. Rao, Development Time Ratio (2016).</li>
+          <li>Barista Hustle, RS 3.05 Mass Loss.</li>
           <li>Everything2, write-up on popper roasting.</li>
           <li>Smrke, Wellinger, Suzuki, Balsiger, Opitz, Yeretzian, J. Agric. Food Chem. 2017, doi 10.1021/acs.jafc.7b03310.</li>
+          <li>X. Wang, PhD thesis, University of Guelph (2014).</li>
+          <li>ICO, Good Hygiene Practices; ISO 8455, green coffee storage and transport.</li>
+          <li>Fire Engineering, Determining the Source of Carbon Monoxide Levels at a Roasted Coffee Facility.</li>
+          <li>NIOSH, Flavorings-related lung disease, exposure limits.</li>
+          <li>Sacramento Metropolitan AQMD, Coffee Bean Roasting Operations.</li>
           <li>&ldquo;Common practice&rdquo; marks what home roasters widely do and agree on, with no single published source.</li>
+          <li>&ldquo;From memory&rdquo; marks a figure recalled from the trade and not yet checked against a published source.</li>
         </ul>
       </section>
 

@@ -8,14 +8,32 @@ import { CheckboxField } from '@/components/ui/checkbox-field';
 import { controlStyles } from '@/components/ui/control-styles';
 import { SelectField } from '@/components/ui/select-field';
 import { paths } from '@/config/paths';
+import { lotSorts, type LotSort } from '@shared/schemas/lots';
 import { hasActiveFilters, type LotFilters } from '../utils/lot-filters';
+import type { PriceUnit } from '../utils/price-per-unit';
+import { PriceRangeForm } from './price-range-form';
 
 type LotFiltersFormProps = {
   filters: LotFilters;
   /** Origins to offer; the current origin is always offered. */
   origins: string[];
   onChange: (change: Partial<LotFilters>) => void;
+  priceUnit: PriceUnit;
+  onPriceUnitChange: (unit: PriceUnit) => void;
 };
+
+const sortLabels: Record<LotSort, string> = {
+  origin: 'Origin, A to Z',
+  name: 'Name, A to Z',
+  'price-asc': 'Price, lowest first',
+  'price-desc': 'Price, highest first',
+  newest: 'Newest crop first',
+  altitude: 'Altitude, highest first',
+};
+
+function isLotSort(value: string): value is LotSort {
+  return (lotSorts as readonly string[]).includes(value);
+}
 
 function isProcess(value: string): value is Process {
   return (processes as readonly string[]).includes(value);
@@ -25,7 +43,7 @@ function isRoastLevel(value: string): value is RoastLevel {
   return (roastLevels as readonly string[]).includes(value);
 }
 
-export function LotFiltersForm({ filters, origins, onChange }: LotFiltersFormProps) {
+export function LotFiltersForm({ filters, origins, onChange, priceUnit, onPriceUnitChange }: LotFiltersFormProps) {
   const originOptions = filters.origin && !origins.includes(filters.origin) ? [filters.origin, ...origins] : origins;
 
   function submitSearch(event: FormEvent<HTMLFormElement>) {
@@ -97,6 +115,26 @@ export function LotFiltersForm({ filters, origins, onChange }: LotFiltersFormPro
           checked={filters.inStock === true}
           onChange={(event) => onChange({ inStock: event.target.checked || undefined })}
         />
+      </div>
+
+      <div className="mt-4 grid gap-4 border-t border-rule pt-4 lg:grid-cols-[1fr_auto] lg:items-start">
+        <PriceRangeForm
+          range={{ minPricePerKgCents: filters.minPricePerKgCents, maxPricePerKgCents: filters.maxPricePerKgCents }}
+          unit={priceUnit}
+          onUnitChange={onPriceUnitChange}
+          onChange={onChange}
+        />
+        <SelectField
+          label="Sort by"
+          value={filters.sort ?? 'origin'}
+          onChange={(event) => onChange({ sort: isLotSort(event.target.value) ? event.target.value : undefined })}
+        >
+          {lotSorts.map((sort) => (
+            <option key={sort} value={sort}>
+              {sortLabels[sort]}
+            </option>
+          ))}
+        </SelectField>
       </div>
 
       {hasActiveFilters(filters) ? (

@@ -18,7 +18,20 @@ describe('lot filters in the URL', () => {
     expect(parseLotFilters(search)).toEqual({ inStock: true, level: 'light', q: 'berry' });
   });
 
+  it('reads price bounds and the sort, and drops bounds that cross or are not whole cents', () => {
+    expect(parseLotFilters(new URLSearchParams('minPricePerKgCents=1800&maxPricePerKgCents=2500&sort=price-desc'))).toEqual({
+      minPricePerKgCents: 1800,
+      maxPricePerKgCents: 2500,
+      sort: 'price-desc',
+    });
+    expect(parseLotFilters(new URLSearchParams('minPricePerKgCents=2500&maxPricePerKgCents=1800'))).toEqual({});
+    expect(parseLotFilters(new URLSearchParams('minPricePerKgCents=18.5&sort=cheapest'))).toEqual({});
+    expect(parseLotFilters(new URLSearchParams('sort=origin'))).toEqual({});
+  });
+
   it('knows when any filter is active', () => {
+    expect(hasActiveFilters({ sort: 'name' })).toBe(false);
+    expect(hasActiveFilters({ maxPricePerKgCents: 2000 })).toBe(true);
     expect(hasActiveFilters({})).toBe(false);
     expect(hasActiveFilters({ inStock: false })).toBe(false);
     expect(hasActiveFilters({ origin: 'Kenya' })).toBe(true);

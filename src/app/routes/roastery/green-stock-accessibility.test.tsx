@@ -1,0 +1,117 @@
+// @vitest-environment happy-dom
+import { cleanup, fireEvent, screen, within } from '@testing-library/react';
+import axe from 'axe-core';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import type { OrderDetail, OrderSummary } from '@shared/schemas/orders';
+import { jsonResponse, makeLotDetail, makeUser, renderApp, stubFetch } from '@/testing/test-utils';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const staff = makeUser({ role: 'staff' });
+
+/**
+ * axe-core's WCAG 2.0–2.2 A and AA rules on the rendered page. Contrast needs a real layout and
+ * is left to the browser test; each violation reads "rule: help (where)".
+ */
+async function violations(): Promise<string[]> {
+  const results = await axe.run(document.body, {
+    runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22a', 'wcag22aa'] },
+    rules: { 'color-contrast': { enabled: false } },
+  });
+  expect(results.passes.length).toBeGreaterThan(0);
+  return results.violations.map((violation) => `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`);
+}
+
+// Invented lots, customers and orders.
+const lot = { ...makeLotDetail({ photos: ['/api/uploads/5a7c9e1b-3d5f-4a7b-9c1d-3e5f7a9b1c3d'], specSheetUrl: '/api/uploads/6b8d0f2c-4e6a-4b8c-8d2e-4f6a8b0c2d4e' }) };
+const stockItem = {
+  code: lot.code,
+  name: lot.name,
+  isListed: true,
+  stockGrams: 4536,
+  reorderPointGrams: 9072,
+  reorderAlert: true,
+  usedGramsInWindow: 28_000,
+  averageDailyUseGrams: 1000,
+  daysOfCover: 4,
+};
+const movement = { id: 'm1', deltaGrams: 9072, reason: 'arrival', note: 'Two sacks', orderId: null, batchId: null, actorName: 'Oren Vale', createdAt: '2026-11-20T10:00:00.000Z' };
+const summary: OrderSummary = {
+  id: '6a1f3c5e-7b9d-4e2f-8a4c-6e8f0a2c4e6a',
+  kind: 'green',
+  status: 'paid',
+  placedAt: '2026-11-28T15:30:00.000Z',
+  customer: { id: '7b2a4d6f-8c0e-4f3a-9b5d-7f9a1b3d5f7b', name: 'Juno Reed', email: 'juno.reed@example.test' },
+  bagCount: 2,
+  totalCents: 5980,
+  roastDate: '2026-12-01',
+  shipDate: '2026-12-02',
+};
+const order: OrderDetail = {
+  ...(({ bagCount: _bags, ...rest }) => rest)(summary),
+  items: [{ id: '8c3b5e7a-9d1f-4a4b-8c6e-8a0b2c4e6f8c', lotCode: lot.code, lotName: lot.name, size: '1lb', quantity: 2, fillGrams: 454, roastLevel: null, grind: null, brewMethod: null, unitPriceCents: 1990, lineTotalCents: 3980 }],
+  subtotalCents: 3980,
+  shippingCents: 2000,
+  refundedCents: 0,
+  currency: 'usd',
+  shippingAddress: { name: 'Juno Reed', line1: '12 Invented Lane', line2: null, city: 'Fairhaven', region: 'OR', postalCode: '97000', country: 'US' },
+  readyFrom: null,
+  bestBefore: null,
+  carrier: 'Invented Parcel',
+  trackingNumber: 'IP-0042-7781',
+  paidAt: '2026-11-28T15:32:00.000Z',
+  shippedAt: '2026-12-02T17:00:00.000Z',
+  cancelledAt: null,
+};
+
+function roasteryServer() {
+  return stubFetch((url) => {
+    if (url.pathname === '/api/roastery/green-stock') return jsonResponse({ windowDays: 28, items: [stockItem, { ...stockItem, code: 'RD-B', name: 'Hidden', isListed: false, reorderAlert: false, daysOfCover: null }] });
+    if (url.pathname.endsWith('/stock-movements')) return jsonResponse({ items: [movement] });
+    if (url.pathname === `/api/lots/${lot.code}`) return jsonResponse(lot);
+    if (url.pathname === '/api/orders') return jsonResponse({ items: [summary], total: 120, page: 2, pageSize: 50 });
+    if (url.pathname === `/api/orders/${order.id}`) return jsonResponse(order);
+    return jsonResponse({ items: [] });
+  });
+}
+
+describe('Roastery pages meet the WCAG A and AA rules axe can check', () => {
+  it('Green Stock', async () => {
+    roasteryServer();
+    renderApp('/roastery/green-stock', { session: staff });
+    await screen.findByRole('table', {}, { timeout: 15_000 });
+    expect(await violations()).toEqual([]);
+  });
+
+  it('a lot’s page, with its forms, history, photos and spec sheet', async () => {
+    roasteryServer();
+    renderApp(`/roastery/green-stock/${lot.code}`, { session: staff });
+    await screen.findByRole('form', { name: 'Lot descriptors' }, { timeout: 15_000 });
+    await screen.findByRole('table', { name: /Stock history/ });
+    expect(await violations()).toEqual([]);
+  });
+
+  it('the new-lot form showing its errors', async () => {
+    roasteryServer();
+    renderApp('/roastery/green-stock/new', { session: staff });
+    const form = await screen.findByRole('form', { name: 'New lot' }, { timeout: 15_000 });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add a quantity break' }));
+    fireEvent.click(within(form).getByRole('button', { name: 'Add the lot' }));
+    await within(form).findByText('Name is required.');
+    expect(await violations()).toEqual([]);
+  });
+
+  it('the orders table and an order', async () => {
+    roasteryServer();
+    const { router } = renderApp('/roastery/orders?page=2', { session: staff });
+    await screen.findByRole('table', {}, { timeout: 15_000 });
+    expect(await violations()).toEqual([]);
+
+    await router.navigate(`/roastery/orders/${order.id}`);
+    await screen.findByRole('region', { name: 'Carrier and tracking' });
+    expect(await violations()).toEqual([]);
+  });
+});

@@ -1,0 +1,90 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { ArrowLeft } from 'lucide-react';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { NotFoundMessage } from '@/components/errors/not-found-message';
+import { PageTitle } from '@/components/seo/page-title';
+import { ErrorState } from '@/components/ui/error-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { Skeleton } from '@/components/ui/skeleton';
+import { paths } from '@/config/paths';
+import { requireUser } from '@/features/auth/utils/require-user';
+import { roasteryRoles } from '@/features/auth/utils/roles';
+import { getRoasteryOrderQueryOptions, useRoasteryOrder } from '@/features/roastery-orders/api/get-roastery-order';
+import { RoasteryOrderDetail } from '@/features/roastery-orders/components/roastery-order-detail';
+import { orderReference } from '@/features/roastery-orders/utils/order-labels';
+import { ApiError } from '@/lib/api-client';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request, params }: LoaderFunctionArgs) => {
+    const user = await requireUser(queryClient, request);
+    if (params.id && roasteryRoles.includes(user.role)) void queryClient.prefetchQuery(getRoasteryOrderQueryOptions(params.id));
+    return null;
+  };
+
+function BackToOrders() {
+  return (
+    <p className="mb-4">
+      <Link to={paths.roastery.orders.getHref()} className="inline-flex min-h-11 items-center gap-1.5 font-semibold text-leaf underline">
+        <ArrowLeft aria-hidden="true" className="size-4" />
+        All orders
+      </Link>
+    </p>
+  );
+}
+
+export default function RoasteryOrderRoute() {
+  const { id = '' } = useParams();
+  const orderQuery = useRoasteryOrder(id);
+  const order = orderQuery.data;
+
+  if (order) {
+    const title = `Order ${orderReference(order.id)}`;
+    return (
+      <>
+        <PageTitle title={`${title} · Roastery`} />
+        <BackToOrders />
+        <PageHeader eyebrow="Roastery" title={title} lead={`${order.customer.name}’s order, in full.`} />
+        <RoasteryOrderDetail
+          order={order}
+          actions={
+            <p className="text-ink-muted">
+              {order.shippedAt ? 'This order has left the roastery.' : 'This order has not shipped yet.'} Marking it shipped and tracing its
+              bags to their batches will be done from here.
+            </p>
+          }
+        />
+      </>
+    );
+  }
+
+  if (orderQuery.isError) {
+    if (orderQuery.error instanceof ApiError && orderQuery.error.status === 404) {
+      return (
+        <>
+          <PageTitle title="Order not found · Roastery" />
+          <BackToOrders />
+          <NotFoundMessage title="Order not found">There is no order at this address. It may have been typed wrong.</NotFoundMessage>
+        </>
+      );
+    }
+    return (
+      <>
+        <PageTitle title="Order · Roastery" />
+        <BackToOrders />
+        <ErrorState title="This order could not load" error={orderQuery.error} onRetry={() => void orderQuery.refetch()} />
+      </>
+    );
+  }
+
+  return (
+    <>
+      <PageTitle title="Order · Roastery" />
+      <p role="status" className="sr-only">
+        Loading the order…
+      </p>
+      <Skeleton className="mb-4 h-10 w-1/2" />
+      <Skeleton className="h-64" />
+    </>
+  );
+}

@@ -1,0 +1,237 @@
+import AxeBuilder from '@axe-core/playwright';
+import type { Browser, BrowserContext, ConsoleMessage, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { isVisitorSessionCheck, launchChromium } from '../setup/chromium';
+
+const baseUrl = inject('baseUrl');
+const mailCatcherUrl = inject('mailCatcherUrl');
+const stripeFakeUrl = inject('stripeFakeUrl');
+
+// An invented home roaster, new on every run.
+const buyer = {
+  name: 'Oriel Faircloth',
+  email: `oriel.faircloth.${Date.now()}@example.test`,
+  password: 'amber kiln over willow 7',
+};
+// A seeded demo lot (server/db/seed/demo-lots.ts): natural process, $18.00/kg.
+const lot = { code: 'WR-24-BRA-01', name: 'Fazenda Três Pinhas' };
+const staff = { email: 'roaster@wrenfield.test', password: 'restday-demo' };
+const wcagTags = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
+
+let browser: Browser;
+let context: BrowserContext;
+let page: Page;
+const problems: string[] = [];
+let orderUrl = '';
+
+/** The payment fake's page has no icon, and Chromium asks for one; that 404 is not the shop's. */
+function isPaymentPageIcon(message: ConsoleMessage): boolean {
+  return message.location().url === `${stripeFakeUrl}/favicon.ico`;
+}
+
+/** A visitor's checkout starts signed out: the session check's 401 is the one failed load the shop is expected to have. */
+function watchConsole(target: Page, into: string[]) {
+  target.on('console', (message) => {
+    if (isVisitorSessionCheck(message) || isPaymentPageIcon(message)) return;
+    if (message.type() === 'error' || message.type() === 'warning') into.push(`${message.type()}: ${message.text()} (${message.location().url})`);
+  });
+  target.on('pageerror', (error) => into.push(`page error: ${error.message}`));
+}
+
+beforeAll(async () => {
+  browser = await launchChromium();
+  // The purchase runs under the shop's real Content-Security-Policy.
+  context = await browser.newContext();
+  page = await context.newPage();
+  page.setDefaultTimeout(10_000);
+  watchConsole(page, problems);
+});
+afterAll(async () => {
+  await context?.close();
+  await browser?.close();
+});
+
+const header = () => page.getByRole('banner');
+
+type CaughtEmail = { subject: string; text?: string; to: { address: string }[] };
+
+async function emailsTo(address: string): Promise<CaughtEmail[]> {
+  const response = await fetch(`${mailCatcherUrl}/api/email?to.address=${encodeURIComponent(address)}`);
+  return (await response.json()) as CaughtEmail[];
+}
+
+/** axe-core with the WCAG 2.0–2.2 A and AA rules; each violation as "rule: help (where)". */
+async function accessibilityViolations(target: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page: target }).withTags(wcagTags).analyze();
+  // An audit that checked nothing (a blank page, a script that did not run) must not pass as clean.
+  if (results.passes.length < 10) throw new Error(`axe-core checked only ${results.passes.length} rules on ${target.url()}`);
+  return results.violations.map((violation) => `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`);
+}
+
+describe('a home roaster buys green coffee in Chromium', () => {
+  it('filters Green Lots by process and price per lb, opens a lot, reads its roast guide and puts two sizes in the cart', async () => {
+    await page.goto(`${baseUrl}/lots`);
+    await page.getByTestId('lot-card').first().waitFor();
+
+    await page.getByLabel('Process').selectOption('natural');
+    await page.waitForURL(/process=natural/);
+    await page.getByLabel('Prices').selectOption('lb');
+    await page.waitForURL(/priceUnit=lb/);
+    await page.getByLabel('Highest ($ per lb)').fill('10');
+    await page.getByRole('button', { name: 'Apply price' }).click();
+    // $10/lb = 2204.62 cents/kg (1 lb = 453.59237 g, NIST SP 811 App. B), rounded down for a ceiling.
+    await page.waitForURL(/maxPricePerKgCents=2204/);
+    await page.getByRole('status').filter({ hasText: /^1 lot$/ }).waitFor();
+    const cards = page.getByTestId('lot-card');
+    expect(await cards.count()).toBe(1);
+
+    await cards.getByRole('link', { name: lot.name }).click();
+    await page.getByRole('heading', { level: 1, name: lot.name }).waitFor();
+
+    const guide = page.getByRole('region', { name: 'Home Roast Guide' });
+    await guide.getByText('Expected roasted yield').waitFor();
+    // A 1 lb bag fills 454 g and a popper takes 75–80 g a batch (TRADE.md, common practice): 6 batches.
+    expect(await guide.getByText('Batches for a 1 lb bag').locator('xpath=..').getByRole('definition').first().textContent()).toBe('6');
+    expect(await guide.getByText('Suggested for this lot').count()).toBe(1);
+    expect(await guide.getByRole('table', { name: 'Time after first crack' }).getByRole('row').count()).toBeGreaterThan(5);
+
+    const buy = page.getByRole('region', { name: 'Buy green' });
+    await buy.getByText('1 lb', { exact: true }).click();
+    await buy.getByRole('button', { name: 'Add to cart' }).click();
+    await buy.getByText('Added 1 × 1 lb to your cart.').waitFor();
+    await buy.getByText('8 oz', { exact: true }).click();
+    await buy.getByRole('button', { name: 'Add to cart' }).click();
+    await buy.getByText('Added 1 × 8 oz to your cart.').waitFor();
+    await header().getByRole('link', { name: 'Cart, 2 bags' }).waitFor();
+    expect(problems).toEqual([]);
+  });
+
+  it('creates an account on the way to checkout, then pays with the test card 4242 4242 4242 4242', async () => {
+    await header().getByRole('link', { name: 'Cart, 2 bags' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Your cart' }).waitFor();
+    await page.getByRole('link', { name: 'Check out' }).click();
+
+    await page.waitForURL(/\/sign-in\?redirectTo=%2Fcheckout/);
+    await page.getByRole('link', { name: 'Create an account' }).click();
+    await page.getByLabel('Name').fill(buyer.name);
+    await page.getByLabel('E-mail').fill(buyer.email);
+    await page.getByLabel('Password', { exact: true }).fill(buyer.password);
+    await page.getByRole('button', { name: 'Create account' }).click();
+
+    await page.waitForURL(`${baseUrl}/checkout`);
+    const address = page.getByRole('form', { name: 'Shipping address' });
+    await address.getByLabel('Recipient’s name').fill(buyer.name);
+    await address.getByLabel('Street address').fill('7 Lantern Row');
+    await address.getByLabel('City or town').fill('Millbrook');
+    await address.getByLabel('State or region').fill('OR');
+    await address.getByLabel('ZIP or postal code').fill('97001');
+    await address.getByRole('button', { name: 'Continue to payment' }).click();
+
+    // The payment fake's own page (not the shop): Stripe's success test card (Stripe docs, Testing).
+    await page.getByRole('heading', { name: 'Test payment' }).waitFor();
+    await page.getByLabel('Card number').fill('4242 4242 4242 4242');
+    await page.getByLabel('Expiry date (MM/YY)').fill('12/40');
+    await page.getByLabel('Security code (CVC)').fill('123');
+    await page.getByRole('button', { name: /^Pay / }).click();
+
+    await page.waitForURL(/\/orders\/[0-9a-f-]{36}\?checkout=complete$/);
+    orderUrl = page.url().replace(/\?.*$/, '');
+    expect(problems).toEqual([]);
+  });
+
+  it('sees the order paid once the webhook confirms it, with both bags, and the order-confirmed e-mail arrives', async () => {
+    await page.getByText('Payment confirmed. Thank you!').waitFor({ timeout: 15_000 });
+    await page.getByText(lot.name).first().waitFor();
+    expect(await page.getByText('Paid').count()).toBeGreaterThan(0);
+    await header().getByRole('link', { name: 'Cart, empty' }).waitFor();
+
+    const deadline = Date.now() + 20_000;
+    let confirmation: CaughtEmail | undefined;
+    while (!confirmation && Date.now() < deadline) {
+      confirmation = (await emailsTo(buyer.email)).find((email) => email.subject === 'Your green coffee order is confirmed');
+      if (!confirmation) await new Promise((resolve) => setTimeout(resolve, 250));
+    }
+    expect(confirmation, 'the order-confirmed e-mail within 20 s').toBeDefined();
+    expect(confirmation!.text).toContain(lot.name);
+    expect(problems).toEqual([]);
+  });
+
+  describe('accessibility (axe-core, WCAG 2.0–2.2 A and AA)', () => {
+    let auditContext: BrowserContext;
+    let auditPage: Page;
+    const auditProblems: string[] = [];
+    // axe-core takes seconds a page on a busy machine.
+    const auditTimeout = 45_000;
+
+    beforeAll(async () => {
+      // axe-core injects its script, which the shop's CSP would refuse; signed in as the buyer.
+      auditContext = await browser.newContext({ bypassCSP: true });
+      await auditContext.addCookies(await context.cookies());
+      auditPage = await auditContext.newPage();
+      auditPage.setDefaultTimeout(10_000);
+      watchConsole(auditPage, auditProblems);
+    });
+    afterAll(async () => {
+      await auditContext?.close();
+    });
+
+    it('finds no violations on the filtered catalog', async () => {
+      await auditPage.goto(`${baseUrl}/lots?process=natural&priceUnit=lb`);
+      await auditPage.getByTestId('lot-card').first().waitFor();
+      expect(await accessibilityViolations(auditPage)).toEqual([]);
+      expect(auditProblems).toEqual([]);
+    }, auditTimeout);
+
+    it('finds no violations on a lot page with its roast guide', async () => {
+      await auditPage.goto(`${baseUrl}/lots/${lot.code}`);
+      await auditPage.getByRole('region', { name: 'Home Roast Guide' }).getByText('Expected roasted yield').waitFor();
+      expect(await accessibilityViolations(auditPage)).toEqual([]);
+      await auditPage.getByRole('button', { name: 'Add to cart' }).click();
+      await auditPage.getByText('Added 1 × 1 lb to your cart.').waitFor();
+      expect(auditProblems).toEqual([]);
+    }, auditTimeout);
+
+    it('finds no violations on the cart', async () => {
+      await auditPage.goto(`${baseUrl}/cart`);
+      await auditPage.getByRole('link', { name: 'Check out' }).waitFor();
+      expect(await accessibilityViolations(auditPage)).toEqual([]);
+      expect(auditProblems).toEqual([]);
+    }, auditTimeout);
+
+    it('finds no violations on checkout', async () => {
+      await auditPage.goto(`${baseUrl}/checkout`);
+      await auditPage.getByRole('button', { name: 'Continue to payment' }).waitFor();
+      expect(await accessibilityViolations(auditPage)).toEqual([]);
+      expect(auditProblems).toEqual([]);
+    }, auditTimeout);
+
+    it('finds no violations on the paid order', async () => {
+      await auditPage.goto(orderUrl);
+      await auditPage.getByRole('heading', { level: 1, name: 'Your order' }).waitFor();
+      expect(await accessibilityViolations(auditPage)).toEqual([]);
+      expect(auditProblems).toEqual([]);
+    }, auditTimeout);
+
+    it('finds no violations on Green Stock, signed in as staff', async () => {
+      const staffContext = await browser.newContext({ bypassCSP: true });
+      const staffPage = await staffContext.newPage();
+      staffPage.setDefaultTimeout(10_000);
+      const staffProblems: string[] = [];
+      watchConsole(staffPage, staffProblems);
+      try {
+        await staffPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/green-stock')}`);
+        await staffPage.getByLabel('E-mail').fill(staff.email);
+        await staffPage.getByLabel('Password', { exact: true }).fill(staff.password);
+        await staffPage.getByRole('button', { name: 'Sign in', exact: true }).click();
+        await staffPage.waitForURL(`${baseUrl}/roastery/green-stock`);
+        await staffPage.getByRole('heading', { level: 1, name: 'Green Stock' }).waitFor();
+        await staffPage.getByText(lot.code).first().waitFor();
+
+        expect(await accessibilityViolations(staffPage)).toEqual([]);
+        expect(staffProblems).toEqual([]);
+      } finally {
+        await staffContext.close();
+      }
+    }, auditTimeout);
+  });
+});
