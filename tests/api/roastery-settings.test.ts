@@ -1,5 +1,5 @@
 import { and, desc, eq } from 'drizzle-orm';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { defaultShopSettings, shopSettingsSchema } from '@shared/schemas/settings';
 import { auditLog } from '../../server/db/schema/index';
@@ -27,6 +27,11 @@ beforeAll(async () => {
   app = createTestApp();
   ownerUser = await createTestUser('owner');
   [staff, owner] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), signedInAgent(app, ownerUser)]);
+  await useShopSettings();
+});
+
+// Leave the shared test database on the defaults other test files expect.
+afterAll(async () => {
   await useShopSettings();
 });
 

@@ -1,6 +1,7 @@
 import { and, count, eq, like } from 'drizzle-orm';
-import { describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
+import { defaultShopSettings } from '@shared/schemas/settings';
 import {
   subscriptionCheckoutResponseSchema,
   subscriptionDeliveriesResponseSchema,
@@ -9,6 +10,7 @@ import {
 } from '@shared/schemas/subscriptions';
 import { emailOutbox, subscriptions } from '../../server/db/schema/index';
 import { createAdjustableClock } from '../../server/lib/clock';
+import { saveShopSettings } from '../../server/modules/settings/settings.repo';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
@@ -24,6 +26,11 @@ const clock = createAdjustableClock();
 clock.set(monday10am);
 const app = createTestApp({ clock });
 const stripe = testStripe();
+
+// Other test files change the shared test database's settings; this one needs the defaults.
+beforeAll(async () => {
+  await saveShopSettings(getTestDb(), defaultShopSettings);
+});
 
 /** An active subscription (2 × 12 oz, medium, whole bean, filter, weekly) whose grid starts on Monday 6 January 2031. */
 async function weeklySubscription(owner: TestUser, overrides: Partial<typeof subscriptions.$inferInsert> = {}) {
