@@ -113,6 +113,7 @@ export const accessRules: AccessRule[] = [
   { method: 'POST', path: '/api/lots/:code/stock-adjustments', access: 'staff' },
   { method: 'GET', path: '/api/lots/:code/stock-movements', access: 'staff' },
   { method: 'GET', path: '/api/roastery/green-stock', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/green-stock/:code', access: 'staff' },
   { method: 'GET', path: '/api/uploads/:id', access: 'public' },
 
   { method: 'GET', path: '/api/roastery/outbox', access: 'staff' },

@@ -133,6 +133,11 @@ describe('PATCH /api/lots/:code', () => {
     expect(lot).toMatchObject({ pricePerKgCents: 3000, reorderPointGrams: 12_000, isListed: false, name: 'Invented Ridge Washed', suggestedLevel: 'light' });
     expect(lot.priceBreaks).toEqual([{ minGrams: 9072, pricePerKgCents: 2700 }]);
     expect((await request(app).get(`/api/lots/${code}`)).status).toBe(404);
+    // Staff still read the unlisted lot whole in Green Stock.
+    const staffRead = await staff.get(`/api/roastery/green-stock/${code}`);
+    expect(staffRead.status).toBe(200);
+    expect(lotStaffDetailSchema.parse(staffRead.body)).toEqual(lot);
+    expect((await staff.get(`/api/roastery/green-stock/${tag}-NONE`)).status).toBe(404);
   });
 
   it('checks the lot the patch leaves behind: dropping the suggested level from the allowed ones is a 400', async () => {

@@ -93,12 +93,18 @@ export function lotsAdminRoutes(service: LotsAdminService): Router {
   return router;
 }
 
-/** `GET /api/roastery/green-stock`: every lot's grams on hand, reorder alert and days of cover. */
+/** `GET /api/roastery/green-stock`: every lot's grams on hand, reorder alert and days of cover; `/:code`: one lot whole. */
 export function greenStockRoutes(service: LotsAdminService): Router {
   const router = Router();
   router.get('/', staffOnly, async (_req, res) => {
     res.setHeader('Cache-Control', 'no-store');
     res.json((await service.greenStock()) satisfies GreenStockResponse);
+  });
+  // The staff's read of one lot, listed or not (the public lot page shows listed lots only).
+  router.get('/:code', staffOnly, async (req, res) => {
+    const { code } = lotCodeParams.parse(req.params);
+    res.setHeader('Cache-Control', 'no-store');
+    res.json((await service.detail(code)) satisfies LotStaffDetail);
   });
   return router;
 }

@@ -46,14 +46,15 @@ export default function RoasteryLayout() {
       <SkipLink />
       <NavigationProgress />
       <header className="bg-ink text-paper print:hidden [&_:focus-visible]:outline-crema">
-        <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 sm:flex-nowrap sm:px-6">
+        <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 sm:px-6">
           <Link to={paths.roastery.overview.getHref()} className="mr-2 inline-flex min-h-11 items-center gap-2 font-heading font-semibold text-h3 text-paper no-underline">
             <RestdayMark className="size-8" />
             Restday <span className="text-crema">Roastery</span>
           </Link>
           {role && roasteryRoles.includes(role) ? (
-            <nav aria-label="Roastery" className="order-last -mx-4 w-[calc(100%+2rem)] overflow-x-auto px-2 sm:order-none sm:mx-0 sm:w-auto sm:px-0">
-              <ul className="flex gap-1">
+            <nav aria-label="Roastery" className="order-last -mx-4 w-[calc(100%+2rem)] overflow-x-auto px-2 sm:mx-0 sm:w-full sm:overflow-visible sm:px-0">
+              {/* Its own row under the name: nine places for the owner never fit beside it. */}
+              <ul className="flex gap-1 sm:flex-wrap">
                 {nav.map((item) => (
                   <li key={item.to}>
                     <NavLink to={item.to} end={item.end} className={navLinkStyles}>

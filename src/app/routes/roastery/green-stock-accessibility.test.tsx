@@ -71,7 +71,7 @@ function roasteryServer() {
   return stubFetch((url) => {
     if (url.pathname === '/api/roastery/green-stock') return jsonResponse({ windowDays: 28, items: [stockItem, { ...stockItem, code: 'RD-B', name: 'Hidden', isListed: false, reorderAlert: false, daysOfCover: null }] });
     if (url.pathname.endsWith('/stock-movements')) return jsonResponse({ items: [movement] });
-    if (url.pathname === `/api/lots/${lot.code}`) return jsonResponse(lot);
+    if (url.pathname === `/api/roastery/green-stock/${lot.code}`) return jsonResponse({ ...lot, isListed: true, reorderPointGrams: 9072 });
     if (url.pathname === '/api/orders') return jsonResponse({ items: [summary], total: 120, page: 2, pageSize: 50 });
     if (url.pathname === `/api/orders/${order.id}`) return jsonResponse(order);
     return jsonResponse({ items: [] });

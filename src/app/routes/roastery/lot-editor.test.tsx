@@ -58,11 +58,7 @@ function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (
       Object.assign(lot, body);
       return jsonResponse(lot);
     }
-    if (path === `/api/lots/${lot.code}`) {
-      if (!lot.isListed) return apiErrorResponse(404, 'lot_not_found', `No lot with code ${lot.code}.`);
-      const { reorderPointGrams: _reorder, isListed: _listed, ...publicDetail } = lot;
-      return jsonResponse(publicDetail);
-    }
+    if (path === `/api/roastery/green-stock/${lot.code}`) return jsonResponse(lot);
     return apiErrorResponse(404, 'not_found', `Nothing at ${path}.`);
   });
   return { fetchMock, lot };
@@ -145,14 +141,12 @@ describe('Lot page in Green Stock: stock', () => {
     expect(await screen.findByText('Time to reorder.')).toBeTruthy();
   });
 
-  it('says what an unlisted lot can still do here, and lists it in Green Lots', async () => {
+  it('opens an unlisted lot whole and lists it in Green Lots', async () => {
     const { fetchMock } = await openEditor({ isListed: false });
-    expect(await screen.findByText(/This lot is not listed/)).toBeTruthy();
+    expect(await screen.findByRole('form', { name: 'Lot descriptors' })).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'List in Green Lots' }));
     await waitFor(() => expect(sentRequests(fetchMock, 'PATCH', '/api/lots/RD-T01').map((request) => request.body)).toEqual([{ isListed: true }]));
     expect(await screen.findByRole('button', { name: 'Take off Green Lots' })).toBeTruthy();
-    // The saved lot came back in the answer, so its descriptors open without another request.
-    expect(await screen.findByRole('form', { name: 'Lot descriptors' })).toBeTruthy();
   });
 });
 

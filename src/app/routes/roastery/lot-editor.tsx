@@ -20,7 +20,6 @@ import { LotStockSettings } from '@/features/green-stock/components/lot-stock-se
 import { StockAdjustmentForm } from '@/features/green-stock/components/stock-adjustment-form';
 import { StockHistoryTable } from '@/features/green-stock/components/stock-history-table';
 import type { GreenStockItem } from '@shared/schemas/green-stock';
-import { ApiError } from '@/lib/api-client';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -85,16 +84,6 @@ function LotContent({ code, item }: { code: string; item: GreenStockItem }) {
     );
   }
   if (lotQuery.isError) {
-    if (lotQuery.error instanceof ApiError && lotQuery.error.status === 404 && !item.isListed) {
-      return (
-        <Section id="lot-descriptors" title="Descriptors, photos and spec sheet">
-          <p className="max-w-prose rounded-card border border-rule bg-sheet p-4 text-ink-muted">
-            This lot is not listed, and Restday reads a lot’s descriptors, photos and spec sheet only while it is listed. Stock, the reorder
-            point and the history above work as usual.
-          </p>
-        </Section>
-      );
-    }
     return <ErrorState title="The lot’s descriptors could not load" error={lotQuery.error} onRetry={() => void lotQuery.refetch()} />;
   }
   return (

@@ -48,10 +48,27 @@ export default function RoasteryOrderRoute() {
         <RoasteryOrderDetail
           order={order}
           actions={
-            <p className="text-ink-muted">
-              {order.shippedAt ? 'This order has left the roastery.' : 'This order has not shipped yet.'} Marking it shipped and tracing its
-              bags to their batches will be done from here.
-            </p>
+            <>
+              <p className="text-ink-muted">
+                {order.shippedAt
+                  ? 'This order has left the roastery.'
+                  : 'Bags are packed, labelled and marked shipped from the Pack List of the day they ship.'}
+              </p>
+              <ul className="mt-3 flex flex-wrap gap-x-6 gap-y-2">
+                {order.shipDate ? (
+                  <li>
+                    <Link to={paths.roastery.daySheet.getHref(order.shipDate, 'pack')} className="inline-flex min-h-11 items-center font-semibold text-leaf underline">
+                      Open the Pack List for {order.shipDate}
+                    </Link>
+                  </li>
+                ) : null}
+                <li>
+                  <Link to={paths.roastery.orderTrace.getHref(order.id)} className="inline-flex min-h-11 items-center font-semibold text-leaf underline">
+                    Trace this order
+                  </Link>
+                </li>
+              </ul>
+            </>
           }
         />
       </>

@@ -202,7 +202,9 @@ describe('Roastery order detail', () => {
     const tracking = screen.getByRole('region', { name: 'Carrier and tracking' });
     expect(within(tracking).getByText('Carrier').nextElementSibling?.textContent).toBe('Invented Parcel');
     expect(within(tracking).getByText('Tracking number').nextElementSibling?.textContent).toBe('IP-0042-7781');
-    expect(screen.getByRole('region', { name: 'Shipping and tracing' })).toBeTruthy();
+    const shipping = screen.getByRole('region', { name: 'Shipping and tracing' });
+    expect(within(shipping).getByRole('link', { name: 'Trace this order' }).getAttribute('href')).toMatch(/^\/roastery\/orders\/[^/]+\/trace$/);
+    expect(within(shipping).getByRole('link', { name: /^Open the Pack List for / }).getAttribute('href')).toMatch(/^\/roastery\/days\/\d{4}-\d{2}-\d{2}\?tab=pack$/);
     // An instant, shown in the reader's own time zone.
     expect(within(tracking).getByText('Shipped').nextElementSibling?.textContent).toMatch(/^Dec [23], 2026, \d/);
   });

@@ -1,14 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { lotDetailSchema, type LotDetail } from '@shared/schemas/lots';
+import { lotStaffDetailSchema, type LotDetail } from '@shared/schemas/lots';
 import { apiRequest } from '@/lib/api-client';
 
-/**
- * A lot's descriptors, photos and spec sheet for the editor. The API reads them through the
- * public lot route, which serves listed lots only; after a save the cache holds what the server
- * answered, unlisted or not.
- */
+/** A lot's descriptors, photos and spec sheet for the editor, listed or not. */
 export function getEditableLot({ code, signal }: { code: string; signal?: AbortSignal }): Promise<LotDetail> {
-  return apiRequest(`/api/lots/${encodeURIComponent(code)}`, { schema: lotDetailSchema, signal });
+  return apiRequest(`/api/roastery/green-stock/${encodeURIComponent(code)}`, { schema: lotStaffDetailSchema, signal });
 }
 
 export function getEditableLotQueryOptions(code: string) {
