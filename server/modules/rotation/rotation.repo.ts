@@ -1,7 +1,7 @@
-import { and, asc, between, eq, gte, inArray, isNull, sql } from 'drizzle-orm';
+import { and, asc, between, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions } from '../../db/schema/index';
+import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
 
 /** Orders whose coffee has been roasted already. */
 const roastedOrderStatuses = ['roasted', 'packed', 'shipped'] as const;
@@ -13,12 +13,7 @@ export function createRotationRepo(db: Db) {
     },
 
     /** Roast Calendar overrides from `from` on (a delivery's search for an open day runs past any range). */
-    async calendarOverrides(from: string) {
-      return db
-        .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
-        .from(roastDays)
-        .where(gte(roastDays.date, from));
-    },
+    calendarOverrides: (from: string) => loadCalendarOverrides(db, from),
 
     async picks(from: string, to: string) {
       return db

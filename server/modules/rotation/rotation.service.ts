@@ -1,6 +1,6 @@
 import { greenNeededForRoasted } from '@shared/domain/roast-loss';
 import { planDeliveries, type DeliveryChoice, type KeptDelivery } from '@shared/domain/delivery-plan';
-import { isOpenRoastDay, roastCalendarDays, SEARCH_HORIZON_DAYS, type CalendarOverride, type RoastCalendar } from '@shared/domain/roast-schedule';
+import { isOpenRoastDay, roastCalendarDays, SEARCH_HORIZON_DAYS, type RoastCalendar } from '@shared/domain/roast-schedule';
 import { addDays, daysBetween, localDateOf } from '@shared/domain/shop-time';
 import type { DeliveryStatus, RoastedBagSize, RoastLevel } from '@shared/domain/vocabulary';
 import { bagFillGrams } from '@shared/domain/units';
@@ -32,9 +32,7 @@ const roastedSize = (size: string) => size as RoastedBagSize;
 
 export function createRotationService({ repo, clock, audit }: { repo: RotationRepo; clock: Clock; audit: AuditTrail }) {
   async function calendarFrom(from: string): Promise<RoastCalendar> {
-    const overrides: Record<string, CalendarOverride> = {};
-    for (const row of await repo.calendarOverrides(from)) overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
-    return { overrides };
+    return { overrides: await repo.calendarOverrides(from) };
   }
 
   /**

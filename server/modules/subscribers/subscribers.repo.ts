@@ -1,10 +1,10 @@
-import { and, asc, desc, eq, gte, ilike, inArray, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, inArray, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { RoastLevel, SubscriptionStatus } from '@shared/domain/vocabulary';
 import type { SubscriberSort } from '@shared/schemas/subscribers';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../db/client';
-import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions, users } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions, users } from '../../db/schema/index';
+import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
 
 export interface SubscriberFilters {
   status?: SubscriptionStatus;
@@ -115,12 +115,7 @@ export function createSubscribersRepo(db: Db) {
     },
 
     /** Roast Calendar overrides from `from` on. */
-    async calendarOverrides(from: string) {
-      return db
-        .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
-        .from(roastDays)
-        .where(gte(roastDays.date, from));
-    },
+    calendarOverrides: (from: string) => loadCalendarOverrides(db, from),
 
     /** A subscription with its customer, its materialized deliveries (with the order each became) and its orders. */
     async find(subscriptionId: string) {

@@ -1,6 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
 import { nextDelivery, planDeliveries, type KeptDelivery } from '@shared/domain/delivery-plan';
-import { SEARCH_HORIZON_DAYS, type CalendarOverride } from '@shared/domain/roast-schedule';
+import { SEARCH_HORIZON_DAYS } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf } from '@shared/domain/shop-time';
 import { roastersRotationName, type RoastedBagSize } from '@shared/domain/vocabulary';
 import {
@@ -50,10 +50,7 @@ export function createSubscribersService({ repo, clock }: { repo: SubscribersRep
   async function nextRoastDates(rows: readonly SubscriberRow[]): Promise<Map<string, string | null>> {
     const now = clock.now();
     const settings = await repo.shopSettings();
-    const overrides: Record<string, CalendarOverride> = {};
-    for (const row of await repo.calendarOverrides(addDays(localDateOf(now, settings.timeZone), -lookBackDays))) {
-      overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
-    }
+    const overrides = await repo.calendarOverrides(addDays(localDateOf(now, settings.timeZone), -lookBackDays));
     const keptBySubscription = new Map<string, KeptDelivery[]>();
     for (const row of await repo.keptDeliveries(rows.map((subscription) => subscription.id))) {
       const kept = keptBySubscription.get(row.subscriptionId) ?? [];

@@ -1,8 +1,8 @@
 import { and, eq, gte, inArray, sql } from 'drizzle-orm';
 import type { RoastLevel } from '@shared/domain/vocabulary';
 import type { Db } from '../../db/client';
-import { lots, orderItems, orders, roastDays } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { lots, orderItems, orders } from '../../db/schema/index';
+import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
 
 /** Orders whose bags claim their roast day's capacity: paid, and not cancelled or refunded. */
 const plannedStatuses = ['paid', 'held', 'roasted', 'packed', 'shipped'] as const;
@@ -23,12 +23,7 @@ export function createSubscriptionPreviewRepo(db: Db) {
     },
 
     /** Roast Calendar overrides from `from` on. */
-    async calendarOverrides(from: string) {
-      return db
-        .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
-        .from(roastDays)
-        .where(gte(roastDays.date, from));
-    },
+    calendarOverrides: (from: string) => loadCalendarOverrides(db, from),
 
     /** Roasted grams already ordered per roast day (from `from` on) and level. */
     async plannedRoastedGrams(from: string): Promise<{ roastDate: string; roastLevel: RoastLevel; roastedGrams: number }[]> {

@@ -1,6 +1,6 @@
 import { quoteSubscriptionDelivery } from '@shared/domain/pricing';
 import { greenNeededForRoasted } from '@shared/domain/roast-loss';
-import { ScheduleError, scheduleOrder, subscriptionDeliveries, type CalendarOverride, type RoastCalendar } from '@shared/domain/roast-schedule';
+import { ScheduleError, scheduleOrder, subscriptionDeliveries, type RoastCalendar } from '@shared/domain/roast-schedule';
 import { localDateOf } from '@shared/domain/shop-time';
 import { bagFillGrams } from '@shared/domain/units';
 import { roastLevelLabels, type CadenceWeeks } from '@shared/domain/vocabulary';
@@ -18,9 +18,7 @@ function greenGramsFor(roastedGrams: number, level: keyof ShopSettings['lossMode
 export function createSubscriptionPreviewService({ repo, clock }: { repo: SubscriptionPreviewRepo; clock: Clock }) {
   /** The Roast Calendar from today on: closures and capacity overrides, and the green grams already planned each day. */
   async function calendarFrom(today: string, settings: ShopSettings): Promise<RoastCalendar> {
-    const [overrideRows, plannedRows] = await Promise.all([repo.calendarOverrides(today), repo.plannedRoastedGrams(today)]);
-    const overrides: Record<string, CalendarOverride> = {};
-    for (const row of overrideRows) overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
+    const [overrides, plannedRows] = await Promise.all([repo.calendarOverrides(today), repo.plannedRoastedGrams(today)]);
     const plannedGreenGrams: Record<string, number> = {};
     for (const row of plannedRows) {
       plannedGreenGrams[row.roastDate] = (plannedGreenGrams[row.roastDate] ?? 0) + greenGramsFor(row.roastedGrams, row.roastLevel, settings);
