@@ -1,12 +1,12 @@
 import { and, asc, desc, eq, gte, inArray, sql } from 'drizzle-orm';
 import type { DeliveryChoice, KeptDelivery, PlannedDelivery } from '@shared/domain/delivery-plan';
-import type { CalendarOverride, RoastCalendar, RoastDates } from '@shared/domain/roast-schedule';
+import type { RoastCalendar, RoastDates } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
 import { roastersRotationName, type DeliveryStatus, type RoastedBagSize, type RoastLevel, type SubscriptionStatus } from '@shared/domain/vocabulary';
 import type { Db, DbOrTx, Tx } from '../../db/client';
 import type { AddressSnapshot } from '../../db/schema/common';
-import { deliveries, lots, orderItems, orders, roastDays, rotationPicks, subscriptions, users } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions, users } from '../../db/schema/index';
+import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
 
 /** A subscription with what Deliveries and the e-mails need around it. */
 function subscriptionSelect(db: DbOrTx) {
@@ -66,13 +66,7 @@ export function choiceOf(subscription: Pick<SubscriptionRecord, 'roastLevel' | '
 export async function loadScheduleContext(db: DbOrTx, now: Date) {
   const { settings } = await loadShopSettings(db);
   const today = localDateOf(now, settings.timeZone);
-  const rows = await db
-    .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
-    .from(roastDays)
-    .where(gte(roastDays.date, addDays(today, -180)));
-  const overrides: Record<IsoDate, CalendarOverride> = {};
-  for (const row of rows) overrides[row.date] = { open: row.open, capacityGrams: row.capacityGrams, note: row.note };
-  const calendar: RoastCalendar = { overrides };
+  const calendar: RoastCalendar = { overrides: await loadCalendarOverrides(db, addDays(today, -180)) };
   return { settings, calendar, today };
 }
 
