@@ -1,8 +1,9 @@
-import { and, asc, desc, eq, inArray, isNull, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, or, sql, type SQL } from 'drizzle-orm';
 import type { Db, DbOrTx, Tx } from '../../db/client';
-import { bagAllocations, batches, deliveries, lots, orderItems, orders, rotationPicks, users } from '../../db/schema/index';
+import { bagAllocations, batches, deliveries, lots, orderItems, orders, users } from '../../db/schema/index';
 import { roastersRotationName, type DeliveryStatus, type OrderStatus, type RoastLevel } from '@shared/domain/vocabulary';
 import { loadShopSettings } from '../settings/settings.repo';
+import { orderLineLotId } from '../../db/order-line-lot';
 
 /** Orders a ship day's Pack List shows: paid and on their way through the roastery, or already out. */
 export const packListStatuses = ['paid', 'roasted', 'packed', 'shipped'] as const satisfies readonly OrderStatus[];
@@ -42,8 +43,7 @@ function queries(db: DbOrTx) {
       })
       .from(orderItems)
       .innerJoin(orders, eq(orders.id, orderItems.orderId))
-      .leftJoin(rotationPicks, and(isNull(orderItems.lotId), eq(rotationPicks.roastDate, orders.roastDate)))
-      .leftJoin(lots, eq(lots.id, sql`coalesce(${orderItems.lotId}, ${rotationPicks.lotId})`))
+      .leftJoin(lots, eq(lots.id, orderLineLotId))
       .where(inArray(orderItems.orderId, orderIds))
       // Items have no position of their own: by coffee, then the larger bag first.
       .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id));

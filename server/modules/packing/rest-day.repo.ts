@@ -1,9 +1,10 @@
-import { and, asc, between, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { and, asc, between, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { emailOutbox, lots, orderItems, orders, rotationPicks, users } from '../../db/schema/index';
+import { emailOutbox, lots, orderItems, orders, users } from '../../db/schema/index';
 import { roastersRotationName } from '@shared/domain/vocabulary';
 import { queueEmail, type QueuedEmail } from '../outbox/outbox.repo';
 import { loadShopSettings } from '../settings/settings.repo';
+import { orderLineLotId } from '../../db/order-line-lot';
 
 export const restDayDedupeKey = (orderId: string) => `rest-day:${orderId}`;
 
@@ -47,8 +48,7 @@ export function createRestDayRepo(db: Db) {
         })
         .from(orderItems)
         .innerJoin(orders, eq(orders.id, orderItems.orderId))
-        .leftJoin(rotationPicks, and(isNull(orderItems.lotId), eq(rotationPicks.roastDate, orders.roastDate)))
-        .leftJoin(lots, eq(lots.id, sql`coalesce(${orderItems.lotId}, ${rotationPicks.lotId})`))
+        .leftJoin(lots, eq(lots.id, orderLineLotId))
         .where(inArray(orderItems.orderId, due.map((order) => order.id)))
         .orderBy(asc(orderItems.id));
       return due.map((order) => ({ ...order, lines: lines.filter((line) => line.orderId === order.id) }));

@@ -2,6 +2,7 @@ import { and, asc, between, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions } from '../../db/schema/index';
 import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
+import { keptDeliveryColumns } from '../subscriptions/subscriptions.repo';
 
 /** Orders whose coffee has been roasted already. */
 const roastedOrderStatuses = ['roasted', 'packed', 'shipped'] as const;
@@ -48,20 +49,7 @@ export function createRotationRepo(db: Db) {
       if (subscriptionIds.length === 0) return [];
       return db
         .select({
-          id: deliveries.id,
-          subscriptionId: deliveries.subscriptionId,
-          nominalDate: deliveries.nominalDate,
-          roastDate: deliveries.roastDate,
-          shipDate: deliveries.shipDate,
-          readyFrom: deliveries.readyFrom,
-          bestBefore: deliveries.bestBefore,
-          status: deliveries.status,
-          orderId: deliveries.orderId,
-          roastLevel: deliveries.roastLevel,
-          bagSize: deliveries.bagSize,
-          bagsPerDelivery: deliveries.bagsPerDelivery,
-          grind: deliveries.grind,
-          brewMethod: deliveries.brewMethod,
+          ...keptDeliveryColumns,
           orderBags: sql<number | null>`sum(${orderItems.quantity})::int`,
           orderGrams: sql<number | null>`sum(${orderItems.quantity} * ${orderItems.fillGrams})::int`,
         })

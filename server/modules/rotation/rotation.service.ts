@@ -1,8 +1,8 @@
 import { greenNeededForRoasted } from '@shared/domain/roast-loss';
-import { planDeliveries, type DeliveryChoice, type KeptDelivery } from '@shared/domain/delivery-plan';
+import { planDeliveries } from '@shared/domain/delivery-plan';
 import { isOpenRoastDay, roastCalendarDays, SEARCH_HORIZON_DAYS, type RoastCalendar } from '@shared/domain/roast-schedule';
 import { addDays, daysBetween, localDateOf } from '@shared/domain/shop-time';
-import type { DeliveryStatus, RoastedBagSize, RoastLevel } from '@shared/domain/vocabulary';
+import type { DeliveryStatus, RoastLevel } from '@shared/domain/vocabulary';
 import { bagFillGrams } from '@shared/domain/units';
 import type { RotationPick, RotationPickResponse, RotationQuery, RotationResponse } from '@shared/schemas/rotation';
 import { AppError } from '../../lib/app-error';
@@ -10,6 +10,7 @@ import type { Clock } from '../../lib/clock';
 import type { SessionUser } from '../../middleware/require-role';
 import type { AuditTrail } from '../audit/audit-trail';
 import type { RotationRepo } from './rotation.repo';
+import { choiceOf, keptDeliveryOf } from '../subscriptions/subscriptions.repo';
 
 interface DayNeed {
   subscribers: Set<string>;
@@ -26,9 +27,6 @@ const earliest = (a: string, b: string) => (a < b ? a : b);
 const roastingStatuses: ReadonlySet<DeliveryStatus> = new Set(['scheduled', 'roasted', 'shipped']);
 
 type Settings = Awaited<ReturnType<RotationRepo['shopSettings']>>;
-
-/** Subscriptions sell roasted sizes only (a CHECK constraint keeps it so). */
-const roastedSize = (size: string) => size as RoastedBagSize;
 
 export function createRotationService({ repo, clock, audit }: { repo: RotationRepo; clock: Clock; audit: AuditTrail }) {
   async function calendarFrom(from: string): Promise<RoastCalendar> {
@@ -56,22 +54,9 @@ export function createRotationService({ repo, clock, audit }: { repo: RotationRe
     const inRange = (date: string) => date >= from && date <= to;
 
     for (const subscription of subscriptions) {
-      const choice: DeliveryChoice = {
-        roastLevel: subscription.roastLevel,
-        bagSize: roastedSize(subscription.bagSize),
-        bagsPerDelivery: subscription.bagsPerDelivery,
-        grind: subscription.grind,
-        brewMethod: subscription.brewMethod,
-      };
+      const choice = choiceOf(subscription);
       const rows = keptRows.filter((row) => row.subscriptionId === subscription.id);
-      const kept: KeptDelivery[] = rows.map((row) => ({
-        ...row,
-        nominalDate: row.nominalDate ?? row.roastDate,
-        choice:
-          row.roastLevel && row.bagSize && row.bagsPerDelivery && row.grind && row.brewMethod
-            ? { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod }
-            : null,
-      }));
+      const kept = rows.map(keptDeliveryOf);
       const pausedOn = (date: string) => subscription.pausedUntil !== null && date < subscription.pausedUntil;
       for (const [index, row] of rows.entries()) {
         if (!inRange(row.roastDate) || !roastingStatuses.has(row.status)) continue;

@@ -5,6 +5,7 @@ import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../db/client';
 import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions, users } from '../../db/schema/index';
 import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
+import { keptDeliveryColumns } from '../subscriptions/subscriptions.repo';
 
 export interface SubscriberFilters {
   status?: SubscriptionStatus;
@@ -93,22 +94,7 @@ export function createSubscribersRepo(db: Db) {
     async keptDeliveries(subscriptionIds: string[]) {
       if (subscriptionIds.length === 0) return [];
       return db
-        .select({
-          id: deliveries.id,
-          subscriptionId: deliveries.subscriptionId,
-          nominalDate: deliveries.nominalDate,
-          roastDate: deliveries.roastDate,
-          shipDate: deliveries.shipDate,
-          readyFrom: deliveries.readyFrom,
-          bestBefore: deliveries.bestBefore,
-          status: deliveries.status,
-          orderId: deliveries.orderId,
-          roastLevel: deliveries.roastLevel,
-          bagSize: deliveries.bagSize,
-          bagsPerDelivery: deliveries.bagsPerDelivery,
-          grind: deliveries.grind,
-          brewMethod: deliveries.brewMethod,
-        })
+        .select(keptDeliveryColumns)
         .from(deliveries)
         .where(inArray(deliveries.subscriptionId, subscriptionIds))
         .orderBy(asc(deliveries.roastDate));

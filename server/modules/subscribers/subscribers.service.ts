@@ -14,6 +14,7 @@ import {
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SubscriberFilters, SubscriberRow, SubscribersRepo } from './subscribers.repo';
+import { choiceOf, keptDeliveryOf } from '../subscriptions/subscriptions.repo';
 
 /** Subscriptions sell roasted sizes only (a CHECK constraint keeps it so). */
 const roastedSize = (size: string) => size as RoastedBagSize;
@@ -54,21 +55,13 @@ export function createSubscribersService({ repo, clock }: { repo: SubscribersRep
     const keptBySubscription = new Map<string, KeptDelivery[]>();
     for (const row of await repo.keptDeliveries(rows.map((subscription) => subscription.id))) {
       const kept = keptBySubscription.get(row.subscriptionId) ?? [];
-      kept.push({
-        ...row,
-        nominalDate: row.nominalDate ?? row.roastDate,
-        choice:
-          row.roastLevel && row.bagSize && row.bagsPerDelivery && row.grind && row.brewMethod
-            ? { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod }
-            : null,
-      });
+      kept.push(keptDeliveryOf(row));
       keptBySubscription.set(row.subscriptionId, kept);
     }
     return new Map(
       rows.map((row) => {
         const kept = keptBySubscription.get(row.id) ?? [];
-        const choice = { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod };
-        const plan = planDeliveries({ ...row, anchorDate: row.anchorDate ?? kept[0]?.nominalDate ?? null, choice }, kept, settings, { overrides }, now, kept.length + 3);
+        const plan = planDeliveries({ ...row, anchorDate: row.anchorDate ?? kept[0]?.nominalDate ?? null, choice: choiceOf(row) }, kept, settings, { overrides }, now, kept.length + 3);
         return [row.id, nextDelivery(plan)?.roastDate ?? null];
       }),
     );

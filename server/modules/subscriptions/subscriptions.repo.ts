@@ -70,10 +70,29 @@ export async function loadScheduleContext(db: DbOrTx, now: Date) {
   return { settings, calendar, today };
 }
 
-/** A subscription's kept delivery rows, as the delivery plan reads them. */
-export async function keptDeliveries(db: DbOrTx, subscriptionId: string): Promise<KeptDelivery[]> {
-  const rows = await db.select().from(deliveries).where(eq(deliveries.subscriptionId, subscriptionId)).orderBy(asc(deliveries.roastDate));
-  return rows.map((row) => ({
+/** The columns of a kept delivery row the delivery plan reads. */
+export const keptDeliveryColumns = {
+  id: deliveries.id,
+  subscriptionId: deliveries.subscriptionId,
+  nominalDate: deliveries.nominalDate,
+  roastDate: deliveries.roastDate,
+  shipDate: deliveries.shipDate,
+  readyFrom: deliveries.readyFrom,
+  bestBefore: deliveries.bestBefore,
+  status: deliveries.status,
+  orderId: deliveries.orderId,
+  roastLevel: deliveries.roastLevel,
+  bagSize: deliveries.bagSize,
+  bagsPerDelivery: deliveries.bagsPerDelivery,
+  grind: deliveries.grind,
+  brewMethod: deliveries.brewMethod,
+};
+
+type KeptDeliveryRow = Pick<typeof deliveries.$inferSelect, Exclude<keyof typeof keptDeliveryColumns, 'subscriptionId'>>;
+
+/** A kept row as the delivery plan reads it: what it brings only once frozen (all five columns set). */
+export function keptDeliveryOf(row: KeptDeliveryRow): KeptDelivery {
+  return {
     id: row.id,
     nominalDate: row.nominalDate ?? row.roastDate,
     roastDate: row.roastDate,
@@ -86,7 +105,13 @@ export async function keptDeliveries(db: DbOrTx, subscriptionId: string): Promis
       row.roastLevel && row.bagSize && row.bagsPerDelivery && row.grind && row.brewMethod
         ? { roastLevel: row.roastLevel, bagSize: roastedSize(row.bagSize), bagsPerDelivery: row.bagsPerDelivery, grind: row.grind, brewMethod: row.brewMethod }
         : null,
-  }));
+  };
+}
+
+/** A subscription's kept delivery rows, as the delivery plan reads them. */
+export async function keptDeliveries(db: DbOrTx, subscriptionId: string): Promise<KeptDelivery[]> {
+  const rows = await db.select(keptDeliveryColumns).from(deliveries).where(eq(deliveries.subscriptionId, subscriptionId)).orderBy(asc(deliveries.roastDate));
+  return rows.map(keptDeliveryOf);
 }
 
 export async function lockSubscription(db: DbOrTx, subscriptionId: string) {

@@ -1,6 +1,7 @@
-import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
+import { asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { bagAllocations, batches, lots, orderItems, orders, rotationPicks, users } from '../../db/schema/index';
+import { bagAllocations, batches, lots, orderItems, orders, users } from '../../db/schema/index';
+import { orderLineLotId } from '../../db/order-line-lot';
 
 /** Reads for recalls: lot → batch → bag → order, both ways. */
 export function createTraceRepo(db: Db) {
@@ -37,8 +38,7 @@ export function createTraceRepo(db: Db) {
         })
         .from(orderItems)
         .innerJoin(orders, eq(orders.id, orderItems.orderId))
-        .leftJoin(rotationPicks, and(isNull(orderItems.lotId), eq(rotationPicks.roastDate, orders.roastDate)))
-        .leftJoin(lots, eq(lots.id, sql`coalesce(${orderItems.lotId}, ${rotationPicks.lotId})`))
+        .leftJoin(lots, eq(lots.id, orderLineLotId))
         .where(eq(orderItems.orderId, orderId))
         .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id));
     },
