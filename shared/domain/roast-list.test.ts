@@ -25,10 +25,20 @@ describe('buildRoastList', () => {
       ]),
     );
     expect(list.lines).toEqual([
-      { lotCode: 'RD-101', roastLevel: 'medium', bags: 10, roastedGrams: 3862, lossPct: 15, lossSource: 'level', greenGrams: 4635, batches: [{ greenGrams: 4635 }] },
+      {
+        lotCode: 'RD-101',
+        roastLevel: 'medium',
+        bags: 10,
+        roastedGrams: 3862,
+        lossPct: 15,
+        lossSource: 'level',
+        greenGrams: 4635,
+        batches: [{ greenGrams: 4635 }],
+        toRoast: { roastedGrams: 3862, greenGrams: 4635, batches: [{ greenGrams: 4635 }] },
+      },
     ]);
     expect(list.pull).toEqual([{ lotCode: 'RD-101', greenGrams: 4635, stockGrams: 50_000, shortfallGrams: 0 }]);
-    expect(list.totals).toEqual({ roastedGrams: 3862, greenGrams: 4635, batches: 1 });
+    expect(list.totals).toEqual({ roastedGrams: 3862, greenGrams: 4635, batches: 1, toRoast: { roastedGrams: 3862, greenGrams: 4635, batches: 1 } });
     expect(list.warnings).toEqual([
       expect.objectContaining({ code: 'below_preferred_load', lotCode: 'RD-101', roastLevel: 'medium', message: expect.stringContaining('6,000 g') }),
     ]);
@@ -80,7 +90,7 @@ describe('buildRoastList', () => {
   it('treats a lot with no stock record as out of stock, and an empty day as empty', () => {
     const list = buildRoastList(input([{ lotCode: 'RD-777', roastLevel: 'medium', fillGrams: 9000, quantity: 1 }]));
     expect(list.pull[0]).toMatchObject({ stockGrams: 0, shortfallGrams: list.pull[0]?.greenGrams });
-    expect(buildRoastList(input([]))).toEqual({ date: '2025-03-05', lines: [], pull: [], totals: { roastedGrams: 0, greenGrams: 0, batches: 0 }, warnings: [] });
+    expect(buildRoastList(input([]))).toEqual({ date: '2025-03-05', lines: [], pull: [], totals: { roastedGrams: 0, greenGrams: 0, batches: 0, toRoast: { roastedGrams: 0, greenGrams: 0, batches: 0 } }, warnings: [] });
     expect(() => buildRoastList(input([{ lotCode: 'RD-101', roastLevel: 'medium', fillGrams: 341, quantity: 0 }]))).toThrow(RangeError);
     expect(() => buildRoastList(input([{ lotCode: 'RD-101', roastLevel: 'blonde' as 'light', fillGrams: 341, quantity: 1 }]))).toThrow(/unknown roast level/);
   });

@@ -8,6 +8,10 @@
  *   below the hard floor, shortfall). Shape of `GET /api/roastery/days/:date/roast-list`.
  *
  * Green is never under-planned: every rounding on the way (overage, loss, measured loss) is up.
+ *
+ * A day's list is also its production record: every line stays on it once roasted, packed or
+ * shipped. What is still to roast is the roasted weight not yet covered (`coveredRoastedGrams`),
+ * planned the same way; the pull list and the warnings count only that.
  */
 import {
   checkDayCapacity,
@@ -46,8 +50,24 @@ export interface RoastListInput {
   /** Green grams on hand per lot; a missing lot has none. */
   stockGrams: Readonly<Record<string, number>>;
   dayCapacityGrams: number;
+  /**
+   * Roasted grams per lot and level that need no more roasting: bags already roasted, packed or
+   * shipped, and the day's recorded roast no bag has taken yet. Missing means none.
+   */
+  coveredRoastedGrams?: Readonly<Record<string, Partial<Record<RoastLevel, number>>>>;
 }
 
+/** What a line (or the day) still needs after what is already roasted. */
+export interface StillToRoast {
+  roastedGrams: number;
+  greenGrams: number;
+  batches: { greenGrams: number }[];
+}
+
+/**
+ * One lot and level of the day's record: what was planned for all its bags (`roastedGrams`,
+ * `greenGrams`, `batches`) and what is still to roast. The floor proposal is for what is still to roast.
+ */
 export interface RoastListLine {
   lotCode: string;
   roastLevel: RoastLevel;
@@ -57,6 +77,7 @@ export interface RoastListLine {
   lossSource: 'level' | 'lot';
   greenGrams: number;
   batches: { greenGrams: number }[];
+  toRoast: StillToRoast;
   floorProposal?: FloorProposal;
 }
 
@@ -80,7 +101,8 @@ export interface RoastList {
   date: string;
   lines: RoastListLine[];
   pull: PullLine[];
-  totals: { roastedGrams: number; greenGrams: number; batches: number };
+  /** The whole day as planned; `toRoast` is what is left of it. */
+  totals: { roastedGrams: number; greenGrams: number; batches: number; toRoast: { roastedGrams: number; greenGrams: number; batches: number } };
   warnings: RoastListWarning[];
 }
 
@@ -209,7 +231,7 @@ function grams(value: number): string {
   return `${String(value).replace(/\B(?=(\d{3})+(?!\d))/g, ',')} g`;
 }
 
-function loadWarnings(line: RoastListLine, settings: RoastListSettings, plan: BatchPlan): RoastListWarning[] {
+function loadWarnings(line: Pick<RoastListLine, 'lotCode' | 'roastLevel'>, settings: RoastListSettings, plan: BatchPlan): RoastListWarning[] {
   const subject = `${line.lotCode} at ${line.roastLevel}`;
   const count = plan.batches.length;
   const smallest = plan.batches.at(-1) ?? 0;
@@ -258,10 +280,10 @@ export function buildRoastList(input: RoastListInput): RoastList {
   const lines: RoastListLine[] = [];
   const warnings: RoastListWarning[] = [];
   const pull: PullLine[] = [];
-  const totals = { roastedGrams: 0, greenGrams: 0, batches: 0 };
+  const totals = { roastedGrams: 0, greenGrams: 0, batches: 0, toRoast: { roastedGrams: 0, greenGrams: 0, batches: 0 } };
 
   for (const [lotCode, lotGroups] of byLot) {
-    let lotGreen = 0;
+    let lotGreenToPull = 0;
     for (const group of lotGroups) {
       const { roastLevel } = group;
       const loss = resolveExpectedLoss(
@@ -272,6 +294,11 @@ export function buildRoastList(input: RoastListInput): RoastList {
       );
       const greenGrams = greenNeededForRoasted(group.roastedGrams, loss.lossPct, settings.overagePct);
       const plan = planBatches(greenGrams, settings.roaster, loss.lossPct);
+      const covered = input.coveredRoastedGrams?.[lotCode]?.[roastLevel] ?? 0;
+      const remainingRoasted = Math.max(0, group.roastedGrams - covered);
+      const remainingGreen = remainingRoasted > 0 ? greenNeededForRoasted(remainingRoasted, loss.lossPct, settings.overagePct) : 0;
+      // Nothing roasted yet: what is left is the plan itself.
+      const remainingPlan = covered === 0 ? plan : remainingGreen > 0 ? planBatches(remainingGreen, settings.roaster, loss.lossPct) : undefined;
       const line: RoastListLine = {
         lotCode,
         roastLevel,
@@ -281,33 +308,42 @@ export function buildRoastList(input: RoastListInput): RoastList {
         lossSource: loss.source,
         greenGrams,
         batches: plan.batches.map((load) => ({ greenGrams: load })),
+        toRoast: {
+          roastedGrams: remainingRoasted,
+          greenGrams: remainingGreen,
+          batches: remainingPlan ? remainingPlan.batches.map((load) => ({ greenGrams: load })) : [],
+        },
       };
-      if (plan.floorProposal) line.floorProposal = plan.floorProposal;
+      if (remainingPlan?.floorProposal) line.floorProposal = remainingPlan.floorProposal;
       lines.push(line);
-      warnings.push(...loadWarnings(line, settings, plan));
-      lotGreen += greenGrams;
+      if (remainingPlan) warnings.push(...loadWarnings(line, settings, remainingPlan));
+      lotGreenToPull += remainingGreen;
       totals.roastedGrams += group.roastedGrams;
       totals.greenGrams += greenGrams;
       totals.batches += plan.batches.length;
+      totals.toRoast.roastedGrams += remainingRoasted;
+      totals.toRoast.greenGrams += remainingGreen;
+      totals.toRoast.batches += line.toRoast.batches.length;
     }
+    if (lotGreenToPull === 0) continue;
     const stockGrams = input.stockGrams[lotCode] ?? 0;
-    const shortfallGrams = Math.max(0, lotGreen - stockGrams);
-    pull.push({ lotCode, greenGrams: lotGreen, stockGrams, shortfallGrams });
+    const shortfallGrams = Math.max(0, lotGreenToPull - stockGrams);
+    pull.push({ lotCode, greenGrams: lotGreenToPull, stockGrams, shortfallGrams });
     if (shortfallGrams > 0) {
       warnings.push({
         code: 'green_shortfall',
         lotCode,
-        message: `${lotCode}: the list needs ${grams(lotGreen)} of green and ${grams(stockGrams)} is in stock, ${grams(shortfallGrams)} short.`,
+        message: `${lotCode}: the list needs ${grams(lotGreenToPull)} of green and ${grams(stockGrams)} is in stock, ${grams(shortfallGrams)} short.`,
       });
     }
   }
 
-  const capacity = checkDayCapacity(totals.greenGrams, input.dayCapacityGrams);
+  const capacity = checkDayCapacity(totals.toRoast.greenGrams, input.dayCapacityGrams);
   if (!capacity.withinCapacity) {
     warnings.unshift({
       code: 'over_day_capacity',
       message:
-        `The day plans ${grams(totals.greenGrams)} of green against a capacity of ` +
+        `The day plans ${grams(totals.toRoast.greenGrams)} of green still to roast against a capacity of ` +
         `${grams(input.dayCapacityGrams)}, ${grams(capacity.overByGrams)} over.`,
     });
   }

@@ -42,6 +42,8 @@ export const calendarDaySchema = z.object({
   note: z.string().nullable(),
   /** Paid or held roasted-coffee orders with this roast date. */
   ordersCount: z.number().int().min(0),
+  /** What the day's recorded batches add up to (the Roast List's record): all zero before any batch. */
+  roasted: z.object({ batches: z.number().int().min(0), greenGrams: wholeGrams, roastedGrams: wholeGrams }),
   /** True when staff changed this day (a roast_days row); false when it follows the weekly settings. */
   overridden: z.boolean(),
 });
@@ -121,6 +123,11 @@ export const roastListLineSchema = z.object({
     .optional(),
   /** Batches already recorded for this day, lot and level. */
   recorded: z.object({ batches: z.number().int().min(0), greenGrams: wholeGrams, roastedGrams: wholeGrams }),
+  /**
+   * What is left to roast: the roasted weight no done bag or recorded batch covers yet, its green
+   * and its batches (empty when nothing is left). The pull list and warnings count only this.
+   */
+  toRoast: z.object({ roastedGrams: wholeGrams, greenGrams: wholeGrams, batches: z.array(z.object({ greenGrams: wholeGrams })) }),
 });
 export type RoastListLine = z.infer<typeof roastListLineSchema>;
 
@@ -139,7 +146,13 @@ export const roastListResponseSchema = z.object({
   day: z.object({ open: z.boolean(), capacityGrams: wholeGrams }),
   lines: z.array(roastListLineSchema),
   pull: z.array(pullLineSchema),
-  totals: z.object({ roastedGrams: wholeGrams, greenGrams: wholeGrams, batches: z.number().int().min(0) }),
+  /** The whole day as planned, and what is left of it to roast. */
+  totals: z.object({
+    roastedGrams: wholeGrams,
+    greenGrams: wholeGrams,
+    batches: z.number().int().min(0),
+    toRoast: z.object({ roastedGrams: wholeGrams, greenGrams: wholeGrams, batches: z.number().int().min(0) }),
+  }),
   warnings: z.array(roastListWarningSchema),
 });
 export type RoastListResponse = z.infer<typeof roastListResponseSchema>;

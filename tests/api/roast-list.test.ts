@@ -53,10 +53,9 @@ describe('GET /api/roastery/days/:date/roast-list', () => {
       ],
     });
     await insertRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 3, roastLevel: 'medium', brewMethod: 'espresso' }] });
-    // Not on the list: unpaid, cancelled, already roasted, another day.
+    // Not on the list: unpaid, cancelled, another day.
     await insertRoastedOrder({ userId: customer.id, roastDate: date, status: 'pending_payment', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
     await insertRoastedOrder({ userId: customer.id, roastDate: date, status: 'cancelled', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, status: 'roasted', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
     await insertRoastedOrder({ userId: customer.id, roastDate: '2031-03-07', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
 
     const response = await staff.get(`/api/roastery/days/${date}/roast-list`);
@@ -82,9 +81,11 @@ describe('GET /api/roastery/days/:date/roast-list', () => {
         greenGrams: 4_635,
         batches: [{ greenGrams: 4_635 }],
         recorded: { batches: 0, greenGrams: 0, roastedGrams: 0 },
+        // Nothing roasted yet: all of it is still to roast.
+        toRoast: { roastedGrams: 3_862, greenGrams: 4_635, batches: [{ greenGrams: 4_635 }] },
       },
     ]);
-    expect(list.totals).toEqual({ roastedGrams: 3_862, greenGrams: 4_635, batches: 1 });
+    expect(list.totals).toEqual({ roastedGrams: 3_862, greenGrams: 4_635, batches: 1, toRoast: { roastedGrams: 3_862, greenGrams: 4_635, batches: 1 } });
     // 10,000 g in stock − 4,635 g to pull: nothing short.
     expect(list.pull).toEqual([{ lotCode: code, lotName: 'Invented Hollow Washed', greenGrams: 4_635, stockGrams: 10_000, shortfallGrams: 0 }]);
     expect(list.day).toEqual({ open: true, capacityGrams: 60_000 });
@@ -168,10 +169,10 @@ describe('GET /api/roastery/days/:date/roast-list.csv and .pdf', () => {
     expect(response.headers['content-disposition']).toBe(`attachment; filename="roast-list-${date}.csv"`);
     const [header, row, ...rest] = response.text.trim().split('\n');
     expect(header).toBe(
-      'roast_date,lot_code,lot_name,roast_level,bags,roasted_grams,loss_pct,loss_source,green_grams,batch_count,batch_green_grams,lot_pull_green_grams,lot_stock_grams,lot_shortfall_grams',
+      'roast_date,lot_code,lot_name,roast_level,bags,roasted_grams,loss_pct,loss_source,green_grams,batch_count,batch_green_grams,recorded_batches,recorded_green_grams,recorded_roasted_grams,to_roast_roasted_grams,to_roast_green_grams,to_roast_batch_green_grams,lot_pull_green_grams,lot_stock_grams,lot_shortfall_grams',
     );
-    // The same hand-worked figures as above: 3,862 g roasted, 4,635 g green, one batch.
-    expect(row).toBe(`${date},${code},"'=HYPERLINK(""http://invalid.example"")",medium,10,3862,15,level,4635,1,4635,4635,20000,0`);
+    // The same hand-worked figures as above: 3,862 g roasted, 4,635 g green, one batch, nothing recorded yet.
+    expect(row).toBe(`${date},${code},"'=HYPERLINK(""http://invalid.example"")",medium,10,3862,15,level,4635,1,4635,0,0,0,3862,4635,4635,4635,20000,0`);
     expect(rest).toEqual([]);
   });
 

@@ -65,7 +65,7 @@ async function roastDayWithStock(page: Page): Promise<{ date: string; roastList:
   for (const date of await shopDays(page)) {
     const roastList = await getJson<RoastListResponse>(page, `/api/roastery/days/${date}/roast-list`);
     const line = roastList.lines.find(
-      (candidate) => candidate.batches.length > 0 && roastList.pull.some((pull) => pull.lotCode === candidate.lotCode && pull.shortfallGrams === 0),
+      (candidate) => candidate.toRoast.batches.length > 0 && roastList.pull.some((pull) => pull.lotCode === candidate.lotCode && pull.shortfallGrams === 0),
     );
     if (line) return { date, roastList, line };
   }
@@ -123,7 +123,8 @@ describe('a roast day in a real browser', () => {
     await page.getByRole('button', { name: `Record batch of ${line.lotName}, ${level}`, exact: true }).click();
     const form = page.getByRole('form', { name: `Record a batch of ${line.lotName}, ${level}`, exact: true });
     const greenIn = Number(await form.getByLabel('Green in (g)').inputValue());
-    expect(greenIn).toBe(line.batches[line.recorded.batches]?.greenGrams);
+    // The form suggests the first batch of what is still to roast.
+    expect(greenIn).toBe(line.toRoast.batches[0]?.greenGrams);
     // A loss of exactly the planned percentage, whole grams: roasted = round(green × (1 − loss)).
     const roastedOut = Math.round(greenIn * (1 - line.lossPct / 100));
     await form.getByLabel('Roasted out (g)').fill(String(roastedOut));

@@ -11,6 +11,12 @@ import { queueEmail } from '../outbox/outbox.repo';
 import { loadShopSettings } from '../settings/settings.repo';
 import type { ClosurePlan, DeliveryOnClosedDay, LossHistoryRow, OrderOnClosedDay, PlannedGroup } from './calendar-planning';
 
+export interface RoastedOnDay {
+  batches: number;
+  greenGrams: number;
+  roastedGrams: number;
+}
+
 export interface OverrideRow {
   date: IsoDate;
   open: boolean;
@@ -185,6 +191,21 @@ export function createCalendarRepo(db: Db) {
         .where(and(between(orders.roastDate, from, to), eq(orders.kind, 'roasted'), inArray(orders.status, ['paid', 'held'])))
         .groupBy(orders.roastDate);
       return new Map(rows.map((row) => [row.roastDate as IsoDate, row.count]));
+    },
+
+    /** What the recorded batches of each day between two days add up to. */
+    async roastedByDay(from: IsoDate, to: IsoDate): Promise<Map<IsoDate, RoastedOnDay>> {
+      const rows = await db
+        .select({
+          roastDate: batches.roastDate,
+          batches: sql<number>`count(*)`.mapWith(Number),
+          greenGrams: sql<number>`sum(${batches.greenGramsIn})`.mapWith(Number),
+          roastedGrams: sql<number>`sum(${batches.roastedGramsOut})`.mapWith(Number),
+        })
+        .from(batches)
+        .where(between(batches.roastDate, from, to))
+        .groupBy(batches.roastDate);
+      return new Map(rows.map(({ roastDate, ...roasted }) => [roastDate as IsoDate, roasted]));
     },
 
     /**

@@ -4,7 +4,7 @@ import type { CalendarDay, CalendarDayUpdate, CalendarDayUpdateResponse, Calenda
 import type { ShopSettings } from '@shared/schemas/settings';
 import { AppError } from '../../lib/app-error';
 import { lossHistoryOf, planClosureMoves, plannedGreenByDay, type ClosurePlan } from './calendar-planning';
-import { overrideOf, type CalendarContext, type CalendarRepo, type MovingCoffee, type OverrideRow } from './calendar.repo';
+import { overrideOf, type CalendarContext, type CalendarRepo, type MovingCoffee, type OverrideRow, type RoastedOnDay } from './calendar.repo';
 
 function calendarOf(context: CalendarContext) {
   const overrides: Record<IsoDate, CalendarOverride> = Object.fromEntries(context.overrides.map((row) => [row.date, overrideOf(row)]));
@@ -12,11 +12,19 @@ function calendarOf(context: CalendarContext) {
   return { overrides, plannedGreenGrams };
 }
 
-function daysOf(from: IsoDate, to: IsoDate, context: CalendarContext, orderCounts: ReadonlyMap<IsoDate, number>): CalendarDay[] {
+const nothingRoasted: RoastedOnDay = { batches: 0, greenGrams: 0, roastedGrams: 0 };
+
+interface DayFigures {
+  orderCounts: ReadonlyMap<IsoDate, number>;
+  roasted: ReadonlyMap<IsoDate, RoastedOnDay>;
+}
+
+function daysOf(from: IsoDate, to: IsoDate, context: CalendarContext, figures: DayFigures): CalendarDay[] {
   const calendar = calendarOf(context);
   return roastCalendarDays(from, to, context.settings, calendar).map((day) => ({
     ...day,
-    ordersCount: orderCounts.get(day.date) ?? 0,
+    ordersCount: figures.orderCounts.get(day.date) ?? 0,
+    roasted: figures.roasted.get(day.date) ?? nothingRoasted,
     overridden: Object.hasOwn(calendar.overrides, day.date),
   }));
 }
@@ -45,15 +53,15 @@ function planMoves({ closedDate, orders, deliveries, context }: MovingCoffee): C
 export function createCalendarService(repo: CalendarRepo) {
   return {
     async calendar({ from, to }: CalendarQuery): Promise<CalendarResponse> {
-      const [context, counts] = await Promise.all([repo.context(from, to), repo.orderCounts(from, to)]);
-      return { days: daysOf(from, to, context, counts) };
+      const [context, orderCounts, roasted] = await Promise.all([repo.context(from, to), repo.orderCounts(from, to), repo.roastedByDay(from, to)]);
+      return { days: daysOf(from, to, context, { orderCounts, roasted }) };
     },
 
     /** Opens, closes or re-sizes a day; closing it moves its coffee to later roast days and tells each customer. */
     async updateDay(date: IsoDate, update: CalendarDayUpdate): Promise<CalendarDayUpdateResponse> {
       const result = await repo.updateDay(date, update, isWeeklyDefault, planMoves);
-      const counts = await repo.orderCounts(date, date);
-      const [day] = daysOf(date, date, result.context, counts);
+      const [orderCounts, roasted] = await Promise.all([repo.orderCounts(date, date), repo.roastedByDay(date, date)]);
+      const [day] = daysOf(date, date, result.context, { orderCounts, roasted });
       if (!day) throw new Error(`the calendar has no entry for ${date}`);
       return {
         ...day,

@@ -16,6 +16,12 @@ export const roastListCsvColumns = [
   'green_grams',
   'batch_count',
   'batch_green_grams',
+  'recorded_batches',
+  'recorded_green_grams',
+  'recorded_roasted_grams',
+  'to_roast_roasted_grams',
+  'to_roast_green_grams',
+  'to_roast_batch_green_grams',
   'lot_pull_green_grams',
   'lot_stock_grams',
   'lot_shortfall_grams',
@@ -43,6 +49,12 @@ export function roastListCsv(list: RoastListResponse): string {
       batch_count: line.batches.length,
       // Semicolons, never a leading sign: the cell stays text.
       batch_green_grams: line.batches.map((batch) => batch.greenGrams).join('; '),
+      recorded_batches: line.recorded.batches,
+      recorded_green_grams: line.recorded.greenGrams,
+      recorded_roasted_grams: line.recorded.roastedGrams,
+      to_roast_roasted_grams: line.toRoast.roastedGrams,
+      to_roast_green_grams: line.toRoast.greenGrams,
+      to_roast_batch_green_grams: line.toRoast.batches.map((batch) => batch.greenGrams).join('; '),
       lot_pull_green_grams: pull?.greenGrams ?? 0,
       lot_stock_grams: pull?.stockGrams ?? 0,
       lot_shortfall_grams: pull?.shortfallGrams ?? 0,
@@ -141,9 +153,10 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
     .font('Helvetica')
     .fontSize(10)
     .text(
-      list.day.open
+      (list.day.open
         ? `Day capacity ${grams(list.day.capacityGrams)} of green. Planned ${grams(list.totals.greenGrams)} of green in ${list.totals.batches} batches, for ${grams(list.totals.roastedGrams)} roasted.`
-        : `This day is closed on the Roast Calendar. Planned ${grams(list.totals.greenGrams)} of green in ${list.totals.batches} batches.`,
+        : `This day is closed on the Roast Calendar. Planned ${grams(list.totals.greenGrams)} of green in ${list.totals.batches} batches.`) +
+        ` Still to roast: ${grams(list.totals.toRoast.greenGrams)} of green in ${list.totals.toRoast.batches} batches.`,
       { width },
     );
 
@@ -153,13 +166,15 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
   } else {
     table(
       [
-        { title: 'Lot', width: 0.27 },
-        { title: 'Level', width: 0.11 },
-        { title: 'Bags', width: 0.07, align: 'right' },
-        { title: 'Roasted', width: 0.11, align: 'right' },
-        { title: 'Loss', width: 0.12, align: 'right' },
-        { title: 'Green', width: 0.11, align: 'right' },
-        { title: 'Batches (green each)', width: 0.21 },
+        { title: 'Lot', width: 0.2 },
+        { title: 'Level', width: 0.09 },
+        { title: 'Bags', width: 0.06, align: 'right' },
+        { title: 'Roasted', width: 0.09, align: 'right' },
+        { title: 'Loss', width: 0.1, align: 'right' },
+        { title: 'Green', width: 0.09, align: 'right' },
+        { title: 'Batches (green each)', width: 0.13 },
+        { title: 'Recorded', width: 0.12 },
+        { title: 'Still to roast', width: 0.12 },
       ],
       list.lines.map((line) => [
         `${line.lotCode}\n${line.lotName}`,
@@ -169,6 +184,8 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
         `${line.lossPct} % (${line.lossSource === 'lot' ? 'lot' : 'level'})`,
         grams(line.greenGrams),
         line.batches.map((batch) => grams(batch.greenGrams)).join(', '),
+        line.recorded.batches === 0 ? 'None' : `${line.recorded.batches}: ${grams(line.recorded.greenGrams)} in, ${grams(line.recorded.roastedGrams)} out`,
+        line.toRoast.roastedGrams === 0 ? 'Done' : line.toRoast.batches.map((batch) => grams(batch.greenGrams)).join(', '),
       ]),
     );
   }

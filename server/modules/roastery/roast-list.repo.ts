@@ -15,6 +15,8 @@ export interface RoastDayGroup {
   roastLevel: RoastLevel;
   fillGrams: number;
   bags: number;
+  /** Of those, bags already roasted, packed or shipped. */
+  doneBags: number;
   /** Every batch of this lot at this level, on any day: what the loss model learns from. */
   historyBatches: number;
   historyGreenGrams: number;
@@ -23,14 +25,17 @@ export interface RoastDayGroup {
   dayBatches: number;
   dayGreenGrams: number;
   dayRoastedGrams: number;
+  /** Roasted grams of this day's batches that bags have already taken (at packing). */
+  dayAllocatedGrams: number;
 }
 
 /**
- * The orders a roast day roasts: roasted-coffee orders paid or held with that roast date. A
- * Roaster's Rotation line (no lot) takes the lot picked for the day, when there is one.
+ * The orders of a roast day's record: roasted-coffee orders with that roast date that are paid or
+ * held (still to roast) or already roasted, packed or shipped. A Roaster's Rotation line (no lot)
+ * takes the lot picked for the day, when there is one.
  */
 const roastDayOrdersWhere = (roastDate: string) => sql`
-  o.roast_date = ${roastDate} and o.kind = 'roasted' and o.status in ('paid', 'held') and oi.kind = 'roasted'`;
+  o.roast_date = ${roastDate} and o.kind = 'roasted' and o.status in ('paid', 'held', 'roasted', 'packed', 'shipped') and oi.kind = 'roasted'`;
 
 export function createRoastListRepo(db: Db) {
   return {
@@ -41,7 +46,8 @@ export function createRoastListRepo(db: Db) {
     async dayGroups(roastDate: string): Promise<RoastDayGroup[]> {
       const result = await db.execute<Record<string, string | number | null>>(sql`
         with summed as (
-          select oi.lot_id, oi.roast_level, oi.fill_grams, sum(oi.quantity)::int8 as bags
+          select oi.lot_id, oi.roast_level, oi.fill_grams, sum(oi.quantity)::int8 as bags,
+            coalesce(sum(oi.quantity) filter (where o.status in ('roasted', 'packed', 'shipped')), 0)::int8 as done_bags
           from orders o
           join order_items oi on oi.order_id = o.id
           where ${roastDayOrdersWhere(roastDate)}
@@ -49,7 +55,7 @@ export function createRoastListRepo(db: Db) {
         ),
         -- The day's rotation pick joins the few summed groups, not every line.
         day_lines as (
-          select coalesce(s.lot_id, rp.lot_id) as lot_id, s.roast_level, s.fill_grams, s.bags
+          select coalesce(s.lot_id, rp.lot_id) as lot_id, s.roast_level, s.fill_grams, s.bags, s.done_bags
           from summed s
           left join rotation_picks rp on s.lot_id is null and rp.roast_date = ${roastDate}
         ),
@@ -64,13 +70,21 @@ export function createRoastListRepo(db: Db) {
           from batches b
           where b.lot_id in (select lot_id from day_lines where lot_id is not null)
           group by 1, 2
+        ),
+        allocated as (
+          select b.lot_id, b.roast_level, sum(ba.grams)::int8 as grams
+          from batches b
+          join bag_allocations ba on ba.batch_id = b.id
+          where b.roast_date = ${roastDate} and b.lot_id in (select lot_id from day_lines where lot_id is not null)
+          group by 1, 2
         )
-        select l.code, l.name, l.stock_grams, d.roast_level, d.fill_grams, d.bags,
+        select l.code, l.name, l.stock_grams, d.roast_level, d.fill_grams, d.bags, d.done_bags, coalesce(a.grams, 0) as day_allocated,
           coalesce(h.batches, 0) as batches, coalesce(h.green, 0) as green, coalesce(h.roasted, 0) as roasted,
           coalesce(h.day_batches, 0) as day_batches, coalesce(h.day_green, 0) as day_green, coalesce(h.day_roasted, 0) as day_roasted
         from day_lines d
         left join lots l on l.id = d.lot_id
         left join history h on h.lot_id = d.lot_id and h.roast_level = d.roast_level
+        left join allocated a on a.lot_id = d.lot_id and a.roast_level = d.roast_level
       `);
       return result.rows.map((row) => ({
         lotCode: row.code as string | null,
@@ -79,12 +93,14 @@ export function createRoastListRepo(db: Db) {
         roastLevel: row.roast_level as RoastLevel,
         fillGrams: Number(row.fill_grams),
         bags: Number(row.bags),
+        doneBags: Number(row.done_bags),
         historyBatches: Number(row.batches),
         historyGreenGrams: Number(row.green),
         historyRoastedGrams: Number(row.roasted),
         dayBatches: Number(row.day_batches),
         dayGreenGrams: Number(row.day_green),
         dayRoastedGrams: Number(row.day_roasted),
+        dayAllocatedGrams: Number(row.day_allocated),
       }));
     },
 

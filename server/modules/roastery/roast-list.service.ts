@@ -27,10 +27,13 @@ export function roastListFromGroups(
   const lotLoss: Record<string, Partial<Record<RoastLevel, LotLossRecord>>> = {};
   const lotNames = new Map<string, string>();
   const recorded = new Map<string, { batches: number; greenGrams: number; roastedGrams: number }>();
+  const covered: Record<string, Partial<Record<RoastLevel, number>>> = {};
   const unpicked = new Map<RoastLevel, number>();
+  let bagsToRoast = 0;
   for (const group of groups) {
+    bagsToRoast += group.bags - group.doneBags;
     if (group.lotCode === null) {
-      unpicked.set(group.roastLevel, (unpicked.get(group.roastLevel) ?? 0) + group.bags);
+      if (group.bags > group.doneBags) unpicked.set(group.roastLevel, (unpicked.get(group.roastLevel) ?? 0) + group.bags - group.doneBags);
       continue;
     }
     const { lotCode, roastLevel } = group;
@@ -43,6 +46,11 @@ export function roastListFromGroups(
       roastedGramsOut: group.historyRoastedGrams,
     };
     recorded.set(`${lotCode} ${roastLevel}`, { batches: group.dayBatches, greenGrams: group.dayGreenGrams, roastedGrams: group.dayRoastedGrams });
+    // Done bags need no roasting; the day's roast no bag has taken yet covers bags still to pack.
+    // A lot and level come as one group per fill weight, each carrying the same batch figures.
+    const lotCovered = (covered[lotCode] ??= {});
+    const unallocated = lotCovered[roastLevel] === undefined ? Math.max(0, group.dayRoastedGrams - group.dayAllocatedGrams) : 0;
+    lotCovered[roastLevel] = (lotCovered[roastLevel] ?? 0) + unallocated + group.doneBags * group.fillGrams;
   }
 
   const list = buildRoastList({
@@ -51,12 +59,13 @@ export function roastListFromGroups(
     settings,
     lotLoss,
     stockGrams,
+    coveredRoastedGrams: covered,
     // A closed day gets its own warning; measuring it against no capacity would only repeat it.
     dayCapacityGrams: open ? capacityGrams : settings.dayCapacityGrams,
   });
 
   const warnings: RoastListWarning[] = [];
-  if (!open && groups.length > 0) {
+  if (!open && bagsToRoast > 0) {
     warnings.push({ code: 'day_closed', message: `${date} is closed on the Roast Calendar but still has orders to roast.` });
   }
   for (const [roastLevel, bags] of unpicked) {

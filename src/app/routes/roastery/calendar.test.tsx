@@ -13,7 +13,7 @@ afterEach(() => {
 
 const staff = makeUser({ role: 'staff' });
 
-/** An invented December: roasting on Tuesdays and Thursdays, the 3rd with 10 orders. */
+/** An invented December: roasting on Tuesdays and Thursdays, the 3rd with 10 orders, the 1st already roasted. */
 function december(): CalendarDay[] {
   const days: CalendarDay[] = [];
   for (let date = '2026-12-01'; date <= '2026-12-31'; date = addDays(date, 1)) {
@@ -27,6 +27,7 @@ function december(): CalendarDay[] {
       plannedGreenGrams: date === '2026-12-03' ? 18_240 : 0,
       note: date === '2026-12-24' ? 'Holiday (invented)' : null,
       ordersCount: date === '2026-12-03' ? 10 : 0,
+      roasted: date === '2026-12-01' ? { batches: 3, greenGrams: 14_200, roastedGrams: 12_070 } : { batches: 0, greenGrams: 0, roastedGrams: 0 },
       overridden: date === '2026-12-24',
     });
   }
@@ -80,6 +81,10 @@ describe('Roast Calendar', () => {
     const holiday = within(grid).getByText('Thursday, December 24', { selector: 'time > span' }).closest('td') as HTMLElement;
     expect(holiday.textContent).toContain('Closed');
     expect(holiday.textContent).toContain('Holiday (invented)');
+    // A day with recorded batches shows what it roasted instead of its planned load.
+    const roasted = within(grid).getByText('Tuesday, December 1', { selector: 'time > span' }).closest('td') as HTMLElement;
+    expect(roasted.textContent).toContain('Roasted 14.2 kg green in 3 batches, 12.1 kg out');
+    expect(roasted.textContent).not.toContain('of 48 kg green');
     expect(within(grid).getByRole('link', { name: 'Day Sheet for Thursday, December 3' }).getAttribute('href')).toBe('/roastery/days/2026-12-03');
     expect(requestedUrls(fetchMock)).toContain('/api/roastery/calendar?from=2026-12-01&to=2026-12-31');
   });

@@ -33,6 +33,7 @@ const roastList: RoastListResponse = {
       greenGrams: 4_635,
       batches: [{ greenGrams: 4_635 }],
       recorded: { batches: 0, greenGrams: 0, roastedGrams: 0 },
+      toRoast: { roastedGrams: 3_862, greenGrams: 4_635, batches: [{ greenGrams: 4_635 }] },
     },
     {
       lotCode: 'RD-T02',
@@ -45,13 +46,14 @@ const roastList: RoastListResponse = {
       greenGrams: 2_126,
       batches: [{ greenGrams: 2_126 }],
       recorded: { batches: 0, greenGrams: 0, roastedGrams: 0 },
+      toRoast: { roastedGrams: 1_816, greenGrams: 2_126, batches: [{ greenGrams: 2_126 }] },
     },
   ],
   pull: [
     { lotCode: 'RD-T01', lotName: 'Test Ridge Washed', greenGrams: 4_635, stockGrams: 18_400, shortfallGrams: 0 },
     { lotCode: 'RD-T02', lotName: 'Invented Valley Natural', greenGrams: 2_126, stockGrams: 1_500, shortfallGrams: 626 },
   ],
-  totals: { roastedGrams: 5_678, greenGrams: 6_761, batches: 2 },
+  totals: { roastedGrams: 5_678, greenGrams: 6_761, batches: 2, toRoast: { roastedGrams: 5_678, greenGrams: 6_761, batches: 2 } },
   warnings: [
     { code: 'below_preferred_load', message: 'Test Ridge Washed, medium: 4,635 g is below the preferred 6,000 g load.', lotCode: 'RD-T01', roastLevel: 'medium' },
     { code: 'green_shortfall', message: 'Invented Valley Natural is 626 g short.', lotCode: 'RD-T02' },

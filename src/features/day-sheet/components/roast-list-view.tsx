@@ -25,7 +25,8 @@ const lossSourceLabels = { level: 'level default', lot: 'this lot’s batches' }
 function LineRows({ line, date }: { line: RoastListLine; date: string }) {
   const [recording, setRecording] = useState(false);
   const formRowId = `record-${line.lotCode}-${line.roastLevel}`;
-  const nextLoad = line.batches[line.recorded.batches]?.greenGrams;
+  const nextLoad = line.toRoast.batches[0]?.greenGrams;
+  const done = line.toRoast.roastedGrams === 0;
   return (
     <Fragment>
       <tr>
@@ -52,8 +53,16 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
         <td className={cell}>
           {line.recorded.batches} of {line.batches.length}
           {line.recorded.batches > 0 ? (
-            <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.recorded.roastedGrams)} out</span>
+            <span className="block text-small text-ink-muted print:text-black">
+              {formatExactGrams(line.recorded.greenGrams)} in, {formatExactGrams(line.recorded.roastedGrams)} out
+            </span>
           ) : null}
+        </td>
+        <td className={cell}>
+          {done ? 'Done' : describeLoads(line.toRoast.batches)}
+          {done ? null : (
+            <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>
+          )}
         </td>
         <td className={`${cell} print:hidden`}>
           <Button variant="secondary" className="whitespace-nowrap" aria-expanded={recording} aria-controls={formRowId} onClick={() => setRecording((open) => !open)}>
@@ -66,7 +75,7 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
         </td>
       </tr>
       <tr id={formRowId} hidden={!recording} className="print:hidden">
-        <td colSpan={9} className="border-b border-rule bg-paper px-3 py-4">
+        <td colSpan={10} className="border-b border-rule bg-paper px-3 py-4">
           {recording ? (
             <RecordBatchForm line={{ roastDate: date, lotCode: line.lotCode, lotName: line.lotName, roastLevel: line.roastLevel }} suggestedGreenGrams={nextLoad} />
           ) : null}
@@ -77,10 +86,11 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
 }
 
 function Totals({ roastList }: { roastList: RoastListResponse }) {
+  const { totals } = roastList;
   const facts = [
-    ['Roasted coffee needed', formatExactGrams(roastList.totals.roastedGrams)],
-    ['Green to pull', formatExactGrams(roastList.totals.greenGrams)],
-    ['Batches', String(roastList.totals.batches)],
+    ['Roasted coffee planned', formatExactGrams(totals.roastedGrams)],
+    ['Green still to pull', formatExactGrams(totals.toRoast.greenGrams)],
+    ['Batches still to roast', totals.toRoast.batches === totals.batches ? String(totals.batches) : `${totals.toRoast.batches} of ${totals.batches} planned`],
     ['Day capacity', roastList.day.open ? `${formatExactGrams(roastList.day.capacityGrams)} green` : 'Closed'],
   ] as const;
   return (
@@ -158,6 +168,7 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
                   <th scope="col" className={`${headCell} text-right`}>Green</th>
                   <th scope="col" className={headCell}>Batches</th>
                   <th scope="col" className={headCell}>Recorded</th>
+                  <th scope="col" className={headCell}>Still to roast</th>
                   <th scope="col" className={`${headCell} print:hidden`}>
                     <span className="sr-only">Actions</span>
                   </th>
@@ -173,38 +184,42 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
         </section>
       )}
 
-      {roastList.pull.length > 0 ? (
+      {roastList.lines.length > 0 ? (
         <section aria-labelledby="pull-list" className="print-section mb-8">
           <h2 id="pull-list" className="mb-3 text-h3">
             Pull list
           </h2>
-          <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">
-            <table className="w-full border-collapse">
-              <thead>
-                <tr>
-                  <th scope="col" className={headCell}>Lot</th>
-                  <th scope="col" className={`${headCell} text-right`}>Green to pull</th>
-                  <th scope="col" className={`${headCell} text-right`}>In stock</th>
-                  <th scope="col" className={`${headCell} text-right`}>Short by</th>
-                </tr>
-              </thead>
-              <tbody>
-                {roastList.pull.map((pull) => (
-                  <tr key={pull.lotCode}>
-                    <th scope="row" className={`${cell} font-semibold`}>
-                      {pull.lotName}
-                      <span className="block text-small font-normal text-ink-muted print:text-black">{pull.lotCode}</span>
-                    </th>
-                    <td className={numberCell}>{formatExactGrams(pull.greenGrams)}</td>
-                    <td className={numberCell}>{formatExactGrams(pull.stockGrams)}</td>
-                    <td className={`${numberCell} ${pull.shortfallGrams > 0 ? 'font-semibold text-alert print:text-black' : ''}`}>
-                      {pull.shortfallGrams > 0 ? formatExactGrams(pull.shortfallGrams) : 'None'}
-                    </td>
+          {roastList.pull.length === 0 ? (
+            <p className="text-ink-muted print:text-black">Everything on this list is roasted: no green left to pull.</p>
+          ) : (
+            <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">
+              <table className="w-full border-collapse">
+                <thead>
+                  <tr>
+                    <th scope="col" className={headCell}>Lot</th>
+                    <th scope="col" className={`${headCell} text-right`}>Green to pull</th>
+                    <th scope="col" className={`${headCell} text-right`}>In stock</th>
+                    <th scope="col" className={`${headCell} text-right`}>Short by</th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+                </thead>
+                <tbody>
+                  {roastList.pull.map((pull) => (
+                    <tr key={pull.lotCode}>
+                      <th scope="row" className={`${cell} font-semibold`}>
+                        {pull.lotName}
+                        <span className="block text-small font-normal text-ink-muted print:text-black">{pull.lotCode}</span>
+                      </th>
+                      <td className={numberCell}>{formatExactGrams(pull.greenGrams)}</td>
+                      <td className={numberCell}>{formatExactGrams(pull.stockGrams)}</td>
+                      <td className={`${numberCell} ${pull.shortfallGrams > 0 ? 'font-semibold text-alert print:text-black' : ''}`}>
+                        {pull.shortfallGrams > 0 ? formatExactGrams(pull.shortfallGrams) : 'None'}
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          )}
         </section>
       ) : null}
     </div>

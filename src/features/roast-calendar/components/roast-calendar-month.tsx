@@ -30,6 +30,15 @@ function LoadBar({ day }: { day: CalendarDay }) {
   );
 }
 
+/** A day's record from its recorded batches: what went into the roaster and what came out. */
+function RoastedFigures({ roasted }: { roasted: CalendarDay['roasted'] }) {
+  return (
+    <p className="mt-1 text-caption tabular-nums">
+      Roasted {formatLoad(roasted.greenGrams)} green in {roasted.batches} {roasted.batches === 1 ? 'batch' : 'batches'}, {formatLoad(roasted.roastedGrams)} out
+    </p>
+  );
+}
+
 function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isToday: boolean; isSelected: boolean; onChange: () => void }) {
   const dayNumber = Number(day.date.slice(8));
   const state = day.open ? 'Roast day' : day.overridden ? 'Closed' : 'No roasting';
@@ -45,7 +54,7 @@ function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isT
         </time>
         <span className={clsx('text-caption font-semibold', day.open ? 'text-ok' : 'text-ink-muted')}>{state}</span>
       </div>
-      {day.open ? <LoadBar day={day} /> : null}
+      {day.roasted.batches > 0 ? <RoastedFigures roasted={day.roasted} /> : day.open ? <LoadBar day={day} /> : null}
       {day.ordersCount > 0 ? (
         <p className="text-caption">
           {day.ordersCount} {day.ordersCount === 1 ? 'order' : 'orders'}
