@@ -42,7 +42,8 @@ import { createSubscriptionsRepo } from './modules/subscriptions/subscriptions.r
 import { subscriptionCheckoutRoutes, subscriptionsRoutes } from './modules/subscriptions/subscriptions.routes';
 import { createSubscriptionsService } from './modules/subscriptions/subscriptions.service';
 import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
-import { sendJob } from './jobs/registry';
+import { sendJob, sendJobsDueBetween } from './jobs/registry';
+import { jobs } from './jobs/workers';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
 import { createRoasteryServices, roasteryRoutes } from './modules/roastery/roastery.routes';
@@ -186,7 +187,9 @@ export function createApp(deps: AppDeps): Express {
   api.use(traceRoutes(createTraceService(createTraceRepo(database.db))));
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
-    api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger)));
+    const { queue } = deps;
+    const runDueJobs = queue ? (from: Date, to: Date) => sendJobsDueBetween(queue, jobs, from, to) : undefined;
+    api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger, runDueJobs)));
   }
   api.use(apiNotFound);
   api.use(accounts.auditDenials);

@@ -1,3 +1,4 @@
+import cronParser from 'cron-parser';
 import type PgBoss from 'pg-boss';
 import type { Config } from '../config';
 import type { Db } from '../db/client';
@@ -109,4 +110,24 @@ export async function workJobs(
   return async () => {
     for (const job of jobs) await boss.offWork(job.name);
   };
+}
+
+/**
+ * The scheduled jobs whose cron fires at least once after `from` and at or before `to`: what the
+ * schedule would have run had the clock moved through that span. A move backwards is due nothing.
+ */
+export function jobsDueBetween(jobs: readonly AnyJob[], from: Date, to: Date): AnyJob[] {
+  if (to.getTime() <= from.getTime()) return [];
+  return jobs.filter((job) => {
+    if (!job.schedule) return false;
+    const next = cronParser.parseExpression(job.schedule.cron, { currentDate: from, ...(job.schedule.tz ? { tz: job.schedule.tz } : {}) }).next();
+    return next.getTime() <= to.getTime();
+  });
+}
+
+/** Queues one run of each scheduled job due between two instants (after a test clock move). */
+export async function sendJobsDueBetween(queue: Queue, jobs: readonly AnyJob[], from: Date, to: Date): Promise<string[]> {
+  const due = jobsDueBetween(jobs, from, to);
+  for (const job of due) await queue.boss.send(job.name, job.schedule?.data ?? {});
+  return due.map((job) => job.name);
 }

@@ -4,6 +4,9 @@ import { z } from 'zod';
 export const devClockBodySchema = z.object({ now: z.iso.datetime({ offset: true }) });
 export type DevClockBody = z.infer<typeof devClockBodySchema>;
 
-/** The clock's reading right after the move. */
-export const devClockResponseSchema = z.object({ now: z.iso.datetime({ offset: true }) });
+/**
+ * The clock's reading right after the move, and the scheduled jobs the move made due (queued once
+ * each, as their schedule would have run them; none on a server without a queue).
+ */
+export const devClockResponseSchema = z.object({ now: z.iso.datetime({ offset: true }), dueJobs: z.array(z.string()) });
 export type DevClockResponse = z.infer<typeof devClockResponseSchema>;

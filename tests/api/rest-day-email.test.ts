@@ -1,7 +1,8 @@
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { instantAt } from '@shared/domain/shop-time';
+import { devClockResponseSchema } from '@shared/schemas/dev-clock';
 import { orders } from '../../server/db/schema/index';
 import { createDatabase } from '../../server/db/client';
 import { startQueue, type Queue } from '../../server/jobs/queue';
@@ -109,4 +110,49 @@ describe('the rest-day e-mail job', () => {
     expect(await readyMail(refunded)).toEqual([]);
     expect(await outboxRows(keys)).toHaveLength(1);
   });
+
+  it('runs by itself when the test clock moves past the ready-from morning: the e-mail arrives within seconds, once', async () => {
+    // This app queues the jobs a clock move makes due, as `npm start` with the test clock does.
+    const appWithQueue = createTestApp({ env: { RESTDAY_TEST_CLOCK: 'true' }, clock, queue });
+    const { settings } = await loadShopSettings(getTestDb());
+    const move = async (date: string, time: string) => {
+      const response = await request(appWithQueue).post('/api/dev/clock').set('X-Restday-Client', 'web').send({ now: instantAt(date, time, settings.timeZone).toISOString() });
+      expect(response.status).toBe(200);
+      return devClockResponseSchema.parse(response.body);
+    };
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    const readyFrom = dayAfter(roastDate, 4);
+    await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'medium', roastedGramsOut: 5000 });
+    const customer = await createTestUser('customer');
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 1, roastLevel: 'medium', brewMethod: 'filter' }] });
+    expect(order.readyFrom).toBe(readyFrom);
+
+    await move(dayAfter(roastDate, 1), '10:00');
+    const staff = await signedInAgent(appWithQueue, staffMember);
+    expect((await staff.post(`/api/orders/${order.id}/pack`)).status).toBe(200);
+    expect((await staff.post(`/api/orders/${order.id}/ship`).send({ carrier: 'Invented Parcel Co', trackingNumber: 'RD124' })).status).toBe(200);
+
+    // The job runs every ten minutes (its cron), so a move across the ready-from morning makes it due.
+    const moved = await move(readyFrom, '09:00');
+    expect(moved.dueJobs).toContain(restDayEmailsJob.name);
+    const arrived = await waitFor(() => readyMail(customer), (mail) => mail.length > 0, 10_000, 'the rest-day e-mail after the clock move');
+    expect(arrived).toHaveLength(1);
+
+    // Moving on again runs the job again (its queue drains), and it sends nothing twice.
+    const again = await move(readyFrom, '11:00');
+    expect(again.dueJobs).toContain(restDayEmailsJob.name);
+    await waitFor(() => pendingRestDayJobs(), (count) => count === 0, 20_000, 'the rest-day jobs to finish');
+    await waitFor(() => outboxRows([`rest-day:${order.id}`]), (rows) => rows.every((row) => row.status === 'sent'), 10_000, 'the outbox to settle');
+    expect(await readyMail(customer)).toHaveLength(1);
+    expect(await outboxRows([`rest-day:${order.id}`])).toHaveLength(1);
+  });
 });
+
+/** Rest-day jobs queued on pg-boss and not yet finished. */
+async function pendingRestDayJobs(): Promise<number> {
+  const result = await getTestDb().execute<{ count: string }>(
+    sql`select count(*) as count from pgboss.job where name = ${restDayEmailsJob.name} and state in ('created', 'retry', 'active')`,
+  );
+  return Number(result.rows[0]?.count ?? 0);
+}

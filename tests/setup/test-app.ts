@@ -3,6 +3,7 @@ import { inject } from 'vitest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { createAdjustableClock, type Clock } from '../../server/lib/clock';
+import type { Queue } from '../../server/jobs/queue';
 import { createLogger, type Logger } from '../../server/lib/logger';
 import { getTestDatabase } from './test-db';
 
@@ -11,6 +12,8 @@ export interface TestAppOptions {
   env?: Record<string, string>;
   clock?: Clock;
   logger?: Logger;
+  /** The job queue, for tests whose requests queue jobs (e.g. a test clock move runs due jobs). */
+  queue?: Queue;
 }
 
 /** createApp() on the test database, as API tests use it through supertest. */
@@ -31,5 +34,6 @@ export function createTestApp(options: TestAppOptions = {}): Express {
     database: getTestDatabase(),
     logger: options.logger ?? createLogger(config),
     clock: options.clock ?? createAdjustableClock(),
+    ...(options.queue ? { queue: options.queue } : {}),
   });
 }

@@ -12,7 +12,7 @@ export function devClockRoutes(service: DevClockService): Router {
   router.post('/', async (req, res) => {
     const { now } = devClockBodySchema.parse(req.body);
     const moved = await service.move(new Date(now));
-    res.json({ now: moved.toISOString() } satisfies DevClockResponse);
+    res.json({ now: moved.now.toISOString(), dueJobs: moved.dueJobs } satisfies DevClockResponse);
   });
   return router;
 }

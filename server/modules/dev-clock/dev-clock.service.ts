@@ -9,10 +9,17 @@ export function isAdjustableClock(clock: Clock): clock is AdjustableClock {
   return typeof (clock as Partial<AdjustableClock>).set === 'function';
 }
 
-export function createDevClockService(clock: AdjustableClock, repo: DevClockRepo, logger: Logger) {
+/**
+ * Called after each move with the instants before and after it: runs what the schedule would have
+ * run in between (scheduled jobs are sweeps, so one run catches up however far the clock moved).
+ */
+export type OnClockMoved = (from: Date, to: Date) => Promise<string[]>;
+
+export function createDevClockService(clock: AdjustableClock, repo: DevClockRepo, logger: Logger, onMoved?: OnClockMoved) {
   return {
     /** Moves "now" here and in every worker process; time keeps running from the new instant. */
-    async move(now: Date): Promise<Date> {
+    async move(now: Date): Promise<{ now: Date; dueJobs: string[] }> {
+      const before = clock.now();
       clock.set(now);
       try {
         await repo.broadcast(CLOCK_CHANNEL, now.getTime() - Date.now());
@@ -20,7 +27,8 @@ export function createDevClockService(clock: AdjustableClock, repo: DevClockRepo
         // This process's clock has moved; workers elsewhere catch up on the next move.
         logger.warn({ err: error }, 'could not announce the test clock move to other processes');
       }
-      return clock.now();
+      const dueJobs = (await onMoved?.(before, now)) ?? [];
+      return { now: clock.now(), dueJobs };
     },
   };
 }

@@ -115,7 +115,9 @@ export function createOutboxRelay(deps: OutboxRelayDeps) {
   async function recordSent(row: ClaimedEmail): Promise<void> {
     for (let attempt = 1; ; attempt++) {
       try {
-        const held = await repo.markSent(row.id, row.attempts, clock.now());
+        // A record of when the mail left, on the wall clock like the row's createdAt: the test
+        // clock only decides when a row is due (sendAfter), never what the record says happened.
+        const held = await repo.markSent(row.id, row.attempts, new Date());
         if (!held) logger.warn({ outboxId: row.id }, 'outbox row was taken over by another relay after its lease ran out; it may be sent twice');
         return;
       } catch (error) {
