@@ -60,6 +60,9 @@ type Counted = 'every request' | 'failures only';
 
 const PURGE_EVERY_HITS = 500;
 
+const isOurFailure = (status: number) => status >= 500 || status === 429;
+const isClientFailure = (status: number) => status >= 400 && !isOurFailure(status);
+
 export interface AuthThrottleDeps {
   config: Pick<Config, 'AUTH_THROTTLE_WINDOW_MINUTES' | 'AUTH_THROTTLE_PER_ACCOUNT' | 'AUTH_THROTTLE_PER_IP'>;
   repo: ThrottleRepo;
@@ -90,7 +93,12 @@ export function createAuthThrottles({ config, repo, clock, logger, audit }: Auth
       limit,
       keyGenerator: key,
       store: new PostgresThrottleStore(`${bucket}:`, repo, clock, purgeNowAndThen),
-      skipSuccessfulRequests: counted === 'failures only',
+      // Failures-only buckets count the client's failures (a wrong password, an unknown account, a
+      // bad token); every-request buckets count every answer. Neither counts an outage (5xx, 503)
+      // or a 429: they say nothing about the client, so they never fill a bucket.
+      ...(counted === 'failures only'
+        ? { skipSuccessfulRequests: true, requestWasSuccessful: (_req: Request, res: { statusCode: number }) => !isClientFailure(res.statusCode) }
+        : { skipFailedRequests: true, requestWasSuccessful: (_req: Request, res: { statusCode: number }) => !isOurFailure(res.statusCode) }),
       standardHeaders: 'draft-7',
       legacyHeaders: false,
       // The window is read from the server's Clock, so Retry-After is too.
