@@ -43,6 +43,7 @@ import { subscriptionCheckoutRoutes, subscriptionsRoutes } from './modules/subsc
 import { createSubscriptionsService } from './modules/subscriptions/subscriptions.service';
 import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
 import { sendJob, sendJobsDueBetween } from './jobs/registry';
+import { refuseUnstorableText } from './middleware/refuse-unstorable-text';
 import { jobs } from './jobs/workers';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
@@ -136,7 +137,13 @@ export function createApp(deps: AppDeps): Express {
   const paymentsRepo = createPaymentsRepo(database.db);
   // Before express.json and the client-header check: Stripe signs the raw body, and that signature is its authentication.
   api.use('/payments', paymentsWebhookRoutes(createPaymentEventsService({ repo: paymentsRepo, gateway: paymentsGateway, clock: deps.clock, logger, config })));
+  // Personal and staff answers must never sit in a shared cache; public reads that may be kept say so themselves.
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   api.use(express.json({ limit: '100kb' }));
+  api.use(refuseUnstorableText);
   api.use(requireClientHeader(config));
   api.use('/health', healthRoutes(deps));
   const accounts = createAccountsModule(deps);

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 
 /** Body of `POST /api/dev/clock` (mounted only when the server runs with RESTDAY_TEST_CLOCK on). */
-export const devClockBodySchema = z.object({ now: z.iso.datetime({ offset: true }) });
+export const devClockBodySchema = z.object({
+  now: z.iso
+    .datetime({ offset: true })
+    .refine((now) => Date.parse(now) >= Date.parse('2000-01-01T00:00:00Z') && Date.parse(now) < Date.parse('2101-01-01T00:00:00Z'), 'Use an instant between 2000 and 2100.'),
+});
 export type DevClockBody = z.infer<typeof devClockBodySchema>;
 
 /**

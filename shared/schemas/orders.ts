@@ -1,8 +1,7 @@
 import { z } from 'zod';
-import { isIsoDate } from '../domain/shop-time';
+import { isoDate } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
-const isoDate = (what: string) => z.string().refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 
 /** `status` follows an order's life (awaiting payment first, refunded last); roast-date sorts put orders without a roast date last. */
 export const orderSorts = ['newest', 'oldest', 'total-high', 'total-low', 'roast-date-soonest', 'roast-date-latest', 'status'] as const;

@@ -1,8 +1,7 @@
 import { z } from 'zod';
-import { isIsoDate } from '../domain/shop-time';
+import { isoDate } from './dates';
 import { bagSizes, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
-const isoDate = (what: string) => z.string().refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 const instant = z.iso.datetime({ offset: true });
 
 /** Path of `GET /api/roastery/days/:date/pack-list` and `…/labels.pdf`: a ship day in shop time. */

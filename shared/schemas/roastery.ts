@@ -1,6 +1,7 @@
 import { z } from 'zod';
+import { areValidDates, isoDate } from './dates';
 import { MAX_CALENDAR_SPAN_DAYS } from '../domain/roast-schedule';
-import { daysBetween, isIsoDate } from '../domain/shop-time';
+import { daysBetween } from '../domain/shop-time';
 import { roastLevels, weekdays } from '../domain/vocabulary';
 
 /**
@@ -8,7 +9,6 @@ import { roastLevels, weekdays } from '../domain/vocabulary';
  * and the batches staff record. The shop settings are `shopSettingsSchema` in ./settings.
  */
 
-const isoDate = (what: string) => z.string().refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 const wholeGrams = z.number().int().min(0);
 
 /** Path parameter of every `/api/roastery/days/:date/…` and `/api/roastery/calendar/:date` route. */
@@ -22,7 +22,7 @@ export type RoastDayParams = z.infer<typeof roastDayParamsSchema>;
 export const calendarQuerySchema = z
   .object({ from: isoDate('date'), to: isoDate('date') })
   .refine((query) => query.from <= query.to, { message: 'The first day must not be after the last.', path: ['to'] })
-  .refine((query) => query.from > query.to || daysBetween(query.from, query.to) < MAX_CALENDAR_SPAN_DAYS, {
+  .refine((query) => !areValidDates(query.from, query.to) || query.from > query.to || daysBetween(query.from, query.to) < MAX_CALENDAR_SPAN_DAYS, {
     message: `Ask for at most ${MAX_CALENDAR_SPAN_DAYS} days at a time.`,
     path: ['to'],
   });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { daysBetween, isIsoDate } from '../domain/shop-time';
+import { areValidDates, isoDate } from './dates';
+import { daysBetween } from '../domain/shop-time';
 
-const isoDate = (what: string) => z.string({ error: `Enter a ${what}.` }).refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 
 /** Longest range `GET /api/roastery/rotation` answers at once. */
 export const maxRotationSpanDays = 92;
@@ -10,7 +10,7 @@ export const maxRotationSpanDays = 92;
 export const rotationQuerySchema = z
   .object({ from: isoDate('first day'), to: isoDate('last day') })
   .refine((query) => query.from <= query.to, { message: 'The first day must not be after the last.', path: ['to'] })
-  .refine((query) => daysBetween(query.from, query.to) < maxRotationSpanDays, {
+  .refine((query) => !areValidDates(query.from, query.to) || query.from > query.to || daysBetween(query.from, query.to) < maxRotationSpanDays, {
     message: `Ask for at most ${maxRotationSpanDays} days at once.`,
     path: ['to'],
   });

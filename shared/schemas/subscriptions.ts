@@ -1,10 +1,9 @@
 import { z } from 'zod';
-import { isIsoDate } from '../domain/shop-time';
+import { isoDate } from './dates';
 import { brewMethods, deliveryStatuses, grinds, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
 import { shippingAddressSchema } from './checkout';
 import { orderAddressSchema } from './orders';
 
-const isoDate = (what: string) => z.string({ error: `Enter a ${what}.` }).refine(isIsoDate, `Use a ${what} like 2026-12-01.`);
 
 /** Most bags in one delivery. */
 export const maxBagsPerDelivery = 10;

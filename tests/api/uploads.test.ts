@@ -15,6 +15,7 @@ import { createTestUser, signedInAgent } from '../setup/test-users';
 const tag = randomUUID().slice(0, 6).toUpperCase();
 const code = `${tag}-FILES`;
 const MB = 1024 * 1024;
+let uploadsRoot: string;
 let uploadsDir: string;
 let app: ReturnType<typeof createTestApp>;
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -26,7 +27,9 @@ const webp = Buffer.concat([Buffer.from('RIFF'), Buffer.from([0x1c, 0, 0, 0]), B
 const pdf = Buffer.from('%PDF-1.7\n% invented spec sheet\n%%EOF\n');
 
 beforeAll(async () => {
-  uploadsDir = await mkdtemp(path.join(tmpdir(), 'restday-uploads-'));
+  uploadsRoot = await mkdtemp(path.join(tmpdir(), 'restday-uploads-'));
+  // Inside a dot folder, as the default UPLOADS_DIR (.data/uploads) is under `npm start`.
+  uploadsDir = path.join(uploadsRoot, '.data', 'uploads');
   app = createTestApp({ env: { UPLOADS_DIR: uploadsDir } });
   staff = await signedInAgent(app, await createTestUser('staff'));
   const created = await staff.post('/api/lots').send({
@@ -48,7 +51,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await rm(uploadsDir, { recursive: true, force: true });
+  await rm(uploadsRoot, { recursive: true, force: true });
 });
 
 async function uploadPhoto(bytes: Buffer, name: string) {

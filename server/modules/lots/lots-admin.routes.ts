@@ -1,5 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
+import { isStorableText, unstorableTextMessage } from '@shared/schemas/text';
 import { z } from 'zod';
 import type { GreenStockResponse } from '@shared/schemas/green-stock';
 import {
@@ -35,7 +36,9 @@ function singleFile(maxBytes: number, described: string): RequestHandler {
         }
         return next(new AppError(400, 'invalid_upload', `Send ${described} as the one multipart field "file".`, { file: error.message }));
       }
-      next(error);
+      // Anything else the multipart parser throws (no or wrong boundary, a broken part header, a cut-off body) is the request's fault.
+      if (error) return next(new AppError(400, 'invalid_upload', `Send ${described} as a multipart/form-data body with the field "file".`, { file: 'could not be read' }));
+      next();
     });
   };
 }
@@ -43,6 +46,7 @@ function singleFile(maxBytes: number, described: string): RequestHandler {
 /** The file multer read; a request without one is a 400. */
 function uploadedFile(file: Express.Multer.File | undefined): UploadedFile {
   if (!file) throw new AppError(400, 'file_required', 'Send the file as the multipart field "file".', { file: 'is required' });
+  if (!isStorableText(file.originalname)) throw AppError.badRequest('The file name has characters Restday cannot store.', { file: unstorableTextMessage });
   return { buffer: file.buffer, originalname: file.originalname, size: file.size };
 }
 

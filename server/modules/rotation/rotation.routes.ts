@@ -1,11 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { isIsoDate } from '@shared/domain/shop-time';
+import { isoDate } from '@shared/schemas/dates';
 import { rotationPickSchema, rotationQuerySchema, type RotationPickResponse, type RotationResponse } from '@shared/schemas/rotation';
 import { requireRole } from '../../middleware/require-role';
 import type { RotationService } from './rotation.service';
 
-const dayParams = z.object({ date: z.string().refine(isIsoDate, 'Use a roast date like 2026-12-01.') });
+const dayParams = z.object({ date: isoDate('roast date') });
 
 /** The Roaster's Rotation in the Roastery (staff): `/api/roastery/rotation` and `…/rotation/:date`. */
 export function rotationRoutes(service: RotationService): Router {

@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { Router } from 'express';
 import { z } from 'zod';
 import { AppError } from '../../lib/app-error';
@@ -21,7 +22,10 @@ export function uploadsRoutes(service: UploadsService): Router {
     res.setHeader('X-Content-Type-Options', 'nosniff');
     res.setHeader('Content-Disposition', file.disposition);
     res.setHeader('Content-Security-Policy', "default-src 'none'; sandbox");
-    res.sendFile(file.path, { maxAge: YEAR_SECONDS * 1000, immutable: true, dotfiles: 'deny' }, (error) => {
+    // A file never changes under its id, so this one answer may be kept (the API's default is no-store).
+    res.removeHeader('Cache-Control');
+    // Only the file's own name is checked for a leading dot: the uploads folder itself may be one (.data/uploads).
+    res.sendFile(path.basename(file.path), { root: path.dirname(file.path), maxAge: YEAR_SECONDS * 1000, immutable: true, dotfiles: 'deny' }, (error) => {
       if (!error) return;
       for (const header of ['Content-Type', 'Content-Disposition', 'Cache-Control']) res.removeHeader(header);
       if ((error as NodeJS.ErrnoException).code === 'ENOENT') return next(new AppError(404, 'upload_not_found', 'No such file.'));
