@@ -84,15 +84,20 @@ export function createDatabase(options: DatabaseOptions): Database {
 
 const unavailableCodes = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'ENOTFOUND', 'EPIPE', '57P01', '57P02', '57P03', '08006', '08001', '08003']);
 
+/**
+ * What node-postgres says when a request reaches a connection that already broke: its own words
+ * (no SQLSTATE), seen on the query after a drop and on the ROLLBACK a failed transaction then sends.
+ */
+const brokenConnectionMessages =
+  /timeout exceeded when trying to connect|Connection terminated|is not queryable|Client was closed|Cannot use a pool after calling end/i;
+
 /** Connection-level failures: the database is down or restarting, not the request's fault. */
 export function isDatabaseUnavailable(error: unknown): boolean {
   let current: unknown = error;
   for (let depth = 0; current && depth < 5; depth++) {
     const candidate = current as { code?: string; message?: string; cause?: unknown };
     if (candidate.code && unavailableCodes.has(candidate.code)) return true;
-    if (typeof candidate.message === 'string' && /timeout exceeded when trying to connect|Connection terminated/i.test(candidate.message)) {
-      return true;
-    }
+    if (typeof candidate.message === 'string' && brokenConnectionMessages.test(candidate.message)) return true;
     current = candidate.cause;
   }
   return false;
