@@ -10,7 +10,7 @@ import type { Queue } from './jobs/queue';
 import type { Clock } from './lib/clock';
 import type { Logger } from './lib/logger';
 import { AppError } from './lib/app-error';
-import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { apiNotFound, briefError, errorHandler } from './middleware/error-handler';
 import { requireClientHeader } from './middleware/require-client-header';
 import { createDevClockRepo } from './modules/dev-clock/dev-clock.repo';
 import { devClockRoutes } from './modules/dev-clock/dev-clock.routes';
@@ -102,7 +102,10 @@ export function createApp(deps: AppDeps): Express {
         return id;
       },
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+      // One line per failed request: its status and what failed, without the stack (the error handler logs that at debug).
+      customErrorMessage: (_req, res) => `request failed with ${res.statusCode}`,
       serializers: {
+        err: briefError,
         req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },

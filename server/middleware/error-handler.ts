@@ -33,10 +33,30 @@ function toAppError(error: unknown): AppError | undefined {
   return undefined;
 }
 
+/**
+ * How a failure reads on the request's one log line: what it was and its first cause (a failed
+ * query's cause says why; the query text would only repeat the route), never a stack.
+ */
+export function briefError(error: unknown): Record<string, unknown> {
+  type Failure = { name?: string; constructor?: { name?: string }; message?: string; code?: unknown; cause?: unknown };
+  const top = (error ?? {}) as Failure;
+  let root = top;
+  for (let depth = 0; root.cause && typeof root.cause === 'object' && depth < 5; depth++) root = root.cause as Failure;
+  const message = String(root.message ?? error).slice(0, 300);
+  const code = root.code ?? top.code;
+  return { type: top.name ?? top.constructor?.name ?? typeof error, message, ...(code === undefined ? {} : { code }) };
+}
+
+/**
+ * Answers every failure in the one error shape. The request's log line (pino-http's, when the
+ * response ends) carries the failure once; a 5xx's stack goes to debug, for whoever turns it on.
+ */
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   const known = toAppError(error);
-  if (known && known.status < 500) req.log.info({ code: known.code }, known.message);
-  else req.log.error({ err: error }, 'request failed');
+  if (!known || known.status >= 500) {
+    res.err = error instanceof Error ? error : new Error(String(error));
+    req.log.debug({ stack: (error as { stack?: string } | undefined)?.stack }, 'stack of the failed request');
+  }
 
   const appError = known ?? new AppError(500, 'internal_error', 'Something went wrong on our side. Please try again.');
   const body: ApiErrorBody = { error: { code: appError.code, message: appError.message } };
