@@ -123,7 +123,7 @@ function bagsIn(plan: ShippingPlan): Map<string, number> {
 describe('any order', () => {
   it('holds every bag whole, keeps every parcel within the heaviest band, and costs no more than first-fit', () => {
     const fill = fc.constantFrom(227, 341, 454, 908, 2268);
-    const contents = fc.uniqueArray(fc.record({ key: fc.constantFrom('a', 'b', 'c', 'd', 'e', 'f'), fillGrams: fill, quantity: fc.integer({ min: 1, max: 12 }) }), {
+    const contents = fc.uniqueArray(fc.record({ key: fc.constantFrom<string>('a', 'b', 'c', 'd', 'e', 'f'), fillGrams: fill, quantity: fc.integer({ min: 1, max: 12 }) }), {
       maxLength: 6,
       selector: (item) => item.key,
     });

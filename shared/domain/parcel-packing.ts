@@ -7,9 +7,10 @@
  *   weight bands, each parcel listing its bags, weight, band and price.
  * - `firstFitPacking(contents, shipping)`: the plain packing a packer would make without thinking
  *   (heaviest bags first, each into the first box it fits); the upper bound of the search.
- * - `BagTooHeavyForShipping`: thrown when one bag in its box is over the heaviest band.
+ * - `loneBagParcelGrams(fillGrams, shipping)` / `heaviestBandGrams(shipping)`: for checking, before
+ *   planning, that each bag fits a parcel on its own; `BagTooHeavyForShipping` is thrown when one does not.
  *
- * How the cheapest packing is found (decision record docs/decisions/shipping-parcels.md): bags of
+ * How the cheapest packing is found (DEVELOPERS.md, decision log): bags of
  * the same fill weight are interchangeable, so the search works on counts per weight. It is an
  * exact search over "what goes in the parcel holding the heaviest bag left", memoised on the
  * counts left; it only tries parcels that are full for their band (no bag left over would still
@@ -66,6 +67,15 @@ export class BagTooHeavyForShipping extends RangeError {
   }
 }
 
+/** One bag alone in its box: fill, bag tare and box tare. */
+export function loneBagParcelGrams(fillGrams: number, shipping: ShippingSettings): number {
+  return fillGrams + shipping.bagTareGrams + shipping.boxTareGrams;
+}
+
+export function heaviestBandGrams(shipping: ShippingSettings): number {
+  return Math.max(...shipping.bands.map((band) => band.maxGrams));
+}
+
 /** Steps (parcel contents tried) the exact search may take before it narrows to fewer parcels. */
 const SEARCH_STEP_BUDGET = 200_000;
 
@@ -94,7 +104,7 @@ function checkEachBagFits(contents: readonly ParcelContent[], packing: Packing):
   const heaviest = packing.bands.at(-1)!.maxGrams;
   for (const item of contents) {
     if (!Number.isSafeInteger(item.quantity) || item.quantity < 0) throw new RangeError(`quantity must be a whole number ≥ 0, got ${item.quantity}`);
-    const alone = item.fillGrams + packing.bagTareGrams + packing.boxTareGrams;
+    const alone = loneBagParcelGrams(item.fillGrams, packing);
     if (item.quantity > 0 && alone > heaviest) throw new BagTooHeavyForShipping(item.key, alone, heaviest);
   }
 }
