@@ -33,7 +33,7 @@ beforeAll(async () => {
 //   12 oz = 340.194 g → label 340 g, fill 341 g;  1 lb = 453.592 g → label 454 g, fill 454 g;
 //   8 oz = 226.796 g → label 227 g, fill 227 g.
 const twelveOunce = { netLabel: 'Net Wt 12 oz (340 g)', netGrams: 341 };
-const onePound = { netLabel: 'Net Wt 1 lb (454 g)', netGrams: 454 };
+const onePound = { netLabel: 'Net Wt 16 oz (1 lb) 454 g', netGrams: 454 };
 const eightOunce = { netLabel: 'Net Wt 8 oz (227 g)', netGrams: 227 };
 
 async function packList(date: string) {
