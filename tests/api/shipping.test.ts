@@ -120,4 +120,20 @@ describe('the cart’s quote and the green checkout’s charge', () => {
     expect(await ordersOf(customer.id)).toBe(before);
     await useShopSettings();
   });
+
+  it('answers 422 on bagSize when a subscription’s roasted bag is over the heaviest band', async () => {
+    // 2 lb roasted packed alone: 908 (PRODUCT.md) + 20 + 180 = 1,108 g, over a 1 kg top band.
+    await putShipping({ bands: [{ maxGrams: 1000, cents: 895 }], bagTareGrams: 20, boxTareGrams: 180 });
+    const query = { roastLevel: 'medium', bagsPerDelivery: '1', brewMethod: 'filter', cadenceWeeks: '2' };
+
+    const response = await request(app).get('/api/subscriptions/preview').query({ ...query, bagSize: '2lb' });
+
+    expect(response.status).toBe(422);
+    const { error } = apiErrorSchema.parse(response.body);
+    expect(error.code).toBe('too_heavy_to_ship');
+    expect(Object.keys(error.fields ?? {})).toEqual(['bagSize']);
+    // 12 oz: 341 + 20 + 180 = 541 g still ships in the 1 kg band.
+    expect((await request(app).get('/api/subscriptions/preview').query({ ...query, bagSize: '12oz' })).status).toBe(200);
+    await useShopSettings();
+  });
 });
