@@ -34,7 +34,7 @@ export interface ShippingSettings {
   boxTareGrams: number;
 }
 
-/** Bags of one kind. `key` names them for whoever reads the plan (a line's description, an order item's id). */
+/** Bags of one kind. `key` names them for whoever reads the plan (a line's description, an order item's id); one entry per key. */
 export interface ParcelContent {
   key: string;
   fillGrams: number;

@@ -1,5 +1,5 @@
 import { Trash2 } from 'lucide-react';
-import { useId } from 'react';
+import { useId, useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import { bagFillGrams, bagSizeDeclarations } from '@shared/domain/units';
 import { maxBagsPerLine } from '@shared/schemas/checkout';
@@ -53,7 +53,9 @@ type CartLinesProps = {
 export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
   const { lines, remove } = useCart();
   const shippingQuery = useShipping();
-  const priced = shippingQuery.data ? quoteCart(lines, shippingQuery.data) : undefined;
+  const rules = shippingQuery.data;
+  // The parcel search can take a noticeable moment on a very large cart: price once per change.
+  const priced = useMemo(() => (rules ? quoteCart(lines, rules) : undefined), [lines, rules]);
   const quote = priced?.ok ? priced.quote : undefined;
   const itemLines = quote?.lines.filter((line) => line.kind === 'item') ?? [];
   const parcels = quote?.shipping.parcels ?? [];
