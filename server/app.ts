@@ -36,6 +36,8 @@ import { createPaymentsRepo } from './modules/payments/payments.repo';
 import { paymentsWebhookRoutes } from './modules/payments/payments.routes';
 import { createPaymentsService } from './modules/payments/payments.service';
 import { createCheckoutRepo } from './modules/checkout/checkout.repo';
+import { createShippingRepo } from './modules/shipping/shipping.repo';
+import { shippingRoutes } from './modules/shipping/shipping.routes';
 import { checkoutRoutes } from './modules/checkout/checkout.routes';
 import { createCheckoutService } from './modules/checkout/checkout.service';
 import { createSubscriptionsRepo } from './modules/subscriptions/subscriptions.repo';
@@ -154,6 +156,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(accounts.loadSession);
   for (const [mountPath, router] of accounts.routers) api.use(mountPath, router);
   api.use('/lots', lotsRoutes(createLotsService(createLotsRepo(database.db))));
+  api.use('/shipping', shippingRoutes(createShippingRepo(database.db)));
   const fileStorage = createFileStorage(config.UPLOADS_DIR);
   const lotsAdmin = createLotsAdminService(createLotsAdminRepo(database.db), fileStorage, deps.clock);
   api.use('/lots', lotsAdminRoutes(lotsAdmin));

@@ -19,7 +19,7 @@ export function money(amount: number, currency: CurrencyCode): string {
   return formatMoney(amount, currency);
 }
 
-/** "1 lb bag — Net Wt 1 lb (454 g)"-style description of a bag size. */
+/** "1 lb bag — Net Wt 16 oz (1 lb) 454 g"-style description of a bag size. */
 export function bagLabel(size: BagSize): string {
   return bagNetWeightLabel(size);
 }

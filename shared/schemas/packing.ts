@@ -44,6 +44,22 @@ export const packOrderSchema = z.object({
   carrier: z.string().nullable(),
   trackingNumber: z.string().nullable(),
   bags: z.array(packBagSchema),
+  /**
+   * Which bags (by `bagNumber`) go in which parcel: whole bags, the cheapest packing within the
+   * shop's weight bands (planShipping). Empty, with `parcelNote` saying why, when a bag is over
+   * the heaviest band the owner has set since the order was placed.
+   */
+  parcels: z.array(
+    z.object({
+      parcelNumber: z.number().int().positive(),
+      bagNumbers: z.array(z.number().int().positive()).min(1),
+      /** Fill, bag tare and box tare. */
+      grams: z.number().int().positive(),
+      bandMaxGrams: z.number().int().positive(),
+      cents: z.number().int().min(0),
+    }),
+  ),
+  parcelNote: z.string().nullable(),
 });
 export type PackOrder = z.infer<typeof packOrderSchema>;
 

@@ -75,6 +75,8 @@ const shippingSchema = z
 const defaultRestAdjustDays = { light: 0, medium: 0, 'medium-dark': 0, dark: 0, french: 0 };
 // Invented prices for the shop to replace.
 const defaultRoastedBagPriceCents = { '12oz': 1_800, '1lb': 2_300, '2lb': 4_400 };
+// Weight bands with invented prices for the shop to replace with its carrier's (Restday defaults, no
+// carrier's rate card).
 const defaultShipping = {
   bands: [
     { maxGrams: 500, cents: 695 },

@@ -103,6 +103,7 @@ export const accessRules: AccessRule[] = [
   { method: 'DELETE', path: '/api/owner/team/invitations/:id', access: 'owner' },
 
   { method: 'GET', path: '/api/lots', access: 'public' },
+  { method: 'GET', path: '/api/shipping', access: 'public' },
   { method: 'GET', path: '/api/lots/:code', access: 'public' },
   { method: 'GET', path: '/api/lots/:code/roast-guide', access: 'public' },
   { method: 'POST', path: '/api/lots', access: 'staff' },

@@ -62,15 +62,16 @@ describe('GET /api/roastery/days/:date/labels.pdf', () => {
     // 3 roasted bags + 3 green bags (1 lb and 2 × 8 oz).
     expect(pages).toHaveLength(6);
     // Net weights from 1 oz = 28.349523125 g, 1 lb = 453.59237 g (NIST SP 811, App. B); label form
-    // "Net Wt 12 oz (340 g)" per the FPLA and FDA 21 CFR 101.105:
-    //   2 lb = 907.185 g → 907 g; 12 oz = 340.194 g → 340 g; 1 lb = 453.592 g → 454 g; 8 oz = 226.796 g → 227 g.
+    // "Net Wt 12 oz (340 g)" per the FPLA and FDA 21 CFR 101.105, and from 1 lb up to 4 lb ounces first
+    // with pounds in parentheses (15 U.S.C. 1453(a)(3)(A); see shared/domain/labels.test.ts for what backs it):
+    //   2 lb = 32 oz = 907.185 g → 907 g; 12 oz = 340.194 g → 340 g; 1 lb = 16 oz = 453.592 g → 454 g; 8 oz = 226.796 g → 227 g.
     const roastedPages = pages.filter((page) => page.includes('Roasted:'));
     const greenPages = pages.filter((page) => page.includes('Green coffee (unroasted)'));
     expect(roastedPages).toHaveLength(3);
     expect(greenPages).toHaveLength(3);
-    expect(roastedPages.filter((page) => page.includes('Net Wt 2 lb (907 g)'))).toHaveLength(1);
+    expect(roastedPages.filter((page) => page.includes('Net Wt 32 oz (2 lb) 907 g'))).toHaveLength(1);
     expect(roastedPages.filter((page) => page.includes('Net Wt 12 oz (340 g)'))).toHaveLength(2);
-    expect(greenPages.filter((page) => page.includes('Net Wt 1 lb (454 g)'))).toHaveLength(1);
+    expect(greenPages.filter((page) => page.includes('Net Wt 16 oz (1 lb) 454 g'))).toHaveLength(1);
     expect(greenPages.filter((page) => page.includes('Net Wt 8 oz (227 g)'))).toHaveLength(2);
 
     const dayText = (date: string) => new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${date}T00:00:00Z`));

@@ -33,7 +33,7 @@ beforeAll(async () => {
 //   12 oz = 340.194 g → label 340 g, fill 341 g;  1 lb = 453.592 g → label 454 g, fill 454 g;
 //   8 oz = 226.796 g → label 227 g, fill 227 g.
 const twelveOunce = { netLabel: 'Net Wt 12 oz (340 g)', netGrams: 341 };
-const onePound = { netLabel: 'Net Wt 1 lb (454 g)', netGrams: 454 };
+const onePound = { netLabel: 'Net Wt 16 oz (1 lb) 454 g', netGrams: 454 };
 const eightOunce = { netLabel: 'Net Wt 8 oz (227 g)', netGrams: 227 };
 
 async function packList(date: string) {
@@ -88,6 +88,29 @@ describe('GET /api/roastery/days/:date/pack-list', () => {
       { size: '8oz', ...eightOunce },
     ]);
     for (const bag of greenEntry.bags) expect(bag).toMatchObject({ lotCode: lot.code, roastLevel: null, grind: null, roastDate: null, readyFrom: null, bestBefore: null });
+  });
+
+  it('says which bags go in which parcel: whole bags, the cheapest packing within the shop’s bands', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '1lb', quantity: 21, roastLevel: 'medium' }] });
+    const green = await createGreenOrderShipping(customer.id, lot.id, order.shipDate!);
+
+    const list = await packList(order.shipDate!);
+
+    // Restday's default bands (shared/schemas/settings.ts): ≤1 kg $8.95, ≤2 kg $11.95, ≤5 kg $16.95, ≤10 kg $24.95;
+    // bag tare 20 g, box 180 g. A 1 lb bag packed: 454 + 20 = 474 g. The 10 kg box takes ⌊9,820 / 474⌋ = 20;
+    // 21 bags cheapest as 20 + 1: 20 × 474 + 180 = 9,660 g ($24.95) and 474 + 180 = 654 g ($8.95), $33.90.
+    const roasted = list.orders.find((entry) => entry.orderId === order.id)!;
+    expect(roasted.parcelNote).toBeNull();
+    expect(roasted.parcels).toEqual([
+      { parcelNumber: 1, bagNumbers: Array.from({ length: 20 }, (_, index) => index + 1), grams: 9660, bandMaxGrams: 10_000, cents: 2495 },
+      { parcelNumber: 2, bagNumbers: [21], grams: 654, bandMaxGrams: 1000, cents: 895 },
+    ]);
+    // 1 × 1 lb + 2 × 8 oz: 474 + 2 × (227 + 20) + 180 = 1,148 g → one parcel in the 2 kg band.
+    expect(list.orders.find((entry) => entry.orderId === green.id)!.parcels).toEqual([
+      { parcelNumber: 1, bagNumbers: [1, 2, 3], grams: 1148, bandMaxGrams: 2000, cents: 1195 },
+    ]);
   });
 
   it('shows a Roaster’s Rotation bag as the lot picked for its roast day', async () => {

@@ -72,6 +72,6 @@ describe('payload checks', () => {
   it('formats money with the shared money rules and weights with the shared label rules', () => {
     const email = renderEmail('order-confirmed', demoEmailPayloads['order-confirmed'], demoEmailContext);
     expect(email.text).toContain('$42.60');
-    expect(email.text).toContain('Net Wt 1 lb (454 g)');
+    expect(email.text).toContain('Net Wt 16 oz (1 lb) 454 g'); // ounces first from 1 lb (15 U.S.C. 1453(a)(3)(A))
   });
 });

@@ -3,6 +3,8 @@ import type { AddressSnapshot } from '../../db/schema/common';
 import type { Db, DbOrTx } from '../../db/client';
 import { lotPriceBreaks, lots, orderItems, orders, stockMovements } from '../../db/schema/index';
 import type { GreenBagSize } from '@shared/domain/vocabulary';
+import type { ShopSettings } from '@shared/schemas/settings';
+import { loadShopSettings } from '../settings/settings.repo';
 
 export interface NewGreenOrder {
   userId: string;
@@ -65,6 +67,11 @@ export async function cancelUnpaidOrder(db: DbOrTx, orderId: string, at: Date, n
 
 export function createCheckoutRepo(db: Db) {
   return {
+    /** The owner's shipping bands and tares, as GET /api/shipping gives them to the cart. */
+    async shippingSettings(): Promise<ShopSettings['shipping']> {
+      return (await loadShopSettings(db)).settings.shipping;
+    },
+
     /** Listed lots by code, with their price breaks. */
     async lotsForSale(codes: string[]) {
       const rows = await db

@@ -1,11 +1,11 @@
 import { quoteGreenOrder, type GreenLotPrice } from '@shared/domain/pricing';
 import { bagFillGrams } from '@shared/domain/units';
 import type { GreenCheckoutRequest, GreenCheckoutResponse } from '@shared/schemas/checkout';
-import { defaultShopSettings } from '@shared/schemas/settings';
 import type { Clock } from '../../lib/clock';
 import { AppError } from '../../lib/app-error';
 import type { SessionUser } from '../../middleware/require-role';
 import type { PaymentsService } from '../payments/payments.service';
+import { assertBagsShip } from '../shipping/shipping.service';
 import { StockShortfall, type CheckoutRepo, type ShortLot } from './checkout.repo';
 
 export interface CheckoutServiceDeps {
@@ -56,7 +56,9 @@ export function createCheckoutService({ repo, payments, clock }: CheckoutService
       const prices: Record<string, GreenLotPrice> = Object.fromEntries(
         lotsForSale.map((lot) => [lot.code, { pricePerKgCents: lot.pricePerKgCents, priceBreaks: lot.priceBreaks }]),
       );
-      const quote = quoteGreenOrder(request.items, prices, defaultShopSettings);
+      const shipping = await repo.shippingSettings();
+      assertBagsShip(request.items.map((item, index) => ({ field: `items.${index}.size`, size: item.size })), shipping);
+      const quote = quoteGreenOrder(request.items, prices, { shipping });
       const itemLines = quote.lines.filter((line) => line.kind === 'item');
       const items = request.items.map((item, index) => {
         const line = itemLines[index]!;

@@ -1,4 +1,5 @@
 import { bagNetWeightLabel } from '@shared/domain/labels';
+import { BagTooHeavyForShipping, planShipping, type ShippingSettings } from '@shared/domain/parcel-packing';
 import { roastLevelLabels, type OrderStatus } from '@shared/domain/vocabulary';
 import type { PackBag, PackListResponse, PackOrder } from '@shared/schemas/packing';
 import { AppError } from '../../lib/app-error';
@@ -38,7 +39,39 @@ function bagsOf(order: PackListRow): PackBag[] {
   return bags;
 }
 
-function packOrderOf(order: PackListRow): PackOrder {
+/**
+ * Which bags go in which parcel: the same plan that priced the order's shipping (whole bags,
+ * cheapest packing within the owner's bands today). A bag too heavy for the bands since they
+ * changed gets no plan, and a note saying so, rather than a broken Pack List.
+ */
+function parcelsOf(bags: readonly PackBag[], shipping: ShippingSettings): Pick<PackOrder, 'parcels' | 'parcelNote'> {
+  const items = new Map<string, { fillGrams: number; bagNumbers: number[] }>();
+  for (const bag of bags) {
+    const item = items.get(bag.orderItemId) ?? { fillGrams: bag.netGrams, bagNumbers: [] };
+    item.bagNumbers.push(bag.bagNumber);
+    items.set(bag.orderItemId, item);
+  }
+  try {
+    const plan = planShipping(
+      [...items].map(([key, item]) => ({ key, fillGrams: item.fillGrams, quantity: item.bagNumbers.length })),
+      shipping,
+    );
+    const parcels = plan.parcels.map((parcel, index) => ({
+      parcelNumber: index + 1,
+      bagNumbers: parcel.bags.flatMap((bag) => items.get(bag.key)!.bagNumbers.splice(0, bag.quantity)).sort((a, b) => a - b),
+      grams: parcel.grams,
+      bandMaxGrams: parcel.bandMaxGrams,
+      cents: parcel.cents,
+    }));
+    return { parcels, parcelNote: null };
+  } catch (error) {
+    if (!(error instanceof BagTooHeavyForShipping)) throw error;
+    return { parcels: [], parcelNote: `A bag weighs ${error.parcelGrams.toLocaleString('en-US')} g in its box, over the heaviest shipping band (${error.heaviestBandGrams.toLocaleString('en-US')} g): pack it by hand.` };
+  }
+}
+
+function packOrderOf(order: PackListRow, shipping: ShippingSettings): PackOrder {
+  const bags = bagsOf(order);
   return {
     orderId: order.id,
     customerName: order.customerName,
@@ -49,7 +82,8 @@ function packOrderOf(order: PackListRow): PackOrder {
     shippedAt: order.shippedAt?.toISOString() ?? null,
     carrier: order.carrier,
     trackingNumber: order.trackingNumber,
-    bags: bagsOf(order),
+    bags,
+    ...parcelsOf(bags, shipping),
   };
 }
 
@@ -70,9 +104,9 @@ export interface PackingDeps {
 
 export function createPackingService({ repo, clock }: PackingDeps) {
   async function currentOrder(orderId: string): Promise<PackOrder> {
-    const order = await repo.packOrder(orderId);
+    const [order, shipping] = await Promise.all([repo.packOrder(orderId), repo.shippingSettings()]);
     if (!order) throw AppError.notFound('Order');
-    return packOrderOf(order);
+    return packOrderOf(order, shipping);
   }
 
   /** Fills each roasted bag from the roast day's batches of its lot and level, or refuses with what is short. */
@@ -98,13 +132,14 @@ export function createPackingService({ repo, clock }: PackingDeps) {
 
   return {
     async packList(date: string): Promise<PackListResponse> {
-      return { date, orders: (await repo.packList(date)).map(packOrderOf) };
+      const [orders, shipping] = await Promise.all([repo.packList(date), repo.shippingSettings()]);
+      return { date, orders: orders.map((order) => packOrderOf(order, shipping)) };
     },
 
     /** One label per bag of the day's Pack List, as a PDF. */
     async labelsPdf(date: string): Promise<Buffer> {
-      const [shopName, orders] = await Promise.all([repo.shopName(), repo.packList(date)]);
-      return renderLabelsPdf({ shopName, date, orders: orders.map(packOrderOf) });
+      const [shopName, orders, shipping] = await Promise.all([repo.shopName(), repo.packList(date), repo.shippingSettings()]);
+      return renderLabelsPdf({ shopName, date, orders: orders.map((order) => packOrderOf(order, shipping)) });
     },
 
     /**

@@ -9,6 +9,7 @@ import type { ShopSettings } from '@shared/schemas/settings';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SubscriptionPreviewRepo } from './subscription-preview.repo';
+import { assertBagsShip } from '../shipping/shipping.service';
 
 /** Green grams a roasted weight needs at a level, by the level's default loss and the shop's overage. */
 function greenGramsFor(roastedGrams: number, level: keyof ShopSettings['lossModel'], settings: ShopSettings): number {
@@ -45,6 +46,7 @@ export function createSubscriptionPreviewService({ repo, clock }: { repo: Subscr
         }
       }
       const choice = { lotCode: query.lotCode, bagSize: query.bagSize, bagsPerDelivery: query.bagsPerDelivery };
+      assertBagsShip([{ field: 'bagSize', size: query.bagSize }], settings.shipping);
       const quote = quoteSubscriptionDelivery(choice, settings);
       const regular = quoteSubscriptionDelivery(choice, { ...settings, subscriptionDiscountPct: 0 });
 

@@ -1,8 +1,11 @@
 // What a subscription's charges do to its deliveries, run inside the payment ledger's transaction
 // (server/modules/payments/payment-events.service.ts calls these; only Stripe events move money).
 import { deliveryToCharge, firstRoastDates, planDeliveries, roastDatesWhenPaid } from '@shared/domain/delivery-plan';
+import { BagTooHeavyForShipping } from '@shared/domain/parcel-packing';
 import { quoteSubscriptionDelivery } from '@shared/domain/pricing';
 import { bagFillGrams } from '@shared/domain/units';
+import type { RoastedBagSize } from '@shared/domain/vocabulary';
+import type { ShopSettings } from '@shared/schemas/settings';
 import type { Tx } from '../../db/client';
 import type { Logger } from '../../lib/logger';
 import {
@@ -57,6 +60,26 @@ export interface PaidInvoice {
 }
 
 /**
+ * The shipping share of a paid delivery, as the one parcel plan prices it. Money already taken
+ * must still become an order: if the owner has since set bands too light for one bag, the whole
+ * payment counts as bags and the Pack List says the parcels are the packer's to make.
+ */
+function deliveryShippingCents(
+  subscription: { id: string; lotCode: string | null },
+  choice: { bagSize: RoastedBagSize; bagsPerDelivery: number },
+  settings: ShopSettings,
+  logger: Logger,
+): number {
+  try {
+    return quoteSubscriptionDelivery({ lotCode: subscription.lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings).shippingCents;
+  } catch (error) {
+    if (!(error instanceof BagTooHeavyForShipping)) throw error;
+    logger.warn({ subscriptionId: subscription.id, bagSize: choice.bagSize }, 'a paid delivery has a bag over the heaviest shipping band');
+    return 0;
+  }
+}
+
+/**
  * A paid invoice becomes the delivery order of the cycle it pays for (a held delivery first, else
  * the first one neither paid nor skipped), once: orders.stripe_invoice_id is unique. A delivery
  * whose cutoff has gone roasts on the next open roast day instead. Returns the order id.
@@ -72,8 +95,7 @@ export async function recordPaidCycle(tx: Tx, subscriptionId: string, invoice: P
     return undefined;
   }
   const dates = roastDatesWhenPaid(target, paidAt, settings, calendar);
-  const quote = quoteSubscriptionDelivery({ lotCode: subscription.lotCode, bagSize: target.choice.bagSize, bagsPerDelivery: target.choice.bagsPerDelivery }, settings);
-  const shippingCents = Math.min(quote.shippingCents, invoice.amountPaidCents);
+  const shippingCents = Math.min(deliveryShippingCents(subscription, target.choice, settings, logger), invoice.amountPaidCents);
   const bagPriceCents = settings.roastedBagPriceCents[target.choice.bagSize];
   const orderId = await createDeliveryOrder(tx, {
     userId: subscription.userId,

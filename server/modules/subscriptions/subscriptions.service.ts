@@ -18,6 +18,7 @@ import type { Clock } from '../../lib/clock';
 import type { SessionUser } from '../../middleware/require-role';
 import { queueEmail } from '../outbox/outbox.repo';
 import type { PaymentsService } from '../payments/payments.service';
+import { assertBagsShip } from '../shipping/shipping.service';
 import {
   changeSubscription,
   choiceOf,
@@ -59,6 +60,7 @@ const levelNotOffered = (level: RoastLevel, allowed: readonly RoastLevel[]) =>
 
 /** Price of one delivery: roasted bags less the subscription discount, plus shipping (the trade engine's quote). */
 function deliveryPrice(lotCode: string | null, choice: Pick<DeliveryChoice, 'bagSize' | 'bagsPerDelivery'>, settings: ShopSettings) {
+  assertBagsShip([{ field: 'bagSize', size: choice.bagSize }], settings.shipping);
   return quoteSubscriptionDelivery({ lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings).totalCents;
 }
 

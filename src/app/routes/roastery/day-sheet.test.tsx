@@ -106,6 +106,9 @@ function packOrder(overrides: Partial<PackOrder> = {}): PackOrder {
         batchId: null,
       },
     ],
+    // 341 + 20 + 180 = 541 g → the 1 kg band (Restday's default bands).
+    parcels: [{ parcelNumber: 1, bagNumbers: [1], grams: 541, bandMaxGrams: 1000, cents: 895 }],
+    parcelNote: null,
     ...overrides,
   };
 }

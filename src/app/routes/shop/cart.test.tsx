@@ -2,7 +2,8 @@
 import { cleanup, fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { CartLine } from '@/features/cart/stores/cart-store';
-import { renderApp, stubFetch } from '@/testing/test-utils';
+import { defaultShopSettings } from '@shared/schemas/settings';
+import { jsonResponse, renderApp, stubFetch } from '@/testing/test-utils';
 
 // Invented lots, priced as their lot pages showed them.
 const ridge: CartLine = {
@@ -22,7 +23,8 @@ function storedLines(): CartLine[] {
 
 beforeEach(() => {
   window.localStorage.setItem('restday.cart', JSON.stringify({ version: 1, lines: [ridge, plateau] }));
-  stubFetch(() => new Response(null, { status: 404 }));
+  // GET /api/shipping as the server answers it with Restday's default bands.
+  stubFetch((url) => (url.pathname === '/api/shipping' ? jsonResponse({ currency: 'usd', ...defaultShopSettings.shipping }) : new Response(null, { status: 404 })));
 });
 
 afterEach(() => {
@@ -37,8 +39,10 @@ describe('cart page', () => {
 
     const ridgeLine = await screen.findByRole('listitem', { name: 'Test Ridge Washed, 1 lb' });
     // $24.50/kg × 453.59237 g (NIST SP 811) = $11.11 a bag; 2 bags $22.22.
-    expect(ridgeLine.textContent).toContain('$11.11 a bag');
+    expect(await within(ridgeLine).findByText(/\$11\.11 a bag/)).toBeTruthy();
     expect(ridgeLine.textContent).toContain('$22.22');
+    // One parcel: 2 × (454 + 20) + (227 + 20) + 180 box = 1,375 g → the 2 kg band, $11.95 (Restday's default bands).
+    expect((await screen.findByText('Shipping')).nextElementSibling?.textContent).toBe('$11.95');
     expect(screen.getByRole('link', { name: 'Cart, 3 bags' })).toBeTruthy();
     expect(screen.getByText(/You sign in or create an account at checkout/)).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Check out' }).getAttribute('href')).toBe('/checkout');

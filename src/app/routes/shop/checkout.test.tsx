@@ -3,6 +3,7 @@ import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/re
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { CartLine } from '@/features/cart/stores/cart-store';
 import { leaveFor } from '@/lib/leave-for';
+import { defaultShopSettings } from '@shared/schemas/settings';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
 
 vi.mock('@/lib/leave-for', () => ({ leaveFor: vi.fn() }));
@@ -31,7 +32,11 @@ function fillAddress() {
 
 /** Answers like the server: the saved addresses, and `onCheckout` for the order itself. */
 function checkoutServer(onCheckout: () => Response, addresses: unknown[] = []) {
-  return stubFetch((url) => (url.pathname === '/api/account/addresses' ? jsonResponse({ items: addresses }) : onCheckout()));
+  return stubFetch((url) => {
+    if (url.pathname === '/api/account/addresses') return jsonResponse({ items: addresses });
+    if (url.pathname === '/api/shipping') return jsonResponse({ currency: 'usd', ...defaultShopSettings.shipping });
+    return onCheckout();
+  });
 }
 
 const submit = () => fireEvent.click(screen.getByRole('button', { name: 'Continue to payment' }));

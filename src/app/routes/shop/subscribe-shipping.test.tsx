@@ -38,7 +38,7 @@ describe('Roasted to Order shipping step', () => {
     renderApp(`/subscribe/shipping?${choices}`, { session: makeUser() });
 
     expect(await screen.findByText('Test Ridge Washed', undefined, { timeout: 15_000 })).toBeTruthy();
-    expect(screen.getByText('2 × Net Wt 1 lb (454 g)')).toBeTruthy();
+    expect(screen.getByText('2 × Net Wt 16 oz (1 lb) 454 g')).toBeTruthy();
     expect(screen.getByText('Pour-over')).toBeTruthy();
     expect(await screen.findByText('$48.35')).toBeTruthy();
     fill('Recipient’s name', 'Ines Marlow');

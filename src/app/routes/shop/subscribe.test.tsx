@@ -58,7 +58,7 @@ describe('Roasted to Order builder', () => {
 
     const sizes = screen.getByRole('group', { name: 'Bag size' });
     expect(within(sizes).getByText(/Net Wt 12 oz \(340 g\)/)).toBeTruthy();
-    expect(within(sizes).getByText(/Net Wt 2 lb \(907 g\)/)).toBeTruthy();
+    expect(within(sizes).getByText(/Net Wt 32 oz \(2 lb\) 907 g/)).toBeTruthy(); // ounces first from 1 lb (15 U.S.C. 1453(a)(3)(A))
     expect(screen.getByRole('group', { name: /^Brew method/ }).textContent).toContain('It sets the rest');
 
     expect(await screen.findByText('$23.15')).toBeTruthy();

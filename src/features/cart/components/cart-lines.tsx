@@ -1,11 +1,12 @@
 import { Trash2 } from 'lucide-react';
-import { useId } from 'react';
+import { useId, useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import { bagFillGrams, bagSizeDeclarations } from '@shared/domain/units';
 import { maxBagsPerLine } from '@shared/schemas/checkout';
 import { controlStyles } from '@/components/ui/control-styles';
 import { paths } from '@/config/paths';
 import { formatGrams, formatMoney } from '@/lib/format';
+import { useShipping } from '../api/get-shipping';
 import { useCart } from '../hooks/use-cart';
 import { quoteCart } from '../utils/quote-cart';
 import type { CartLine } from '../stores/cart-store';
@@ -51,14 +52,19 @@ type CartLinesProps = {
 /** The cart's bags with their prices, and the order's totals from the trade engine. */
 export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
   const { lines, remove } = useCart();
-  const quote = quoteCart(lines);
-  const itemLines = quote.lines.filter((line) => line.kind === 'item');
+  const shippingQuery = useShipping();
+  const rules = shippingQuery.data;
+  // The parcel search can take a noticeable moment on a very large cart: price once per change.
+  const priced = useMemo(() => (rules ? quoteCart(lines, rules) : undefined), [lines, rules]);
+  const quote = priced?.ok ? priced.quote : undefined;
+  const itemLines = quote?.lines.filter((line) => line.kind === 'item') ?? [];
+  const parcels = quote?.shipping.parcels ?? [];
 
   return (
     <div>
       <ul aria-label="Bags in your cart" className="divide-y divide-rule rounded-card border border-rule bg-sheet">
         {lines.map((line, index) => {
-          const priced = itemLines[index];
+          const linePrice = itemLines[index];
           const error = lineErrors[index];
           const name = `${line.lotName}, ${bagSizeDeclarations[line.size].amount} ${bagSizeDeclarations[line.size].unit}`;
           return (
@@ -69,11 +75,11 @@ export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
                 </Link>
                 <p className="text-small text-ink-muted">
                   {sizeLabel(line)} · lot {line.lotCode}
-                  {priced ? ` · ${formatMoney(priced.unitCents)} a bag` : ''}
+                  {linePrice ? ` · ${formatMoney(linePrice.unitCents)} a bag` : ''}
                 </p>
               </div>
               {editable ? <QuantityInput line={line} /> : <p className="text-small">× {line.quantity}</p>}
-              <p className="w-24 text-right font-semibold">{priced ? formatMoney(priced.amountCents) : ''}</p>
+              <p className="w-24 text-right font-semibold">{linePrice ? formatMoney(linePrice.amountCents) : ''}</p>
               {editable ? (
                 <button
                   type="button"
@@ -94,14 +100,38 @@ export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
         })}
       </ul>
 
-      <dl className="mt-4 ml-auto grid max-w-xs grid-cols-[1fr_auto] gap-x-6 gap-y-1">
-        <dt>Bags</dt>
-        <dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
-        <dt>Shipping</dt>
-        <dd className="text-right">{formatMoney(quote.shippingCents)}</dd>
-        <dt className="border-t border-rule pt-1 font-semibold">Total</dt>
-        <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
-      </dl>
+      {priced && !priced.ok ? (
+        <p role="alert" className="mt-4 text-small font-semibold text-alert">
+          {priced.message}
+        </p>
+      ) : null}
+      {shippingQuery.isError ? (
+        <p role="alert" className="mt-4 text-small font-semibold text-alert">
+          Shipping could not be priced just now; checkout will show it.
+        </p>
+      ) : null}
+      {quote ? (
+        <dl className="mt-4 ml-auto grid max-w-xs grid-cols-[1fr_auto] gap-x-6 gap-y-1">
+          <dt>Bags</dt>
+          <dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
+          <dt>{parcels.length > 1 ? `Shipping, ${parcels.length} parcels` : 'Shipping'}</dt>
+          <dd className="text-right">{formatMoney(quote.shippingCents)}</dd>
+          {parcels.length > 1
+            ? parcels.map((parcel, index) => (
+                <div key={index} className="col-span-2 grid grid-cols-subgrid text-small text-ink-muted">
+                  <dt className="pl-3">
+                    Parcel {index + 1}: {parcel.bags.reduce((sum, bag) => sum + bag.quantity, 0)} bags, {formatGrams(parcel.grams)}
+                  </dt>
+                  <dd className="text-right">{formatMoney(parcel.cents)}</dd>
+                </div>
+              ))
+            : null}
+          <dt className="border-t border-rule pt-1 font-semibold">Total</dt>
+          <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
+        </dl>
+      ) : shippingQuery.isPending ? (
+        <p className="mt-4 text-right text-small text-ink-muted">Pricing shipping…</p>
+      ) : null}
     </div>
   );
 }

@@ -72,6 +72,33 @@ function OrderBags({ order }: { order: PackOrder }) {
   );
 }
 
+const wholeGrams = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+
+function bagList(bagNumbers: readonly number[]): string {
+  return `${bagNumbers.length === 1 ? 'bag' : 'bags'} ${bagNumbers.join(', ')}`;
+}
+
+/** Which bags go in which box, as shipping was priced: whole bags, each parcel within its weight band. */
+function OrderParcels({ order }: { order: PackOrder }) {
+  if (order.parcelNote) return <p className="mt-3 text-small font-semibold text-alert">{order.parcelNote}</p>;
+  if (order.parcels.length === 0) return null;
+  return (
+    <div className="mt-3">
+      <h3 className="text-small font-semibold">
+        {order.parcels.length === 1 ? 'One parcel' : `${order.parcels.length} parcels`}
+      </h3>
+      <ul aria-label={`Parcels for ${order.customerName}`} className="mt-1 text-small">
+        {order.parcels.map((parcel) => (
+          <li key={parcel.parcelNumber}>
+            Parcel {parcel.parcelNumber}: {bagList(parcel.bagNumbers)} · {wholeGrams.format(parcel.grams)} g packed (band up to{' '}
+            {wholeGrams.format(parcel.bandMaxGrams)} g)
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
 function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void }) {
   const markPacked = useMarkPacked(date);
   const [failure, setFailure] = useState<string>();
@@ -103,6 +130,7 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
       <div className="mt-3">
         <OrderBags order={order} />
       </div>
+      <OrderParcels order={order} />
       {failure ? (
         <p role="alert" className="mt-3 text-small font-semibold text-alert">
           {failure}
