@@ -106,7 +106,7 @@ export async function createTestLot() {
       stockGrams: 50_000,
       pricePerKgCents: 4000,
     })
-    .returning({ id: lots.id, name: lots.name });
+    .returning({ id: lots.id, name: lots.name, code: lots.code });
   return lot!;
 }
 
