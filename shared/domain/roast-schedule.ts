@@ -308,6 +308,8 @@ export interface CalendarDay {
   open: boolean;
   /** Parcels go out this day. */
   shipOpen: boolean;
+  /** Staff's choice for shipping this day; null follows the ship weekdays and carrier holidays. */
+  shipOverride: boolean | null;
   /** The carrier holiday observed this day, or null. */
   holiday: string | null;
   capacityGrams: number;
@@ -334,6 +336,7 @@ export function roastCalendarDays(
       weekday: weekdayOf(date),
       open: isOpenRoastDay(date, settings, calendar),
       shipOpen: isShipDay(date, settings, calendar),
+      shipOverride: calendar.overrides?.[date]?.shipOpen ?? null,
       holiday: carrierHolidayOn(date)?.name ?? null,
       capacityGrams: dayCapacityGrams(date, settings, calendar),
       plannedGreenGrams: calendar.plannedGreenGrams?.[date] ?? 0,

@@ -35,6 +35,8 @@ export const calendarDaySchema = z.object({
   open: z.boolean(),
   /** Parcels go out this day: the ship weekdays less carrier holidays, unless staff changed the day. */
   shipOpen: z.boolean(),
+  /** Staff's choice for shipping this day (`PUT`'s `shipOpen`); null follows the ship weekdays and carrier holidays. */
+  shipOverride: z.boolean().nullable(),
   /** The US federal holiday observed this day (carriers closed), or null. */
   holiday: z.string().nullable(),
   /** Green grams the day can roast: the day's own figure or the shop's daily capacity; 0 when closed. */
