@@ -41,7 +41,7 @@
  */
 import { carrierHolidayOn } from './carrier-holidays';
 import { addDays, daysBetween, instantAt, localDateOf, weekdayOf, type IsoDate } from './shop-time';
-import type { BrewMethod, CadenceWeeks, RoastLevel, Weekday } from './vocabulary';
+import type { BrewMethod, CadenceWeeks, RoastLevel, ShipPolicy, Weekday } from './vocabulary';
 
 export interface ScheduleSettings {
   timeZone: string;
@@ -58,9 +58,6 @@ export interface ScheduleSettings {
   shipPolicy: ShipPolicy;
   holdOverWeekend: boolean;
 }
-
-export const shipPolicies = ['ready_on_arrival', 'after_degassing'] as const;
-export type ShipPolicy = (typeof shipPolicies)[number];
 
 export interface CalendarOverride {
   /** Whether the day roasts. */

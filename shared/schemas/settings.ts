@@ -3,9 +3,8 @@ import { HARD_FLOOR_LOAD_PCT } from '../domain/batch-planner';
 import { hasAtMostDecimals } from '../domain/integer-math';
 import { currencies, type CurrencyCode } from '../domain/money';
 import { DEFAULT_LOSS_MIN_BATCHES, defaultLossModel } from '../domain/roast-loss';
-import { shipPolicies } from '../domain/roast-schedule';
 import { isClockTime, isValidTimeZone } from '../domain/shop-time';
-import { roastedBagSizes, roastLevels, weekdays } from '../domain/vocabulary';
+import { roastedBagSizes, roastLevels, shipPolicies, weekdays } from '../domain/vocabulary';
 
 /**
  * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET (API.md).
