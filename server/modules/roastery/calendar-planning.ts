@@ -180,11 +180,16 @@ export interface ShipMove {
 }
 
 /**
- * New ship dates after a ship day closes or opens: each parcel's ship date again as the schedule
- * gives it with the new calendar (a closure can only move the parcels that shipped that day; an
- * opening can bring others forward to it). Only the parcels whose ship date changes are listed.
+ * New ship dates after shipping on `date` closes or opens: each parcel's ship date again as the
+ * schedule gives it with the new calendar. Only parcels that shipped on the day (a closure moves
+ * them) or now ship on it (an opening brings them forward) move; others keep their dates.
  */
-export function planShipMoves(parcels: readonly ParcelToRedate[], settings: ShopSettings, overrides: ClosureInput['overrides']): ShipMove[] {
+export function planShipMoves(
+  date: IsoDate,
+  parcels: readonly ParcelToRedate[],
+  settings: ShopSettings,
+  overrides: ClosureInput['overrides'],
+): ShipMove[] {
   const calendar = { overrides };
   const moves: ShipMove[] = [];
   for (const parcel of parcels) {
@@ -192,7 +197,7 @@ export function planShipMoves(parcels: readonly ParcelToRedate[], settings: Shop
       parcel.kind === 'green'
         ? greenOrderDates(parcel.paidAt, settings, calendar).shipDate
         : datesForLines(parcel.roastDate, parcel.lines, settings, calendar).shipDate;
-    if (shipDate === parcel.shipDate) continue;
+    if (shipDate === parcel.shipDate || (parcel.shipDate !== date && shipDate !== date)) continue;
     moves.push({
       orderId: parcel.orderId,
       deliveryId: parcel.kind === 'roasted' ? parcel.deliveryId : null,

@@ -45,10 +45,10 @@ function planMoves({ closedDate, orders, deliveries, context }: MovingCoffee): C
   }
 }
 
-function planShip({ parcels, context }: RedatingParcels): ShipMove[] {
+function planShip({ date, parcels, context }: RedatingParcels): ShipMove[] {
   const { overrides } = calendarOf(context);
   try {
-    return planShipMoves(parcels, context.settings, overrides);
+    return planShipMoves(date, parcels, context.settings, overrides);
   } catch (error) {
     if (error instanceof ScheduleError) {
       throw new AppError(409, 'no_ship_day', `${error.message} Open another ship day first.`, {
