@@ -59,6 +59,8 @@ export const demoEmailPayloads: { [T in EmailTemplateName]: EmailPayloads[T] } =
     trackingUrl: 'https://tools.usps.com/go/TrackConfirmAction?tLabels=9400100000000000000000',
     readyFrom: '2026-12-10',
     bestBefore: '2027-01-05',
+    expectedArrival: '2026-12-10',
+    readyOnArrival: true,
   },
   'rest-day': {
     name: 'Robin Alder',

@@ -105,6 +105,10 @@ export const emailPayloadSchemas = {
     /** Roasted coffee: the first day it is at its best (the rest-day). Green coffee has none. */
     readyFrom: isoDate.optional(),
     bestBefore: isoDate.optional(),
+    /** The day the parcel should land (ship day + transit days). */
+    expectedArrival: isoDate.optional(),
+    /** Roasted coffee: true when it lands rested (arrival on or after the ready-from date). */
+    readyOnArrival: z.boolean().optional(),
   }),
   'rest-day': z.object({
     name,

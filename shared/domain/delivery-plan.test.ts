@@ -15,6 +15,9 @@ const settings: ScheduleSettings = {
   restAdjustDays: { light: 0, medium: 0, 'medium-dark': 0, dark: 0, french: 0 },
   bestBeforeDays: 28,
   dayCapacityGrams: 60_000,
+  // Which delivery a charge is for does not depend on the ship day: ship straight after the hold.
+  shipPolicy: 'after_degassing',
+  holdOverWeekend: false,
 };
 const choice = { roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 1, grind: 'whole-bean', brewMethod: 'filter' } as const;
 const weekly: SubscriptionForPlan = { status: 'active', anchorDate: '2031-01-06', cadenceWeeks: 1, pausedUntil: null, cancelAtPeriodEnd: false, choice };

@@ -14,6 +14,7 @@
  * is not frozen follows the subscription's current choice, so its ready-from date is recomputed.
  */
 import {
+  arrivalDate,
   cutoffInstant,
   datesForRoastDate,
   scheduleOrder,
@@ -94,7 +95,13 @@ export function planDeliveries(
     .map((row): PlannedDelivery => {
       const choice = row.choice ?? subscription.choice;
       const dates: RoastDates = row.choice
-        ? { ...datesForRoastDate(row.roastDate, choice, settings, calendar), shipDate: row.shipDate, readyFrom: row.readyFrom, bestBefore: row.bestBefore }
+        ? {
+            ...datesForRoastDate(row.roastDate, choice, settings, calendar),
+            shipDate: row.shipDate,
+            readyFrom: row.readyFrom,
+            bestBefore: row.bestBefore,
+            expectedArrival: arrivalDate(row.shipDate, settings.transitDays),
+          }
         : datesForRoastDate(row.roastDate, choice, settings, calendar);
       return { ...dates, nominalDate: row.nominalDate, status: row.status, locked: isLocked(dates), orderId: row.orderId, choice, keptId: row.id, frozen: row.choice !== null };
     });

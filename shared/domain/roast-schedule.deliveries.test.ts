@@ -2,8 +2,11 @@
 //
 // The shop throughout is Restday's default (defaultShopSettings): America/New_York; roasts Mon, Wed
 // and Fri; order cutoff 12:00 the day before the roast; ships Mon–Fri once a 1-day degassing hold
-// is over; 3 business days in transit; rest 2 days for filter and 7 for espresso; best-before
-// 28 days after the roast (TRADE.md product defaults).
+// is over; 3 business days in transit; rest 2 days for filter and 7 for espresso, medium level +0;
+// best-before 28 days after the roast (TRADE.md product defaults). Ship policy "ready on arrival"
+// and the weekend hold are on (PRODUCT.md defaults): with 3 transit days a parcel shipped Wed, Thu
+// or Fri would sit in transit over Sat and Sun (common practice: avoid that), so only Mon and Tue
+// ship. No US federal holiday falls in March 2027 (5 U.S.C. 6103).
 //
 // US daylight saving time follows the Energy Policy Act of 2005 (§110, amending 15 U.S.C. 260a;
 // in force since 2007): clocks go forward at 02:00 on the second Sunday of March and back at
@@ -28,16 +31,17 @@ describe('a subscription delivery at its cutoff', () => {
 
   it('is open to changes one minute before its cutoff', () => {
     const [first, second] = deliveries({ ...weekly, now: new Date('2027-03-02T16:59:00Z') });
-    // Wed 3 Mar: ships Thu 4 Mar (the day after, a weekday); ready Fri 5 Mar (filter, +2 days);
-    // best-before Wed 31 Mar (+28); arrives after 3 business days from Thu: Fri 5, Mon 8, Tue 9 Mar.
+    // Wed 3 Mar: ready Fri 5 Mar (filter, +2 days); best-before Wed 31 Mar (+28). The hold allows
+    // Thu 4 Mar, but Thu → Fri 5, Mon 8, Tue 9 crosses Sat 6/Sun 7, and so does Fri 5; Mon 8 →
+    // Tue 9, Wed 10, Thu 11 does not (and lands after Fri 5: ready on arrival). Ships Mon 8 Mar.
     expect(first).toEqual({
       nominalDate: '2027-03-03',
       roastDate: '2027-03-03',
       cutoffAt: '2027-03-02T17:00:00.000Z',
-      shipDate: '2027-03-04',
+      shipDate: '2027-03-08',
       readyFrom: '2027-03-05',
       bestBefore: '2027-03-31',
-      expectedArrival: '2027-03-09',
+      expectedArrival: '2027-03-11',
       status: 'scheduled',
       movedByClosure: false,
       locked: false,
@@ -48,7 +52,7 @@ describe('a subscription delivery at its cutoff', () => {
   it('is locked one minute after its cutoff, while the following one stays open', () => {
     const [first, second, third] = deliveries({ ...weekly, now: new Date('2027-03-02T17:01:00Z') });
     // Still listed (it roasts tomorrow) with the same dates, but a change now reaches Wed 10 Mar.
-    expect(first).toMatchObject({ roastDate: '2027-03-03', shipDate: '2027-03-04', locked: true });
+    expect(first).toMatchObject({ roastDate: '2027-03-03', shipDate: '2027-03-08', locked: true });
     // Wed 10 Mar: cutoff Tue 9 Mar 12:00, still EST (the change comes on 14 March) = 17:00Z.
     expect(second).toMatchObject({ roastDate: '2027-03-10', cutoffAt: '2027-03-09T17:00:00.000Z', locked: false });
     // Wed 17 Mar: cutoff Tue 16 Mar 12:00 EDT = 16:00Z.
@@ -67,16 +71,17 @@ describe('a closed roast day', () => {
     const list = deliveries({ anchorDate: '2027-03-01', now: new Date('2027-02-28T12:00:00Z') }, closed);
     expect(roastDates(list)).toEqual(['2027-03-01', '2027-03-10', '2027-03-15']);
     // The 8th's delivery: Tue 9 Mar is not a roast weekday, so it roasts Wed 10 Mar; it keeps its
-    // place on the grid (nominal 8 Mar). Cutoff Tue 9 Mar 12:00 EST = 17:00Z; ships Thu 11;
-    // ready Fri 12 (+2); best-before Wed 7 Apr (+28); arrives Fri 12, Mon 15, Tue 16 Mar.
+    // place on the grid (nominal 8 Mar). Cutoff Tue 9 Mar 12:00 EST = 17:00Z; ready Fri 12 (+2);
+    // best-before Wed 7 Apr (+28). Thu 11 and Fri 12 would sit over Sat 13/Sun 14; ships Mon 15,
+    // arrives Tue 16, Wed 17, Thu 18 Mar.
     expect(list[1]).toEqual({
       nominalDate: '2027-03-08',
       roastDate: '2027-03-10',
       cutoffAt: '2027-03-09T17:00:00.000Z',
-      shipDate: '2027-03-11',
+      shipDate: '2027-03-15',
       readyFrom: '2027-03-12',
       bestBefore: '2027-04-07',
-      expectedArrival: '2027-03-16',
+      expectedArrival: '2027-03-18',
       status: 'scheduled',
       movedByClosure: true,
       locked: false,
@@ -85,11 +90,15 @@ describe('a closed roast day', () => {
     expect(list[2]).toMatchObject({ nominalDate: '2027-03-15', movedByClosure: false });
   });
 
-  it('moves the ship day past a closure too', () => {
-    // Wed 3 Mar would ship Thu 4 Mar; with Thursday closed it ships Fri 5 Mar. Ready-from is
-    // counted from the roast, so it stays Fri 5 Mar.
-    const list = deliveries({ anchorDate: '2027-03-03', now: new Date('2027-03-01T12:00:00Z'), count: 1 }, { overrides: { '2027-03-04': { open: false } } });
-    expect(list[0]).toMatchObject({ roastDate: '2027-03-03', shipDate: '2027-03-05', readyFrom: '2027-03-05' });
+  it('moves the ship day past a ship-day closure, and not past a roast-only closure', () => {
+    // Wed 3 Mar would ship Mon 8 Mar (above); with shipping closed on Mon 8 it ships Tue 9 Mar
+    // (→ Wed 10, Thu 11, Fri 12: no weekend). Ready-from is counted from the roast: Fri 5 Mar.
+    const now = new Date('2027-03-01T12:00:00Z');
+    const shipClosed = deliveries({ anchorDate: '2027-03-03', now, count: 1 }, { overrides: { '2027-03-08': { open: false, shipOpen: false } } });
+    expect(shipClosed[0]).toMatchObject({ roastDate: '2027-03-03', shipDate: '2027-03-09', readyFrom: '2027-03-05', expectedArrival: '2027-03-12' });
+    // Closing Mon 8 Mar to roasting only leaves it a ship day.
+    const roastClosed = deliveries({ anchorDate: '2027-03-03', now, count: 1 }, { overrides: { '2027-03-08': { open: false } } });
+    expect(roastClosed[0]).toMatchObject({ shipDate: '2027-03-08' });
   });
 });
 

@@ -18,10 +18,15 @@ import {
   type RoastCalendar,
   type ScheduleSettings,
 } from './roast-schedule';
+import { carrierHolidayOn } from './carrier-holidays';
 import { addDays, localDateOf, weekdayOf } from './shop-time';
 
 // Default shop: New York; roasts Mon, Wed, Fri; cutoff 12:00 the day before; ships Mon–Fri after a
-// 1-day degassing hold; 3 transit days; rest filter 2 / espresso 7; best-before 28 days.
+// 1-day degassing hold; 3 transit days; rest filter 2 / espresso 7 (medium +0, light +1); best-before
+// 28 days (TRADE.md product defaults). Ready on arrival and the weekend hold are on (PRODUCT.md):
+// with 3 transit days, a parcel shipped Wed, Thu or Fri would be in transit over Sat and Sun, so
+// roasted parcels ship Mon or Tue (common practice: no parcel sits over a weekend). March 2025 has
+// no US federal holiday (5 U.S.C. 6103).
 const shop: ScheduleSettings = defaultShopSettings;
 const medium = { brewMethod: 'filter', roastLevel: 'medium' } as const;
 
@@ -38,27 +43,29 @@ function referenceInstant(date: string, time: string, zone: string): number {
 describe('one order: roast date after the cutoff', () => {
   it('roasts on the next roast day when paid a minute before its cutoff', () => {
     // Paid Tue 4 Mar 2025, 11:59 EST (16:59Z). Wed 5 Mar's cutoff is Tue 12:00 EST = 17:00Z: not passed.
-    // Ship: Wed + 1-day hold = Thu 6 Mar (a ship day). Ready (filter): Wed + 2 = Fri 7 Mar.
-    // Best-before: Wed + 28 = Wed 2 Apr. Arrival: Thu + 3 business days = Fri, Mon, Tue 11 Mar.
+    // Ready (filter): Wed + 2 = Fri 7 Mar. Best-before: Wed + 28 = Wed 2 Apr. Ship: the hold allows
+    // Thu 6 Mar, but Thu → Fri, Mon, Tue 11 and Fri → Mon, Tue, Wed cross the weekend of 8–9 Mar;
+    // Mon 10 → Tue, Wed, Thu 13 Mar does not, and lands after Fri 7 (ready on arrival).
     expect(scheduleOrder(order('2025-03-04T16:59:00Z'), shop)).toEqual({
       roastDate: '2025-03-05',
       cutoffAt: '2025-03-04T17:00:00.000Z',
-      shipDate: '2025-03-06',
+      shipDate: '2025-03-10',
       readyFrom: '2025-03-07',
       bestBefore: '2025-04-02',
-      expectedArrival: '2025-03-11',
+      expectedArrival: '2025-03-13',
     });
   });
 
   it('moves to the following roast day at the cutoff and a minute after', () => {
     // Paid at 12:00 EST exactly: the cutoff has passed. Next: Fri 7 Mar (cutoff Thu 12:00).
-    // Ship: Fri + 1 = Sat, not a ship day → Mon 10 Mar. Espresso rests 7 days: Fri 14 Mar.
+    // Espresso rests 7 days: Fri 14 Mar. Ship: Fri + 1 = Sat, not a ship day → Mon 10 Mar, but
+    // Mon → Tue, Wed, Thu 13 lands before it is ready; Tue 11 → Wed, Thu, Fri 14 Mar: ready on arrival.
     for (const paidAt of ['2025-03-04T17:00:00Z', '2025-03-04T17:01:00Z']) {
       expect(scheduleOrder(order(paidAt, 1000, 'espresso'), shop)).toMatchObject({
         roastDate: '2025-03-07',
-        shipDate: '2025-03-10',
+        shipDate: '2025-03-11',
         readyFrom: '2025-03-14',
-        expectedArrival: '2025-03-13',
+        expectedArrival: '2025-03-14',
       });
     }
   });
@@ -152,7 +159,12 @@ describe('one order: roast date after the cutoff', () => {
         const earliestShip = addDays(dates.roastDate, settings.degasHoldDays);
         expect(dates.shipDate >= earliestShip).toBe(true);
         expect(isShipDay(dates.shipDate, settings, roastCalendar)).toBe(true);
-        for (let date = earliestShip; date < dates.shipDate; date = addDays(date, 1)) expect(isShipDay(date, settings, roastCalendar)).toBe(false);
+        // Ready on arrival, and never in transit over a Saturday or Sunday (a Monday ship day with
+        // 3 transit days always exists, so the weekend hold never gives way here).
+        expect(dates.expectedArrival >= dates.readyFrom).toBe(true);
+        for (let date = addDays(dates.shipDate, 1); date < dates.expectedArrival; date = addDays(date, 1)) {
+          expect(['sat', 'sun']).not.toContain(weekdayOf(date));
+        }
         expect(dates.readyFrom).toBe(addDays(dates.roastDate, 2));
         expect(dates.bestBefore).toBe(addDays(dates.roastDate, 28));
       }),
@@ -173,21 +185,24 @@ describe('one order: roast date after the cutoff', () => {
 });
 
 describe('dates that follow from a roast date', () => {
-  it('counts transit in business days like date-fns', () => {
+  it('counts transit in business days like date-fns when no holiday falls in transit', () => {
     const day = fc.integer({ min: 0, max: 2000 }).map((offset) => addDays('2024-01-01', offset));
     fc.assert(
       fc.property(day, fc.integer({ min: 0, max: 10 }), (shipDate, transit) => {
         fc.pre(weekdayOf(shipDate) !== 'sat' && weekdayOf(shipDate) !== 'sun');
         const [year, month, dayOfMonth] = shipDate.split('-').map(Number) as [number, number, number];
         const reference = format(addBusinessDays(new TZDate(year, month - 1, dayOfMonth, 'UTC'), transit), 'yyyy-MM-dd');
+        // Holidays are no transit days (tested with hand-worked dates below).
+        for (let date = addDays(shipDate, 1); date <= reference; date = addDays(date, 1)) fc.pre(carrierHolidayOn(date) === null);
         expect(arrivalDate(shipDate, transit)).toBe(reference);
       }),
     );
   });
 
   it('rests espresso longer than filter and adjusts rest by level', () => {
-    // Filter 2 days, espresso 7 (TRADE.md product defaults; filter 2–7, espresso 7–14 from memory).
-    expect(datesForRoastDate('2025-03-05', { brewMethod: 'espresso', roastLevel: 'light' }, shop).readyFrom).toBe('2025-03-12');
+    // Filter 2 days, espresso 7 (TRADE.md product defaults; filter 2–7, espresso 7–14 from memory);
+    // light +1 day by default (Smrke et al. 2017; the day from memory): 5 Mar + 8 = 13 Mar.
+    expect(datesForRoastDate('2025-03-05', { brewMethod: 'espresso', roastLevel: 'light' }, shop).readyFrom).toBe('2025-03-13');
     const adjusted = { ...shop, restAdjustDays: { ...shop.restAdjustDays, dark: -1, light: 2 } };
     expect(datesForRoastDate('2025-03-05', { brewMethod: 'filter', roastLevel: 'dark' }, adjusted).readyFrom).toBe('2025-03-06');
     expect(datesForRoastDate('2025-03-05', { brewMethod: 'filter', roastLevel: 'light' }, adjusted).readyFrom).toBe('2025-03-09');
@@ -195,11 +210,15 @@ describe('dates that follow from a roast date', () => {
     expect(datesForRoastDate('2025-03-05', { brewMethod: 'filter', roastLevel: 'dark' }, neverNegative).readyFrom).toBe('2025-03-05');
   });
 
-  it('keeps parcels in when the shop is closed, and fails clearly without any ship day', () => {
-    // Thu 6 Mar closed: Wed's roast ships Fri 7 Mar instead.
-    expect(datesForRoastDate('2025-03-05', medium, shop, { overrides: { '2025-03-06': { open: false } } }).shipDate).toBe('2025-03-07');
+  it('keeps parcels in on a closed ship day, not on a day closed to roasting only, and fails clearly without any ship day', () => {
+    // Ship straight after the hold: Wed 5 Mar's roast ships Thu 6 Mar; with shipping closed on
+    // Thu 6 it ships Fri 7 Mar; closing Thu 6 to roasting only (it is no roast weekday) keeps Thu 6.
+    const straight = { ...shop, shipPolicy: 'after_degassing', holdOverWeekend: false } as const;
+    expect(datesForRoastDate('2025-03-05', medium, straight).shipDate).toBe('2025-03-06');
+    expect(datesForRoastDate('2025-03-05', medium, straight, { overrides: { '2025-03-06': { open: false, shipOpen: false } } }).shipDate).toBe('2025-03-07');
+    expect(datesForRoastDate('2025-03-05', medium, straight, { overrides: { '2025-03-06': { open: false } } }).shipDate).toBe('2025-03-06');
     const sundaysOnly = { ...shop, shipWeekdays: ['sun'] as const };
-    const closedSundays = Object.fromEntries(Array.from({ length: 30 }, (_, week) => [addDays('2025-03-09', week * 7), { open: false }]));
+    const closedSundays = Object.fromEntries(Array.from({ length: 30 }, (_, week) => [addDays('2025-03-09', week * 7), { open: false, shipOpen: false }]));
     expect(() => datesForRoastDate('2025-03-05', medium, sundaysOnly, { overrides: closedSundays })).toThrow(/No ship day/);
   });
 });
@@ -217,7 +236,8 @@ describe('subscription deliveries', () => {
     const deliveries = subscriptionDeliveries(base, shop);
     expect(deliveries.map((delivery) => delivery.roastDate)).toEqual(['2025-03-05', '2025-03-19', '2025-04-02', '2025-04-16']);
     expect(deliveries.every((delivery) => delivery.status === 'scheduled' && !delivery.movedByClosure && !delivery.locked)).toBe(true);
-    expect(deliveries[0]).toMatchObject({ shipDate: '2025-03-06', readyFrom: '2025-03-07', bestBefore: '2025-04-02' });
+    // Wed 5 Mar ships Mon 10 Mar, the first ship day that does not sit over a weekend (above).
+    expect(deliveries[0]).toMatchObject({ shipDate: '2025-03-10', readyFrom: '2025-03-07', bestBefore: '2025-04-02' });
   });
 
   it('moves one delivery past a closed day and keeps the next on its anchor', () => {

@@ -5,9 +5,12 @@
  * - `isOpenRoastDay(date, settings, calendar)`, `isShipDay(date, settings, calendar)`,
  *   `dayCapacityGrams(date, settings, calendar)`.
  * - `cutoffInstant(roastDate, settings)`: orders paid before it can roast that day.
- * - `datesForRoastDate(roastDate, coffee, settings, calendar)`: ship date (first ship day on or
- *   after roast + degassing hold), ready-from (roast + rest for the brew method and level),
- *   best-before (roast + bestBeforeDays), expected arrival (ship + transit business days).
+ * - `datesForRoastDate(roastDate, coffee, settings, calendar)`: ready-from (roast + rest for the
+ *   brew method and level), ship date (`shipDateFor`), best-before (roast + bestBeforeDays),
+ *   expected arrival (ship + transit business days). `datesForLines` does the same for a parcel
+ *   of several coffees: its slowest-resting bag decides.
+ * - `shipDateFor(earliest, readyFrom, settings, calendar)`: the first ship day on or after the
+ *   degassing hold that the ship policy and the weekend hold accept (below).
  * - `scheduleOrder(order, settings, calendar)`: for an instant of payment, the first open roast
  *   day whose cutoff has not passed and with capacity left, and the dates that follow from it.
  * - `subscriptionDeliveries(subscription, settings, calendar)`: the anchored series of deliveries
@@ -17,14 +20,28 @@
  * - `greenOrderDates(paidAt, settings, calendar)`: green coffee ships (no roast) on the first ship
  *   day on or after the payment day, or the next one when paid after the cutoff time.
  *
- * Rules: a cutoff has passed at the cutoff instant itself. A calendar override decides whether a
- * day roasts; an override that closes a day also stops shipping on it (the shop is closed).
- * Transit counts Monday–Friday. Subscription deliveries are booked ahead and not held back by
+ * Rules: a cutoff has passed at the cutoff instant itself. Roast days and ship days are separate
+ * calendars: an override's `open` decides whether a day roasts, its `shipOpen` whether parcels go
+ * out (left out: the weekly ship weekdays, less carrier holidays). Carrier holidays
+ * (./carrier-holidays) are no ship days unless an override opens one, and never transit days:
+ * transit counts Monday–Friday that are not holidays.
+ *
+ * Ship policy (`shipPolicy`): `ready_on_arrival` holds a roasted parcel until its expected arrival
+ * is on or after its ready-from date (ship ≥ ready-from − transit, in business days);
+ * `after_degassing` ships it on the first ship day after the degassing hold and the customer is
+ * told the ready-from date. Weekend hold (`holdOverWeekend`): a roasted parcel "crosses a weekend"
+ * when a Saturday or Sunday falls after its ship date and before its expected arrival (it would
+ * sit in a depot); it waits for the first ship day from which it does not. Holidays alone do not
+ * count (transit already skips them). When no ship day within the search horizon avoids a weekend
+ * (transit of five or more business days always crosses one), the weekend hold gives way and the
+ * parcel ships on the first day the other rules allow. Green coffee keeps for months: it waits for
+ * neither rule. Subscription deliveries are booked ahead and not held back by
  * capacity; one-time orders are. Searches look at most `SEARCH_HORIZON_DAYS` ahead and throw a
  * `ScheduleError` when nothing is found.
  */
+import { carrierHolidayOn } from './carrier-holidays';
 import { addDays, daysBetween, instantAt, localDateOf, weekdayOf, type IsoDate } from './shop-time';
-import type { BrewMethod, CadenceWeeks, RoastLevel, Weekday } from './vocabulary';
+import type { BrewMethod, CadenceWeeks, RoastLevel, ShipPolicy, Weekday } from './vocabulary';
 
 export interface ScheduleSettings {
   timeZone: string;
@@ -38,10 +55,15 @@ export interface ScheduleSettings {
   restAdjustDays: Record<RoastLevel, number>;
   bestBeforeDays: number;
   dayCapacityGrams: number;
+  shipPolicy: ShipPolicy;
+  holdOverWeekend: boolean;
 }
 
 export interface CalendarOverride {
+  /** Whether the day roasts. */
   open: boolean;
+  /** Whether parcels go out; null or left out follows the ship weekdays and carrier holidays. */
+  shipOpen?: boolean | null;
   capacityGrams?: number | null;
   note?: string | null;
 }
@@ -72,8 +94,14 @@ export function isOpenRoastDay(date: IsoDate, settings: ScheduleSettings, calend
 }
 
 export function isShipDay(date: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): boolean {
-  if (calendar.overrides?.[date]?.open === false) return false;
-  return settings.shipWeekdays.includes(weekdayOf(date));
+  const shipOpen = calendar.overrides?.[date]?.shipOpen;
+  if (shipOpen !== undefined && shipOpen !== null) return shipOpen;
+  return settings.shipWeekdays.includes(weekdayOf(date)) && carrierHolidayOn(date) === null;
+}
+
+/** A day parcels move: Monday to Friday, not a carrier holiday. */
+export function isTransitDay(date: IsoDate): boolean {
+  return businessDays.has(weekdayOf(date)) && carrierHolidayOn(date) === null;
 }
 
 /** Green grams the day can roast; zero when closed. */
@@ -94,22 +122,46 @@ function firstDayFrom(start: IsoDate, accept: (date: IsoDate) => boolean): IsoDa
   return undefined;
 }
 
-function firstShipDayFrom(start: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar): IsoDate {
-  const shipDate = firstDayFrom(start, (date) => isShipDay(date, settings, calendar));
+function firstShipDayFrom(start: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar, accept: (date: IsoDate) => boolean = () => true): IsoDate {
+  const shipDate = firstDayFrom(start, (date) => isShipDay(date, settings, calendar) && accept(date));
   if (!shipDate) {
     throw new ScheduleError('no_ship_day', `No ship day within ${SEARCH_HORIZON_DAYS} days of ${start}.`);
   }
   return shipDate;
 }
 
-/** The date after `transitDays` business days in transit. */
+/** The date after `transitDays` transit days (business days that are not carrier holidays). */
 export function arrivalDate(shipDate: IsoDate, transitDays: number): IsoDate {
   let date = shipDate;
   for (let remaining = transitDays; remaining > 0; ) {
     date = addDays(date, 1);
-    if (businessDays.has(weekdayOf(date))) remaining -= 1;
+    if (isTransitDay(date)) remaining -= 1;
   }
   return date;
+}
+
+/** True when a Saturday or Sunday falls after the ship date and before the expected arrival. */
+export function crossesWeekend(shipDate: IsoDate, expectedArrival: IsoDate): boolean {
+  for (let date = addDays(shipDate, 1); date < expectedArrival; date = addDays(date, 1)) {
+    if (!businessDays.has(weekdayOf(date))) return true;
+  }
+  return false;
+}
+
+/**
+ * The ship date of a roasted parcel that may leave from `earliest` (roast + degassing hold) and is
+ * ready to brew from `readyFrom`: the first ship day the ship policy and the weekend hold accept.
+ */
+export function shipDateFor(earliest: IsoDate, readyFrom: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): IsoDate {
+  const readyOnArrival = (date: IsoDate) =>
+    settings.shipPolicy !== 'ready_on_arrival' || arrivalDate(date, settings.transitDays) >= readyFrom;
+  const byPolicy = firstShipDayFrom(earliest, settings, calendar, readyOnArrival);
+  if (!settings.holdOverWeekend) return byPolicy;
+  const noWeekend = firstDayFrom(
+    byPolicy,
+    (date) => isShipDay(date, settings, calendar) && !crossesWeekend(date, arrivalDate(date, settings.transitDays)),
+  );
+  return noWeekend ?? byPolicy;
 }
 
 export interface CoffeeForRest {
@@ -137,15 +189,30 @@ export function datesForRoastDate(
   settings: ScheduleSettings,
   calendar: RoastCalendar = {},
 ): RoastDates {
-  const shipDate = firstShipDayFrom(addDays(roastDate, settings.degasHoldDays), settings, calendar);
+  const readyFrom = addDays(roastDate, restDaysFor(coffee, settings));
+  const shipDate = shipDateFor(addDays(roastDate, settings.degasHoldDays), readyFrom, settings, calendar);
   return {
     roastDate,
     cutoffAt: cutoffInstant(roastDate, settings).toISOString(),
     shipDate,
-    readyFrom: addDays(roastDate, restDaysFor(coffee, settings)),
+    readyFrom,
     bestBefore: addDays(roastDate, settings.bestBeforeDays),
     expectedArrival: arrivalDate(shipDate, settings.transitDays),
   };
+}
+
+/** The dates of a parcel of several coffees roasted on one day: the slowest-resting bag decides. */
+export function datesForLines(
+  roastDate: IsoDate,
+  lines: readonly CoffeeForRest[],
+  settings: ScheduleSettings,
+  calendar: RoastCalendar = {},
+): RoastDates {
+  const slowest = lines.reduce<CoffeeForRest | undefined>(
+    (current, line) => (current === undefined || restDaysFor(line, settings) > restDaysFor(current, settings) ? line : current),
+    undefined,
+  );
+  return datesForRoastDate(roastDate, slowest ?? { brewMethod: 'filter', roastLevel: 'medium' }, settings, calendar);
 }
 
 export interface OrderToSchedule extends CoffeeForRest {
@@ -236,6 +303,12 @@ export interface CalendarDay {
   date: IsoDate;
   weekday: Weekday;
   open: boolean;
+  /** Parcels go out this day. */
+  shipOpen: boolean;
+  /** Staff's choice for shipping this day; null follows the ship weekdays and carrier holidays. */
+  shipOverride: boolean | null;
+  /** The carrier holiday observed this day, or null. */
+  holiday: string | null;
   capacityGrams: number;
   plannedGreenGrams: number;
   note: string | null;
@@ -259,6 +332,9 @@ export function roastCalendarDays(
       date,
       weekday: weekdayOf(date),
       open: isOpenRoastDay(date, settings, calendar),
+      shipOpen: isShipDay(date, settings, calendar),
+      shipOverride: calendar.overrides?.[date]?.shipOpen ?? null,
+      holiday: carrierHolidayOn(date)?.name ?? null,
       capacityGrams: dayCapacityGrams(date, settings, calendar),
       plannedGreenGrams: calendar.plannedGreenGrams?.[date] ?? 0,
       note: calendar.overrides?.[date]?.note ?? null,

@@ -82,3 +82,19 @@ export const weekdayLabels: Record<Weekday, string> = {
 
 /** What a Roaster's Rotation line or subscription is called, since it has no lot of its own. */
 export const roastersRotationName = "Roaster's Rotation";
+
+/** When a roasted parcel ships: so it lands rested, or as soon as the degassing hold is over. */
+export const shipPolicies = ['ready_on_arrival', 'after_degassing'] as const;
+export type ShipPolicy = (typeof shipPolicies)[number];
+
+/** The owner's choice, as Shop settings words it. */
+export const shipPolicyLabels: Record<ShipPolicy, string> = {
+  ready_on_arrival: 'Ship so it is ready to brew on arrival',
+  after_degassing: 'Ship after the degassing hold, and tell the customer the ready-from date',
+};
+
+/** What the customer is told (Roasted to Order, Deliveries, order pages). */
+export const shipPolicyCustomerNotes: Record<ShipPolicy, string> = {
+  ready_on_arrival: 'Ready to brew on arrival: we hold each bag after roasting until it will have rested by the time it lands.',
+  after_degassing: 'Ships as soon as it has degassed, so it can arrive before it is at its best: brew it from its ready-from date.',
+};

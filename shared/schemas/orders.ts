@@ -102,6 +102,10 @@ export const orderDetailSchema = z.object({
   shipDate: z.string().nullable(),
   readyFrom: z.string().nullable(),
   bestBefore: z.string().nullable(),
+  /** The day the parcel should land: ship date + transit days (weekends and carrier holidays not counted). */
+  expectedArrival: z.string().nullable(),
+  /** Roasted coffee: true when it lands on or after its ready-from date; null for green coffee or no dates yet. */
+  readyOnArrival: z.boolean().nullable(),
   carrier: z.string().nullable(),
   trackingNumber: z.string().nullable(),
   paidAt: z.iso.datetime({ offset: true }).nullable(),

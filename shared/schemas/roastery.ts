@@ -31,7 +31,14 @@ export type CalendarQuery = z.infer<typeof calendarQuerySchema>;
 export const calendarDaySchema = z.object({
   date: z.string(),
   weekday: z.enum(weekdays),
+  /** The day roasts. */
   open: z.boolean(),
+  /** Parcels go out this day: the ship weekdays less carrier holidays, unless staff changed the day. */
+  shipOpen: z.boolean(),
+  /** Staff's choice for shipping this day (`PUT`'s `shipOpen`); null follows the ship weekdays and carrier holidays. */
+  shipOverride: z.boolean().nullable(),
+  /** The US federal holiday observed this day (carriers closed), or null. */
+  holiday: z.string().nullable(),
   /** Green grams the day can roast: the day's own figure or the shop's daily capacity; 0 when closed. */
   capacityGrams: wholeGrams,
   /**
@@ -44,7 +51,7 @@ export const calendarDaySchema = z.object({
   ordersCount: z.number().int().min(0),
   /** What the day's recorded batches add up to (the Roast List's record): all zero before any batch. */
   roasted: z.object({ batches: z.number().int().min(0), greenGrams: wholeGrams, roastedGrams: wholeGrams }),
-  /** True when staff changed this day (a roast_days row); false when it follows the weekly settings. */
+  /** True when staff changed this day (roasting, shipping, capacity or note); false when it follows the weekly settings. */
   overridden: z.boolean(),
 });
 export type CalendarDay = z.infer<typeof calendarDaySchema>;
@@ -54,11 +61,14 @@ export const calendarResponseSchema = z.object({ days: z.array(calendarDaySchema
 export type CalendarResponse = z.infer<typeof calendarResponseSchema>;
 
 /**
- * Body of `PUT /api/roastery/calendar/:date`. `capacityGrams` null (or left out) uses the shop's
- * daily capacity; `note` left out keeps the day's note.
+ * Body of `PUT /api/roastery/calendar/:date`. `open` is roasting; `shipOpen` is shipping, apart
+ * from roasting: true or false sets it, null follows the ship weekdays and carrier holidays, left
+ * out keeps it. `capacityGrams` null (or left out) uses the shop's daily capacity; `note` left out
+ * keeps the day's note.
  */
 export const calendarDayUpdateSchema = z.object({
   open: z.boolean(),
+  shipOpen: z.boolean().nullable().optional(),
   capacityGrams: z.number().int().min(0).max(10_000_000).nullable().optional(),
   note: z.string().trim().max(200, 'Keep the note to 200 characters.').optional(),
 });
@@ -72,10 +82,15 @@ export type MovedOrder = z.infer<typeof movedOrderSchema>;
 export const movedDeliverySchema = z.object({ deliveryId: z.uuid(), subscriptionId: z.uuid(), from: z.string(), to: z.string() });
 export type MovedDelivery = z.infer<typeof movedDeliverySchema>;
 
-/** Reply of `PUT /api/roastery/calendar/:date`: the day as it now stands and what closing it moved. */
+/** An order or a delivery not yet paid whose ship date a change of the day's shipping moved. */
+export const shipMovedSchema = z.object({ orderId: z.uuid().nullable(), deliveryId: z.uuid().nullable(), from: z.string(), to: z.string() });
+export type ShipMoved = z.infer<typeof shipMovedSchema>;
+
+/** Reply of `PUT /api/roastery/calendar/:date`: the day as it now stands and what the change moved. */
 export const calendarDayUpdateResponseSchema = calendarDaySchema.extend({
   moved: z.array(movedOrderSchema),
   movedDeliveries: z.array(movedDeliverySchema),
+  shipMoved: z.array(shipMovedSchema),
 });
 export type CalendarDayUpdateResponse = z.infer<typeof calendarDayUpdateResponseSchema>;
 

@@ -21,12 +21,26 @@ describe('shop settings', () => {
     expect(defaultShopSettings.lossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15 }); // TRADE.md (from memory)
     expect(defaultShopSettings.lossModelMinBatches).toBe(3);
     expect(defaultShopSettings.timeZone).toBe('America/New_York');
+    // Ready to brew on arrival and no parcel over a weekend (PRODUCT.md; TRADE.md, common practice).
+    expect(defaultShopSettings).toMatchObject({ shipPolicy: 'ready_on_arrival', holdOverWeekend: true });
+    // Darker roasts degas faster (Smrke et al. 2017); the days from memory (TRADE.md).
+    expect(defaultShopSettings.restAdjustDays).toEqual({ light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 });
     expect(shopSettingsSchema.parse(defaultShopSettings)).toEqual(defaultShopSettings);
   });
 
   it("fills in Restday's added fields when a body carries only API.md's", () => {
     const minimal = withChange((settings) => {
-      for (const key of ['currency', 'restAdjustDays', 'dayCapacityGrams', 'lossModelMinBatches', 'roastedBagPriceCents', 'subscriptionDiscountPct', 'shipping'] as const) {
+      for (const key of [
+        'currency',
+        'restAdjustDays',
+        'dayCapacityGrams',
+        'lossModelMinBatches',
+        'roastedBagPriceCents',
+        'subscriptionDiscountPct',
+        'shipping',
+        'shipPolicy',
+        'holdOverWeekend',
+      ] as const) {
         delete settings[key];
       }
     });

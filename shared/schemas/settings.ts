@@ -4,12 +4,13 @@ import { hasAtMostDecimals } from '../domain/integer-math';
 import { currencies, type CurrencyCode } from '../domain/money';
 import { DEFAULT_LOSS_MIN_BATCHES, defaultLossModel } from '../domain/roast-loss';
 import { isClockTime, isValidTimeZone } from '../domain/shop-time';
-import { roastedBagSizes, roastLevels, weekdays } from '../domain/vocabulary';
+import { roastedBagSizes, roastLevels, shipPolicies, weekdays } from '../domain/vocabulary';
 
 /**
  * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET (API.md).
  * Fields beyond API.md's sketch (currency, restAdjustDays, dayCapacityGrams, lossModelMinBatches,
- * roastedBagPriceCents, subscriptionDiscountPct, renewalReminderDays, shipping) default when left out.
+ * roastedBagPriceCents, subscriptionDiscountPct, renewalReminderDays, shipping, shipPolicy,
+ * holdOverWeekend) default when left out.
  */
 
 const percent = (max: number) =>
@@ -72,7 +73,9 @@ const shippingSchema = z
     path: ['bands'],
   });
 
-const defaultRestAdjustDays = { light: 0, medium: 0, 'medium-dark': 0, dark: 0, french: 0 };
+// Darker roasts degas faster [Smrke et al. 2017]: light +1 day, medium-dark, dark and French −1
+// (TRADE.md, from memory).
+const defaultRestAdjustDays = { light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 };
 // Invented prices for the shop to replace.
 const defaultRoastedBagPriceCents = { '12oz': 1_800, '1lb': 2_300, '2lb': 4_400 };
 // Weight bands with invented prices for the shop to replace with its carrier's (Restday defaults, no
@@ -105,6 +108,10 @@ export const shopSettingsSchema = z
     shipWeekdays: weekdayList,
     transitDays: wholeDays(14),
     degasHoldDays: wholeDays(14),
+    /** Hold a roasted parcel until it will be ready on arrival, or ship after the degassing hold. */
+    shipPolicy: z.enum(shipPolicies).default('ready_on_arrival'),
+    /** Hold a roasted parcel whose transit would cross a weekend to a ship day from which it does not. */
+    holdOverWeekend: z.boolean().default(true),
     restDays: z.object({ filter: wholeDays(60), espresso: wholeDays(60) }),
     restAdjustDays: z
       .object(
@@ -153,6 +160,10 @@ export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
   transitDays: 3,
   // Roasted coffee gives off most of its CO2 in the first 24–48 h (TRADE.md, common practice).
   degasHoldDays: 1,
+  // The bag is ready to brew when it lands (PRODUCT.md); no parcel sits over a weekend (TRADE.md,
+  // common practice).
+  shipPolicy: 'ready_on_arrival',
+  holdOverWeekend: true,
   // Filter 2 days, espresso 7, best-before 28 days (TRADE.md product defaults).
   restDays: { filter: 2, espresso: 7 },
   restAdjustDays: defaultRestAdjustDays,

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { brewMethods, roastedBagSizes, roastLevels } from '../domain/vocabulary';
+import { brewMethods, roastedBagSizes, roastLevels, shipPolicies } from '../domain/vocabulary';
 
 /** Most bags in one delivery (the subscriptions table allows 1–10). */
 const maxBags = 10;
@@ -38,6 +38,8 @@ export const previewDeliverySchema = z.object({
   shipDate: z.string(),
   readyFrom: z.string(),
   bestBefore: z.string(),
+  /** The day the parcel should land (ship date + transit days). */
+  expectedArrival: z.string(),
   cutoffAt: z.iso.datetime({ offset: true }),
 });
 export type PreviewDelivery = z.infer<typeof previewDeliverySchema>;
@@ -54,6 +56,8 @@ export const subscriptionPreviewSchema = z.object({
   discountPct: z.number(),
   shippingCents: z.number().int(),
   currency: z.string(),
+  /** The shop's ship policy, so the builder can say whether the bag lands ready to brew. */
+  shipPolicy: z.enum(shipPolicies),
   deliveries: z.array(previewDeliverySchema),
 });
 export type SubscriptionPreview = z.infer<typeof subscriptionPreviewSchema>;

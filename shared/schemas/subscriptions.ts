@@ -58,6 +58,10 @@ export const subscriptionDeliverySchema = z.object({
   shipDate: z.string(),
   readyFrom: z.string(),
   bestBefore: z.string(),
+  /** The day the parcel should land (ship date + transit days, weekends and carrier holidays not counted). */
+  expectedArrival: z.string(),
+  /** True when it lands on or after its ready-from date: ready to brew on arrival. */
+  readyOnArrival: z.boolean(),
   status: z.enum(deliveryStatuses),
   locked: z.boolean(),
   cutoffAt: z.iso.datetime({ offset: true }),

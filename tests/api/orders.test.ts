@@ -1,3 +1,4 @@
+import { eq } from 'drizzle-orm';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
@@ -69,6 +70,17 @@ describe('GET /api/orders and /api/orders/:id for a customer', () => {
       shippingAddress: { ...shipTo, line2: null, country: 'US' },
       roastDate: null,
     });
+  });
+
+  it('gives the expected arrival, skipping Christmas Day, and no ready-on-arrival for green coffee', async () => {
+    const lot = await createLotForSale(1000);
+    const customer = await createTestUser('customer');
+    const id = await inventOrder(customer, lot.id);
+    await getTestDb().update(orders).set({ shipDate: '2026-12-24' }).where(eq(orders.id, id));
+    // Ships Thu 24 Dec 2026; 3 transit days (the default) skip Fri 25 (Christmas Day, 5 U.S.C. 6103)
+    // and the weekend: Mon 28, Tue 29, Wed 30 Dec.
+    const detail = orderDetailSchema.parse((await (await signedInAgent(app, customer)).get(`/api/orders/${id}`)).body);
+    expect(detail).toMatchObject({ shipDate: '2026-12-24', expectedArrival: '2026-12-30', readyOnArrival: null });
   });
 
   it('answers 404 for another customer’s order, exactly as for one that does not exist', async () => {

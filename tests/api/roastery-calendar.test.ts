@@ -35,8 +35,11 @@ async function movedEmailsTo(addresses: string[]) {
 }
 
 // The schedule the expected dates below are worked from: roast Monday, Wednesday and Friday;
-// ship Monday to Friday; one day's degassing hold; rest 2 days for filter and 7 for espresso;
-// best before 28 days after roasting (TRADE.md product defaults).
+// ship Monday to Friday; one day's degassing hold; 3 transit days; rest 2 days for filter and 7 for
+// espresso, no level adjustments; best before 28 days after roasting (TRADE.md product defaults).
+// Ready on arrival and the weekend hold are on (the defaults): a parcel ships no earlier than its
+// expected arrival allows it to be ready, and never into a weekend in transit, so with 3 transit
+// days roasted parcels leave on a Monday or Tuesday (common practice: no parcel sits over a weekend).
 const shopSettingsForDates = {
   timeZone: 'America/Denver',
   roastWeekdays: ['mon', 'wed', 'fri'],
@@ -103,8 +106,10 @@ describe('PUT /api/roastery/calendar/:date', () => {
 
     // Roast Friday May 9, hold one day → Saturday May 10, not a ship day; first ship day is Monday May 12.
     // Ready from: filter 2 days → May 11; espresso 7 days → May 16. Best before: 28 days → June 6.
+    // Filter ships Mon 12 (→ Tue 13, Wed 14, Thu 15: after it is ready, no weekend in transit).
+    // Espresso ships so it is ready on arrival: Mon 12 lands Thu 15, before Fri 16; Tue 13 lands Fri 16.
     const filterDates = { roastDate: '2031-05-09', shipDate: '2031-05-12', readyFrom: '2031-05-11', bestBefore: '2031-06-06' };
-    const espressoDates = { ...filterDates, readyFrom: '2031-05-16' };
+    const espressoDates = { ...filterDates, shipDate: '2031-05-13', readyFrom: '2031-05-16' };
     expect(await orderDates([ids.a1!, ids.a2!, ids.b1!, ids.c1!])).toEqual({
       [ids.a1!]: filterDates,
       [ids.a2!]: espressoDates,
@@ -228,6 +233,74 @@ describe('PUT /api/roastery/calendar/:date', () => {
     const missing = await staff.put('/api/roastery/calendar/2031-05-30').send({ note: 'no flag' });
     expect(apiErrorSchema.parse(missing.body).error.fields).toHaveProperty('open');
     expect(await getTestDb().select().from(roastDays).where(eq(roastDays.date, '2031-05-30'))).toEqual([]);
+  });
+});
+
+describe('PUT /api/roastery/calendar/:date with shipOpen', () => {
+  // July 2031: Mon 14 Jul is a roast day and a ship day; no federal holiday near (Independence Day
+  // was Fri 4 Jul; 5 U.S.C. 6103).
+  const roastDate = '2031-07-09'; // a Wednesday
+  const shipDay = '2031-07-14';
+  let orderId: string;
+  let deliveryId: string;
+
+  beforeAll(async () => {
+    const customer = await createTestUser('customer');
+    // Filter, ready Fri 11 Jul. Thu 10 and Fri 11 would be in transit over 12–13 Jul; Mon 14 →
+    // Tue 15, Wed 16, Thu 17: the schedule's ship date.
+    const dates = { shipDate: shipDay, readyFrom: '2031-07-11', bestBefore: '2031-08-06' };
+    orderId = await insertRoastedOrder({ userId: customer.id, roastDate, dates, lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    deliveryId = (await insertSubscriptionDelivery({ userId: customer.id, lotId, roastLevel: 'medium', brewMethod: 'filter', roastDate, dates })).deliveryId;
+  });
+
+  const shipDates = async () => {
+    const [order] = await getTestDb().select({ shipDate: orders.shipDate }).from(orders).where(eq(orders.id, orderId));
+    const [delivery] = await getTestDb().select({ shipDate: deliveries.shipDate }).from(deliveries).where(eq(deliveries.id, deliveryId));
+    return [order?.shipDate, delivery?.shipDate];
+  };
+
+  it('closes shipping on a day and leaves it a roast day; its parcels ship on the next ship day', async () => {
+    const response = await staff.put(`/api/roastery/calendar/${shipDay}`).send({ open: true, shipOpen: false, note: 'Carrier depot closed (invented)' });
+    expect(response.status, JSON.stringify(response.body)).toBe(200);
+    const day = calendarDayUpdateResponseSchema.parse(response.body);
+    expect(day).toMatchObject({ date: shipDay, open: true, capacityGrams: 60_000, shipOpen: false, shipOverride: false, holiday: null, overridden: true, moved: [], movedDeliveries: [] });
+    // Next ship day: Tue 15 Jul → Wed 16, Thu 17, Fri 18: ready, and no weekend in transit.
+    expect(day.shipMoved.map((move) => [move.orderId ?? move.deliveryId, move.from, move.to]).sort()).toEqual(
+      [
+        [orderId, shipDay, '2031-07-15'],
+        [deliveryId, shipDay, '2031-07-15'],
+      ].sort(),
+    );
+    expect(await shipDates()).toEqual(['2031-07-15', '2031-07-15']);
+
+    const { days } = calendarResponseSchema.parse((await staff.get(`/api/roastery/calendar?from=${shipDay}&to=2031-07-15`)).body);
+    expect(days.map((each) => [each.date, each.open, each.shipOpen])).toEqual([
+      [shipDay, true, false],
+      ['2031-07-15', false, true],
+    ]);
+  });
+
+  it('a roast-day change that leaves shipOpen out keeps the day closed to shipping', async () => {
+    const day = calendarDayUpdateResponseSchema.parse((await staff.put(`/api/roastery/calendar/${shipDay}`).send({ open: true, capacityGrams: 30_000 })).body);
+    expect(day).toMatchObject({ shipOpen: false, capacityGrams: 30_000, shipMoved: [] });
+  });
+
+  it('shipping as usual again brings the parcels back to the day, and a day like the weekly settings keeps no row', async () => {
+    const day = calendarDayUpdateResponseSchema.parse((await staff.put(`/api/roastery/calendar/${shipDay}`).send({ open: true, shipOpen: null, note: '' })).body);
+    expect(day).toMatchObject({ shipOpen: true, shipOverride: null, overridden: false });
+    expect(day.shipMoved.every((move) => move.from === '2031-07-15' && move.to === shipDay)).toBe(true);
+    expect(await shipDates()).toEqual([shipDay, shipDay]);
+    expect(await getTestDb().select().from(roastDays).where(eq(roastDays.date, shipDay))).toEqual([]);
+  });
+
+  it('reports carrier holidays closed to shipping, and answers 400 naming shipOpen for a bad value', async () => {
+    // Thanksgiving Day 2031: fourth Thursday of November (1 Nov 2031 is a Saturday: Thursdays 6, 13, 20, 27).
+    const { days } = calendarResponseSchema.parse((await staff.get('/api/roastery/calendar?from=2031-11-27&to=2031-11-27')).body);
+    expect(days[0]).toMatchObject({ shipOpen: false, holiday: 'Thanksgiving Day' });
+    const bad = await staff.put('/api/roastery/calendar/2031-11-28').send({ open: true, shipOpen: 'no' });
+    expect(bad.status).toBe(400);
+    expect(apiErrorSchema.parse(bad.body).error.fields).toHaveProperty('shipOpen');
+    expect(await getTestDb().select().from(roastDays).where(eq(roastDays.date, '2031-11-28'))).toEqual([]);
   });
 });
 

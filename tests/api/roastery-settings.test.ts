@@ -61,6 +61,40 @@ describe('PUT /api/roastery/settings', () => {
     expect(audit?.detail).toEqual({ changed: 'timeZone,roastWeekdays,overagePct,roaster' });
   });
 
+  it('saves the ship policy, the weekend hold and the rest by level, and defaults them when left out', async () => {
+    // Defaults: ready on arrival and no parcel over a weekend (PRODUCT.md); light +1 day, medium 0,
+    // medium-dark, dark and French −1 (TRADE.md: darker roasts degas faster, Smrke et al. 2017;
+    // the days from memory).
+    const current = shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body);
+    expect(current).toMatchObject({
+      shipPolicy: 'ready_on_arrival',
+      holdOverWeekend: true,
+      restAdjustDays: { light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 },
+    });
+
+    const changed = { ...current, shipPolicy: 'after_degassing', holdOverWeekend: false, restAdjustDays: { ...current.restAdjustDays, dark: -2 } };
+    const response = await owner.put('/api/roastery/settings').send(changed);
+    expect(response.status).toBe(200);
+    expect(shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body)).toMatchObject({
+      shipPolicy: 'after_degassing',
+      holdOverWeekend: false,
+      restAdjustDays: { dark: -2 },
+    });
+    expect((await lastSettingsAudit(ownerUser.id))?.detail).toEqual({ changed: 'shipPolicy,holdOverWeekend,restAdjustDays' });
+
+    const { shipPolicy: _policy, holdOverWeekend: _hold, ...leftOut } = changed;
+    const defaulted = await owner.put('/api/roastery/settings').send(leftOut);
+    expect(shopSettingsSchema.parse(defaulted.body)).toMatchObject({ shipPolicy: 'ready_on_arrival', holdOverWeekend: true });
+  });
+
+  it('answers 400 naming shipPolicy and holdOverWeekend for values they do not take, and changes nothing', async () => {
+    const before = (await staff.get('/api/roastery/settings')).body as unknown;
+    const response = await owner.put('/api/roastery/settings').send({ ...defaultShopSettings, shipPolicy: 'whenever', holdOverWeekend: 'yes' });
+    expect(response.status).toBe(400);
+    expect(Object.keys(apiErrorSchema.parse(response.body).error.fields ?? {})).toEqual(expect.arrayContaining(['shipPolicy', 'holdOverWeekend']));
+    expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
+  });
+
   it('answers 400 naming each field that is wrong, and changes nothing', async () => {
     const before = (await staff.get('/api/roastery/settings')).body as unknown;
     const response = await owner.put('/api/roastery/settings').send({

@@ -11,8 +11,8 @@ import { createLotForSale } from './checkout-support';
 import { useCalendarOverrides, useShopSettings } from './subscriber-support';
 
 // The default shop (TRADE.md product defaults in defaultShopSettings): New York; roasts Mon, Wed,
-// Fri; cutoff 12:00 the day before; ships Mon–Fri after a 1-day degassing hold; filter rests 2 days;
-// best-before 28 days; 12 oz bag $18.00, 10 % subscription discount; shipping bands up to
+// Fri; cutoff 12:00 the day before; ships Mon–Fri after a 1-day degassing hold, 3 transit days,
+// ready on arrival and never in transit over a weekend (PRODUCT.md); filter rests 2 days; best-before 28 days; 12 oz bag $18.00, 10 % subscription discount; shipping bands up to
 // 1,000 g $8.95, bag tare 20 g, box tare 180 g.
 useShopSettings();
 const override = useCalendarOverrides();
@@ -38,14 +38,38 @@ describe('GET /api/subscriptions/preview', () => {
       discountPct: 10,
       shippingCents: 895,
       currency: 'usd',
+      shipPolicy: 'ready_on_arrival',
       deliveries: [
-        // Wed 5 Mar 2031: ships Thu 6 (1-day hold), ready Fri 7 (filter, 2 days), best-before
-        // Wed 2 Apr (+28). Cutoff Tue 4 Mar 12:00 EST = 17:00Z.
-        { roastDate: '2031-03-05', shipDate: '2031-03-06', readyFrom: '2031-03-07', bestBefore: '2031-04-02', cutoffAt: '2031-03-04T17:00:00.000Z' },
+        // Wed 5 Mar 2031: ready Fri 7 (filter, 2 days), best-before Wed 2 Apr (+28). Cutoff Tue 4 Mar
+        // 12:00 EST = 17:00Z. The hold allows Thu 6, but Thu 6 and Fri 7 would be in transit over
+        // 8–9 Mar; Mon 10 → Tue 11, Wed 12, Thu 13 (no federal holiday in March or April 2031).
+        {
+          roastDate: '2031-03-05',
+          shipDate: '2031-03-10',
+          readyFrom: '2031-03-07',
+          bestBefore: '2031-04-02',
+          expectedArrival: '2031-03-13',
+          cutoffAt: '2031-03-04T17:00:00.000Z',
+        },
         // Two weeks on, Wed 19 Mar. US clocks went forward on Sun 9 Mar 2031 (second Sunday of
-        // March), so its cutoff, Tue 18 Mar 12:00 EDT, is 16:00Z.
-        { roastDate: '2031-03-19', shipDate: '2031-03-20', readyFrom: '2031-03-21', bestBefore: '2031-04-16', cutoffAt: '2031-03-18T16:00:00.000Z' },
-        { roastDate: '2031-04-02', shipDate: '2031-04-03', readyFrom: '2031-04-04', bestBefore: '2031-04-30', cutoffAt: '2031-04-01T16:00:00.000Z' },
+        // March), so its cutoff, Tue 18 Mar 12:00 EDT, is 16:00Z. Ships Mon 24, lands Thu 27.
+        {
+          roastDate: '2031-03-19',
+          shipDate: '2031-03-24',
+          readyFrom: '2031-03-21',
+          bestBefore: '2031-04-16',
+          expectedArrival: '2031-03-27',
+          cutoffAt: '2031-03-18T16:00:00.000Z',
+        },
+        // Wed 2 Apr: ships Mon 7, lands Thu 10 Apr.
+        {
+          roastDate: '2031-04-02',
+          shipDate: '2031-04-07',
+          readyFrom: '2031-04-04',
+          bestBefore: '2031-04-30',
+          expectedArrival: '2031-04-10',
+          cutoffAt: '2031-04-01T16:00:00.000Z',
+        },
       ],
     });
   });

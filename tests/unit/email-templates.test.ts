@@ -53,6 +53,24 @@ describe.each(emailTemplateNames)('the %s e-mail', (template) => {
   });
 });
 
+describe('the shipped e-mail and the ready-from date', () => {
+  const base = { ...demoEmailPayloads.shipped, readyFrom: '2026-02-16', bestBefore: '2026-03-09' };
+
+  it('says the coffee is ready to brew on arrival when it lands rested', () => {
+    const email = renderEmail('shipped', { ...base, expectedArrival: '2026-02-20', readyOnArrival: true }, demoEmailContext);
+    expect(email.text).toContain('ready to brew when it arrives');
+    expect(email.text).toContain('Friday, February 20, 2026');
+    expect(email.text).not.toContain('may arrive before');
+  });
+
+  it('says it may arrive before it is ready, and gives the ready-from date, when it lands early', () => {
+    // The Mon 9 Feb 2026 espresso shipped straight after the hold: lands Fri 13, ready Mon 16.
+    const email = renderEmail('shipped', { ...base, expectedArrival: '2026-02-13', readyOnArrival: false }, demoEmailContext);
+    expect(email.text).toContain('may arrive before it is at its best');
+    expect(email.text).toContain('Monday, February 16, 2026');
+  });
+});
+
 describe('payload checks', () => {
   it('refuses a link that is not http(s), so no javascript: URL reaches an href', () => {
     expect(() => renderEmail('password-reset', { ...demoEmailPayloads['password-reset'], resetUrl: 'javascript:alert(1)' }, demoEmailContext)).toThrow(ZodError);

@@ -50,6 +50,8 @@ export const shopSettings = pgTable(
     subscriptionDiscountPct: numeric('subscription_discount_pct', { precision: 5, scale: 2, mode: 'number' })
       .notNull()
       .default(defaultShopSettings.subscriptionDiscountPct),
+    shipPolicy: text('ship_policy').$type<ShopSettings['shipPolicy']>().notNull().default(defaultShopSettings.shipPolicy),
+    holdOverWeekend: boolean('hold_over_weekend').notNull().default(defaultShopSettings.holdOverWeekend),
     renewalReminderDays: integer('renewal_reminder_days').notNull().default(defaultShopSettings.renewalReminderDays),
     shipping: jsonb('shipping').$type<ShopSettings['shipping']>().notNull().default(defaultShopSettings.shipping),
     updatedAt: instant('updated_at')
@@ -74,6 +76,7 @@ export const shopSettings = pgTable(
     check('shop_settings_loss_model_min_batches_range', sql`${t.lossModelMinBatches} between 1 and 100`),
     check('shop_settings_currency_code', sql`${t.currency} ~ '^[a-z]{3}$'`),
     check('shop_settings_subscription_discount_range', sql`${t.subscriptionDiscountPct} >= 0 and ${t.subscriptionDiscountPct} <= 50`),
+    check('shop_settings_ship_policy', sql`${t.shipPolicy} in ('ready_on_arrival', 'after_degassing')`),
     check('shop_settings_renewal_reminder_days_range', sql`${t.renewalReminderDays} between 0 and 14`),
   ],
 );
@@ -84,6 +87,8 @@ export const roastDays = pgTable(
   {
     date: date('date', { mode: 'string' }).primaryKey(),
     open: boolean('open').notNull(),
+    /** Whether parcels go out this day; null follows the ship weekdays and carrier holidays. */
+    shipOpen: boolean('ship_open'),
     /** Green grams for this day; null = the shop's dailyCapacityGrams. */
     capacityGrams: integer('capacity_grams'),
     note: text('note').notNull().default(''),

@@ -1,14 +1,18 @@
-// Date logic for the demo seed only, deliberately small and in one place. The real scheduling rules
-// (capacity, DST edge cases, holidays for shipping) belong to the trade engine in shared/domain; a
-// later change swaps this for it. Day dates are shop-local 'YYYY-MM-DD' strings; weekdays are ISO
-// (1 = Monday … 7 = Sunday).
+// Date helpers for the demo seed. The dates an order gets come from the trade engine's schedule
+// (shared/domain/roast-schedule), as checkout and the payment webhook give them, so the demo shows
+// the same ship days, holidays and holds the product computes. Day dates are shop-local
+// 'YYYY-MM-DD' strings; weekdays are ISO (1 = Monday … 7 = Sunday).
 import { TZDate } from '@date-fns/tz';
-import type { BrewMethod } from '../../../shared/domain/vocabulary';
+import { datesForRoastDate, greenOrderDates, type CalendarOverride, type ScheduleSettings } from '../../../shared/domain/roast-schedule';
+import { instantAt } from '../../../shared/domain/shop-time';
+import { weekdays, type BrewMethod, type RoastLevel } from '../../../shared/domain/vocabulary';
+import { defaultShopSettings } from '../../../shared/schemas/settings';
 
 export type DemoCalendarSettings = {
   timeZone: string;
   roastWeekdays: number[];
   shipWeekdays: number[];
+  transitDays: number;
   degasHoldDays: number;
   restDaysFilter: number;
   restDaysEspresso: number;
@@ -17,7 +21,12 @@ export type DemoCalendarSettings = {
 
 export type DeliveryDates = { roastDate: string; shipDate: string; readyFrom: string; bestBefore: string };
 
-export function demoCalendar(now: Date, settings: DemoCalendarSettings, closedDates: ReadonlySet<string> = new Set()) {
+export function demoCalendar(
+  now: Date,
+  settings: DemoCalendarSettings,
+  closedDates: ReadonlySet<string> = new Set(),
+  shipClosedDates: ReadonlySet<string> = new Set(),
+) {
   const addDays = (date: string, days: number): string => {
     const [y, m, d] = date.split('-').map(Number) as [number, number, number];
     return new Date(Date.UTC(y, m - 1, d + days)).toISOString().slice(0, 10);
@@ -62,20 +71,35 @@ export function demoCalendar(now: Date, settings: DemoCalendarSettings, closedDa
     return out;
   };
 
-  /** Ship after the degassing hold on a ship weekday; ready = roast + rest; best before = roast + N. */
-  const datesFor = (roastDate: string, brewMethod: BrewMethod): DeliveryDates => {
-    let shipDate = addDays(roastDate, settings.degasHoldDays);
-    for (let i = 0; i < 7 && !settings.shipWeekdays.includes(isoWeekday(shipDate)); i += 1) shipDate = addDays(shipDate, 1);
-    const rest = brewMethod === 'espresso' ? settings.restDaysEspresso : settings.restDaysFilter;
-    return { roastDate, shipDate, readyFrom: addDays(roastDate, rest), bestBefore: addDays(roastDate, settings.bestBeforeDays) };
+  // The seed's settings row as the schedule reads it; what the row leaves out is the product default.
+  const schedule: ScheduleSettings = {
+    ...defaultShopSettings,
+    timeZone: settings.timeZone,
+    roastWeekdays: settings.roastWeekdays.map((day) => weekdays[day - 1] ?? 'mon'),
+    shipWeekdays: settings.shipWeekdays.map((day) => weekdays[day - 1] ?? 'mon'),
+    transitDays: settings.transitDays,
+    degasHoldDays: settings.degasHoldDays,
+    restDays: { filter: settings.restDaysFilter, espresso: settings.restDaysEspresso },
+    bestBeforeDays: settings.bestBeforeDays,
+  };
+  const calendar = {
+    overrides: Object.fromEntries(
+      [...new Set([...closedDates, ...shipClosedDates])].map((date): [string, CalendarOverride] => [
+        date,
+        { open: !closedDates.has(date) && settings.roastWeekdays.includes(isoWeekday(date)), shipOpen: shipClosedDates.has(date) ? false : null },
+      ]),
+    ),
   };
 
-  /** The next ship weekday strictly after `date`. */
-  const nextShipDay = (date: string): string => {
-    let d = addDays(date, 1);
-    for (let i = 0; i < 7 && !settings.shipWeekdays.includes(isoWeekday(d)); i += 1) d = addDays(d, 1);
-    return d;
+  /** The dates the schedule gives a delivery roasted on `roastDate`. */
+  const datesFor = (roastDate: string, brewMethod: BrewMethod, roastLevel: RoastLevel): DeliveryDates => {
+    const { shipDate, readyFrom, bestBefore } = datesForRoastDate(roastDate, { brewMethod, roastLevel }, schedule, calendar);
+    return { roastDate, shipDate, readyFrom, bestBefore };
   };
+
+  /** The ship date of a green order paid in the morning of `date` (after the cutoff time: the next ship day). */
+  const nextShipDay = (date: string): string =>
+    greenOrderDates(instantAt(date, defaultShopSettings.cutoff.time, settings.timeZone), schedule, calendar).shipDate;
 
   /** The instant of a shop-local wall-clock time on a date. */
   const at = (date: string, time: string): Date => {

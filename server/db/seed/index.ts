@@ -25,6 +25,7 @@ import type { Db } from '../client';
 import { hashPassword } from '../../lib/password-hashing';
 import * as schema from '../schema/index';
 import { defaultLossModel, estimateLevelFromLoss, lossPctOf } from '../../../shared/domain/roast-loss';
+import { defaultShopSettings } from '../../../shared/schemas/settings';
 import type { AddressSnapshot } from '../schema/index';
 import type { DemoCalendar, DeliveryDates } from './demo-dates';
 import { demoCalendar } from './demo-dates';
@@ -143,6 +144,10 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     degasHoldDays: 1,
     restDaysFilter: 2,
     restDaysEspresso: 7,
+    // Darker roasts rest less (TRADE.md, Smrke et al. 2017; the days from memory).
+    restAdjustDays: defaultShopSettings.restAdjustDays,
+    shipPolicy: 'ready_on_arrival',
+    holdOverWeekend: true,
     bestBeforeDays: 28,
     overagePct: 3,
     roasterCapacityGrams: 6000,
@@ -159,11 +164,12 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
   const ahead = plain.roastWeekdaysFromToday(12);
   const [founderDay, maintenanceDay, shortDay] = [ahead[3] as string, ahead[11] as string, ahead[1] as string];
   const roastDays: Insert<typeof schema.roastDays>[] = [
-    { date: founderDay, open: false, note: "Wrenfield Founders' Day (invented town holiday): roastery closed", createdAt: daysAgo(40), updatedAt: daysAgo(40) },
+    { date: founderDay, open: false, shipOpen: false, note: "Wrenfield Founders' Day (invented town holiday): roastery and shipping closed", createdAt: daysAgo(40), updatedAt: daysAgo(40) },
     { date: maintenanceDay, open: false, note: 'Roaster maintenance: afterburner service (invented)', createdAt: daysAgo(12), updatedAt: daysAgo(12) },
     { date: shortDay, open: true, capacityGrams: 30_000, note: 'Short day: cupping training in the afternoon (invented)', createdAt: daysAgo(9), updatedAt: daysAgo(9) },
   ];
-  const cal: DemoCalendar = demoCalendar(now, settings, new Set([founderDay, maintenanceDay]));
+  // The maintenance day closes roasting only: parcels still go out.
+  const cal: DemoCalendar = demoCalendar(now, settings, new Set([founderDay, maintenanceDay]), new Set([founderDay]));
   const today = cal.today;
 
   // ── People (invented) ────────────────────────────────────────────────────────────────────────
@@ -406,7 +412,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     // The previous delivery (already roasted; shipped once its ship date has passed).
     let sequence = 1;
     {
-      const dates = cal.datesFor(pastRoast, brewMethod);
+      const dates = cal.datesFor(pastRoast, brewMethod, roastLevel);
       const packedToday = dates.shipDate === today && cal.clock >= `${today} 09:30`;
       const orderStatus: OrderStatus = dates.shipDate < today ? 'shipped' : packedToday ? 'packed' : 'roasted';
       const orderId = makeOrder(dates, orderStatus);
@@ -416,7 +422,7 @@ export function buildDemoScenario(now: Date, passwordHash: string) {
     }
     // The next deliveries: paid orders on the roast days of the next two weeks.
     upcoming.forEach((roastDate, k) => {
-      const dates = cal.datesFor(roastDate, brewMethod);
+      const dates = cal.datesFor(roastDate, brewMethod, roastLevel);
       const held = status === 'past_due' && k === 0;
       const skipped = status === 'active' && i % 9 === 8 && k === 0;
       let orderId: string | null = null;

@@ -1,6 +1,7 @@
 import { and, asc, count, desc, eq, gte, lt, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lots, orderItems, orders, shopSettings, users } from '../../db/schema/index';
+import { loadShopSettings } from '../settings/settings.repo';
 import type { OrderSort } from '@shared/schemas/orders';
 import type { OrderKind, OrderStatus } from '@shared/domain/vocabulary';
 
@@ -60,6 +61,10 @@ function conditionsOf(filters: Omit<OrderFilters, 'sort'>): SQL | undefined {
 
 export function createOrdersRepo(db: Db) {
   return {
+    async transitDays() {
+      return (await loadShopSettings(db)).settings.transitDays;
+    },
+
     async shopTimeZone() {
       const [settings] = await db.select({ timeZone: shopSettings.timeZone }).from(shopSettings).limit(1);
       return settings?.timeZone;

@@ -1,4 +1,5 @@
 import { stringify } from 'csv-stringify/sync';
+import { arrivalDate } from '@shared/domain/roast-schedule';
 import { addDays, instantAt } from '@shared/domain/shop-time';
 import { orderCsvColumns, type OrderDetail, type OrderListQuery, type OrderListResponse, type OrderSummary } from '@shared/schemas/orders';
 import { AppError } from '../../lib/app-error';
@@ -54,6 +55,7 @@ export function createOrdersService(repo: OrdersRepo) {
       const order = await repo.find(orderId, isStaff(user) ? undefined : user.id);
       if (!order) throw AppError.notFound('Order');
       const { shippingAddress } = order;
+      const expectedArrival = order.shipDate ? arrivalDate(order.shipDate, await repo.transitDays()) : null;
       return {
         ...basicsOf(order),
         items: order.items,
@@ -64,6 +66,8 @@ export function createOrdersService(repo: OrdersRepo) {
         shippingAddress: { ...shippingAddress, line2: shippingAddress.line2 ?? null },
         readyFrom: order.readyFrom,
         bestBefore: order.bestBefore,
+        expectedArrival,
+        readyOnArrival: order.readyFrom && expectedArrival ? expectedArrival >= order.readyFrom : null,
         carrier: order.carrier,
         trackingNumber: order.trackingNumber,
         paidAt: order.paidAt?.toISOString() ?? null,

@@ -85,6 +85,10 @@ function queries(db: DbOrTx) {
       return (await loadShopSettings(db)).settings.shipping;
     },
 
+    async shopSettings() {
+      return (await loadShopSettings(db)).settings;
+    },
+
     /** The ship day's orders with their lines and bag allocations. */
     async packList(shipDate: string) {
       return ordersWithBags(and(eq(orders.shipDate, shipDate), inArray(orders.status, [...packListStatuses]))!);

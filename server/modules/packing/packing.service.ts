@@ -1,5 +1,7 @@
 import { bagNetWeightLabel } from '@shared/domain/labels';
 import { BagTooHeavyForShipping, planShipping, type ShippingSettings } from '@shared/domain/parcel-packing';
+import { arrivalDate } from '@shared/domain/roast-schedule';
+import { localDateOf } from '@shared/domain/shop-time';
 import { roastLevelLabels, type OrderStatus } from '@shared/domain/vocabulary';
 import type { PackBag, PackListResponse, PackOrder } from '@shared/schemas/packing';
 import { AppError } from '../../lib/app-error';
@@ -197,9 +199,13 @@ export function createPackingService({ repo, clock }: PackingDeps) {
         if (order.status !== 'packed') {
           throw AppError.conflict('not_packed', `Mark the order packed before shipping it (it is ${order.status.replace('_', ' ')}).`);
         }
-        await tx.markShipped(order.id, { carrier, trackingNumber, shippedAt: clock.now() });
+        const shippedAt = clock.now();
+        await tx.markShipped(order.id, { carrier, trackingNumber, shippedAt });
         await tx.setDeliveryStatus(order.id, 'shipped', ['scheduled', 'roasted']);
         const roasted = order.kind === 'roasted';
+        // When it should land, counted from the day it really left, and whether it is ready by then.
+        const settings = await tx.shopSettings();
+        const expectedArrival = arrivalDate(localDateOf(shippedAt, settings.timeZone), settings.transitDays);
         await queueEmail(tx.tx, {
           template: 'shipped',
           to: order.customerEmail,
@@ -210,7 +216,8 @@ export function createPackingService({ repo, clock }: PackingDeps) {
             kind: order.kind,
             carrier,
             trackingNumber,
-            ...(roasted && order.readyFrom ? { readyFrom: order.readyFrom } : {}),
+            expectedArrival,
+            ...(roasted && order.readyFrom ? { readyFrom: order.readyFrom, readyOnArrival: expectedArrival >= order.readyFrom } : {}),
             ...(roasted && order.bestBefore ? { bestBefore: order.bestBefore } : {}),
           },
         });

@@ -2,11 +2,14 @@ import { buildRoastList, type LotLossHistory, type RoastOrderLine } from '@share
 import { greenNeededForRoasted, type LotLossRecord } from '@shared/domain/roast-loss';
 import {
   dayCapacityGrams,
+  datesForLines,
   datesForRoastDate,
+  greenOrderDates,
   isOpenRoastDay,
   ScheduleError,
   SEARCH_HORIZON_DAYS,
   type CalendarOverride,
+  type CoffeeForRest,
   type RoastDates,
 } from '@shared/domain/roast-schedule';
 import { addDays, type IsoDate } from '@shared/domain/shop-time';
@@ -105,12 +108,10 @@ function firstRoastDayAfter(date: IsoDate, accept: (day: IsoDate) => boolean): I
   throw new ScheduleError('no_roast_day', `No open roast day within ${SEARCH_HORIZON_DAYS} days after ${date} can take these orders.`);
 }
 
-/** The dates an order's bags get on a roast day: it is ready when its slowest-resting bag is. */
+/** The dates an order's bags get on a roast day: it is ready, and ships, as its slowest-resting bag does. */
 function orderDates(roastDate: IsoDate, lines: OrderOnClosedDay['lines'], settings: ShopSettings, overrides: ClosureInput['overrides']): NewDates {
-  const all = lines.map((line) => datesForRoastDate(roastDate, line, settings, { overrides }));
-  const first = all[0] ?? datesForRoastDate(roastDate, { brewMethod: 'filter', roastLevel: 'medium' }, settings, { overrides });
-  const readyFrom = all.reduce((latest, dates) => (dates.readyFrom > latest ? dates.readyFrom : latest), first.readyFrom);
-  return { roastDate, shipDate: first.shipDate, readyFrom, bestBefore: first.bestBefore };
+  const { shipDate, readyFrom, bestBefore } = datesForLines(roastDate, lines, settings, { overrides });
+  return { roastDate, shipDate, readyFrom, bestBefore };
 }
 
 /**
@@ -164,4 +165,45 @@ export function planClosureMoves(input: ClosureInput): ClosurePlan {
     });
   }
   return plan;
+}
+
+/** A parcel not yet packed whose ship date a change of the ship calendar may move. */
+export type ParcelToRedate =
+  | { kind: 'roasted'; orderId: string | null; deliveryId: string | null; roastDate: IsoDate; shipDate: IsoDate; lines: CoffeeForRest[] }
+  | { kind: 'green'; orderId: string; paidAt: Date; shipDate: IsoDate };
+
+export interface ShipMove {
+  orderId: string | null;
+  deliveryId: string | null;
+  from: IsoDate;
+  shipDate: IsoDate;
+}
+
+/**
+ * New ship dates after shipping on `date` closes or opens: each parcel's ship date again as the
+ * schedule gives it with the new calendar. Only parcels that shipped on the day (a closure moves
+ * them) or now ship on it (an opening brings them forward) move; others keep their dates.
+ */
+export function planShipMoves(
+  date: IsoDate,
+  parcels: readonly ParcelToRedate[],
+  settings: ShopSettings,
+  overrides: ClosureInput['overrides'],
+): ShipMove[] {
+  const calendar = { overrides };
+  const moves: ShipMove[] = [];
+  for (const parcel of parcels) {
+    const shipDate =
+      parcel.kind === 'green'
+        ? greenOrderDates(parcel.paidAt, settings, calendar).shipDate
+        : datesForLines(parcel.roastDate, parcel.lines, settings, calendar).shipDate;
+    if (shipDate === parcel.shipDate || (parcel.shipDate !== date && shipDate !== date)) continue;
+    moves.push({
+      orderId: parcel.orderId,
+      deliveryId: parcel.kind === 'roasted' ? parcel.deliveryId : null,
+      from: parcel.shipDate,
+      shipDate,
+    });
+  }
+  return moves;
 }

@@ -1,4 +1,4 @@
-import { and, asc, between, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, between, eq, gte, inArray, isNull, lte, or, sql } from 'drizzle-orm';
 import type { CalendarOverride } from '@shared/domain/roast-schedule';
 import { addDays, type IsoDate } from '@shared/domain/shop-time';
 import { SEARCH_HORIZON_DAYS } from '@shared/domain/roast-schedule';
@@ -9,7 +9,7 @@ import type { Db, DbOrTx } from '../../db/client';
 import { batches, deliveries, lots, orderItems, orders, roastDays, subscriptions, users } from '../../db/schema/index';
 import { queueEmail } from '../outbox/outbox.repo';
 import { loadShopSettings } from '../settings/settings.repo';
-import type { ClosurePlan, DeliveryOnClosedDay, LossHistoryRow, OrderOnClosedDay, PlannedGroup } from './calendar-planning';
+import type { ClosurePlan, DeliveryOnClosedDay, LossHistoryRow, OrderOnClosedDay, ParcelToRedate, PlannedGroup, ShipMove } from './calendar-planning';
 
 export interface RoastedOnDay {
   batches: number;
@@ -20,15 +20,21 @@ export interface RoastedOnDay {
 export interface OverrideRow {
   date: IsoDate;
   open: boolean;
+  shipOpen: boolean | null;
   capacityGrams: number | null;
   note: string;
 }
 
-export const overrideOf = (row: OverrideRow): CalendarOverride => ({ open: row.open, capacityGrams: row.capacityGrams, note: row.note || null });
+export const overrideOf = (row: OverrideRow): CalendarOverride => ({
+  open: row.open,
+  shipOpen: row.shipOpen,
+  capacityGrams: row.capacityGrams,
+  note: row.note || null,
+});
 
 async function overridesBetween(db: DbOrTx, from: IsoDate, to: IsoDate): Promise<OverrideRow[]> {
   return db
-    .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
+    .select({ date: roastDays.date, open: roastDays.open, shipOpen: roastDays.shipOpen, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
     .from(roastDays)
     .where(between(roastDays.date, from, to))
     .orderBy(asc(roastDays.date));
@@ -87,6 +93,14 @@ export interface DayUpdateResult {
   override: OverrideRow;
   context: CalendarContext;
   plan: ClosurePlan;
+  shipMoves: ShipMove[];
+}
+
+/** What a change of the day's shipping has to re-date, and the overrides from the day on. */
+export interface RedatingParcels {
+  date: IsoDate;
+  parcels: ParcelToRedate[];
+  context: CalendarContext;
 }
 
 /** The Roast Calendar's reads, and changing a day (with the moves a closure makes) in one transaction. */
@@ -180,6 +194,81 @@ export function createCalendarRepo(db: Db) {
       }));
   }
 
+  /**
+   * Parcels not yet packed that could ship on `date` (roasted on or before it, shipping on or after
+   * it): roasted orders, subscription deliveries not yet paid, and green orders. Locked for the move.
+   */
+  async function parcelsAround(tx: DbOrTx, date: IsoDate): Promise<ParcelToRedate[]> {
+    const orderRows = await tx
+      .select({
+        id: orders.id,
+        kind: orders.kind,
+        paidAt: orders.paidAt,
+        deliveryId: orders.deliveryId,
+        roastDate: orders.roastDate,
+        shipDate: orders.shipDate,
+        roastLevel: orderItems.roastLevel,
+        brewMethod: orderItems.brewMethod,
+      })
+      .from(orders)
+      .leftJoin(orderItems, and(eq(orderItems.orderId, orders.id), eq(orderItems.kind, 'roasted')))
+      .where(
+        and(
+          gte(orders.shipDate, date),
+          or(
+            and(eq(orders.kind, 'roasted'), lte(orders.roastDate, date), inArray(orders.status, ['paid', 'held', 'roasted'])),
+            and(eq(orders.kind, 'green'), eq(orders.status, 'paid')),
+          ),
+        ),
+      )
+      .orderBy(asc(orders.id))
+      .for('update', { of: orders });
+    const parcels = new Map<string, ParcelToRedate>();
+    for (const row of orderRows) {
+      const shipDate = row.shipDate as IsoDate;
+      if (row.kind === 'green') {
+        if (row.paidAt) parcels.set(row.id, { kind: 'green', orderId: row.id, paidAt: row.paidAt, shipDate });
+        continue;
+      }
+      let parcel = parcels.get(row.id);
+      if (!parcel) {
+        parcel = { kind: 'roasted', orderId: row.id, deliveryId: row.deliveryId, roastDate: row.roastDate as IsoDate, shipDate, lines: [] };
+        parcels.set(row.id, parcel);
+      }
+      // The roasted-line CHECK guarantees level and brew method.
+      if (parcel.kind === 'roasted' && row.roastLevel && row.brewMethod) parcel.lines.push({ roastLevel: row.roastLevel, brewMethod: row.brewMethod });
+    }
+    const deliveryRows = await tx
+      .select({
+        id: deliveries.id,
+        roastDate: deliveries.roastDate,
+        shipDate: deliveries.shipDate,
+        roastLevel: sql<RoastLevel>`coalesce(${deliveries.roastLevel}, ${subscriptions.roastLevel})`,
+        brewMethod: sql<BrewMethod>`coalesce(${deliveries.brewMethod}, ${subscriptions.brewMethod})`,
+      })
+      .from(deliveries)
+      .innerJoin(subscriptions, eq(subscriptions.id, deliveries.subscriptionId))
+      .where(
+        and(
+          lte(deliveries.roastDate, date),
+          gte(deliveries.shipDate, date),
+          isNull(deliveries.orderId),
+          inArray(deliveries.status, ['scheduled', 'held']),
+        ),
+      )
+      .orderBy(asc(deliveries.id))
+      .for('update', { of: deliveries });
+    const deliveryParcels: ParcelToRedate[] = deliveryRows.map((row) => ({
+      kind: 'roasted',
+      orderId: null,
+      deliveryId: row.id,
+      roastDate: row.roastDate as IsoDate,
+      shipDate: row.shipDate as IsoDate,
+      lines: [{ roastLevel: row.roastLevel, brewMethod: row.brewMethod }],
+    }));
+    return [...parcels.values(), ...deliveryParcels];
+  }
+
   return {
     context: (from: IsoDate, to: IsoDate) => context(db, from, to),
 
@@ -218,6 +307,7 @@ export function createCalendarRepo(db: Db) {
       update: CalendarDayUpdate,
       isWeeklyDefault: (override: OverrideRow, settings: ShopSettings) => boolean,
       plan: (moving: MovingCoffee) => ClosurePlan,
+      planShip: (redating: RedatingParcels) => ShipMove[],
     ): Promise<DayUpdateResult> {
       return db.transaction(async (tx) => {
         await tx.execute(sql`select pg_advisory_xact_lock(hashtext('restday:roast-calendar'))`);
@@ -225,6 +315,8 @@ export function createCalendarRepo(db: Db) {
         const override: OverrideRow = {
           date,
           open: update.open,
+          // Left out keeps the day's shipping as it was.
+          shipOpen: update.shipOpen === undefined ? (existing?.shipOpen ?? null) : update.shipOpen,
           capacityGrams: update.capacityGrams ?? null,
           note: update.note ?? existing?.note ?? '',
         };
@@ -235,9 +327,32 @@ export function createCalendarRepo(db: Db) {
           await tx
             .insert(roastDays)
             .values(override)
-            .onConflictDoUpdate({ target: roastDays.date, set: { open: override.open, capacityGrams: override.capacityGrams, note: override.note } });
+            .onConflictDoUpdate({
+              target: roastDays.date,
+              set: { open: override.open, shipOpen: override.shipOpen, capacityGrams: override.capacityGrams, note: override.note },
+            });
         }
-        const unchanged = async () => ({ override, context: await context(tx, date, date, true), plan: { orders: [], deliveries: [], emails: [] } });
+
+        // A change of the day's shipping re-dates the parcels that could ship on it.
+        let shipMoves: ShipMove[] = [];
+        if ((existing?.shipOpen ?? null) !== override.shipOpen) {
+          const parcels = await parcelsAround(tx, date);
+          if (parcels.length > 0) {
+            const ahead = await context(tx, addDays(date, -SEARCH_HORIZON_DAYS), addDays(date, SEARCH_HORIZON_DAYS), true);
+            shipMoves = planShip({ date, parcels, context: ahead });
+            for (const move of shipMoves) {
+              if (move.orderId) await tx.update(orders).set({ shipDate: move.shipDate }).where(eq(orders.id, move.orderId));
+              if (move.deliveryId) await tx.update(deliveries).set({ shipDate: move.shipDate }).where(eq(deliveries.id, move.deliveryId));
+            }
+          }
+        }
+
+        const unchanged = async () => ({
+          override,
+          context: await context(tx, date, date, true),
+          plan: { orders: [], deliveries: [], emails: [] },
+          shipMoves,
+        });
         if (override.open) return unchanged();
 
         const movingOrders = await ordersOn(tx, date);
@@ -256,7 +371,7 @@ export function createCalendarRepo(db: Db) {
         }
         for (const move of moves.deliveries) await tx.update(deliveries).set(move.dates).where(eq(deliveries.id, move.id));
         for (const email of moves.emails) await queueEmail(tx, { template: 'roast-day-moved', ...email });
-        return { override, context: await context(tx, date, date, true), plan: moves };
+        return { override, context: await context(tx, date, date, true), plan: moves, shipMoves };
       });
     },
   };

@@ -30,6 +30,8 @@ function toSettings(row: SettingsRow): ShopSettings {
     shipWeekdays: row.shipWeekdays.map(weekdayFromIso),
     transitDays: row.transitDays,
     degasHoldDays: row.degasHoldDays,
+    shipPolicy: row.shipPolicy,
+    holdOverWeekend: row.holdOverWeekend,
     restDays: { filter: row.restDaysFilter, espresso: row.restDaysEspresso },
     restAdjustDays: row.restAdjustDays,
     bestBeforeDays: row.bestBeforeDays,
@@ -55,6 +57,8 @@ function toColumns(settings: ShopSettings) {
     shipWeekdays: settings.shipWeekdays.map(isoFromWeekday),
     transitDays: settings.transitDays,
     degasHoldDays: settings.degasHoldDays,
+    shipPolicy: settings.shipPolicy,
+    holdOverWeekend: settings.holdOverWeekend,
     restDaysFilter: settings.restDays.filter,
     restDaysEspresso: settings.restDays.espresso,
     restAdjustDays: settings.restAdjustDays,
@@ -99,7 +103,7 @@ export async function saveShopSettings(db: DbOrTx, settings: ShopSettings, shopN
 /** Roast Calendar overrides (closures, other capacities) from a date on, keyed by date. */
 export async function loadCalendarOverrides(db: DbOrTx, from: IsoDate): Promise<Record<IsoDate, CalendarOverride>> {
   const rows = await db
-    .select({ date: roastDays.date, open: roastDays.open, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
+    .select({ date: roastDays.date, open: roastDays.open, shipOpen: roastDays.shipOpen, capacityGrams: roastDays.capacityGrams, note: roastDays.note })
     .from(roastDays)
     .where(gte(roastDays.date, from));
   return Object.fromEntries(rows.map(({ date, ...override }) => [date, override]));

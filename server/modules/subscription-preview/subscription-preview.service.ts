@@ -68,7 +68,15 @@ export function createSubscriptionPreviewService({ repo, clock }: { repo: Subscr
           discountPct: settings.subscriptionDiscountPct,
           shippingCents: quote.shippingCents,
           currency: settings.currency,
-          deliveries: deliveries.map(({ roastDate, shipDate, readyFrom, bestBefore, cutoffAt }) => ({ roastDate, shipDate, readyFrom, bestBefore, cutoffAt })),
+          shipPolicy: settings.shipPolicy,
+          deliveries: deliveries.map(({ roastDate, shipDate, readyFrom, bestBefore, expectedArrival, cutoffAt }) => ({
+            roastDate,
+            shipDate,
+            readyFrom,
+            bestBefore,
+            expectedArrival,
+            cutoffAt,
+          })),
         };
       } catch (error) {
         if (error instanceof ScheduleError) throw AppError.conflict(error.code, error.message);

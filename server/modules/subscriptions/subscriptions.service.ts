@@ -89,6 +89,8 @@ function toApiDelivery(delivery: PlannedDelivery, subscription: SubscriptionReco
     shipDate: delivery.shipDate,
     readyFrom: delivery.readyFrom,
     bestBefore: delivery.bestBefore,
+    expectedArrival: delivery.expectedArrival,
+    readyOnArrival: delivery.expectedArrival >= delivery.readyFrom,
     status: delivery.status,
     locked: delivery.locked,
     cutoffAt: delivery.cutoffAt,

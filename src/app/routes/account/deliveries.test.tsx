@@ -18,6 +18,8 @@ function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): Subscripti
     shipDate: '2026-12-10',
     readyFrom: '2026-12-14',
     bestBefore: '2027-01-06',
+    expectedArrival: '2026-12-15',
+    readyOnArrival: true,
     status: 'scheduled',
     locked: false,
     cutoffAt: '2026-12-08T19:00:00Z',
@@ -35,7 +37,15 @@ function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): Subscripti
 
 const lockedDelivery = makeDelivery({ roastDate: '2026-12-02', shipDate: '2026-12-03', readyFrom: '2026-12-07', bestBefore: '2026-12-30', locked: true, cutoffAt: '2026-12-01T19:00:00Z' });
 const nextDelivery = makeDelivery();
-const laterDelivery = makeDelivery({ roastDate: '2026-12-16', shipDate: '2026-12-17', readyFrom: '2026-12-21', bestBefore: '2027-01-13', cutoffAt: '2026-12-15T19:00:00Z' });
+const laterDelivery = makeDelivery({
+  roastDate: '2026-12-16',
+  shipDate: '2026-12-17',
+  readyFrom: '2026-12-21',
+  bestBefore: '2027-01-13',
+  expectedArrival: '2026-12-18',
+  readyOnArrival: false,
+  cutoffAt: '2026-12-15T19:00:00Z',
+});
 
 function makeSubscription(overrides: Partial<Subscription> = {}): Subscription {
   return {
@@ -106,6 +116,19 @@ describe('Deliveries page', () => {
     expect(locked.textContent).toMatch(/Past its cutoff .*it roasts as it is, and changes reach the next delivery/);
     expect(within(schedule).getByRole('row', { name: /Wed, Dec 9, 2026/ }).textContent).not.toContain('Locked');
     expect(screen.getByRole('link', { name: 'Deliveries' }).getAttribute('aria-current')).toBe('page');
+  });
+
+  it('says when each delivery should arrive and whether it lands ready to brew', async () => {
+    deliveriesServer();
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    const schedule = await screen.findByRole('table', { name: 'Upcoming deliveries of Test Ridge Washed' }, { timeout: 15_000 });
+    const next = within(schedule).getByRole('row', { name: /Wed, Dec 9, 2026/ });
+    expect(next.textContent).toContain('Tue, Dec 15, 2026');
+    expect(next.textContent).toContain('Ready to brew on arrival');
+    const later = within(schedule).getByRole('row', { name: /Wed, Dec 16, 2026/ });
+    expect(later.textContent).toContain('Fri, Dec 18, 2026');
+    expect(later.textContent).toContain('Arrives before it is ready');
   });
 
   it('skips the next open delivery, not the locked one, and the schedule shows it at once', async () => {

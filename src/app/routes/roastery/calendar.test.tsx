@@ -23,6 +23,9 @@ function december(): CalendarDay[] {
       date,
       weekday,
       open,
+      shipOpen: weekday !== 'sat' && weekday !== 'sun' && date !== '2026-12-25',
+      shipOverride: null,
+      holiday: date === '2026-12-25' ? 'Christmas Day' : null,
       capacityGrams: open ? 48_000 : 0,
       plannedGreenGrams: date === '2026-12-03' ? 18_240 : 0,
       note: date === '2026-12-24' ? 'Holiday (invented)' : null,
@@ -46,10 +49,18 @@ function calendarServer() {
     }
     const match = /^\/api\/roastery\/calendar\/(.+)$/.exec(url.pathname);
     if (match && method === 'PUT') {
-      const body = JSON.parse(String(init?.body)) as { open: boolean; capacityGrams: number | null; note: string };
+      const body = JSON.parse(String(init?.body)) as { open: boolean; shipOpen: boolean | null; capacityGrams: number | null; note: string };
       const index = days.findIndex((day) => day.date === match[1]);
       const before = days[index] as CalendarDay;
-      const after: CalendarDay = { ...before, open: body.open, note: body.note || null, overridden: true, ordersCount: body.open ? before.ordersCount : 0 };
+      const after: CalendarDay = {
+        ...before,
+        open: body.open,
+        shipOverride: body.shipOpen,
+        shipOpen: body.shipOpen ?? before.shipOpen,
+        note: body.note || null,
+        overridden: true,
+        ordersCount: body.open ? before.ordersCount : 0,
+      };
       days[index] = after;
       const answer: CalendarDayUpdateResponse = {
         ...after,
@@ -60,6 +71,7 @@ function calendarServer() {
               { orderId: '9e5f6a7b-8c9d-4e0f-9a1b-3c4d5e6f7a8b', from: before.date, to: '2026-12-08' },
             ],
         movedDeliveries: [],
+        shipMoved: [],
       };
       return jsonResponse(answer);
     }
@@ -109,7 +121,7 @@ describe('Roast Calendar', () => {
     fireEvent.change(within(editor).getByLabelText('Note'), { target: { value: 'Burner service (invented)' } });
     fireEvent.click(within(editor).getByRole('button', { name: 'Save day' }));
 
-    const confirm = await within(editor).findByRole('alertdialog', { name: 'Close Thursday, December 3?' });
+    const confirm = await within(editor).findByRole('alertdialog', { name: 'Close roasting on Thursday, December 3?' });
     expect(confirm.textContent).toContain('Its 10 orders');
     expect(confirm.textContent).toContain('e-mail');
     expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-03')).toHaveLength(0);
@@ -119,6 +131,7 @@ describe('Roast Calendar', () => {
     expect(within(editor).getAllByText(/Thu, Dec 3 → Tue, Dec 8/)).toHaveLength(2);
     expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-03')[0]?.body).toEqual({
       open: false,
+      shipOpen: null,
       capacityGrams: null,
       note: 'Burner service (invented)',
     });
@@ -134,6 +147,27 @@ describe('Roast Calendar', () => {
     fireEvent.click(within(editor).getByRole('button', { name: 'Save day' }));
 
     expect(await within(editor).findByText(/Nothing needed to move/)).toBeTruthy();
-    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({ open: true, capacityGrams: 30_000, note: '' });
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({ open: true, shipOpen: null, capacityGrams: 30_000, note: '' });
+  });
+
+  it('shows carrier holidays and closes shipping on a day without closing roasting', async () => {
+    const fetchMock = calendarServer();
+    renderApp('/roastery/calendar?month=2026-12', { session: staff });
+
+    const grid = await screen.findByRole('table', { name: 'Roast days in the month, Monday first' }, { timeout: 15_000 });
+    const christmas = within(grid).getByText('Friday, December 25', { selector: 'time > span' }).closest('td') as HTMLElement;
+    expect(christmas.textContent).toContain('Christmas Day');
+    expect(christmas.textContent).toContain('No shipping');
+    const eighth = within(grid).getByText('Tuesday, December 8', { selector: 'time > span' }).closest('td') as HTMLElement;
+    expect(eighth.textContent).toContain('Ships');
+
+    fireEvent.click(within(grid).getByRole('button', { name: 'Change Tuesday, December 8' }));
+    const editor = await screen.findByRole('region', { name: 'Change Tuesday, December 8' });
+    fireEvent.click(within(editor).getByLabelText('Closed: no parcels go out'));
+    fireEvent.click(within(editor).getByRole('button', { name: 'Save day' }));
+
+    // Roasting stays open, so nothing asks first and no roast day moves.
+    expect(await within(editor).findByText(/Nothing needed to move/)).toBeTruthy();
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({ open: true, shipOpen: false, capacityGrams: null, note: '' });
   });
 });

@@ -60,6 +60,8 @@ const order: OrderDetail = {
   shippingAddress: { name: 'Juno Reed', line1: '12 Invented Lane', line2: null, city: 'Fairhaven', region: 'OR', postalCode: '97000', country: 'US' },
   readyFrom: null,
   bestBefore: null,
+  expectedArrival: null,
+  readyOnArrival: null,
   carrier: 'Invented Parcel',
   trackingNumber: 'IP-0042-7781',
   paidAt: '2026-11-28T15:32:00.000Z',

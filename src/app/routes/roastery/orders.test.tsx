@@ -56,6 +56,8 @@ function detail(overrides: Partial<OrderDetail> = {}): OrderDetail {
     shippingAddress: { name: 'Juno Reed', line1: '12 Invented Lane', line2: null, city: 'Fairhaven', region: 'OR', postalCode: '97000', country: 'US' },
     readyFrom: null,
     bestBefore: null,
+    expectedArrival: null,
+    readyOnArrival: null,
     carrier: null,
     trackingNumber: null,
     paidAt: '2026-11-28T15:32:00.000Z',

@@ -46,6 +46,28 @@ describe('Shop settings', () => {
     expect(body.lossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15.5 });
     expect(body.roastedBagPriceCents['12oz']).toBe(1950);
     expect(body.shipping.bands).toEqual(stored.shipping.bands);
+    // Left as stored: ready on arrival, the weekend hold on, light rests a day longer.
+    expect(body.shipPolicy).toBe('ready_on_arrival');
+    expect(body.holdOverWeekend).toBe(true);
+    expect(body.restAdjustDays).toEqual({ light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 });
+  });
+
+  it('lets the owner ship after the degassing hold and let parcels travel over a weekend', async () => {
+    const fetchMock = settingsServer();
+    renderApp('/roastery/settings', { session: owner });
+
+    const when = await screen.findByRole('group', { name: 'When roasted coffee ships' }, { timeout: 15_000 });
+    expect((within(when).getByLabelText('Ship so it is ready to brew on arrival') as HTMLInputElement).checked).toBe(true);
+    fireEvent.click(within(when).getByLabelText('Ship after the degassing hold, and tell the customer the ready-from date'));
+    const weekendHold = screen.getByLabelText(/No parcel sits over a weekend/) as HTMLInputElement;
+    expect(weekendHold.checked).toBe(true);
+    fireEvent.click(weekendHold);
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+
+    expect(await screen.findByText('Settings saved.')).toBeTruthy();
+    const body = sentRequests(fetchMock, 'PUT', '/api/roastery/settings')[0]?.body as ShopSettings;
+    expect(body.shipPolicy).toBe('after_degassing');
+    expect(body.holdOverWeekend).toBe(false);
   });
 
   it('checks the form with the shared schema before sending', async () => {

@@ -45,6 +45,8 @@ function makeOrder(overrides: Partial<OrderDetail> = {}): OrderDetail {
     shipDate: null,
     readyFrom: null,
     bestBefore: null,
+    expectedArrival: null,
+    readyOnArrival: null,
     carrier: null,
     trackingNumber: null,
     paidAt: null,
@@ -55,6 +57,16 @@ function makeOrder(overrides: Partial<OrderDetail> = {}): OrderDetail {
 }
 
 describe('order page', () => {
+  it('gives a roasted order its expected arrival and says whether it lands ready to brew', async () => {
+    const roasted = { kind: 'roasted', status: 'paid', roastDate: '2026-02-09', shipDate: '2026-02-10', readyFrom: '2026-02-16', bestBefore: '2026-03-09' } as const;
+    stubFetch(() => jsonResponse(makeOrder({ ...roasted, expectedArrival: '2026-02-13', readyOnArrival: false })));
+    renderApp(`/orders/${orderId}`, { session: makeUser() });
+
+    const dates = await screen.findByRole('region', { name: 'Dates and tracking' }, { timeout: 15_000 });
+    expect(dates.textContent).toMatch(/Expected to arrive.*Feb.*13/);
+    expect(dates.textContent).toContain('It can arrive before it is ready: brew it from its ready-from date.');
+  });
+
   it('after the payment page, waits for the confirmed payment, then shows it paid and empties those bags from the cart', async () => {
     window.localStorage.setItem(
       'restday.cart',

@@ -21,10 +21,11 @@ function makePreview(priceCents: number): SubscriptionPreview {
     discountPct: 10,
     shippingCents: 695,
     currency: 'usd',
+    shipPolicy: 'ready_on_arrival',
     deliveries: [
-      { roastDate: '2026-12-09', shipDate: '2026-12-10', readyFrom: '2026-12-14', bestBefore: '2027-01-06', cutoffAt: '2026-12-08T19:00:00Z' },
-      { roastDate: '2026-12-23', shipDate: '2026-12-24', readyFrom: '2026-12-28', bestBefore: '2027-01-20', cutoffAt: '2026-12-22T19:00:00Z' },
-      { roastDate: '2027-01-06', shipDate: '2027-01-07', readyFrom: '2027-01-11', bestBefore: '2027-02-03', cutoffAt: '2027-01-05T19:00:00Z' },
+      { roastDate: '2026-12-09', shipDate: '2026-12-14', readyFrom: '2026-12-14', bestBefore: '2027-01-06', expectedArrival: '2026-12-17', cutoffAt: '2026-12-08T19:00:00Z' },
+      { roastDate: '2026-12-23', shipDate: '2026-12-28', readyFrom: '2026-12-28', bestBefore: '2027-01-20', expectedArrival: '2026-12-31', cutoffAt: '2026-12-22T19:00:00Z' },
+      { roastDate: '2027-01-06', shipDate: '2027-01-11', readyFrom: '2027-01-11', bestBefore: '2027-02-03', expectedArrival: '2027-01-14', cutoffAt: '2027-01-05T19:00:00Z' },
     ],
   };
 }
@@ -65,7 +66,10 @@ describe('Roasted to Order builder', () => {
     expect(screen.getByText(/10% subscription discount/)).toBeTruthy();
     const first = screen.getByRole('list', { name: 'First three deliveries' });
     expect(within(first).getAllByRole('listitem')).toHaveLength(3);
-    expect(within(first).getAllByRole('listitem')[0]?.textContent).toMatch(/Roasted.*Wed, Dec 9, 2026.*Ships.*Thu, Dec 10, 2026.*Ready from.*Mon, Dec 14, 2026.*Best before.*Wed, Jan 6, 2027/);
+    expect(within(first).getAllByRole('listitem')[0]?.textContent).toMatch(
+      /Roasted.*Wed, Dec 9, 2026.*Ships.*Mon, Dec 14, 2026.*Arrives about.*Thu, Dec 17, 2026.*Ready from.*Mon, Dec 14, 2026.*Best before.*Wed, Jan 6, 2027/,
+    );
+    expect(screen.getByText(/Ready to brew on arrival: we hold each bag after roasting/)).toBeTruthy();
     await waitFor(() => expect(previewRequests(fetchMock).at(-1)?.get('roastLevel')).toBe('light'));
     expect(previewRequests(fetchMock).at(-1)?.get('lotCode')).toBe('RD-T01');
     await waitFor(() => expect(router.state.location.search).toContain('level=light'));

@@ -41,6 +41,8 @@ const delivery = {
   shipDate: '2026-12-10',
   readyFrom: '2026-12-16',
   bestBefore: '2027-01-06',
+  expectedArrival: '2026-12-15',
+  readyOnArrival: false,
   status: 'scheduled',
   locked: false,
   cutoffAt: '2026-12-08T19:00:00Z',

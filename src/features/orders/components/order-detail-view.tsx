@@ -20,6 +20,7 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
   const dates = [
     { term: 'Roast date', value: order.roastDate },
     { term: 'Ship date', value: order.shipDate },
+    { term: 'Expected to arrive', value: order.expectedArrival },
     { term: 'Ready to brew from', value: order.readyFrom },
     { term: 'Best before', value: order.bestBefore },
   ].filter((each): each is { term: string; value: string } => each.value !== null);
@@ -103,6 +104,11 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
                 </div>
               ) : null}
             </dl>
+            {order.readyOnArrival !== null ? (
+              <p className="mt-2 text-small">
+                {order.readyOnArrival ? 'Ready to brew on arrival: it will have rested by the time it lands.' : 'It can arrive before it is ready: brew it from its ready-from date.'}
+              </p>
+            ) : null}
           </section>
         ) : null}
       </div>

@@ -55,6 +55,8 @@ function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isT
         <span className={clsx('text-caption font-semibold', day.open ? 'text-ok' : 'text-ink-muted')}>{state}</span>
       </div>
       {day.roasted.batches > 0 ? <RoastedFigures roasted={day.roasted} /> : day.open ? <LoadBar day={day} /> : null}
+      {day.holiday ? <p className="mt-1 text-caption font-semibold text-caution">{day.holiday}</p> : null}
+      <p className={clsx('text-caption', day.shipOpen ? 'text-ink' : 'text-ink-muted')}>{day.shipOpen ? 'Ships' : 'No shipping'}</p>
       {day.ordersCount > 0 ? (
         <p className="text-caption">
           {day.ordersCount} {day.ordersCount === 1 ? 'order' : 'orders'}

@@ -12,6 +12,7 @@ import { formatCalendarDay, formatShortDay } from '../utils/calendar-format';
 
 const roastDayFieldsSchema = z.object({
   open: z.enum(['open', 'closed']),
+  shipping: z.enum(['usual', 'open', 'closed']),
   capacityGrams: z
     .string()
     .trim()
@@ -23,6 +24,7 @@ type RoastDayFields = z.infer<typeof roastDayFieldsSchema>;
 function toUpdate(fields: RoastDayFields): CalendarDayUpdate {
   return {
     open: fields.open === 'open',
+    shipOpen: fields.shipping === 'usual' ? null : fields.shipping === 'open',
     capacityGrams: fields.capacityGrams === '' ? null : Number(fields.capacityGrams),
     note: fields.note,
   };
@@ -30,16 +32,25 @@ function toUpdate(fields: RoastDayFields): CalendarDayUpdate {
 
 /** What closing moved, so staff can see whom it touched. */
 function MovedSummary({ result }: { result: CalendarDayUpdateResponse }) {
-  const { moved, movedDeliveries } = result;
-  if (moved.length === 0 && movedDeliveries.length === 0) {
+  const { moved, movedDeliveries, shipMoved } = result;
+  if (moved.length === 0 && movedDeliveries.length === 0 && shipMoved.length === 0) {
     return <FormAlert tone="status">Saved {formatCalendarDay(result.date)}. Nothing needed to move.</FormAlert>;
   }
   return (
     <FormAlert tone="status">
-      <p className="font-semibold">
-        Saved {formatCalendarDay(result.date)}: {moved.length} {moved.length === 1 ? 'order' : 'orders'} and {movedDeliveries.length}{' '}
-        scheduled {movedDeliveries.length === 1 ? 'delivery' : 'deliveries'} moved; each customer is e-mailed the new dates.
-      </p>
+      {moved.length > 0 || movedDeliveries.length > 0 ? (
+        <p className="font-semibold">
+          Saved {formatCalendarDay(result.date)}: {moved.length} {moved.length === 1 ? 'order' : 'orders'} and {movedDeliveries.length}{' '}
+          scheduled {movedDeliveries.length === 1 ? 'delivery' : 'deliveries'} moved; each customer is e-mailed the new dates.
+        </p>
+      ) : (
+        <p className="font-semibold">Saved {formatCalendarDay(result.date)}.</p>
+      )}
+      {shipMoved.length > 0 ? (
+        <p className="mt-1">
+          {shipMoved.length} {shipMoved.length === 1 ? 'parcel ships' : 'parcels ship'} on another day now.
+        </p>
+      ) : null}
       <ul className="mt-2 list-disc pl-5 text-small">
         {moved.map((order) => (
           <li key={order.orderId}>
@@ -49,6 +60,12 @@ function MovedSummary({ result }: { result: CalendarDayUpdateResponse }) {
         {movedDeliveries.map((delivery) => (
           <li key={delivery.deliveryId}>
             Subscription delivery: {formatShortDay(delivery.from)} → {formatShortDay(delivery.to)}
+          </li>
+        ))}
+        {shipMoved.map((parcel) => (
+          <li key={parcel.orderId ?? parcel.deliveryId}>
+            {parcel.orderId ? `Order ${parcel.orderId.slice(0, 8).toUpperCase()}` : 'Subscription delivery'} ships {formatShortDay(parcel.from)} →{' '}
+            {formatShortDay(parcel.to)}
           </li>
         ))}
       </ul>
@@ -68,6 +85,7 @@ export function RoastDayEditor({ day, onDone }: { day: CalendarDay; onDone: () =
     resolver: zodResolver(roastDayFieldsSchema),
     defaultValues: {
       open: day.open ? 'open' : 'closed',
+      shipping: day.shipOverride === null ? 'usual' : day.shipOverride ? 'open' : 'closed',
       capacityGrams: day.overridden && day.open ? String(day.capacityGrams) : '',
       note: day.note ?? '',
     },
@@ -122,6 +140,27 @@ export function RoastDayEditor({ day, onDone }: { day: CalendarDay; onDone: () =
             </label>
           </div>
         </fieldset>
+        <fieldset>
+          <legend className="text-small font-semibold">Shipping</legend>
+          <p className="text-caption text-ink-muted">
+            {day.holiday ? `${day.holiday}: carriers are closed, so parcels stay in unless you open shipping. ` : ''}
+            Closing shipping keeps roasting as it is; parcels wait for the next ship day.
+          </p>
+          <div className="mt-1 flex flex-wrap gap-4">
+            <label className="flex min-h-11 items-center gap-2">
+              <input type="radio" value="usual" className="size-5 accent-leaf" {...form.register('shipping')} />
+              As usual (ship days and holidays)
+            </label>
+            <label className="flex min-h-11 items-center gap-2">
+              <input type="radio" value="open" className="size-5 accent-leaf" {...form.register('shipping')} />
+              Open: parcels go out
+            </label>
+            <label className="flex min-h-11 items-center gap-2">
+              <input type="radio" value="closed" className="size-5 accent-leaf" {...form.register('shipping')} />
+              Closed: no parcels go out
+            </label>
+          </div>
+        </fieldset>
         <TextField
           label="Capacity (g of green)"
           inputMode="numeric"
@@ -135,7 +174,7 @@ export function RoastDayEditor({ day, onDone }: { day: CalendarDay; onDone: () =
         {confirming ? (
           <div ref={confirmRef} tabIndex={-1} role="alertdialog" aria-labelledby="close-day-title" aria-describedby="close-day-text" className="rounded-control border border-caution/40 bg-caution-wash p-4">
             <p id="close-day-title" className="font-semibold">
-              Close {formatCalendarDay(day.date)}?
+              Close roasting on {formatCalendarDay(day.date)}?
             </p>
             <p id="close-day-text" className="mt-1 text-small">
               Its {day.ordersCount} {day.ordersCount === 1 ? 'order' : 'orders'} and any scheduled subscription deliveries move to the next

@@ -3,7 +3,7 @@ import { Plus, Trash2 } from 'lucide-react';
 import { useState, type ReactNode } from 'react';
 import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
 import { currencies } from '@shared/domain/money';
-import { roastedBagSizes, roastLevelLabels, roastLevels, weekdayLabels, weekdays } from '@shared/domain/vocabulary';
+import { roastedBagSizes, roastLevelLabels, roastLevels, shipPolicies, shipPolicyLabels, weekdayLabels, weekdays } from '@shared/domain/vocabulary';
 import { shopSettingsSchema, type ShopSettings, type ShopSettingsInput } from '@shared/schemas/settings';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
@@ -103,6 +103,27 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
         {weekdayChoices('shipWeekdays', 'Ship days')}
         {numberField('transitDays', 'Transit days')}
         {numberField('degasHoldDays', 'Degassing hold before shipping (days)')}
+        <fieldset className="sm:col-span-2 lg:col-span-3">
+          <legend className="text-small font-semibold">When roasted coffee ships</legend>
+          <div className="mt-1 grid gap-1">
+            {shipPolicies.map((policy) => (
+              <label key={policy} className="flex min-h-11 items-center gap-2">
+                <input type="radio" value={policy} className="size-5 accent-leaf" {...form.register('shipPolicy')} />
+                {shipPolicyLabels[policy]}
+              </label>
+            ))}
+          </div>
+          <p className="text-small text-ink-muted">
+            Ready on arrival holds a bag until it will have rested by the time it lands (ship date at least the ready-from date less the transit days).
+          </p>
+        </fieldset>
+        <label className="flex min-h-11 items-center gap-2 sm:col-span-2 lg:col-span-3">
+          <input type="checkbox" className="size-5 accent-leaf" {...form.register('holdOverWeekend')} />
+          No parcel sits over a weekend: hold a roasted parcel that would be in transit on a Saturday or Sunday until a ship day from which it is not
+        </label>
+        <p className="text-small text-ink-muted sm:col-span-2 lg:col-span-3">
+          US federal holidays are neither ship days nor transit days; close or open shipping on any day on the Roast Calendar.
+        </p>
       </Group>
 
       <Group title="Rest and best-before" description="The ready-from date is the roast date plus the rest for the brew method and the level’s adjustment.">

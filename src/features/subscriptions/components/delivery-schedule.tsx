@@ -19,7 +19,7 @@ function contentsOf(delivery: SubscriptionDelivery): string {
   return `${bagsLabel(delivery.bagsPerDelivery, delivery.bagSize)}, ${roastLevelLabels[delivery.roastLevel]}, ${grindLabels[delivery.grind]}`;
 }
 
-/** Each delivery's four dates, its coffee and where it stands; a locked one says why. */
+/** Each delivery's dates, whether it lands ready to brew, its coffee and where it stands; a locked one says why. */
 export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps) {
   return (
     <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
@@ -32,6 +32,9 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
             </th>
             <th scope="col" className="px-3 py-2 font-semibold">
               Ships
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Arrives about
             </th>
             <th scope="col" className="px-3 py-2 font-semibold">
               Ready from
@@ -60,7 +63,11 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
                   {skipped ? <s>{formatDeliveryDay(delivery.roastDate)}</s> : formatDeliveryDay(delivery.roastDate)}
                 </th>
                 <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.readyFrom)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.expectedArrival)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">
+                  {formatDeliveryDay(delivery.readyFrom)}
+                  <p className="text-caption text-ink-muted">{delivery.readyOnArrival ? 'Ready to brew on arrival' : 'Arrives before it is ready'}</p>
+                </td>
                 <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
                 <td className="px-3 py-2">{coffeeOf(delivery)}</td>
                 <td className="px-3 py-2">{contentsOf(delivery)}</td>

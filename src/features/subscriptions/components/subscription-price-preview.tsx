@@ -1,3 +1,4 @@
+import { shipPolicyCustomerNotes } from '@shared/domain/vocabulary';
 import type { SubscriptionPreview } from '@shared/schemas/subscription-preview';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
@@ -50,6 +51,7 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
         {firstCutoff ? (
           <p className="mt-1 text-small text-ink-muted">If you pay before {formatCutoff(firstCutoff)}; later, each date moves to the next roast day.</p>
         ) : null}
+        <p className="mt-1 text-small">{shipPolicyCustomerNotes[preview.shipPolicy]}</p>
         <ol aria-label="First three deliveries" className="mt-3 grid gap-3">
           {preview.deliveries.map((delivery, index) => (
             <li key={delivery.roastDate} className="rounded-control border border-rule bg-sheet p-3">
@@ -59,6 +61,8 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
                 <dd>{formatDeliveryDay(delivery.roastDate)}</dd>
                 <dt className="text-ink-muted">Ships</dt>
                 <dd>{formatDeliveryDay(delivery.shipDate)}</dd>
+                <dt className="text-ink-muted">Arrives about</dt>
+                <dd>{formatDeliveryDay(delivery.expectedArrival)}</dd>
                 <dt className="text-ink-muted">Ready from</dt>
                 <dd>{formatDeliveryDay(delivery.readyFrom)}</dd>
                 <dt className="text-ink-muted">Best before</dt>
