@@ -29,6 +29,7 @@ function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): Subscripti
     grind: 'whole-bean',
     brewMethod: 'filter',
     orderId: null,
+    paid: false,
     ...overrides,
   };
 }
