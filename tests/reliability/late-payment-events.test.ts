@@ -3,7 +3,6 @@
 // runs without workers, so no change reaches Stripe: every `customer.subscription.updated` it reads
 // back is Stripe's state from before the change, as a notice sent for an earlier change would be.
 import { eq } from 'drizzle-orm';
-import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, localDateOf } from '@shared/domain/shop-time';
 import { defaultShopSettings } from '@shared/schemas/settings';
