@@ -15,7 +15,7 @@ import { isCurrencyCode, type CurrencyCode } from '../shared/domain/money';
 import { bagSizes, brewMethods, grinds, orderKinds, roastLevels, roastedBagSizes } from '../shared/domain/vocabulary';
 
 /** What a subscriber did to their subscription (the `subscription-changed` e-mail). */
-export const subscriptionChangeKinds = ['changed', 'skipped', 'paused', 'resumed', 'cancelled'] as const;
+export const subscriptionChangeKinds = ['changed', 'skipped', 'unskipped', 'paused', 'resumed', 'cancelled'] as const;
 
 const text = (max = 300) => z.string().trim().max(max);
 /** The recipient's name as the greeting uses it; empty greets them without a name. */
@@ -134,6 +134,8 @@ export const emailPayloadSchemas = {
     change: z.enum(subscriptionChangeKinds),
     /** What changed, one line each ("Roast level: Dark"). */
     summary: z.array(text()).max(20).default([]),
+    /** What the change did, as Deliveries told the subscriber (leads the e-mail when given). */
+    notice: text(600).optional(),
     /** The next delivery that will roast, after the change. */
     nextDelivery: z.object({ roastDate: isoDate, shipDate: isoDate, readyFrom: isoDate }).optional(),
     pausedUntil: isoDate.optional(),

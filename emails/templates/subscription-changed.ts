@@ -11,6 +11,8 @@ function subject(p: Payload): string {
       return 'Your Roasted to Order subscription is updated';
     case 'skipped':
       return p.nextDelivery ? `Delivery skipped: your next one roasts on ${formatDay(p.nextDelivery.roastDate)}` : 'Your delivery is skipped';
+    case 'unskipped':
+      return 'Your delivery is back on';
     case 'paused':
       return p.pausedUntil ? `Your subscription is paused until ${formatDay(p.pausedUntil)}` : 'Your subscription is paused';
     case 'resumed':
@@ -25,11 +27,16 @@ function headline(p: Payload): { heading: string; text: string } {
     case 'changed':
       return { heading: 'Your subscription is updated', text: `We have saved your changes to your ${p.coffee} subscription.` };
     case 'skipped':
-      return { heading: 'Delivery skipped', text: `We will not roast or charge for the skipped ${p.coffee} delivery. Everything after it stays as it was.` };
+      // The notice says whether it was paid, and where its payment went.
+      return { heading: 'Delivery skipped', text: p.notice ?? `We will not roast, ship or charge for the skipped ${p.coffee} delivery.` };
+    case 'unskipped':
+      return { heading: 'Your delivery is back on', text: p.notice ?? `Your skipped ${p.coffee} delivery is back on.` };
     case 'paused':
       return {
         heading: 'Your subscription is paused',
-        text: p.pausedUntil
+        text: p.notice
+          ? `${p.notice} Your ${p.coffee} subscription picks up again by itself.`
+          : p.pausedUntil
           ? `Your ${p.coffee} subscription is paused until ${formatDay(p.pausedUntil)}. We will not roast, ship or charge until then, and it picks up again by itself.`
           : `Your ${p.coffee} subscription is paused. We will not roast, ship or charge until you resume it.`,
       };
@@ -53,7 +60,8 @@ export const subscriptionChanged: EmailTemplate<'subscription-changed'> = {
       { kind: 'paragraph', text: greeting(p.name) },
       { kind: 'paragraph', text },
     ];
-    if (p.summary.length > 0) blocks.push({ kind: 'address', title: 'What changed', lines: p.summary });
+    const lines = p.summary.filter((line) => line !== p.notice);
+    if (lines.length > 0) blocks.push({ kind: 'address', title: 'What changed', lines });
     if (p.nextDelivery && p.change !== 'cancelled') {
       blocks.push(
         { kind: 'paragraph', text: 'Your next delivery:' },

@@ -18,7 +18,7 @@ export class AppError extends Error {
     return new AppError(404, 'not_found', `${what} was not found.`);
   }
 
-  static conflict(code: string, message: string) {
-    return new AppError(409, code, message);
+  static conflict(code: string, message: string, fields?: Record<string, string>) {
+    return new AppError(409, code, message, fields);
   }
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { deliveryToCharge, firstRoastDates, nextDelivery, planDeliveries, roastDatesWhenPaid, type KeptDelivery, type SubscriptionForPlan } from './delivery-plan';
+import { deliveryGreenGrams, deliveryToCharge, firstRoastDates, nextDelivery, planDeliveries, roastDatesWhenPaid, type KeptDelivery, type SubscriptionForPlan } from './delivery-plan';
+import { defaultLossModel } from './roast-loss';
 import type { ScheduleSettings } from './roast-schedule';
 
 // A shop in New York roasting Monday, Wednesday and Friday, cutoff 12:00 the day before, shipping on
@@ -84,5 +85,13 @@ describe('firstRoastDates and roastDatesWhenPaid', () => {
     expect(roastDatesWhenPaid(delivery!, new Date('2031-01-12T16:59:00Z'), settings, {}).roastDate).toBe('2031-01-13');
     // At 12:00 exactly it has passed: Wednesday 15 (cutoff Tuesday 12:00) is the next.
     expect(roastDatesWhenPaid(delivery!, new Date('2031-01-12T17:00:00Z'), settings, {}).roastDate).toBe('2031-01-15');
+  });
+});
+
+describe('deliveryGreenGrams', () => {
+  it('2 × 12 oz at medium needs 819 g of green', () => {
+    // 2 × 341 g fill (12 oz = 340.19 g, rounded up; NIST SP 811) = 682 g roasted; + 2 % overage (Restday default)
+    // = 695.64 g; ÷ (1 − 0.15) medium loss (TRADE.md, from memory) = 818.4 g → rounded up to 819 g.
+    expect(deliveryGreenGrams({ roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2 }, { lossModel: defaultLossModel, overagePct: 2 })).toBe(819);
   });
 });

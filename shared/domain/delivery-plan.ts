@@ -24,7 +24,9 @@ import {
   type RoastDates,
   type ScheduleSettings,
 } from './roast-schedule';
+import { greenNeededForRoasted, type LossModel } from './roast-loss';
 import { localDateOf, type IsoDate } from './shop-time';
+import { bagFillGrams } from './units';
 import type { BrewMethod, CadenceWeeks, DeliveryStatus, Grind, RoastedBagSize, RoastLevel, SubscriptionStatus } from './vocabulary';
 
 export interface DeliveryChoice {
@@ -167,4 +169,12 @@ export function roastDatesWhenPaid(delivery: PlannedDelivery, paidAt: Date, sett
     return datesForRoastDate(delivery.roastDate, delivery.choice, settings, calendar);
   }
   return firstRoastDates(paidAt, delivery.choice, settings, calendar);
+}
+
+/**
+ * Green coffee one delivery takes from its lot: the bags' fill weight plus the overage, over the
+ * level's default loss (the Roast List's own rule). A lot holding less cannot roast a delivery.
+ */
+export function deliveryGreenGrams(choice: Pick<DeliveryChoice, 'roastLevel' | 'bagSize' | 'bagsPerDelivery'>, settings: { lossModel: LossModel; overagePct: number }): number {
+  return greenNeededForRoasted(bagFillGrams(choice.bagSize) * choice.bagsPerDelivery, settings.lossModel[choice.roastLevel].defaultPct, settings.overagePct);
 }

@@ -93,6 +93,10 @@ export const orderDetailSchema = z.object({
   customer: orderCustomerSchema,
   items: z.array(orderItemSchema),
   subtotalCents: z.number().int(),
+  /** Taken off the subtotal (a subscription delivery's discount); total = subtotal − discount + shipping. */
+  discountCents: z.number().int(),
+  /** How the order page names the discount line ("Subscription discount"); null with no discount. */
+  discountLabel: z.string().nullable(),
   shippingCents: z.number().int(),
   totalCents: z.number().int(),
   refundedCents: z.number().int(),

@@ -73,6 +73,8 @@ export const subscriptionDeliverySchema = z.object({
   grind: z.enum(grinds),
   brewMethod: z.enum(brewMethods),
   orderId: z.uuid().nullable(),
+  /** Already paid for: skipping it moves its payment to the next delivery, a pause asks whether to ship or hold it. */
+  paid: z.boolean(),
 });
 export type SubscriptionDelivery = z.infer<typeof subscriptionDeliverySchema>;
 
@@ -104,6 +106,10 @@ export const subscriptionSchema = z.object({
 });
 export type Subscription = z.infer<typeof subscriptionSchema>;
 
+/** The answer of every self-service change: the subscription, and what the change did in the subscriber's words (Deliveries shows it). */
+export const subscriptionChangeResponseSchema = subscriptionSchema.extend({ notice: z.string() });
+export type SubscriptionChangeResponse = z.infer<typeof subscriptionChangeResponseSchema>;
+
 /** `GET /api/subscriptions`: the signed-in customer's own, newest first. */
 export const subscriptionListResponseSchema = z.object({ items: z.array(subscriptionSchema) });
 export type SubscriptionListResponse = z.infer<typeof subscriptionListResponseSchema>;
@@ -123,15 +129,31 @@ export const subscriptionUpdateSchema = z
 export type SubscriptionUpdate = z.infer<typeof subscriptionUpdateSchema>;
 
 /**
- * `POST /api/subscriptions/:id/skip` → 200 Subscription. Without `roastDate`, the next delivery
- * that is not locked; skipping one already skipped changes nothing; a locked one is 409
- * `delivery_locked`.
+ * `POST /api/subscriptions/:id/skip` → 200 SubscriptionChangeResponse. Without `roastDate`, the next
+ * delivery that is not locked; any upcoming one by its roast date (also as
+ * `POST /api/subscriptions/:id/deliveries/:date/skip`). Skipping one already skipped changes nothing;
+ * a locked one is 409 `delivery_locked`. A paid one's payment moves to the next delivery, and the
+ * notice says which.
  */
 export const subscriptionSkipSchema = z.object({ roastDate: isoDate('roast date').optional() }).default({});
 export type SubscriptionSkip = z.infer<typeof subscriptionSkipSchema>;
 
-/** `POST /api/subscriptions/:id/pause` → 200 Subscription: no delivery roasts before `until` (a future shop-local day). */
-export const subscriptionPauseSchema = z.object({ until: isoDate('day to resume') });
+/** The `:date` of `/api/subscriptions/:id/deliveries/:date/(skip|unskip)`: the delivery's roast date. */
+export const subscriptionDeliveryParamsSchema = z.object({ id: z.uuid('No such subscription.'), date: isoDate('roast date') });
+
+/** What to do with a delivery already paid for that falls inside a pause: roast and ship it as planned, or hold it for the first delivery after the pause. */
+export const paidDeliveryChoices = ['ship', 'hold'] as const;
+export type PaidDeliveryChoice = (typeof paidDeliveryChoices)[number];
+
+/**
+ * `POST /api/subscriptions/:id/pause` → 200 SubscriptionChangeResponse: no delivery roasts before
+ * `until` (a future shop-local day). When a paid delivery whose cutoff is ahead lies inside the
+ * pause, `paidDelivery` is required (409 `paid_delivery_in_pause` naming it otherwise).
+ */
+export const subscriptionPauseSchema = z.object({
+  until: isoDate('day to resume'),
+  paidDelivery: z.enum(paidDeliveryChoices, { error: 'Choose ship or hold for the paid delivery.' }).optional(),
+});
 export type SubscriptionPause = z.infer<typeof subscriptionPauseSchema>;
 
 /** Query string of `GET /api/subscriptions/:id/deliveries`. */

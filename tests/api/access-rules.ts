@@ -141,6 +141,8 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/subscriptions/:id/deliveries', access: 'own-record', record: subscriptionOf },
   { method: 'PATCH', path: '/api/subscriptions/:id', access: 'own-record', record: subscriptionOf, body: { grind: 'pour-over' } },
   { method: 'POST', path: '/api/subscriptions/:id/skip', access: 'own-record', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/deliveries/:date/skip', access: 'own-record', record: subscriptionOf, params: { date: '2031-01-22' } },
+  { method: 'POST', path: '/api/subscriptions/:id/deliveries/:date/unskip', access: 'own-record', record: subscriptionOf, params: { date: '2031-01-22' } },
   { method: 'POST', path: '/api/subscriptions/:id/pause', access: 'own-record', record: subscriptionOf, body: { until: '2031-03-03' } },
   { method: 'POST', path: '/api/subscriptions/:id/resume', access: 'own-record', record: subscriptionOf },
   { method: 'POST', path: '/api/subscriptions/:id/cancel', access: 'own-record', record: subscriptionOf },

@@ -171,14 +171,22 @@ describe('database constraints', () => {
     });
   });
 
-  it('orders — when the total is not subtotal plus shipping, then the order is refused', async () => {
+  it('orders — when the total is not subtotal less discount plus shipping, or the discount exceeds the subtotal, then the order is refused', async () => {
     await inRolledBackTransaction(async (tx) => {
       const user = await insertUser(tx);
       const order = { userId: user.id, kind: 'green' as const, shippingAddress: address };
-      await expectRefused(tx, CHECK_VIOLATION, 'orders_total_is_subtotal_plus_shipping', (sp) =>
+      await expectRefused(tx, CHECK_VIOLATION, 'orders_total_adds_up', (sp) =>
         sp.insert(schema.orders).values({ ...order, subtotalCents: 2400, shippingCents: 850, totalCents: 2400 }),
       );
+      await expectRefused(tx, CHECK_VIOLATION, 'orders_total_adds_up', (sp) =>
+        sp.insert(schema.orders).values({ ...order, subtotalCents: 3600, discountCents: 360, shippingCents: 895, totalCents: 4495 }),
+      );
+      await expectRefused(tx, CHECK_VIOLATION, 'orders_discount_within_subtotal', (sp) =>
+        sp.insert(schema.orders).values({ ...order, subtotalCents: 100, discountCents: 200, shippingCents: 895, totalCents: 795 }),
+      );
       await tx.insert(schema.orders).values({ ...order, subtotalCents: 2400, shippingCents: 850, totalCents: 3250 });
+      // $36.00 of bags less $3.60 discount plus $8.95 shipping = $41.35.
+      await tx.insert(schema.orders).values({ ...order, subtotalCents: 3600, discountCents: 360, shippingCents: 895, totalCents: 4135 });
     });
   });
 

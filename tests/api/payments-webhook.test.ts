@@ -261,11 +261,19 @@ describe('subscriptions renewing on the fake clock', () => {
     });
   });
 
-  it('pausing collection in Stripe makes the subscription paused: a renewal meanwhile charges nothing; resuming makes it active', async () => {
+  it('collection paused in Stripe alone charges nothing meanwhile, but is no subscriber pause: the subscription stays active', async () => {
     const { subscription, stripeSubscriptionId } = await activeSubscription('pauses');
     const resumesAt = (await fake.now()) + 20 * 86_400;
+    const updatesBefore = (await eventsAbout(stripeSubscriptionId, 'customer.subscription.updated')).length;
     await stripe.subscriptions.update(stripeSubscriptionId, { pause_collection: { behavior: 'void', resumes_at: resumesAt } });
-    await waitFor(() => subscriptionRow(subscription.id), (row) => row.status === 'paused', 10_000, 'paused');
+    // The notice arrives and is applied; the pause is the subscriber's to make (Deliveries), so the status is not moved by it.
+    await waitFor(
+      () => eventsAbout(stripeSubscriptionId, 'customer.subscription.updated'),
+      (events) => events.length > updatesBefore && events.every((event) => event.status === 'delivered'),
+      10_000,
+      'the update delivered',
+    );
+    expect((await subscriptionRow(subscription.id)).status).toBe('active');
 
     const renewal = await fake.advanceClock({ days: 14 });
     expect(renewal.renewals).toContainEqual(expect.objectContaining({ subscription: stripeSubscriptionId, outcome: 'skipped' }));
@@ -276,7 +284,13 @@ describe('subscriptions renewing on the fake clock', () => {
     ]);
 
     await stripe.subscriptions.update(stripeSubscriptionId, { pause_collection: '' });
-    await waitFor(() => subscriptionRow(subscription.id), (row) => row.status === 'active', 10_000, 'active again');
+    await waitFor(
+      () => eventsAbout(stripeSubscriptionId, 'customer.subscription.updated'),
+      (events) => events.length > updatesBefore + 1 && events.every((event) => event.status === 'delivered'),
+      10_000,
+      'the second update delivered',
+    );
+    expect((await subscriptionRow(subscription.id)).status).toBe('active');
   });
 
   it('a new bag price takes effect at the next renewal, and a new cadence restarts the period and bills it at once', async () => {

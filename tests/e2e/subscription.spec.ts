@@ -119,17 +119,36 @@ describe('Roasted to Order in a real browser', () => {
     expect(problems).toEqual([]);
   }, 60_000);
 
-  it('skips one delivery and changes the level in Deliveries, the schedule and the e-mails following at once', async () => {
+  it('Deliveries marks the paid delivery; skipping it says where the payment moves, undo brings it back, skip again; then a level change', async () => {
     await page.getByRole('link', { name: 'Skip, pause or change in Deliveries' }).click();
     await page.getByRole('heading', { level: 1, name: 'Deliveries' }).waitFor();
     await schedule().waitFor();
+    const paidBadges = schedule().getByText('Paid', { exact: true });
+    await paidBadges.first().waitFor();
+    // The first payment paid for exactly one delivery.
+    expect(await paidBadges.count()).toBe(1);
     expect(await accessibilityViolations()).toEqual([]);
 
+    // The next delivery that can be skipped is the paid one.
     const skipButton = page.getByRole('button', { name: /^Skip the delivery roasting / });
     const skippedDay = ((await skipButton.textContent()) ?? '').replace('Skip the delivery roasting ', '');
+    const skippedRow = () => schedule().getByRole('row', { name: new RegExp(skippedDay) });
+    expect(await skippedRow().getByText('Paid', { exact: true }).count()).toBe(1);
     await skipButton.click();
-    await page.getByRole('status').filter({ hasText: `Skipped the delivery roasting ${skippedDay}` }).waitFor();
-    await schedule().getByRole('row', { name: new RegExp(skippedDay) }).filter({ hasText: 'Skipped' }).waitFor();
+    const moved = page.getByRole('status').filter({ hasText: /It is already paid, so your payment moves to the delivery of [A-Z][a-z]+day, [A-Z][a-z]+ \d{1,2}, \d{4}\./ });
+    await moved.waitFor();
+    expect(await moved.textContent()).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    await skippedRow().filter({ hasText: 'Skipped' }).waitFor();
+    expect(await skippedRow().getByText('Paid', { exact: true }).count()).toBe(0);
+    expect(await paidBadges.count()).toBe(1);
+
+    await page.getByRole('button', { name: `Undo skip of the delivery of ${skippedDay}` }).click();
+    await page.getByRole('status').filter({ hasText: /is back on\. Your payment moves back to it from the delivery of / }).waitFor();
+    await skippedRow().getByText('Paid', { exact: true }).waitFor();
+    expect(await accessibilityViolations()).toEqual([]);
+
+    await page.getByRole('button', { name: `Skip the delivery of ${skippedDay}` }).click();
+    await skippedRow().filter({ hasText: 'Skipped' }).waitFor();
 
     await page.getByRole('button', { name: 'Change level, size, grind or cadence' }).click();
     const form = page.getByRole('form', { name: 'Change what each delivery brings' });

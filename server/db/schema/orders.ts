@@ -25,6 +25,8 @@ export const orders = pgTable(
     deliveryId: uuid('delivery_id').references((): AnyPgColumn => deliveries.id, { onDelete: 'set null' }),
     subtotalCents: integer('subtotal_cents').notNull(),
     shippingCents: integer('shipping_cents').notNull().default(0),
+    /** Taken off the subtotal (a subscription delivery's discount), so total = subtotal − discount + shipping. */
+    discountCents: integer('discount_cents').notNull().default(0),
     totalCents: integer('total_cents').notNull(),
     currency: text('currency').notNull().default('usd'),
     /** Where this order ships, copied at checkout. */
@@ -59,7 +61,8 @@ export const orders = pgTable(
     check('orders_subtotal_non_negative', sql`${t.subtotalCents} >= 0`),
     check('orders_shipping_non_negative', sql`${t.shippingCents} >= 0`),
     check('orders_total_non_negative', sql`${t.totalCents} >= 0`),
-    check('orders_total_is_subtotal_plus_shipping', sql`${t.totalCents} = ${t.subtotalCents} + ${t.shippingCents}`),
+    check('orders_discount_within_subtotal', sql`${t.discountCents} >= 0 and ${t.discountCents} <= ${t.subtotalCents}`),
+    check('orders_total_adds_up', sql`${t.totalCents} = ${t.subtotalCents} - ${t.discountCents} + ${t.shippingCents}`),
     check('orders_refunded_within_total', sql`${t.refundedCents} >= 0 and ${t.refundedCents} <= ${t.totalCents}`),
     check('orders_currency_code', sql`${t.currency} ~ '^[a-z]{3}$'`),
     check('orders_green_has_no_subscription', sql`${t.kind} = 'roasted' or (${t.subscriptionId} is null and ${t.deliveryId} is null)`),

@@ -90,6 +90,8 @@ export function createOrdersRepo(db: Db) {
         .select({
           ...summaryColumns,
           currency: orders.currency,
+          discountCents: orders.discountCents,
+          subscriptionId: orders.subscriptionId,
           shippingAddress: orders.shippingAddress,
           readyFrom: orders.readyFrom,
           bestBefore: orders.bestBefore,

@@ -60,6 +60,8 @@ export function createOrdersService(repo: OrdersRepo) {
         ...basicsOf(order),
         items: order.items,
         subtotalCents: order.subtotalCents,
+        discountCents: order.discountCents,
+        discountLabel: order.discountCents > 0 ? (order.subscriptionId ? 'Subscription discount' : 'Discount') : null,
         shippingCents: order.shippingCents,
         refundedCents: order.refundedCents,
         currency: order.currency,

@@ -2,7 +2,8 @@ import Stripe from 'stripe';
 import { greenOrderDates } from '@shared/domain/roast-schedule';
 import { localDateOf } from '@shared/domain/shop-time';
 import type { WebhookReceipt } from '@shared/schemas/payments';
-import { roastedBagSizes, type BagSize, type RoastedBagSize, type SubscriptionStatus } from '@shared/domain/vocabulary';
+import { subscriptionStatusOf, type PaymentStanding } from '@shared/domain/subscription-status';
+import { roastedBagSizes, type BagSize, type RoastedBagSize } from '@shared/domain/vocabulary';
 import type { PaymentsGateway } from '../../integrations/payments';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
@@ -35,17 +36,20 @@ function roastedSizeOf(size: BagSize): RoastedBagSize {
   return roasted;
 }
 
-/** Restday's reading of a Stripe subscription's state. */
-function subscriptionStatusOf(subscription: Stripe.Subscription): SubscriptionStatus {
+/**
+ * Restday's reading of a Stripe subscription's standing. Its `pause_collection` is only Restday's own
+ * pause pushed back to us (maybe not yet, maybe an old one), so it never decides the status; Stripe's
+ * own `paused` (a trial ended with no way to pay) is a payment that cannot be taken.
+ */
+function paymentStandingOf(subscription: Stripe.Subscription): PaymentStanding {
   switch (subscription.status) {
     case 'active':
     case 'trialing':
-      return subscription.pause_collection ? 'paused' : 'active';
+      return 'active';
     case 'past_due':
     case 'unpaid':
-      return 'past_due';
     case 'paused':
-      return 'paused';
+      return 'past_due';
     case 'canceled':
     case 'incomplete_expired':
       return 'cancelled';
@@ -59,15 +63,20 @@ function paidInvoiceOf(invoice: Stripe.Invoice): PaidInvoice {
   return { id: invoice.id, amountPaidCents: invoice.amount_paid, currency: invoice.currency, paymentIntentId: idOf(payment?.payment.payment_intent) };
 }
 
-function billingOf(subscription: Stripe.Subscription) {
-  const periodEnds = subscription.items.data.map((item) => item.current_period_end);
-  const status = subscriptionStatusOf(subscription);
+/**
+ * What the payment service owns on a subscription: its standing, ids and paid period. The status
+ * keeps the subscriber's pause (`subscriptionStatusOf`), so a late or out-of-order event never
+ * undoes it; pause, skips, level and cadence are never written here.
+ */
+function billingOf(stripeSubscription: Stripe.Subscription, subscription: { pausedUntil: string | null }, today: string) {
+  const periodEnds = stripeSubscription.items.data.map((item) => item.current_period_end);
+  const standing = paymentStandingOf(stripeSubscription);
   return {
-    status,
-    stripeSubscriptionId: subscription.id,
-    stripeCustomerId: idOf(subscription.customer),
+    status: subscriptionStatusOf(standing, subscription.pausedUntil, today),
+    stripeSubscriptionId: stripeSubscription.id,
+    stripeCustomerId: idOf(stripeSubscription.customer),
     currentPeriodEnd: periodEnds.length > 0 ? fromUnix(Math.max(...periodEnds)) : null,
-    cancelledAt: status === 'cancelled' ? fromUnix(subscription.ended_at ?? subscription.canceled_at) : null,
+    cancelledAt: standing === 'cancelled' ? fromUnix(stripeSubscription.ended_at ?? stripeSubscription.canceled_at) : null,
   };
 }
 
@@ -84,6 +93,7 @@ async function greenShipDate(tx: PaymentsTransaction, paidAt: Date): Promise<str
  */
 export function createPaymentEventsService({ repo, gateway, clock, logger, config }: PaymentEventsDeps) {
   const baseUrl = shopBaseUrl(config);
+  const shopToday = async () => localDateOf(clock.now(), (await repo.shopTimeZone()) ?? 'UTC');
 
   async function completeOrderCheckout(session: Stripe.Checkout.Session): Promise<Effect | undefined> {
     const orderId = session.metadata?.[orderIdKey] ?? session.client_reference_id;
@@ -171,7 +181,7 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
     return async (tx) => {
       const subscription = await tx.lockSubscription(subscriptionId);
       if (!subscription) return void logger.warn({ subscriptionId }, 'a paid Checkout Session names an unknown subscription');
-      await tx.updateSubscriptionBilling(subscription.id, { ...billingOf(stripeSubscription), stripeCheckoutSessionId: session.id });
+      await tx.updateSubscriptionBilling(subscription.id, { ...billingOf(stripeSubscription, subscription, await shopToday()), stripeCheckoutSessionId: session.id });
       // The first delivery's order, whichever of this event and the first invoice.paid arrives first.
       if (firstInvoice?.status === 'paid') await recordPaidCycle(tx.tx, subscription.id, paidInvoiceOf(firstInvoice), clock.now(), logger);
       const firstRoastDate = await tx.firstDeliveryRoastDate(subscription.id);
@@ -216,7 +226,7 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
     return async (tx) => {
       const subscription = await tx.lockSubscription(subscriptionId);
       if (!subscription) return void logger.warn({ subscriptionId }, 'a Stripe subscription names an unknown subscription');
-      await tx.updateSubscriptionBilling(subscription.id, billingOf(stripeSubscription));
+      await tx.updateSubscriptionBilling(subscription.id, billingOf(stripeSubscription, subscription, await shopToday()));
       await then?.(tx, subscription);
     };
   }

@@ -45,6 +45,7 @@ function queries(db: DbOrTx) {
         grind: subscriptions.grind,
         brewMethod: subscriptions.brewMethod,
         cadenceWeeks: subscriptions.cadenceWeeks,
+        pausedUntil: subscriptions.pausedUntil,
         priceCents: subscriptions.priceCents,
         currency: subscriptions.currency,
         stripeSubscriptionId: subscriptions.stripeSubscriptionId,

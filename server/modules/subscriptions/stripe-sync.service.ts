@@ -5,7 +5,7 @@ import type { Db } from '../../db/client';
 import type { PaymentsGateway } from '../../integrations/payments';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
-import { choiceOf, createSubscriptionsRepo, deferredSkipCount, keptDeliveries, markSynced, skipsAwaitingStripe } from './subscriptions.repo';
+import { choiceOf, createSubscriptionsRepo, deferredSkipCount, keptDeliveries, markSynced, skipsAwaitingStripe, unskipsAwaitingStripe } from './subscriptions.repo';
 
 /** Metadata on the Stripe subscription naming the Restday state it holds, so a retried push after a crash is recognised. */
 export const syncMarkerKey = 'restday_sync';
@@ -25,7 +25,7 @@ const unix = (instant: Date) => Math.floor(instant.getTime() / 1000);
  * next charge keeps its date), pause (collection paused until the shop-local start of `pausedUntil`),
  * cancellation at period end, and each skip as the next charge moved one cadence later (`trial_end`).
  * A skip is pushed only once no unpaid delivery comes before it, so earlier deliveries are still
- * charged in time. Safe to run again at any point: the state pushed is named in the metadata and in
+ * charged in time; an undone skip whose charge was already moved moves it back one cadence. Safe to run again at any point: the state pushed is named in the metadata and in
  * the Idempotency-Key, and a push already in Stripe is only recorded.
  */
 export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps) {
@@ -70,11 +70,14 @@ export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps)
     const skips = canMoveCharge
       ? (await skipsAwaitingStripe(db, subscriptionId, today)).filter((skip) => !toCharge || skip.roastDate < toCharge.roastDate)
       : [];
+    const restored = canMoveCharge ? await unskipsAwaitingStripe(db, subscriptionId, today) : [];
+    const skipIds = skips.map((skip) => skip.id);
+    const restoredIds = restored.map((row) => row.id);
     // The state pushed: the change version and how many charges skips have moved in all.
-    const marker = `v${subscription.changeVersion}-m${(await deferredSkipCount(db, subscriptionId)) + skips.length}`;
+    const marker = `v${subscription.changeVersion}-m${(await deferredSkipCount(db, subscriptionId)) + skips.length - restored.length}`;
 
     if (stripeSubscription.status === 'canceled' || stripeSubscription.metadata?.[syncMarkerKey] === marker) {
-      await markSynced(db, subscriptionId, subscription.changeVersion, skips.map((skip) => skip.id));
+      await markSynced(db, subscriptionId, subscription.changeVersion, skipIds, restoredIds);
       return 'already';
     }
     const item = stripeSubscription.items.data[0];
@@ -82,7 +85,7 @@ export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps)
     const intervalChanged = item.price.recurring?.interval !== 'week' || item.price.recurring.interval_count !== subscription.cadenceWeeks;
     const priceChanged = item.price.unit_amount !== subscription.priceCents;
     const paused = subscription.pausedUntil !== null && subscription.pausedUntil > today;
-    const movedBy = skips.length;
+    const movedBy = skips.length - restored.length;
 
     const params: Stripe.SubscriptionUpdateParams = {
       proration_behavior: 'none',
@@ -110,10 +113,13 @@ export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps)
           ? { pause_collection: '' }
           : {}),
       // A new interval would restart the period and bill at once; a trial end keeps the next charge where it was (or moves it on for skips).
-      ...((intervalChanged && canMoveCharge) || movedBy > 0 ? { trial_end: item.current_period_end + movedBy * subscription.cadenceWeeks * weekSeconds } : {}),
+      // Moved back, the charge never lands in the past: Stripe charges at once instead.
+      ...((intervalChanged && canMoveCharge) || movedBy !== 0
+        ? { trial_end: Math.max(item.current_period_end + movedBy * subscription.cadenceWeeks * weekSeconds, unix(now) + 60) }
+        : {}),
     };
     await gateway.stripe.subscriptions.update(stripeSubscription.id, params, { idempotencyKey: `subscription-${subscriptionId}-sync-${marker}` });
-    await markSynced(db, subscriptionId, subscription.changeVersion, skips.map((skip) => skip.id));
+    await markSynced(db, subscriptionId, subscription.changeVersion, skipIds, restoredIds);
     logger.info({ subscriptionId, marker }, 'subscription pushed to Stripe');
     return 'pushed';
   }

@@ -97,13 +97,18 @@ export async function recordPaidCycle(tx: Tx, subscriptionId: string, invoice: P
   const dates = roastDatesWhenPaid(target, paidAt, settings, calendar);
   const shippingCents = Math.min(deliveryShippingCents(subscription, target.choice, settings, logger), invoice.amountPaidCents);
   const bagPriceCents = settings.roastedBagPriceCents[target.choice.bagSize];
+  const bagsCents = bagPriceCents * target.choice.bagsPerDelivery;
+  // The bags at list price, less what the charge took off them, so the order's lines add up to what was paid.
+  const subtotalCents = Math.max(bagsCents, invoice.amountPaidCents - shippingCents);
+  const discountCents = subtotalCents + shippingCents - invoice.amountPaidCents;
   const orderId = await createDeliveryOrder(tx, {
     userId: subscription.userId,
     subscriptionId,
     stripeInvoiceId: invoice.id,
     stripePaymentIntentId: invoice.paymentIntentId,
     currency: invoice.currency,
-    subtotalCents: invoice.amountPaidCents - shippingCents,
+    subtotalCents,
+    discountCents,
     shippingCents,
     totalCents: invoice.amountPaidCents,
     shippingAddress: subscription.shippingAddress,
@@ -118,7 +123,7 @@ export async function recordPaidCycle(tx: Tx, subscriptionId: string, invoice: P
       grind: target.choice.grind,
       brewMethod: target.choice.brewMethod,
       unitPriceCents: bagPriceCents,
-      lineTotalCents: bagPriceCents * target.choice.bagsPerDelivery,
+      lineTotalCents: bagsCents,
     },
   });
   if (!orderId) return undefined;

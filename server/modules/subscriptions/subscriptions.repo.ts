@@ -166,6 +166,19 @@ export async function keepDelivery(db: DbOrTx, subscriptionId: string, delivery:
   return row.id;
 }
 
+/** Removes a kept row whose only reason was the payment now held for a later delivery. */
+export async function dropDelivery(db: DbOrTx, deliveryId: string) {
+  await db.delete(deliveries).where(eq(deliveries.id, deliveryId));
+}
+
+/** Rows no longer skipped whose charge Stripe had already moved on: the sync moves it back. */
+export async function unskipsAwaitingStripe(db: DbOrTx, subscriptionId: string, today: IsoDate) {
+  return db
+    .select({ id: deliveries.id })
+    .from(deliveries)
+    .where(and(eq(deliveries.subscriptionId, subscriptionId), sql`${deliveries.status} <> 'skipped'`, eq(deliveries.chargeDeferred, true), gte(deliveries.roastDate, today)));
+}
+
 /** Skipped rows whose charge Stripe has not moved yet, by roast date. */
 export async function skipsAwaitingStripe(db: DbOrTx, subscriptionId: string, today: IsoDate) {
   return db
@@ -188,7 +201,7 @@ export function createSubscriptionsRepo(db: Db) {
   return {
     async lotForSubscription(code: string) {
       const [lot] = await db
-        .select({ id: lots.id, code: lots.code, name: lots.name, allowedLevels: lots.allowedLevels })
+        .select({ id: lots.id, code: lots.code, name: lots.name, allowedLevels: lots.allowedLevels, stockGrams: lots.stockGrams })
         .from(lots)
         .where(and(eq(lots.code, code), eq(lots.isListed, true)));
       return lot;
@@ -270,7 +283,12 @@ export function createSubscriptionsRepo(db: Db) {
         .from(subscriptions)
         .leftJoin(
           deliveries,
-          and(eq(deliveries.subscriptionId, subscriptions.id), eq(deliveries.status, 'skipped'), eq(deliveries.chargeDeferred, false), gte(deliveries.roastDate, today)),
+          and(
+            eq(deliveries.subscriptionId, subscriptions.id),
+            gte(deliveries.roastDate, today),
+            // A skip whose charge is not moved yet, or an undone skip whose charge is not moved back.
+            sql`(${deliveries.status} = 'skipped') <> ${deliveries.chargeDeferred}`,
+          ),
         )
         .where(
           and(
@@ -352,12 +370,13 @@ export async function moveOrderToDelivery(db: DbOrTx, orderId: string, deliveryI
   await db.update(orders).set({ deliveryId, ...dayColumns(dates) }).where(eq(orders.id, orderId));
 }
 
-export async function markSynced(db: DbOrTx, subscriptionId: string, version: number, deferredSkipIds: readonly string[]) {
+export async function markSynced(db: DbOrTx, subscriptionId: string, version: number, deferredSkipIds: readonly string[], restoredIds: readonly string[] = []) {
   await db
     .update(subscriptions)
     .set({ stripeSyncedVersion: sql`greatest(${subscriptions.stripeSyncedVersion}, ${version})` })
     .where(eq(subscriptions.id, subscriptionId));
   for (const id of deferredSkipIds) await db.update(deliveries).set({ chargeDeferred: true }).where(eq(deliveries.id, id));
+  for (const id of restoredIds) await db.update(deliveries).set({ chargeDeferred: false }).where(eq(deliveries.id, id));
 }
 
 export async function setAnchorDate(db: DbOrTx, subscriptionId: string, anchorDate: IsoDate) {
@@ -376,6 +395,7 @@ export interface NewDeliveryOrder {
   stripePaymentIntentId: string | null;
   currency: string;
   subtotalCents: number;
+  discountCents: number;
   shippingCents: number;
   totalCents: number;
   shippingAddress: AddressSnapshot;
@@ -394,6 +414,7 @@ export async function createDeliveryOrder(db: DbOrTx, order: NewDeliveryOrder): 
       status: 'paid',
       subscriptionId: order.subscriptionId,
       subtotalCents: order.subtotalCents,
+      discountCents: order.discountCents,
       shippingCents: order.shippingCents,
       totalCents: order.totalCents,
       currency: order.currency,

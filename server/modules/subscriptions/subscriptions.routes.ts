@@ -3,10 +3,12 @@ import { z } from 'zod';
 import {
   subscriptionCheckoutRequestSchema,
   subscriptionDeliveriesQuerySchema,
+  subscriptionDeliveryParamsSchema,
   subscriptionPauseSchema,
   subscriptionSkipSchema,
   subscriptionUpdateSchema,
   type Subscription,
+  type SubscriptionChangeResponse,
   type SubscriptionCheckoutResponse,
   type SubscriptionDeliveriesResponse,
   type SubscriptionListResponse,
@@ -38,29 +40,39 @@ export function subscriptionsRoutes(service: SubscriptionsService): Router {
 
   router.patch('/:id', async (req, res) => {
     const { id } = subscriptionParams.parse(req.params);
-    res.json((await service.update(req.user!, id, subscriptionUpdateSchema.parse(req.body))) satisfies Subscription);
+    res.json((await service.update(req.user!, id, subscriptionUpdateSchema.parse(req.body))) satisfies SubscriptionChangeResponse);
   });
 
   router.post('/:id/skip', async (req, res) => {
     const { id } = subscriptionParams.parse(req.params);
     const { roastDate } = subscriptionSkipSchema.parse(req.body ?? {});
-    res.json((await service.skip(req.user!, id, roastDate)) satisfies Subscription);
+    res.json((await service.skip(req.user!, id, roastDate)) satisfies SubscriptionChangeResponse);
+  });
+
+  router.post('/:id/deliveries/:date/skip', async (req, res) => {
+    const { id, date } = subscriptionDeliveryParamsSchema.parse(req.params);
+    res.json((await service.skip(req.user!, id, date)) satisfies SubscriptionChangeResponse);
+  });
+
+  router.post('/:id/deliveries/:date/unskip', async (req, res) => {
+    const { id, date } = subscriptionDeliveryParamsSchema.parse(req.params);
+    res.json((await service.unskip(req.user!, id, date)) satisfies SubscriptionChangeResponse);
   });
 
   router.post('/:id/pause', async (req, res) => {
     const { id } = subscriptionParams.parse(req.params);
-    const { until } = subscriptionPauseSchema.parse(req.body);
-    res.json((await service.pause(req.user!, id, until)) satisfies Subscription);
+    const { until, paidDelivery } = subscriptionPauseSchema.parse(req.body);
+    res.json((await service.pause(req.user!, id, until, paidDelivery)) satisfies SubscriptionChangeResponse);
   });
 
   router.post('/:id/resume', async (req, res) => {
     const { id } = subscriptionParams.parse(req.params);
-    res.json((await service.resume(req.user!, id)) satisfies Subscription);
+    res.json((await service.resume(req.user!, id)) satisfies SubscriptionChangeResponse);
   });
 
   router.post('/:id/cancel', async (req, res) => {
     const { id } = subscriptionParams.parse(req.params);
-    res.json((await service.cancel(req.user!, id)) satisfies Subscription);
+    res.json((await service.cancel(req.user!, id)) satisfies SubscriptionChangeResponse);
   });
 
   return router;

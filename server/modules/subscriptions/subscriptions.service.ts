@@ -1,10 +1,14 @@
-import { nextDelivery, planDeliveries, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
+import { deliveryGreenGrams, nextDelivery, planDeliveries, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
 import { quoteSubscriptionDelivery } from '@shared/domain/pricing';
 import { datesForRoastDate, type RoastCalendar, type ScheduleSettings } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
+import { subscriptionStatusOf } from '@shared/domain/subscription-status';
+import { paidDeliveryInPauseQuestion, pauseNotice, skipNotice, unskipNotice, writtenDay, type PauseOutcome } from '@shared/domain/subscription-wording';
 import { grindLabels, roastLevelLabels, type RoastLevel } from '@shared/domain/vocabulary';
 import type {
+  PaidDeliveryChoice,
   Subscription,
+  SubscriptionChangeResponse,
   SubscriptionCheckoutRequest,
   SubscriptionCheckoutResponse,
   SubscriptionDelivery,
@@ -22,6 +26,7 @@ import { assertBagsShip } from '../shipping/shipping.service';
 import {
   changeSubscription,
   choiceOf,
+  dropDelivery,
   keepDelivery,
   keptDeliveries,
   loadScheduleContext,
@@ -98,6 +103,7 @@ function toApiDelivery(delivery: PlannedDelivery, subscription: SubscriptionReco
     coffee: pick?.name ?? null,
     ...delivery.choice,
     orderId: delivery.orderId,
+    paid: delivery.orderId !== null,
   };
 }
 
@@ -110,7 +116,7 @@ const describeChoice = {
   cadenceWeeks: (value: number) => `Every ${value === 1 ? 'week' : `${value} weeks`}`,
 };
 
-type ChangeKind = 'changed' | 'skipped' | 'paused' | 'resumed' | 'cancelled';
+type ChangeKind = 'changed' | 'skipped' | 'unskipped' | 'paused' | 'resumed' | 'cancelled';
 
 interface ChangeContext {
   tx: Tx;
@@ -122,8 +128,12 @@ interface ChangeContext {
   now: Date;
 }
 
-/** What a change wants: the subscription's new fields and the e-mail's lines, or nothing (it is already so). */
-type ChangeOutcome = { fields: SubscriptionFieldsChange; summary: string[] } | 'unchanged';
+/**
+ * What a change wants: the subscription's new fields, the e-mail's lines and what the subscriber is
+ * told (`notice`, also the e-mail's lead when given), or nothing (it is already so, and `notice` says that).
+ */
+type ChangeOutcome = { fields: SubscriptionFieldsChange; summary: string[]; notice?: string } | { unchanged: string };
+const unchanged = (notice: string): ChangeOutcome => ({ unchanged: notice });
 
 export function createSubscriptionsService({ repo, payments, clock, onChanged }: SubscriptionsServiceDeps) {
   async function present(subscription: SubscriptionRecord, count = 1): Promise<{ subscription: Subscription; plan: SubscriptionDelivery[] }> {
@@ -138,7 +148,7 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
       plan: apiPlan,
       subscription: {
         id: subscription.id,
-        status: subscription.status,
+        status: subscriptionStatusOf(subscription.status, subscription.pausedUntil, localDateOf(now, settings.timeZone)),
         lotCode: subscription.lotCode,
         coffee: subscription.coffee,
         ...choiceOf(subscription),
@@ -174,10 +184,15 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
    * locked deliveries, apply, bump the change version (the Stripe sync's idempotency), queue the
    * e-mail. A change that is already so changes nothing and sends nothing.
    */
-  async function change(user: SessionUser, subscriptionId: string, kind: ChangeKind, decide: (context: ChangeContext) => Promise<ChangeOutcome>): Promise<Subscription> {
+  async function change(
+    user: SessionUser,
+    subscriptionId: string,
+    kind: ChangeKind,
+    decide: (context: ChangeContext) => Promise<ChangeOutcome>,
+  ): Promise<SubscriptionChangeResponse> {
     await own(user, subscriptionId);
     const now = clock.now();
-    const changed = await repo.transaction(async (tx) => {
+    const { changed, notice } = await repo.transaction(async (tx) => {
       const subscription = await lockSubscription(tx, subscriptionId);
       if (!subscription || subscription.userId !== user.id) throw AppError.notFound('Subscription');
       if (subscription.status === 'cancelled') throw AppError.conflict('subscription_ended', 'This subscription has ended; start a new one to receive coffee again.');
@@ -187,8 +202,9 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
       const context: ChangeContext = { tx, subscription, plan, settings, calendar, today, now };
       await freezeLocked(context);
       const outcome = await decide(context);
-      if (outcome === 'unchanged') return false;
+      if ('unchanged' in outcome) return { changed: false, notice: outcome.unchanged };
       const version = await changeSubscription(tx, subscriptionId, outcome.fields);
+      const notice = outcome.notice ?? outcome.summary.join(' ');
 
       const after = (await lockSubscription(tx, subscriptionId))!;
       const afterPlan = planOf(after, await keptDeliveries(tx, subscriptionId), settings, calendar, now, planLength);
@@ -203,15 +219,23 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
           coffee: after.coffee,
           change: kind,
           summary: outcome.summary,
+          ...(outcome.notice ? { notice: outcome.notice } : {}),
           ...(next ? { nextDelivery: { roastDate: next.roastDate, shipDate: next.shipDate, readyFrom: next.readyFrom } } : {}),
           ...(kind === 'paused' && after.pausedUntil ? { pausedUntil: after.pausedUntil } : {}),
           ...(kind === 'cancelled' && after.currentPeriodEnd ? { endsOn: localDateOf(after.currentPeriodEnd, settings.timeZone) } : {}),
         },
       });
-      return true;
+      return { changed: true, notice };
     });
     if (changed) await onChanged?.(subscriptionId);
-    return (await present(await own(user, subscriptionId))).subscription;
+    return { ...(await present(await own(user, subscriptionId))).subscription, notice };
+  }
+
+  /** The delivery on a roast date, or the next one a skip can take. */
+  function deliveryOn(plan: readonly PlannedDelivery[], roastDate: IsoDate) {
+    const found = plan.find((delivery) => delivery.roastDate === roastDate);
+    if (!found) throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', { roastDate: 'Choose the roast date of an upcoming delivery.' });
+    return found;
   }
 
   return {
@@ -233,6 +257,12 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
         grind: request.grind,
         brewMethod: request.brewMethod,
       };
+      // Never take money for coffee that cannot be roasted: the lot must hold one delivery's green.
+      if (lot && lot.stockGrams < deliveryGreenGrams(choice, settings)) {
+        throw new AppError(409, 'lot_sold_out', `${lot.name} is sold out; the Roaster's Rotation is roasting now.`, {
+          lotCode: `${lot.code} does not have enough green coffee left to roast a delivery. Choose the Roaster's Rotation or another lot.`,
+        });
+      }
       const subscriptionId = await repo.createSubscription({
         userId: user.id,
         lotId: lot?.id ?? null,
@@ -281,7 +311,7 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
           fields.shippingAddress = update.shippingAddress;
           summary.push(`Ship to: ${update.shippingAddress!.line1}, ${update.shippingAddress!.city}`);
         }
-        if (summary.length === 0) return 'unchanged';
+        if (summary.length === 0) return unchanged('Nothing to change: your subscription already reads so.');
         if (fields.roastLevel && subscription.lotId) {
           const allowed = await repo.lotLevels(subscription.lotId);
           if (allowed && !levelOffered(fields.roastLevel, allowed)) throw levelNotOffered(fields.roastLevel, allowed);
@@ -310,39 +340,103 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
     skip(user: SessionUser, subscriptionId: string, roastDate: IsoDate | undefined) {
       return change(user, subscriptionId, 'skipped', async ({ tx, subscription, plan, settings, calendar }) => {
         const target = roastDate
-          ? plan.find((delivery) => delivery.roastDate === roastDate)
+          ? deliveryOn(plan, roastDate)
           : plan.find((delivery) => !delivery.locked && (delivery.status === 'scheduled' || delivery.status === 'skipped'));
         if (!target) {
           throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', { roastDate: 'Choose the roast date of an upcoming delivery.' });
         }
         if (target.locked) {
-          throw AppError.conflict('delivery_locked', `The delivery roasting on ${target.roastDate} is past its cutoff and can no longer be skipped.`);
+          throw AppError.conflict('delivery_locked', `The delivery roasting on ${writtenDay(target.roastDate)} is past its cutoff and can no longer be skipped.`);
         }
-        if (target.status === 'skipped') return 'unchanged';
+        if (target.status === 'skipped') return unchanged(`The delivery roasting ${writtenDay(target.roastDate)} is already skipped.`);
         if (target.status === 'held') throw AppError.conflict('delivery_held', 'This delivery is waiting for its payment; update your card instead of skipping it.');
         if (target.status !== 'scheduled') throw AppError.conflict('delivery_locked', 'This delivery is already roasted.');
 
-        await keepDelivery(tx, subscription.id, target, { status: 'skipped', dates: target, choice: null, orderId: null, chargeDeferred: false });
+        // A row Stripe has already moved a charge for (a skip undone, not yet pushed) keeps that mark, so the charge is not moved twice.
+        await keepDelivery(tx, subscription.id, target, { status: 'skipped', dates: target, choice: null, orderId: null, ...(target.keptId ? {} : { chargeDeferred: false }) });
         // Already paid: the payment carries over to the next delivery, and Stripe's next charge moves one cadence on.
+        let paymentMovesTo: IsoDate | undefined;
         if (target.orderId) {
           const following = plan.find((delivery) => delivery.roastDate > target.roastDate && delivery.status === 'scheduled' && !delivery.orderId);
           if (!following) throw AppError.conflict('delivery_locked', 'There is no later delivery to carry this payment to.');
           const dates = datesForRoastDate(following.roastDate, target.choice, settings, calendar);
           const deliveryId = await keepDelivery(tx, subscription.id, following, { status: 'scheduled', dates, choice: target.choice, orderId: target.orderId });
           await moveOrderToDelivery(tx, target.orderId, deliveryId, dates);
+          paymentMovesTo = following.roastDate;
         }
-        return { fields: {}, summary: [`Skipped: the delivery roasting on ${target.roastDate}`] };
+        const notice = skipNotice({ roastDate: target.roastDate, ...(paymentMovesTo ? { paymentMovesTo } : {}) });
+        return { fields: {}, summary: [notice], notice };
       });
     },
 
-    pause(user: SessionUser, subscriptionId: string, until: IsoDate) {
-      return change(user, subscriptionId, 'paused', async ({ subscription, today }) => {
+    /**
+     * Undoes a skip while the delivery's cutoff is ahead. A payment the skip carried on comes back:
+     * paid deliveries come first, so the first later paid delivery whose cutoff is ahead holds it.
+     */
+    unskip(user: SessionUser, subscriptionId: string, roastDate: IsoDate) {
+      return change(user, subscriptionId, 'unskipped', async ({ tx, subscription, plan, settings, calendar }) => {
+        const target = deliveryOn(plan, roastDate);
+        if (target.status !== 'skipped') return unchanged(`The delivery roasting ${writtenDay(target.roastDate)} is not skipped.`);
+        if (target.locked) {
+          throw AppError.conflict('delivery_locked', `The delivery roasting ${writtenDay(target.roastDate)} is past its cutoff, so its skip can no longer be undone.`, {
+            roastDate: 'Its cutoff has passed.',
+          });
+        }
+        if (subscription.pausedUntil && target.roastDate < subscription.pausedUntil) {
+          throw AppError.conflict('delivery_in_pause', `The delivery roasting ${writtenDay(target.roastDate)} falls inside your pause; resume first.`, { roastDate: 'It falls inside the pause.' });
+        }
+        const carrier = plan.find((delivery) => delivery.roastDate > target.roastDate && delivery.status === 'scheduled' && delivery.orderId && !delivery.locked);
+        const choice = carrier ? carrier.choice : choiceOf(subscription);
+        const dates = datesForRoastDate(target.roastDate, choice, settings, calendar);
+        if (carrier?.orderId) {
+          await keepDelivery(tx, subscription.id, carrier, { status: 'scheduled', dates: carrier, choice: null, orderId: null });
+          const deliveryId = await keepDelivery(tx, subscription.id, target, { status: 'scheduled', dates, choice, orderId: carrier.orderId });
+          await moveOrderToDelivery(tx, carrier.orderId, deliveryId, dates);
+        } else {
+          await keepDelivery(tx, subscription.id, target, { status: 'scheduled', dates, choice: null });
+        }
+        const notice = unskipNotice({ roastDate: target.roastDate, ...(carrier ? { paymentMovesFrom: carrier.roastDate } : {}) });
+        return { fields: {}, summary: [notice], notice };
+      });
+    },
+
+    pause(user: SessionUser, subscriptionId: string, until: IsoDate, paidDelivery: PaidDeliveryChoice | undefined) {
+      return change(user, subscriptionId, 'paused', async ({ tx, subscription, plan, settings, calendar, today, now }) => {
         if (until <= today) throw AppError.badRequest('Choose a day after today.', { until: 'Choose a day after today.' });
         if (until > addDays(today, maxPauseDays)) throw AppError.badRequest('Pause for at most a year.', { until: `Choose a day within ${maxPauseDays} days.` });
-        if (subscription.pausedUntil === until) return 'unchanged';
+        if (subscription.pausedUntil === until) return unchanged(pauseNotice({ until, shipping: [], held: [] }));
+        // Paid deliveries the pause would cover whose cutoff is ahead: the subscriber says whether they ship or wait.
+        const paidInside = plan.filter((delivery) => delivery.orderId && delivery.status === 'scheduled' && !delivery.locked && delivery.roastDate < until);
+        if (paidInside.length > 0 && !paidDelivery) {
+          const first = paidInside[0]!;
+          throw AppError.conflict('paid_delivery_in_pause', paidDeliveryInPauseQuestion(first.roastDate), {
+            paidDelivery: `Choose ship or hold for the paid delivery roasting ${writtenDay(first.roastDate)}.`,
+          });
+        }
+        const outcome = { until, shipping: [] as IsoDate[], held: [] as PauseOutcome['held'][number][] };
+        if (paidDelivery === 'hold' && paidInside.length > 0) {
+          // The first deliveries after the pause, as the paused grid will lay them.
+          const paused = { ...subscription, pausedUntil: until };
+          const afterPause = planOf(paused, await keptDeliveries(tx, subscription.id), settings, calendar, now, planLength).filter(
+            (delivery) => delivery.roastDate >= until && delivery.status === 'scheduled' && !delivery.orderId,
+          );
+          for (const [index, held] of paidInside.entries()) {
+            const to = afterPause[index];
+            if (!to) throw AppError.conflict('paid_delivery_in_pause', 'There is no delivery after the pause to hold this payment for.', { paidDelivery: 'Choose ship.' });
+            const dates = datesForRoastDate(to.roastDate, held.choice, settings, calendar);
+            await dropDelivery(tx, held.keptId!);
+            const deliveryId = await keepDelivery(tx, subscription.id, to, { status: 'scheduled', dates, choice: held.choice, orderId: held.orderId });
+            await moveOrderToDelivery(tx, held.orderId!, deliveryId, dates);
+            outcome.held.push({ from: held.roastDate, to: to.roastDate });
+          }
+        } else {
+          outcome.shipping.push(...paidInside.map((delivery) => delivery.roastDate));
+        }
+        const notice = pauseNotice(outcome);
         return {
-          fields: { pausedUntil: until, status: subscription.status === 'active' ? 'paused' : subscription.status },
-          summary: [`Paused until ${until}`],
+          fields: { pausedUntil: until, status: subscriptionStatusOf(subscription.status, until, today) },
+          summary: [notice],
+          notice,
         };
       });
     },
@@ -350,9 +444,9 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
     resume(user: SessionUser, subscriptionId: string) {
       return change(user, subscriptionId, 'resumed', async ({ subscription, today }) => {
         const paused = subscription.pausedUntil !== null && subscription.pausedUntil > today;
-        if (!paused && !subscription.cancelAtPeriodEnd) return 'unchanged';
+        if (!paused && !subscription.cancelAtPeriodEnd) return unchanged('Your subscription is running.');
         return {
-          fields: { pausedUntil: null, cancelAtPeriodEnd: false, status: subscription.status === 'paused' ? 'active' : subscription.status },
+          fields: { pausedUntil: null, cancelAtPeriodEnd: false, status: subscriptionStatusOf(subscription.status, null, today) },
           summary: [subscription.cancelAtPeriodEnd && !paused ? 'Cancellation withdrawn' : 'Deliveries resume'],
         };
       });
@@ -360,7 +454,7 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
 
     cancel(user: SessionUser, subscriptionId: string) {
       return change(user, subscriptionId, 'cancelled', async ({ subscription }) => {
-        if (subscription.cancelAtPeriodEnd) return 'unchanged';
+        if (subscription.cancelAtPeriodEnd) return unchanged('Your subscription is already cancelled at the end of its paid period.');
         return { fields: { cancelAtPeriodEnd: true }, summary: ['Cancelled at the end of the paid period'] };
       });
     },

@@ -31,6 +31,7 @@ function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): Subscripti
     grind: 'whole-bean',
     brewMethod: 'filter',
     orderId: null,
+    paid: false,
     ...overrides,
   };
 }
@@ -71,31 +72,36 @@ function makeSubscription(overrides: Partial<Subscription> = {}): Subscription {
   };
 }
 
-/** The subscription as it is after the change, or a refusal. */
-type Answer = (body: Record<string, unknown>) => Subscription | Response;
+/** The subscription as it is after the change (with the server's notice, when the test gives one), or a refusal. */
+type Answer = (body: Record<string, unknown>) => (Subscription & { notice?: string }) | Response;
 
 /**
  * Answers like the server: the subscription list, its deliveries, the lot, and each change through
  * `onChange` (keyed by the action: skip, pause, resume, cancel, patch).
  */
-function deliveriesServer(onChange: Partial<Record<string, Answer>> = {}) {
+function deliveriesServer(onChange: Partial<Record<string, Answer>> = {}, initialDeliveries = [lockedDelivery, nextDelivery, laterDelivery]) {
   let subscription = makeSubscription();
-  let deliveries = [lockedDelivery, nextDelivery, laterDelivery];
+  let deliveries = initialDeliveries;
   const fetchMock = stubFetch((url, init) => {
     const method = init?.method ?? 'GET';
     if (url.pathname === '/api/lots/RD-T01') return jsonResponse(makeLotDetail({ allowedLevels: ['light', 'medium'] }));
     if (method === 'GET' && url.pathname === '/api/subscriptions') return jsonResponse({ items: [subscription] });
     if (method === 'GET' && url.pathname.endsWith('/deliveries')) return jsonResponse({ items: deliveries });
-    const action = method === 'PATCH' ? 'patch' : (url.pathname.split('/').pop() ?? '');
+    const segments = url.pathname.split('/');
+    const action = method === 'PATCH' ? 'patch' : (segments.pop() ?? '');
     const body = typeof init?.body === 'string' ? (JSON.parse(init.body) as Record<string, unknown>) : {};
+    // `/deliveries/:date/skip` and `/unskip` name the delivery in the path.
+    if (action === 'skip' || action === 'unskip') body.roastDate ??= segments.pop();
     const answer = onChange[action];
     if (!answer) return apiErrorResponse(500, 'unexpected', `No answer for ${method} ${url.pathname}`);
     const answered = answer(body);
     if (answered instanceof Response) return answered;
-    subscription = answered;
+    const { notice = 'Saved.', ...changed } = answered;
+    subscription = changed;
     if (action === 'skip') deliveries = deliveries.map((each) => (each.roastDate === body.roastDate ? { ...each, status: 'skipped' } : each));
+    if (action === 'unskip') deliveries = deliveries.map((each) => (each.roastDate === body.roastDate ? { ...each, status: 'scheduled' } : each));
     if (action === 'patch') deliveries = deliveries.map((each) => (each.locked ? each : { ...each, ...body }));
-    return jsonResponse(subscription);
+    return jsonResponse({ ...subscription, notice });
   });
   return { fetchMock };
 }
@@ -131,20 +137,48 @@ describe('Deliveries page', () => {
     expect(later.textContent).toContain('Arrives before it is ready');
   });
 
-  it('skips the next open delivery, not the locked one, and the schedule shows it at once', async () => {
-    const { fetchMock } = deliveriesServer({ skip: () => makeSubscription({ nextDelivery: lockedDelivery }) });
+  it('skips the next open delivery, not the locked one, says what the server did, and the schedule shows it at once', async () => {
+    const notice = 'Skipped the delivery roasting Wednesday, December 9, 2026. It will not be roasted, shipped or charged.';
+    const { fetchMock } = deliveriesServer({ skip: () => ({ ...makeSubscription({ nextDelivery: lockedDelivery }), notice }) });
     renderApp('/account/deliveries', { session: makeUser() });
 
     fireEvent.click(await screen.findByRole('button', { name: 'Skip the delivery roasting Wed, Dec 9, 2026' }, { timeout: 15_000 }));
 
-    const message = await screen.findByText(/Skipped the delivery roasting Wed, Dec 9, 2026/);
+    const message = await screen.findByText(notice);
     expect(message.closest('[role="status"]')).toBeTruthy();
-    const [skip] = sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/skip`);
-    expect(skip?.body).toEqual({ roastDate: '2026-12-09' });
+    const [skip] = sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/deliveries/2026-12-09/skip`);
+    expect(skip).toBeDefined();
     expect(skip?.headers.get('X-Restday-Client')).toBe('web');
     const skipped = await screen.findByRole('row', { name: /Dec 9, 2026.*Skipped|Skipped/ });
     expect(skipped.textContent).toContain('Wed, Dec 9, 2026');
-    expect(requestedUrls(fetchMock).filter((url) => url.startsWith(`/api/subscriptions/${subscriptionId}/deliveries`))).toHaveLength(2);
+    // The schedule is read twice: on load and after the change (the skip itself is a POST under /deliveries/:date).
+    expect(requestedUrls(fetchMock).filter((url) => url.startsWith(`/api/subscriptions/${subscriptionId}/deliveries`) && !url.endsWith('/skip'))).toHaveLength(2);
+  });
+
+  it('marks paid deliveries, skips a later one from its own row and undoes it', async () => {
+    const paidNext = makeDelivery({ orderId: '0b1c2d3e-4f5a-4b6c-8d7e-9f0a1b2c3d4e', paid: true });
+    const { fetchMock } = deliveriesServer(
+      {
+        skip: () => ({ ...makeSubscription(), notice: 'Skipped the delivery roasting Wednesday, December 16, 2026. It will not be roasted, shipped or charged.' }),
+        unskip: () => ({ ...makeSubscription(), notice: 'The delivery roasting Wednesday, December 16, 2026 is back on. It is charged like any other delivery.' }),
+      },
+      [lockedDelivery, paidNext, laterDelivery],
+    );
+    renderApp('/account/deliveries', { session: makeUser() });
+    const schedule = await screen.findByRole('table', { name: 'Upcoming deliveries of Test Ridge Washed' }, { timeout: 15_000 });
+    expect(within(within(schedule).getByRole('row', { name: /Wed, Dec 9, 2026/ })).getByText('Paid')).toBeTruthy();
+    expect(within(within(schedule).getByRole('row', { name: /Wed, Dec 16, 2026/ })).queryByText('Paid')).toBeNull();
+    // The locked one has no skip: it roasts as it is.
+    expect(within(within(schedule).getByRole('row', { name: /Wed, Dec 2, 2026/ })).queryByRole('button')).toBeNull();
+
+    fireEvent.click(within(schedule).getByRole('button', { name: 'Skip the delivery of Wed, Dec 16, 2026' }));
+    expect(await screen.findByText(/Skipped the delivery roasting Wednesday, December 16, 2026/)).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/deliveries/2026-12-16/skip`)).toHaveLength(1);
+
+    const undo = await screen.findByRole('button', { name: 'Undo skip of the delivery of Wed, Dec 16, 2026' });
+    fireEvent.click(undo);
+    expect(await screen.findByText(/is back on/)).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/deliveries/2026-12-16/unskip`)).toHaveLength(1);
   });
 
   it('says why a skip was refused when the delivery locked meanwhile, and changes nothing', async () => {
@@ -200,7 +234,7 @@ describe('Deliveries page', () => {
 
   it('pauses until a date and then offers to resume', async () => {
     const { fetchMock } = deliveriesServer({
-      pause: (body) => makeSubscription({ status: 'paused', pausedUntil: String(body.until) }),
+      pause: (body) => ({ ...makeSubscription({ status: 'paused', pausedUntil: String(body.until) }), notice: 'Paused until Monday, January 11, 2027.' }),
       resume: () => makeSubscription(),
     });
     renderApp('/account/deliveries', { session: makeUser() });
@@ -214,12 +248,40 @@ describe('Deliveries page', () => {
     fireEvent.change(within(form).getByLabelText('Pause until'), { target: { value: '2027-01-11' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
 
-    expect(await screen.findByText(/Paused: no delivery roasts before Mon, Jan 11, 2027/, { selector: '[role="status"] *' })).toBeTruthy();
+    expect(await screen.findByText('Paused until Monday, January 11, 2027.', { selector: '[role="status"] *' })).toBeTruthy();
     expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/pause`)[0]?.body).toEqual({ until: '2027-01-11' });
 
     fireEvent.click(screen.getByRole('button', { name: 'Resume deliveries' }));
     expect(await screen.findByText(/Resumed: deliveries start again/)).toBeTruthy();
     expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/resume`)).toHaveLength(1);
+  });
+
+  it('asks ship or hold when a paid delivery lies inside the pause, and sends the choice', async () => {
+    const question = 'The delivery roasting Wednesday, December 9, 2026 is already paid. Ship it as planned, or hold it for the first delivery after the pause?';
+    const { fetchMock } = deliveriesServer({
+      pause: (body) =>
+        body.paidDelivery
+          ? { ...makeSubscription({ status: 'paused', pausedUntil: String(body.until) }), notice: 'Paused until Monday, January 11, 2027. The paid delivery roasting Wednesday, December 9, 2026 is held.' }
+          : apiErrorResponse(409, 'paid_delivery_in_pause', question, { paidDelivery: 'Choose ship or hold.' }),
+    });
+    renderApp('/account/deliveries', { session: makeUser() });
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Pause until a date' }, { timeout: 15_000 }));
+    const form = await screen.findByRole('form', { name: 'Pause deliveries' });
+    fireEvent.change(within(form).getByLabelText('Pause until'), { target: { value: '2027-01-11' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
+
+    const group = await within(form).findByRole('group', { name: 'A paid delivery falls inside the pause' });
+    expect(group.textContent).toContain(question);
+    expect(within(group).getAllByRole('radio').map((radio) => radio.getAttribute('value'))).toEqual(['ship', 'hold']);
+    fireEvent.click(within(group).getByRole('radio', { name: /Hold it for after the pause/ }));
+    fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
+
+    expect(await screen.findByText(/is held/, { selector: '[role="status"] *' })).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/pause`).map((request) => request.body)).toEqual([
+      { until: '2027-01-11' },
+      { until: '2027-01-11', paidDelivery: 'hold' },
+    ]);
   });
 
   it('asks before cancelling, keeps the subscription on “keep”, and cancels at period end on confirm', async () => {

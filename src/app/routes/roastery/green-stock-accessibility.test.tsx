@@ -54,6 +54,8 @@ const order: OrderDetail = {
   ...(({ bagCount: _bags, ...rest }) => rest)(summary),
   items: [{ id: '8c3b5e7a-9d1f-4a4b-8c6e-8a0b2c4e6f8c', lotCode: lot.code, lotName: lot.name, size: '1lb', quantity: 2, fillGrams: 454, roastLevel: null, grind: null, brewMethod: null, unitPriceCents: 1990, lineTotalCents: 3980 }],
   subtotalCents: 3980,
+  discountCents: 0,
+  discountLabel: null,
   shippingCents: 2000,
   refundedCents: 0,
   currency: 'usd',

@@ -49,6 +49,8 @@ function detail(overrides: Partial<OrderDetail> = {}): OrderDetail {
       },
     ],
     subtotalCents: 3980,
+    discountCents: 0,
+    discountLabel: null,
     shippingCents: 2000,
     totalCents: 5980,
     refundedCents: 0,

@@ -136,4 +136,21 @@ describe('lot page', () => {
     expect(screen.getByText(/Only 1 kg left: not enough for 2 × 2 lb/)).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Add to cart' }).hasAttribute('disabled')).toBe(true);
   });
+
+  it('a sold-out lot offers the Roaster’s Rotation instead of a subscription to it', async () => {
+    lotServer(makeLotDetail({ stockGrams: 0 }));
+    renderApp('/lots/RD-T01');
+
+    const rotation = await screen.findByRole('link', { name: 'Subscribe to the Roaster’s Rotation instead' }, { timeout: 15_000 });
+    expect(rotation.getAttribute('href')).toBe('/subscribe');
+    expect(screen.getByText(/This lot is sold out, so we cannot roast it for a subscription/)).toBeTruthy();
+    expect(screen.queryByRole('link', { name: 'Subscribe to this lot, roasted to order' })).toBeNull();
+  });
+
+  it('a lot in stock offers a subscription to it', async () => {
+    lotServer(makeLotDetail({ stockGrams: 20_000 }));
+    renderApp('/lots/RD-T01');
+    const subscribe = await screen.findByRole('link', { name: 'Subscribe to this lot, roasted to order' }, { timeout: 15_000 });
+    expect(subscribe.getAttribute('href')).toBe('/subscribe?lot=RD-T01');
+  });
 });

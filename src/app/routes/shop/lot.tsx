@@ -1,4 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
+import { deliveryGreenGrams } from '@shared/domain/delivery-plan';
+import { defaultShopSettings } from '@shared/schemas/settings';
 import { ArrowLeft } from 'lucide-react';
 import { useState } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
@@ -87,6 +89,11 @@ function LotPage({ lot }: { lot: LotDetail }) {
   );
 }
 
+/** Whether the lot holds the green for one delivery of its smallest bag (the server checks the real choice at checkout). */
+function canRoastForSubscription(lot: { stockGrams: number; suggestedLevel: RoastLevel }) {
+  return lot.stockGrams >= deliveryGreenGrams({ roastLevel: lot.suggestedLevel, bagSize: '12oz', bagsPerDelivery: 1 }, defaultShopSettings);
+}
+
 export default function LotRoute() {
   const { code = '' } = useParams();
   const lotQuery = useLot(code);
@@ -104,11 +111,21 @@ export default function LotRoute() {
         <PageTitle title={`${lotQuery.data.name} · Green Lots`} />
         {backLink}
         <LotPage key={lotQuery.data.code} lot={lotQuery.data} />
-        <p className="mt-8">
-          <Link to={paths.subscribe.getHref(new URLSearchParams({ lot: lotQuery.data.code }))} className="font-semibold text-leaf underline">
-            Subscribe to this lot, roasted to order
-          </Link>
-        </p>
+        {canRoastForSubscription(lotQuery.data) ? (
+          <p className="mt-8">
+            <Link to={paths.subscribe.getHref(new URLSearchParams({ lot: lotQuery.data.code }))} className="font-semibold text-leaf underline">
+              Subscribe to this lot, roasted to order
+            </Link>
+          </p>
+        ) : (
+          <p className="mt-8">
+            This lot is sold out, so we cannot roast it for a subscription.{' '}
+            <Link to={paths.subscribe.getHref()} className="font-semibold text-leaf underline">
+              Subscribe to the Roaster’s Rotation instead
+            </Link>
+            , a lot our roaster picks for each roast day.
+          </p>
+        )}
         <div className="mt-10 max-w-prose">
           <HomeRoastingCautions />
           <p className="mt-3">

@@ -36,6 +36,8 @@ function makeOrder(overrides: Partial<OrderDetail> = {}): OrderDetail {
       },
     ],
     subtotalCents: 2222,
+    discountCents: 0,
+    discountLabel: null,
     shippingCents: 895,
     totalCents: 3117,
     refundedCents: 0,

@@ -54,6 +54,7 @@ const delivery = {
   grind: 'whole-bean',
   brewMethod: 'espresso',
   orderId: null,
+  paid: false,
 };
 
 describe('subscription page after paying', () => {

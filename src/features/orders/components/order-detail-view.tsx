@@ -48,6 +48,12 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
         <dl className="mt-4 ml-auto grid max-w-xs grid-cols-[1fr_auto] gap-x-6 gap-y-1">
           <dt>Bags</dt>
           <dd className="text-right">{formatMoney(order.subtotalCents)}</dd>
+          {order.discountCents > 0 ? (
+            <>
+              <dt>{order.discountLabel ?? 'Discount'}</dt>
+              <dd className="text-right">−{formatMoney(order.discountCents)}</dd>
+            </>
+          ) : null}
           <dt>Shipping</dt>
           <dd className="text-right">{formatMoney(order.shippingCents)}</dd>
           <dt className="border-t border-rule pt-1 font-semibold">Total</dt>

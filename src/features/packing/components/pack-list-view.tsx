@@ -11,7 +11,7 @@ import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { labelsPdfPath } from '../api/get-pack-list';
 import { useMarkPacked } from '../api/mark-packed';
-import { canPack, packStatusLabels } from '../utils/pack-status';
+import { canPack, packStatusOf } from '../utils/pack-status';
 import { ShipOrderDialog } from './ship-order-dialog';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
@@ -102,7 +102,7 @@ function OrderParcels({ order }: { order: PackOrder }) {
 function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void }) {
   const markPacked = useMarkPacked(date);
   const [failure, setFailure] = useState<string>();
-  const status = packStatusLabels[order.status];
+  const status = packStatusOf(order);
   const headingId = `pack-order-${order.orderId}`;
 
   async function pack() {

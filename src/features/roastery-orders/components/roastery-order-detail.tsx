@@ -129,6 +129,14 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
                 </th>
                 <td className="px-4 pt-3 text-right tabular-nums">{formatMoney(order.subtotalCents)}</td>
               </tr>
+              {order.discountCents > 0 ? (
+                <tr>
+                  <th scope="row" colSpan={3} className="px-4 pt-1 text-right font-normal">
+                    {order.discountLabel ?? 'Discount'}
+                  </th>
+                  <td className="px-4 pt-1 text-right tabular-nums">−{formatMoney(order.discountCents)}</td>
+                </tr>
+              ) : null}
               <tr>
                 <th scope="row" colSpan={3} className="px-4 pt-1 text-right font-normal">
                   Shipping

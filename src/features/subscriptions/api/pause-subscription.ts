@@ -1,11 +1,18 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { subscriptionSchema, type Subscription } from '@shared/schemas/subscriptions';
+import { subscriptionChangeResponseSchema, type PaidDeliveryChoice, type SubscriptionChangeResponse } from '@shared/schemas/subscriptions';
 import { apiRequest } from '@/lib/api-client';
 import { showChangedSubscription } from './subscription-cache';
 
-/** No delivery roasts before `until` (a shop day); the first one on or after it goes ahead. */
-export function pauseSubscription({ id, until }: { id: string; until: string }): Promise<Subscription> {
-  return apiRequest(`/api/subscriptions/${encodeURIComponent(id)}/pause`, { method: 'POST', body: { until }, schema: subscriptionSchema });
+/**
+ * No delivery roasts before `until` (a shop day); the first one on or after it goes ahead. A paid
+ * delivery inside the pause needs `paidDelivery` (ship it, or hold it for after the pause).
+ */
+export function pauseSubscription({ id, until, paidDelivery }: { id: string; until: string; paidDelivery?: PaidDeliveryChoice }): Promise<SubscriptionChangeResponse> {
+  return apiRequest(`/api/subscriptions/${encodeURIComponent(id)}/pause`, {
+    method: 'POST',
+    body: paidDelivery ? { until, paidDelivery } : { until },
+    schema: subscriptionChangeResponseSchema,
+  });
 }
 
 export function usePauseSubscription() {

@@ -1,14 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { subscriptionSchema, type Subscription } from '@shared/schemas/subscriptions';
+import { subscriptionChangeResponseSchema, type SubscriptionChangeResponse } from '@shared/schemas/subscriptions';
 import { apiRequest } from '@/lib/api-client';
 import { showChangedSubscription } from './subscription-cache';
 
-/** Skips the delivery roasting on `roastDate`, or the next one whose cutoff has not passed. */
-export function skipDelivery({ id, roastDate }: { id: string; roastDate?: string }): Promise<Subscription> {
-  return apiRequest(`/api/subscriptions/${encodeURIComponent(id)}/skip`, {
+/** Skips the delivery roasting on `roastDate`; the answer's notice says whether a payment moved, and where. */
+export function skipDelivery({ id, roastDate }: { id: string; roastDate: string }): Promise<SubscriptionChangeResponse> {
+  return apiRequest(`/api/subscriptions/${encodeURIComponent(id)}/deliveries/${encodeURIComponent(roastDate)}/skip`, {
     method: 'POST',
-    body: roastDate ? { roastDate } : {},
-    schema: subscriptionSchema,
+    schema: subscriptionChangeResponseSchema,
   });
 }
 

@@ -2,12 +2,21 @@ import { Lock } from 'lucide-react';
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { SubscriptionDelivery } from '@shared/schemas/subscriptions';
 import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
 import { bagsLabel, deliveryStatusLabels, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+
+/** Skip and undo, per delivery whose cutoff is ahead; without them the schedule only reads. */
+export type DeliveryActions = {
+  onSkip: (delivery: SubscriptionDelivery) => void;
+  onUnskip: (delivery: SubscriptionDelivery) => void;
+  busy: boolean;
+};
 
 type DeliveryScheduleProps = {
   deliveries: readonly SubscriptionDelivery[];
   /** The table's caption, e.g. "Upcoming deliveries of Roaster's Rotation". */
   caption: string;
+  actions?: DeliveryActions;
 };
 
 function coffeeOf(delivery: SubscriptionDelivery): string {
@@ -20,7 +29,7 @@ function contentsOf(delivery: SubscriptionDelivery): string {
 }
 
 /** Each delivery's dates, whether it lands ready to brew, its coffee and where it stands; a locked one says why. */
-export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps) {
+export function DeliverySchedule({ deliveries, caption, actions }: DeliveryScheduleProps) {
   return (
     <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
       <table className="w-full min-w-[48rem] border-collapse text-left text-small">
@@ -51,6 +60,11 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
             <th scope="col" className="px-3 py-2 font-semibold">
               Status
             </th>
+            {actions ? (
+              <th scope="col" className="px-3 py-2 font-semibold">
+                <span className="sr-only">Skip or undo</span>
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody className="divide-y divide-rule">
@@ -74,6 +88,7 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
                 <td className="px-3 py-2">
                   <div className="flex flex-wrap items-center gap-1.5">
                     <Badge tone={status.tone}>{status.label}</Badge>
+                    {delivery.paid ? <Badge tone="ok">Paid</Badge> : null}
                     {delivery.locked && delivery.status === 'scheduled' ? (
                       <Badge>
                         <Lock aria-hidden="true" className="size-3" />
@@ -87,6 +102,19 @@ export function DeliverySchedule({ deliveries, caption }: DeliveryScheduleProps)
                     </p>
                   ) : null}
                 </td>
+                {actions ? (
+                  <td className="px-3 py-2 whitespace-nowrap">
+                    {!delivery.locked && delivery.status === 'scheduled' ? (
+                      <Button variant="secondary" disabled={actions.busy} onClick={() => actions.onSkip(delivery)}>
+                        Skip<span className="sr-only"> the delivery of {formatDeliveryDay(delivery.roastDate)}</span>
+                      </Button>
+                    ) : !delivery.locked && skipped ? (
+                      <Button variant="secondary" disabled={actions.busy} onClick={() => actions.onUnskip(delivery)}>
+                        Undo skip<span className="sr-only"> of the delivery of {formatDeliveryDay(delivery.roastDate)}</span>
+                      </Button>
+                    ) : null}
+                  </td>
+                ) : null}
               </tr>
             );
           })}

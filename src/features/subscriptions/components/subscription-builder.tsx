@@ -2,11 +2,14 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useState } from 'react';
 import { Controller, FormProvider, useForm, useWatch } from 'react-hook-form';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { deliveryGreenGrams } from '@shared/domain/delivery-plan';
 import { processLabels, roastLevels, roastersRotationName, type RoastLevel } from '@shared/domain/vocabulary';
+import { defaultShopSettings } from '@shared/schemas/settings';
 import type { LotDetail, LotSummary } from '@shared/schemas/lots';
 import { subscriptionPreviewQuerySchema, type SubscriptionPreviewQuery } from '@shared/schemas/subscription-preview';
 import { Button } from '@/components/ui/button';
 import { ChoiceGroup } from '@/components/ui/choice-group';
+import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { useSubscriptionPreview } from '../api/get-subscription-preview';
 import { builderDefaults, builderFromSearch, rotationSearchValue, searchFromBuilder, searchNamesLevel, type BuilderFields } from '../utils/builder-search';
@@ -69,8 +72,18 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
   if (choiceNow && JSON.stringify(choiceNow) !== JSON.stringify(previewChoice)) setPreviewChoice(choiceNow);
   const preview = useSubscriptionPreview(previewChoice);
 
+  // A lot without the green for this delivery cannot be roasted: offer the Roaster's Rotation instead (checkout refuses it too).
+  const soldOut =
+    chosenLot !== undefined &&
+    chosenLot.code === watched.lotCode &&
+    chosenLot.stockGrams <
+      deliveryGreenGrams({ roastLevel: watched.roastLevel ?? chosenLot.suggestedLevel, bagSize: watched.bagSize ?? '12oz', bagsPerDelivery: watched.bagsPerDelivery ?? 1 }, defaultShopSettings);
+
   const shippingHref = paths.subscribeShipping.getHref(new URLSearchParams(searchNow));
-  const submit = form.handleSubmit(() => navigate(signedIn ? shippingHref : paths.signIn.getHref(shippingHref)));
+  const submit = form.handleSubmit(() => {
+    if (soldOut) return;
+    navigate(signedIn ? shippingHref : paths.signIn.getHref(shippingHref));
+  });
 
   const coffeeChoices = [
     { value: rotationSearchValue, label: roastersRotationName, detail: 'A different lot each time, picked by our roaster for the roast day.' },
@@ -101,6 +114,16 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
               />
             )}
           />
+          {soldOut ? (
+            <FormAlert>
+              <span>
+                {chosenLot.name} is sold out: there is not enough green coffee left to roast this delivery.{' '}
+                <button type="button" className="font-semibold text-leaf underline" onClick={() => setValue('lotCode', null, { shouldDirty: true })}>
+                  Choose the Roaster’s Rotation instead
+                </button>
+              </span>
+            </FormAlert>
+          ) : null}
           <SubscriptionChoiceFieldset allowedLevels={allowedLevels} idPrefix="builder" />
         </div>
         <aside aria-label="Price and first deliveries" className="lg:sticky lg:top-6 lg:self-start">
@@ -113,7 +136,9 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
               cadenceWeeks={watched.cadenceWeeks ?? 2}
             />
             <div className="mt-6 grid gap-2">
-              <Button type="submit">{signedIn ? 'Continue to the shipping address' : 'Sign in to continue'}</Button>
+              <Button type="submit" disabled={soldOut}>
+                {signedIn ? 'Continue to the shipping address' : 'Sign in to continue'}
+              </Button>
               {signedIn ? null : (
                 <p className="text-small text-ink-muted">
                   New here?{' '}

@@ -1,14 +1,18 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
+import { Link } from 'react-router-dom';
 import type { z } from 'zod';
 import type { ShippingAddress } from '@shared/schemas/checkout';
 import { subscriptionCheckoutRequestSchema } from '@shared/schemas/subscriptions';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
 import { leaveFor } from '@/lib/leave-for';
 import { useCreateSubscriptionCheckout } from '../api/create-subscription-checkout';
+import { searchFromBuilder } from '../utils/builder-search';
 import type { SubscriptionBuild } from '../utils/subscription-form';
 import { blankShippingAddress, ShippingAddressFields, shippingAddressFieldNames } from './shipping-address-fields';
 
@@ -24,6 +28,7 @@ type SubscriptionCheckoutFormProps = {
 export function SubscriptionCheckoutForm({ build, initialAddress }: SubscriptionCheckoutFormProps) {
   const checkout = useCreateSubscriptionCheckout();
   const [formError, setFormError] = useState<string>();
+  const [soldOut, setSoldOut] = useState(false);
   const form = useForm<CheckoutFields, unknown, z.output<typeof subscriptionCheckoutRequestSchema>>({
     resolver: zodResolver(subscriptionCheckoutRequestSchema),
     defaultValues: {
@@ -38,6 +43,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
       const { checkoutUrl } = await checkout.mutateAsync(input);
       leaveFor(checkoutUrl);
     } catch (error) {
+      setSoldOut(error instanceof ApiError && error.code === 'lot_sold_out');
       setFormError(applyServerErrors(error, form.setError, shippingAddressFieldNames));
     }
   });
@@ -46,7 +52,21 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
   return (
     <FormProvider {...form}>
       <form noValidate aria-label="Shipping address" onSubmit={(event) => void submit(event)} className="grid gap-4">
-        {formError ? <FormAlert>{formError}</FormAlert> : null}
+        {formError ? (
+          <FormAlert>
+            <span>
+              {formError}
+              {soldOut ? (
+                <>
+                  {' '}
+                  <Link to={paths.subscribe.getHref(searchFromBuilder({ ...build, lotCode: null }))} className="font-semibold text-leaf underline">
+                    Subscribe to the Roaster’s Rotation instead
+                  </Link>
+                </>
+              ) : null}
+            </span>
+          </FormAlert>
+        ) : null}
         <ShippingAddressFields />
         <div>
           <Button type="submit" disabled={busy}>

@@ -9,6 +9,7 @@ import { useCancelSubscription } from '../api/cancel-subscription';
 import { useSubscriptionDeliveries } from '../api/get-subscription-deliveries';
 import { useResumeSubscription } from '../api/resume-subscription';
 import { useSkipDelivery } from '../api/skip-delivery';
+import { useUnskipDelivery } from '../api/unskip-delivery';
 import { describeChangeError } from '../utils/change-errors';
 import { formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
 import { ChangeAddressForm } from './change-address-form';
@@ -67,6 +68,7 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
   const triggerRef = useRef<HTMLButtonElement | null>(null);
   const deliveriesQuery = useSubscriptionDeliveries(subscription.id, { enabled: subscription.status !== 'incomplete' });
   const skip = useSkipDelivery();
+  const unskip = useUnskipDelivery();
   const resume = useResumeSubscription();
   const cancel = useCancelSubscription();
 
@@ -80,7 +82,7 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
   const nextSkippable = deliveriesQuery.data?.items.find((delivery) => delivery.status === 'scheduled' && !delivery.locked);
   const status = subscriptionStatusLabels[subscription.status];
   const ended = subscription.status === 'cancelled' || subscription.status === 'incomplete';
-  const busy = skip.isPending || resume.isPending || cancel.isPending;
+  const busy = skip.isPending || unskip.isPending || resume.isPending || cancel.isPending;
 
   const open = (form: OpenForm, trigger: HTMLButtonElement) => {
     triggerRef.current = trigger;
@@ -95,11 +97,13 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
     setOpenForm(undefined);
     setMessage({ tone: 'status', text });
   };
-  const run = async (action: () => Promise<unknown>, success: string) => {
+  /** Runs a change; without a message of its own, the server's notice says what really happened (a skip's payment included). */
+  const run = async (action: () => Promise<{ notice?: string } | unknown>, success?: string) => {
     setMessage(undefined);
     try {
-      await action();
-      setMessage({ tone: 'status', text: success });
+      const changed = await action();
+      const notice = changed && typeof changed === 'object' && 'notice' in changed && typeof changed.notice === 'string' ? changed.notice : undefined;
+      setMessage({ tone: 'status', text: success ?? notice ?? 'Saved.' });
     } catch (error) {
       setMessage({ tone: 'alert', text: describeChangeError(error) });
     }
@@ -136,10 +140,7 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
               variant="secondary"
               disabled={busy}
               onClick={() =>
-                void run(
-                  () => skip.mutateAsync({ id: subscription.id, roastDate: nextSkippable.roastDate }),
-                  `Skipped the delivery roasting ${formatDeliveryDay(nextSkippable.roastDate)}; it will not be charged or shipped.`,
-                )
+                void run(() => skip.mutateAsync({ id: subscription.id, roastDate: nextSkippable.roastDate }))
               }
             >
               Skip the delivery roasting {formatDeliveryDay(nextSkippable.roastDate)}
@@ -188,7 +189,18 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
       ) : null}
 
       <h3 className="mt-6 mb-2 text-h3">Upcoming deliveries</h3>
-      <SubscriptionSchedule subscription={subscription} />
+      <SubscriptionSchedule
+        subscription={subscription}
+        actions={
+          ended
+            ? undefined
+            : {
+                busy,
+                onSkip: (delivery) => void run(() => skip.mutateAsync({ id: subscription.id, roastDate: delivery.roastDate })),
+                onUnskip: (delivery) => void run(() => unskip.mutateAsync({ id: subscription.id, roastDate: delivery.roastDate })),
+              }
+        }
+      />
 
       <ConfirmDialog
         open={confirmingCancel}

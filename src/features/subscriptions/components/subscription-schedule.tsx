@@ -2,10 +2,10 @@ import type { Subscription } from '@shared/schemas/subscriptions';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { useSubscriptionDeliveries } from '../api/get-subscription-deliveries';
-import { DeliverySchedule } from './delivery-schedule';
+import { DeliverySchedule, type DeliveryActions } from './delivery-schedule';
 
 /** A subscription's coming deliveries, loaded once it has started. */
-export function SubscriptionSchedule({ subscription }: { subscription: Subscription }) {
+export function SubscriptionSchedule({ subscription, actions }: { subscription: Subscription; actions?: DeliveryActions }) {
   const deliveriesQuery = useSubscriptionDeliveries(subscription.id, { enabled: subscription.status !== 'incomplete' });
   if (subscription.status === 'incomplete') return null;
   if (deliveriesQuery.isError) {
@@ -24,5 +24,5 @@ export function SubscriptionSchedule({ subscription }: { subscription: Subscript
   if (deliveriesQuery.data.items.length === 0) {
     return <p className="text-ink-muted">No deliveries are coming up.</p>;
   }
-  return <DeliverySchedule deliveries={deliveriesQuery.data.items} caption={`Upcoming deliveries of ${subscription.coffee}`} />;
+  return <DeliverySchedule deliveries={deliveriesQuery.data.items} caption={`Upcoming deliveries of ${subscription.coffee}`} actions={actions} />;
 }
