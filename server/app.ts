@@ -46,6 +46,7 @@ import { createSubscriptionsService } from './modules/subscriptions/subscription
 import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
 import { sendJob, sendJobsDueBetween } from './jobs/registry';
 import { refuseUnstorableText } from './middleware/refuse-unstorable-text';
+import { applyPaymentEventJob } from './jobs/payment-events';
 import { jobs } from './jobs/workers';
 import { createOrdersRepo } from './modules/orders/orders.repo';
 import { ordersRoutes } from './modules/orders/orders.routes';
@@ -141,7 +142,16 @@ export function createApp(deps: AppDeps): Express {
   const paymentsGateway = createPaymentsGateway(config);
   const paymentsRepo = createPaymentsRepo(database.db);
   // Before express.json and the client-header check: Stripe signs the raw body, and that signature is its authentication.
-  api.use('/payments', paymentsWebhookRoutes(createPaymentEventsService({ repo: paymentsRepo, gateway: paymentsGateway, clock: deps.clock, logger, config })));
+  const { queue: jobQueue } = deps;
+  const enqueueEvent = jobQueue
+    ? async (eventId: string) => {
+        await sendJob(jobQueue, applyPaymentEventJob, { eventId }, { singletonKey: eventId });
+      }
+    : undefined;
+  api.use(
+    '/payments',
+    paymentsWebhookRoutes(createPaymentEventsService({ repo: paymentsRepo, gateway: paymentsGateway, clock: deps.clock, logger, config, ...(enqueueEvent ? { enqueueEvent } : {}) })),
+  );
   // Personal and staff answers must never sit in a shared cache; public reads that may be kept say so themselves.
   api.use((_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');

@@ -36,6 +36,14 @@ export interface JobDefinition<Data extends object> {
   retryBackoff?: boolean;
   /** A run taking longer is treated as failed (and retried). */
   expireInSeconds?: number;
+  /** Workers for this job in each process (default: the process's own setting, else 1). */
+  concurrency?: number;
+  /**
+   * Jobs each worker takes per fetch (default 1). pg-boss waits its polling interval between
+   * fetches, so a job that comes in bursts takes several at a time and a short interval.
+   */
+  batchSize?: number;
+  pollingIntervalSeconds?: number;
   /** A recurring job: cron in the shop's time zone (`tz`), e.g. `{cron: '0 7 * * *', tz: 'America/Denver'}`. */
   schedule?: { cron: string; tz?: string; data?: Data };
 }
@@ -93,15 +101,20 @@ export async function workJobs(
   const { boss } = queue;
   await ensureJobQueues(boss, jobs);
   for (const job of jobs) {
-    for (let n = 0; n < (options.concurrency ?? 1); n++) {
-      await boss.work<object>(job.name, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: options.pollingIntervalSeconds ?? 2 }, async ([next]) => {
-        if (!next) return;
-        const log = context.logger.child({ job: job.name, jobId: next.id });
-        try {
-          await job.run(next.data, { ...context, logger: log }, { id: next.id, retryCount: next.retryCount });
-        } catch (error) {
-          log.warn({ err: error, retryCount: next.retryCount }, 'job failed');
-          throw error;
+    for (let n = 0; n < (job.concurrency ?? options.concurrency ?? 1); n++) {
+      const batchSize = job.batchSize ?? 1;
+      const pollingIntervalSeconds = job.pollingIntervalSeconds ?? options.pollingIntervalSeconds ?? 2;
+      await boss.work<object>(job.name, { batchSize, includeMetadata: true, pollingIntervalSeconds }, async (batch) => {
+        for (const next of batch) {
+          const log = context.logger.child({ job: job.name, jobId: next.id });
+          try {
+            await job.run(next.data, { ...context, logger: log }, { id: next.id, retryCount: next.retryCount });
+          } catch (error) {
+            log.warn({ err: error, retryCount: next.retryCount }, 'job failed');
+            if (batchSize === 1) throw error;
+            // One failure must not fail the rest of the batch: pg-boss completes only the jobs still active.
+            await boss.fail(job.name, next.id, { message: error instanceof Error ? error.message : String(error) });
+          }
         }
       });
     }

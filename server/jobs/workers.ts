@@ -9,6 +9,7 @@ import { createOutboxRelay, type RelayPolicy } from '../modules/outbox/outbox.se
 import { startListener } from './listener';
 import { startRelayRunner, type RelayRunner } from './outbox-relay';
 import type { Queue } from './queue';
+import { applyPaymentEventJob, paymentEventsSweepJob } from './payment-events';
 import { restDayEmailsJob } from './rest-day-emails';
 import { workJobs, type JobDefinition } from './registry';
 import { renewalRemindersJob } from './renewal-reminders';
@@ -19,7 +20,7 @@ import { subscriptionStripeSyncJob } from './subscription-stripe-sync';
  * ./registry). The outbox relay is not among them: it runs beside them (see startWorkers).
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const jobs: JobDefinition<any>[] = [renewalRemindersJob, subscriptionStripeSyncJob, restDayEmailsJob];
+export const jobs: JobDefinition<any>[] = [renewalRemindersJob, subscriptionStripeSyncJob, restDayEmailsJob, applyPaymentEventJob, paymentEventsSweepJob];
 
 export interface WorkerDeps {
   config: Config;

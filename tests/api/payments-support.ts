@@ -14,9 +14,34 @@ import { createLogger } from '../../server/lib/logger';
 import { createPaymentsRepo } from '../../server/modules/payments/payments.repo';
 import { createPaymentsService } from '../../server/modules/payments/payments.service';
 import { getTestDb } from '../setup/test-db';
-import { testAddress } from './outbox-support';
+import { testAddress, waitFor } from './outbox-support';
 
-export const stripeFake = () => stripeFakeControl(inject('stripeFakeUrl'));
+/**
+ * The payment fake's control API. `deliverEvent` sends one event now and, when the shop accepts it
+ * (2xx: the event is in the inbox), waits until the shop's job queue has applied it, so a test
+ * reads the effect of each event it delivers, in the order it chose.
+ */
+export const stripeFake = () => {
+  const control = stripeFakeControl(inject('stripeFakeUrl'));
+  return {
+    ...control,
+    async deliverEvent(eventId: string) {
+      const attempt = await control.deliverEvent(eventId);
+      if (attempt.statusCode !== null && attempt.statusCode >= 200 && attempt.statusCode < 300) await eventApplied(eventId);
+      return attempt;
+    },
+  };
+};
+
+/** Waits until the shop has applied a received payment event (its inbox row is marked processed). */
+export async function eventApplied(eventId: string, timeoutMs = 20_000): Promise<void> {
+  await waitFor(
+    () => getTestDb().select({ processedAt: paymentEvents.processedAt }).from(paymentEvents).where(eq(paymentEvents.id, eventId)),
+    (rows) => rows[0]?.processedAt != null,
+    timeoutMs,
+    `payment event ${eventId} to be applied`,
+  );
+}
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -33,7 +58,7 @@ function freePort(): Promise<number> {
 export function paymentsTestConfig(overrides: Record<string, string> = {}): Config {
   return loadConfig({
     NODE_ENV: 'test',
-    LOG_LEVEL: 'silent',
+    LOG_LEVEL: process.env.DEBUG_LOG ?? 'silent',
     STATIC_DIR: 'dist',
     DATABASE_URL: inject('databaseUrl'),
     SMTP_URL: inject('smtpUrl'),

@@ -18,6 +18,7 @@ import {
   eventsAbout,
   ledgerCount,
   orderCount,
+  eventApplied,
   orderRow,
   outboxCount,
   settle,
@@ -111,6 +112,7 @@ describe('POST /api/payments/webhook — signatures', () => {
       const signed = await postWebhook(payload, stripe.webhooks.generateTestHeaderString({ payload, secret: webhookSecret, timestamp: now - 299 }));
       expect(signed.status).toBe(200);
       expect(webhookReceiptSchema.parse(await signed.json())).toEqual({ received: true, duplicate: false });
+      await eventApplied(completedEventId);
       expect((await orderRow(order.id)).status).toBe('paid');
     });
   });

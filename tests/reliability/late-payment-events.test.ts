@@ -12,6 +12,10 @@ import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { paymentEvents, subscriptions } from '../../server/db/schema/index';
 import { createLogger } from '../../server/lib/logger';
 import { startServer, type RunningServer } from '../../server/index';
+import { applyPaymentEventJob } from '../../server/jobs/payment-events';
+import { startQueue, type Queue } from '../../server/jobs/queue';
+import { workJobs } from '../../server/jobs/registry';
+import { systemClock } from '../../server/lib/clock';
 import { waitFor } from '../api/outbox-support';
 import { eventsAbout, ledgerCount, paymentsTestConfig, stripeFake, subscriptionOrders, subscriptionRow, testPaymentsService, testStripe } from '../api/payments-support';
 import { createTestApp } from '../setup/test-app';
@@ -24,6 +28,8 @@ const invented = { name: 'Robin Testroaster', line1: '1 Invented Lane', city: 'S
 const app = createTestApp();
 
 let server: RunningServer;
+let eventQueue: Queue | undefined;
+let stopEventWork: (() => Promise<void>) | undefined;
 let payments: ReturnType<typeof testPaymentsService>;
 let lotId: string;
 
@@ -37,6 +43,10 @@ beforeAll(async () => {
   });
   const config = paymentsTestConfig({ PORT: String(port), WORKERS_IN_SERVER: 'false' });
   server = await startServer(config, createLogger(config));
+  // The server runs no workers (so nothing pushes the subscriber's changes to Stripe behind the
+  // test's back); payment events are applied here, by their own job alone.
+  eventQueue = await startQueue(config.DATABASE_URL, createLogger(config));
+  stopEventWork = await workJobs(eventQueue, [applyPaymentEventJob], { db: getTestDb(), clock: systemClock, logger: createLogger(config), config });
   await fake.setWebhookEndpoint(`${server.url}/api/payments/webhook`);
   payments = testPaymentsService(config);
   const { createTestLot } = await import('../api/payments-support');
@@ -46,6 +56,8 @@ beforeAll(async () => {
 afterAll(async () => {
   await fake.resumeWebhooks();
   await fake.setWebhookEndpoint(null);
+  await stopEventWork?.();
+  await eventQueue?.stop();
   await server.stop();
 });
 

@@ -1,10 +1,13 @@
 import Stripe from 'stripe';
+import { z } from 'zod';
+import { findUnstorableText, unstorableTextMessage } from '@shared/schemas/text';
 import { greenOrderDates } from '@shared/domain/roast-schedule';
 import { localDateOf } from '@shared/domain/shop-time';
 import type { WebhookReceipt } from '@shared/schemas/payments';
 import { subscriptionStatusOf, type PaymentStanding } from '@shared/domain/subscription-status';
 import { roastedBagSizes, type BagSize, type RoastedBagSize } from '@shared/domain/vocabulary';
 import type { PaymentsGateway } from '../../integrations/payments';
+import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
 import { cancelUnpaidOrder } from '../checkout/checkout.repo';
@@ -20,7 +23,19 @@ export interface PaymentEventsDeps {
   clock: Clock;
   logger: Logger;
   config: Pick<PaymentsServiceConfig, 'PUBLIC_URL' | 'HOST' | 'PORT'>;
+  /**
+   * Hands a received event to the job queue to apply. Without one (API-only test apps) the
+   * webhook applies the event before it answers.
+   */
+  enqueueEvent?: (eventId: string) => Promise<void>;
 }
+
+/** The least of an event the inbox needs; a signed body without it is refused, not retried. */
+const receivableEventSchema = z.object({
+  id: z.string().min(1).max(255),
+  type: z.string().min(1).max(255),
+  data: z.object({ object: z.looseObject({}) }),
+});
 
 /** The part of an event that must run in the ledger's transaction (after the Stripe reads, which must not). */
 type Effect = (tx: PaymentsTransaction) => Promise<void>;
@@ -91,7 +106,7 @@ async function greenShipDate(tx: PaymentsTransaction, paidAt: Date): Promise<str
  * transaction as its effect, so a redelivered event changes nothing. Events arrive in any order, so
  * each handler re-reads the object from Stripe and applies its current state, not the event's copy.
  */
-export function createPaymentEventsService({ repo, gateway, clock, logger, config }: PaymentEventsDeps) {
+export function createPaymentEventsService({ repo, gateway, clock, logger, config, enqueueEvent }: PaymentEventsDeps) {
   const baseUrl = shopBaseUrl(config);
   const shopToday = async () => localDateOf(clock.now(), (await repo.shopTimeZone()) ?? 'UTC');
 
@@ -312,23 +327,65 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
     }
   }
 
+  /**
+   * Applies one received event, once: the Stripe reads first (outside any transaction, so no pool
+   * connection waits on the network), then its effect and the "applied" mark in one transaction
+   * that holds the inbox row. Safe to run twice or from two workers at once.
+   */
+  async function applyEvent(eventId: string): Promise<boolean> {
+    const pending = await repo.pendingEvent(eventId);
+    if (!pending) return false;
+    const event = pending.payload as unknown as Stripe.Event;
+    const effect = await effectOf(event);
+    const applied = await repo.transaction(async (tx) => {
+      if (!(await tx.claimEvent(eventId))) return false;
+      await effect?.(tx);
+      await tx.markEventApplied(eventId, clock.now());
+      return true;
+    });
+    if (applied) logger.info({ eventId, type: event.type }, 'payment event applied');
+    return applied;
+  }
+
   return {
+    /**
+     * `POST /api/payments/webhook`: checks the signature and the event's shape, puts the event in
+     * the inbox once, and answers at once; the job queue applies it (with retries), so a burst of
+     * events never holds the shop's connections while it talks to Stripe.
+     */
     async handleWebhook(rawBody: Buffer, signature: string | undefined): Promise<WebhookReceipt> {
-      const event = gateway.verifyWebhook(rawBody, signature);
-      if (await repo.isEventRecorded(event.id)) return { received: true, duplicate: true };
-      const effect = await effectOf(event);
-      const applied = await repo.transaction(async (tx) => {
-        const claimed = await tx.recordEvent({
-          id: event.id,
-          type: event.type,
-          payload: JSON.parse(rawBody.toString('utf8')) as Record<string, unknown>,
-          processedAt: clock.now(),
+      const verified = gateway.verifyWebhook(rawBody, signature);
+      const shape = receivableEventSchema.safeParse(verified);
+      if (!shape.success) {
+        throw new AppError(400, 'invalid_webhook', 'The webhook is signed but is not a Stripe event.', {
+          [shape.error.issues[0]?.path.join('.') || 'event']: shape.error.issues[0]?.message ?? 'is not an event',
         });
-        if (claimed) await effect?.(tx);
-        return claimed;
-      });
-      logger.info({ eventId: event.id, type: event.type, duplicate: !applied }, 'payment event');
-      return { received: true, duplicate: !applied };
+      }
+      const payload = JSON.parse(rawBody.toString('utf8')) as Record<string, unknown>;
+      const unstorable = findUnstorableText(payload);
+      if (unstorable !== undefined) {
+        throw new AppError(400, 'invalid_webhook', 'The event holds characters that cannot be stored.', { [unstorable]: unstorableTextMessage });
+      }
+      const received = await repo.receiveEvent({ id: shape.data.id, type: shape.data.type, payload });
+      if (received && enqueueEvent) {
+        // If the queue cannot take it now, the inbox sweep applies it later: the event is already safe.
+        await enqueueEvent(shape.data.id).catch((error: unknown) => logger.warn({ err: error, eventId: shape.data.id }, 'payment event left for the sweep'));
+      } else if (!enqueueEvent) {
+        await applyEvent(shape.data.id);
+      }
+      logger.info({ eventId: shape.data.id, type: shape.data.type, duplicate: !received }, 'payment event received');
+      return { received: true, duplicate: !received };
+    },
+
+    applyEvent,
+
+    /** Applies inbox events that waited longer than `graceMs` (their job was lost); returns how many. */
+    async applyWaitingEvents(graceMs: number, limit = 200): Promise<number> {
+      let applied = 0;
+      for (const eventId of await repo.eventsWaitingSince(new Date(Date.now() - graceMs), limit)) {
+        if (await applyEvent(eventId)) applied += 1;
+      }
+      return applied;
     },
   };
 }

@@ -1,14 +1,13 @@
-import { asc, desc, eq, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, isNull, lt, sql } from 'drizzle-orm';
 import type { Db, DbOrTx, Tx } from '../../db/client';
 import { deliveries, lots, orderItems, orders, paymentEvents, shopSettings, subscriptions, users } from '../../db/schema/index';
 import { roastersRotationName, type OrderStatus, type SubscriptionStatus } from '@shared/domain/vocabulary';
 
 
-export interface RecordedEvent {
+export interface ReceivedEvent {
   id: string;
   type: string;
   payload: Record<string, unknown>;
-  processedAt: Date;
 }
 
 function queries(db: DbOrTx) {
@@ -172,18 +171,43 @@ function queries(db: DbOrTx) {
       return settings?.timeZone;
     },
 
-    async isEventRecorded(eventId: string) {
-      const [found] = await db.select({ id: paymentEvents.id }).from(paymentEvents).where(eq(paymentEvents.id, eventId));
-      return found !== undefined;
+    /** Puts an event in the inbox, not yet applied. False when it is already there (a redelivery). */
+    async receiveEvent(event: ReceivedEvent) {
+      const inserted = await db.insert(paymentEvents).values(event).onConflictDoNothing({ target: paymentEvents.id }).returning({ id: paymentEvents.id });
+      return inserted.length > 0;
+    },
+
+    /** The inbox row of an event still to apply, or undefined once it is applied (or unknown). */
+    async pendingEvent(eventId: string) {
+      const [row] = await db
+        .select({ id: paymentEvents.id, payload: paymentEvents.payload })
+        .from(paymentEvents)
+        .where(and(eq(paymentEvents.id, eventId), isNull(paymentEvents.processedAt)));
+      return row;
     },
 
     /**
-     * Claims an event id in the ledger. False when it is already there: another delivery of the same
-     * event has been (or, until its transaction ends, is being) applied, so this one must do nothing.
+     * Claims the event for applying, in the caller's transaction: the row stays locked until it
+     * commits, so a second worker with the same event waits and then finds it applied.
      */
-    async recordEvent(event: RecordedEvent) {
-      const inserted = await db.insert(paymentEvents).values(event).onConflictDoNothing({ target: paymentEvents.id }).returning({ id: paymentEvents.id });
-      return inserted.length > 0;
+    async claimEvent(eventId: string) {
+      const [row] = await db.select({ id: paymentEvents.id }).from(paymentEvents).where(and(eq(paymentEvents.id, eventId), isNull(paymentEvents.processedAt))).for('update');
+      return row !== undefined;
+    },
+
+    async markEventApplied(eventId: string, processedAt: Date) {
+      await db.update(paymentEvents).set({ processedAt }).where(eq(paymentEvents.id, eventId));
+    },
+
+    /** Inbox rows received before `before` and still not applied (their job was lost or gave up), oldest first. */
+    async eventsWaitingSince(before: Date, limit: number) {
+      const rows = await db
+        .select({ id: paymentEvents.id })
+        .from(paymentEvents)
+        .where(and(isNull(paymentEvents.processedAt), lt(paymentEvents.receivedAt, before)))
+        .orderBy(asc(paymentEvents.receivedAt))
+        .limit(limit);
+      return rows.map((row) => row.id);
     },
   };
 }
