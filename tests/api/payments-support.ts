@@ -1,7 +1,6 @@
 // Helpers for the payments tests: a real listening server the fake's webhooks reach, the real Stripe
 // SDK pointed at the fake, and invented customers, lots, orders and subscriptions written directly.
 import { randomUUID } from 'node:crypto';
-import { createServer } from 'node:net';
 import { asc, count, eq, inArray } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { inject } from 'vitest';
@@ -15,6 +14,7 @@ import { createPaymentsRepo } from '../../server/modules/payments/payments.repo'
 import { createPaymentsService } from '../../server/modules/payments/payments.service';
 import { getTestDb } from '../setup/test-db';
 import { testAddress, waitFor } from './outbox-support';
+import { freePort } from '../setup/free-port';
 
 /**
  * The payment fake's control API. `deliverEvent` sends one event now and, when the shop accepts it
@@ -43,22 +43,12 @@ export async function eventApplied(eventId: string, timeoutMs = 20_000): Promise
   );
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
-}
 
 /** The settings a test server runs with: test database, test mail catcher, the tests' payment fake. */
 export function paymentsTestConfig(overrides: Record<string, string> = {}): Config {
   return loadConfig({
     NODE_ENV: 'test',
-    LOG_LEVEL: process.env.DEBUG_LOG ?? 'silent',
+    LOG_LEVEL: 'silent',
     STATIC_DIR: 'dist',
     DATABASE_URL: inject('databaseUrl'),
     SMTP_URL: inject('smtpUrl'),

@@ -4,7 +4,6 @@
 // doubled, and how long the shop took to answer normally again.
 import { execFileSync, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
@@ -14,21 +13,12 @@ import { stripeFakeControl, payOnTestPaymentPage } from '../../dev-services/stri
 import { startStripeFake, type StripeFake } from '../../dev-services/stripe-fake/index';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { orderReference } from '../../emails/parts/template';
+import { freePort } from '../setup/free-port';
 
 const webhookSecret = 'whsec_restday_local_development';
 const customer = { email: 'homeroaster@example.test', password: 'restday-demo' };
 const address = { name: 'Reliability Run', line1: '4 Larkspur Lane', city: 'Wrenfield', region: 'CO', postalCode: '81640', country: 'US' };
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
-}
 
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 

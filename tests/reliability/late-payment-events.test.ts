@@ -18,6 +18,7 @@ import { workJobs } from '../../server/jobs/registry';
 import { systemClock } from '../../server/lib/clock';
 import { waitFor } from '../api/outbox-support';
 import { eventsAbout, ledgerCount, paymentsTestConfig, stripeFake, subscriptionOrders, subscriptionRow, testPaymentsService, testStripe } from '../api/payments-support';
+import { freePort } from '../setup/free-port';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { createTestUser, signedInAgent } from '../setup/test-users';
@@ -34,13 +35,7 @@ let payments: ReturnType<typeof testPaymentsService>;
 let lotId: string;
 
 beforeAll(async () => {
-  const { createServer } = await import('node:net');
-  const port = await new Promise<number>((resolve) => {
-    const probe = createServer().listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
+  const port = await freePort();
   const config = paymentsTestConfig({ PORT: String(port), WORKERS_IN_SERVER: 'false' });
   server = await startServer(config, createLogger(config));
   // The server runs no workers (so nothing pushes the subscriber's changes to Stripe behind the

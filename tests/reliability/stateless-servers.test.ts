@@ -1,7 +1,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import http from 'node:http';
-import { createServer } from 'node:net';
 import { count, eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
@@ -10,6 +9,7 @@ import { emailOutbox, lots, orders, paymentEvents } from '../../server/db/schema
 import { inboxOf, waitFor } from '../api/outbox-support';
 import { createTestLot, stripeFake } from '../api/payments-support';
 import { getTestDb } from '../setup/test-db';
+import { freePort } from '../setup/free-port';
 
 /**
  * Restday scaled out as the README says: stateless servers behind a load balancer, queue work in a
@@ -20,16 +20,6 @@ import { getTestDb } from '../setup/test-db';
 const fake = stripeFake();
 const children = new Set<ChildProcess>();
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
-}
 
 const processEnv = (port: number) => ({
   ...process.env,

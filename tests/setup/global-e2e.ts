@@ -1,4 +1,3 @@
-import { createServer } from 'node:net';
 import type { TestProject } from 'vitest/node';
 import { buildClientIfStale } from '../../dev-services/build-client';
 import { startMailCatcher, type MailCatcher } from '../../dev-services/mail-catcher';
@@ -11,6 +10,7 @@ import { loadConfig } from '../../server/config';
 import { startServer, type RunningServer } from '../../server/index';
 import { createLogger } from '../../server/lib/logger';
 import { ensureChromium } from './chromium';
+import { freePort } from './free-port';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -22,16 +22,6 @@ declare module 'vitest' {
   }
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
-}
 
 /** The whole product as a browser meets it: built client, seeded database, real server. */
 export default async function setup(project: TestProject) {
