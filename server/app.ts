@@ -139,7 +139,7 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const api = express.Router();
-  const paymentsGateway = createPaymentsGateway(config);
+  const paymentsGateway = createPaymentsGateway(config, 'request');
   const paymentsRepo = createPaymentsRepo(database.db);
   // Before express.json and the client-header check: Stripe signs the raw body, and that signature is its authentication.
   const { queue: jobQueue } = deps;

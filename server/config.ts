@@ -50,6 +50,12 @@ export const configSchema = z
     STRIPE_API_URL: z.url().optional(),
     /** How long a Checkout Session stays payable; Stripe allows 30 minutes to 24 hours. */
     STRIPE_CHECKOUT_EXPIRES_MINUTES: z.coerce.number().int().min(30).max(1440).default(60),
+    /**
+     * An unpaid order older than this with no payment page recorded (its checkout died between placing
+     * the order and saving the page) is cancelled by the unpaid-orders job and its stock put back. A
+     * checkout takes a few seconds at most (the payments call gives up after ~4.5 s).
+     */
+    UNPAID_ORDER_GRACE_MINUTES: z.coerce.number().int().min(1).max(120).default(5),
     UPLOADS_DIR: z.string().min(1).default('.data/uploads'),
     STATIC_DIR: z.string().min(1).default('dist'),
     RESTDAY_TEST_CLOCK: flag,

@@ -14,13 +14,14 @@ import { restDayEmailsJob } from './rest-day-emails';
 import { workJobs, type JobDefinition } from './registry';
 import { renewalRemindersJob } from './renewal-reminders';
 import { subscriptionStripeSyncJob } from './subscription-stripe-sync';
+import { unpaidOrdersJob } from './unpaid-orders';
 
 /**
  * Every background job Restday runs on pg-boss. Later features add theirs here (defineJob in
  * ./registry). The outbox relay is not among them: it runs beside them (see startWorkers).
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const jobs: JobDefinition<any>[] = [renewalRemindersJob, subscriptionStripeSyncJob, restDayEmailsJob, applyPaymentEventJob, paymentEventsSweepJob];
+export const jobs: JobDefinition<any>[] = [renewalRemindersJob, subscriptionStripeSyncJob, restDayEmailsJob, applyPaymentEventJob, paymentEventsSweepJob, unpaidOrdersJob];
 
 export interface WorkerDeps {
   config: Config;

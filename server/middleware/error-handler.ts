@@ -3,6 +3,7 @@ import { ZodError } from 'zod';
 import type { ApiErrorBody } from '@shared/schemas/errors';
 import { AppError } from '../lib/app-error';
 import { isDatabaseUnavailable } from '../db/client';
+import { isPaymentsUnavailable } from '../integrations/payments';
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new AppError(404, 'route_not_found', `No API route matches ${req.method} ${req.path}.`));
@@ -22,6 +23,9 @@ function toAppError(error: unknown): AppError | undefined {
   if (error instanceof ZodError) return AppError.badRequest('Some fields are not valid.', fieldsOf(error));
   if (isDatabaseUnavailable(error)) {
     return new AppError(503, 'database_unavailable', 'The shop database is not reachable right now. Please try again shortly.');
+  }
+  if (isPaymentsUnavailable(error)) {
+    return new AppError(503, 'payments_unavailable', 'Payments cannot be taken right now. Nothing was charged; please try again shortly.');
   }
   // body-parser marks its own failures (bad JSON, too large) with an HTTP status and a type.
   const parserError = error as { status?: number; type?: string };

@@ -36,6 +36,18 @@ export const greenCheckoutRequestSchema = z.object({
 });
 export type GreenCheckoutRequest = z.infer<typeof greenCheckoutRequestSchema>;
 
+/**
+ * Optional `Idempotency-Key` header of `POST /api/checkout/green`: one key per checkout the buyer
+ * means to make (the client makes one when the checkout page opens). The same key again answers with
+ * the order it placed and the same payment page, never a second order or reservation.
+ */
+export const checkoutRequestHeadersSchema = z.object({
+  'idempotency-key': z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{8,100}$/, 'Send the Idempotency-Key header as 8 to 100 letters, digits, dashes or underscores.')
+    .optional(),
+});
+
 /** 201: the order exists (pending payment, stock reserved); the browser goes to `checkoutUrl` to pay. */
 export const greenCheckoutResponseSchema = z.object({
   orderId: z.uuid(),

@@ -26,6 +26,8 @@ export type ApiRequestOptions<S extends z.ZodType> = {
   body?: unknown;
   params?: URLSearchParams;
   signal?: AbortSignal;
+  /** Extra request headers, e.g. an Idempotency-Key. */
+  headers?: Record<string, string>;
 };
 
 const NETWORK_MESSAGE = 'Restday could not be reached. Check your connection and try again.';
@@ -52,11 +54,11 @@ async function readJson(response: Response): Promise<unknown> {
  * server requires of them.
  */
 export async function apiRequest<S extends z.ZodType>(path: string, options: ApiRequestOptions<S>): Promise<z.output<S>> {
-  const { schema, method = 'GET', body, params, signal } = options;
+  const { schema, method = 'GET', body, params, signal, headers: extraHeaders } = options;
   const query = params?.toString();
   const url = query ? `${path}?${query}` : path;
 
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders };
   if (method !== 'GET') headers['X-Restday-Client'] = 'web';
   if (body !== undefined) headers['Content-Type'] = 'application/json';
 

@@ -30,6 +30,8 @@ import {
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { createTestUser, signedInAgent } from '../setup/test-users';
+import { freePort } from '../setup/free-port';
+import { startStripeRelay, type StripeRelay } from './stripe-relay';
 
 // Stripe's published test card that saves to a customer and then fails every charge (Stripe docs, Testing).
 const failsOnCharge = '4000000000000341';
@@ -39,19 +41,17 @@ const stripe = testStripe();
 const invented = { name: 'Robin Testroaster', line1: '1 Invented Lane', city: 'Sampleville', region: 'CO', postalCode: '80000', country: 'US' };
 
 let server: RunningServer;
+// The server reaches the fake through this relay, so an outage the test makes is an outage for the
+// server's own every-minute Stripe sync too, not only for the test's push.
+let relay: StripeRelay;
 let lot: { id: string; name: string };
 let payments: ReturnType<typeof testPaymentsService>;
 
 beforeAll(async () => {
   // The whole server with its workers, on the test clock so a test can move the shop's time.
-  const { createServer } = await import('node:net');
-  const port = await new Promise<number>((resolve) => {
-    const probe = createServer().listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
-  const config = paymentsTestConfig({ PORT: String(port), RESTDAY_TEST_CLOCK: 'true' });
+  const port = await freePort();
+  relay = await startStripeRelay(inject('stripeFakeUrl'));
+  const config = paymentsTestConfig({ PORT: String(port), RESTDAY_TEST_CLOCK: 'true', STRIPE_API_URL: relay.url });
   server = await startServer(config, createLogger(config));
   await fake.setWebhookEndpoint(`${server.url}/api/payments/webhook`);
   payments = testPaymentsService(config);
@@ -62,6 +62,7 @@ afterAll(async () => {
   await fake.resumeWebhooks();
   await fake.setWebhookEndpoint(null);
   await server.stop();
+  await relay.close();
 });
 
 /** Moves the running server's clock (scheduling, the ledger's paidAt). */
@@ -190,12 +191,18 @@ describe('subscription renewals on the payment fake’s clock', () => {
   it('a Stripe outage leaves the change answered and recorded; the push succeeds once Stripe is back', async () => {
     const { customer, id, stripeSubscriptionId } = await paidSubscription();
     const agent = await signedInAgent(createTestApp(), customer);
-    expect((await agent.patch(`/api/subscriptions/${id}`).send({ bagSize: '1lb' })).status).toBe(200);
     const logger = createLogger(paymentsTestConfig());
-    const unreachable = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig({ STRIPE_API_URL: 'http://127.0.0.1:9' })), clock: systemClock, logger });
-    await expect(unreachable.push(id)).rejects.toThrow();
-    const row = await subscriptionRow(id);
-    expect(row.stripeSyncedVersion).toBeLessThan(row.changeVersion);
+    relay.cut();
+    try {
+      expect((await agent.patch(`/api/subscriptions/${id}`).send({ bagSize: '1lb' })).status).toBe(200);
+      const unreachable = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig({ STRIPE_API_URL: relay.url })), clock: systemClock, logger });
+      await expect(unreachable.push(id)).rejects.toThrow();
+      // Nobody could push it: not this push, not the server's scheduled sync.
+      const row = await subscriptionRow(id);
+      expect(row.stripeSyncedVersion).toBeLessThan(row.changeVersion);
+    } finally {
+      relay.restore();
+    }
 
     // The scheduled job (every minute in the running server) or this push brings Stripe up to date.
     const sync = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig()), clock: systemClock, logger });

@@ -38,6 +38,8 @@ export const orders = pgTable(
     carrier: text('carrier'),
     trackingNumber: text('tracking_number'),
     stripeCheckoutSessionId: text('stripe_checkout_session_id'),
+    /** The Idempotency-Key the buyer's checkout request carried: a retry of it finds this order, not a second one. */
+    checkoutKey: text('checkout_key'),
     stripePaymentIntentId: text('stripe_payment_intent_id'),
     /** Set for subscription renewals: the Stripe invoice this order was made from (one order per invoice). */
     stripeInvoiceId: text('stripe_invoice_id'),
@@ -57,6 +59,13 @@ export const orders = pgTable(
     uniqueIndex('orders_delivery_id_key').on(t.deliveryId),
     uniqueIndex('orders_stripe_checkout_session_id_key').on(t.stripeCheckoutSessionId),
     uniqueIndex('orders_stripe_invoice_id_key').on(t.stripeInvoiceId),
+    // A cancelled order gives its key up, so a retry after a refused checkout places a new one.
+    uniqueIndex('orders_user_id_checkout_key_key')
+      .on(t.userId, t.checkoutKey)
+      .where(sql`${t.status} <> 'cancelled'`),
+    index('orders_pending_payment_created_at_idx')
+      .on(t.createdAt)
+      .where(sql`${t.status} = 'pending_payment'`),
     index('orders_stripe_payment_intent_id_idx').on(t.stripePaymentIntentId),
     check('orders_subtotal_non_negative', sql`${t.subtotalCents} >= 0`),
     check('orders_shipping_non_negative', sql`${t.shippingCents} >= 0`),

@@ -1,4 +1,4 @@
-import { and, asc, eq, gte, inArray, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, inArray, ne, sql } from 'drizzle-orm';
 import type { AddressSnapshot } from '../../db/schema/common';
 import type { Db, DbOrTx } from '../../db/client';
 import { lotPriceBreaks, lots, orderItems, orders, stockMovements } from '../../db/schema/index';
@@ -12,6 +12,8 @@ export interface NewGreenOrder {
   shippingCents: number;
   totalCents: number;
   shippingAddress: AddressSnapshot;
+  /** The request's Idempotency-Key, when it sent one. */
+  checkoutKey?: string;
   items: { lotId: string; size: GreenBagSize; quantity: number; fillGrams: number; unitPriceCents: number; lineTotalCents: number }[];
   /** Green grams to take from each lot for this order. */
   reservations: { lotId: string; lotCode: string; grams: number }[];
@@ -30,6 +32,9 @@ export class StockShortfall extends Error {
     this.name = 'StockShortfall';
   }
 }
+
+/** Thrown inside the order's transaction when the buyer already has a live order under this checkout key; nothing is written. */
+class CheckoutKeyTaken extends Error {}
 
 /**
  * Puts back every gram an order still holds (its 'sale' movements net to zero afterwards), one
@@ -66,7 +71,18 @@ export async function cancelUnpaidOrder(db: DbOrTx, orderId: string, at: Date, n
 }
 
 export function createCheckoutRepo(db: Db) {
+  /** The buyer's live (not cancelled) order placed under this checkout key, if any. */
+  async function orderForCheckoutKey(userId: string, checkoutKey: string): Promise<string | undefined> {
+    const [row] = await db
+      .select({ id: orders.id })
+      .from(orders)
+      .where(and(eq(orders.userId, userId), eq(orders.checkoutKey, checkoutKey), ne(orders.status, 'cancelled')));
+    return row?.id;
+  }
+
   return {
+    orderForCheckoutKey,
+
     /** The owner's shipping bands and tares, as GET /api/shipping gives them to the cart. */
     async shippingSettings(): Promise<ShopSettings['shipping']> {
       return (await loadShopSettings(db)).settings.shipping;
@@ -96,8 +112,8 @@ export function createCheckoutRepo(db: Db) {
      * (`stock_grams >= n`, so concurrent checkouts queue on the lot's row and the loser finds it
      * short) plus its 'sale' movement. Throws StockShortfall, changing nothing, when any lot is short.
      */
-    async placeGreenOrder(order: NewGreenOrder): Promise<string> {
-      return db.transaction(async (tx) => {
+    async placeGreenOrder(order: NewGreenOrder): Promise<{ orderId: string; placed: boolean }> {
+      const placing = db.transaction(async (tx) => {
         const [created] = await tx
           .insert(orders)
           .values({
@@ -107,9 +123,13 @@ export function createCheckoutRepo(db: Db) {
             shippingCents: order.shippingCents,
             totalCents: order.totalCents,
             shippingAddress: order.shippingAddress,
+            checkoutKey: order.checkoutKey ?? null,
           })
+          // A concurrent request with the same key waits here for the first to commit, then finds its order.
+          .onConflictDoNothing({ target: [orders.userId, orders.checkoutKey], where: sql`${orders.status} <> 'cancelled'` })
           .returning({ id: orders.id });
-        const orderId = created!.id;
+        if (!created) throw new CheckoutKeyTaken();
+        const orderId = created.id;
         await tx.insert(orderItems).values(order.items.map((item) => ({ ...item, orderId, kind: 'green' as const })));
         // A fixed lock order (by lot id) so two multi-lot checkouts never deadlock.
         const reservations = [...order.reservations].sort((a, b) => (a.lotId < b.lotId ? -1 : a.lotId > b.lotId ? 1 : 0));
@@ -131,6 +151,14 @@ export function createCheckoutRepo(db: Db) {
         if (shortLots.length > 0) throw new StockShortfall(shortLots);
         return orderId;
       });
+      try {
+        return { orderId: await placing, placed: true };
+      } catch (error) {
+        if (!(error instanceof CheckoutKeyTaken) || !order.checkoutKey) throw error;
+        const existing = await orderForCheckoutKey(order.userId, order.checkoutKey);
+        if (!existing) throw error;
+        return { orderId: existing, placed: false };
+      }
     },
 
     /** Undoes a checkout whose payment page could not be opened. */

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { greenCheckoutRequestSchema, type GreenCheckoutResponse } from '@shared/schemas/checkout';
+import { checkoutRequestHeadersSchema, greenCheckoutRequestSchema, type GreenCheckoutResponse } from '@shared/schemas/checkout';
 import { requireUser } from '../../middleware/require-role';
 import type { CheckoutService } from './checkout.service';
 
@@ -9,7 +9,8 @@ export function checkoutRoutes(service: CheckoutService): Router {
   router.use(requireUser);
 
   router.post('/green', async (req, res) => {
-    const started = await service.checkoutGreen(req.user!, greenCheckoutRequestSchema.parse(req.body));
+    const checkoutKey = checkoutRequestHeadersSchema.parse(req.headers)['idempotency-key'];
+    const started = await service.checkoutGreen(req.user!, greenCheckoutRequestSchema.parse(req.body), checkoutKey);
     res.status(201).json(started satisfies GreenCheckoutResponse);
   });
 

@@ -37,13 +37,8 @@ function shortOfStock(items: GreenCheckoutRequest['items'], shortLots: ShortLot[
 }
 
 export function createCheckoutService({ repo, payments, clock }: CheckoutServiceDeps) {
-  return {
-    /**
-     * Prices the cart with the trade engine, places the order with its stock reserved (one
-     * transaction), then opens the payment page. If the page cannot be opened, the order is
-     * cancelled and its stock put back before the error goes on.
-     */
-    async checkoutGreen(user: SessionUser, request: GreenCheckoutRequest): Promise<GreenCheckoutResponse> {
+  /** Prices the cart and places its order with the stock reserved; the id of the order (an existing one under the same key). */
+  async function placeOrder(user: SessionUser, request: GreenCheckoutRequest, checkoutKey: string | undefined): Promise<string> {
       const codes = [...new Set(request.items.map((item) => item.lotCode))];
       const lotsForSale = await repo.lotsForSale(codes);
       const byCode = new Map(lotsForSale.map((lot) => [lot.code, lot]));
@@ -76,27 +71,45 @@ export function createCheckoutService({ repo, payments, clock }: CheckoutService
         gramsPerLot.set(item.lotCode, (gramsPerLot.get(item.lotCode) ?? 0) + bagFillGrams(item.size) * item.quantity);
       }
 
-      let orderId: string;
       try {
-        orderId = await repo.placeGreenOrder({
+        const { orderId } = await repo.placeGreenOrder({
           userId: user.id,
           subtotalCents: quote.subtotalCents,
           shippingCents: quote.shippingCents,
           totalCents: quote.subtotalCents + quote.shippingCents,
           shippingAddress: request.shippingAddress,
+          ...(checkoutKey ? { checkoutKey } : {}),
           items,
           reservations: [...gramsPerLot].map(([lotCode, grams]) => ({ lotId: byCode.get(lotCode)!.id, lotCode, grams })),
         });
+        return orderId;
       } catch (error) {
         if (error instanceof StockShortfall) throw shortOfStock(request.items, error.shortLots);
         throw error;
       }
+  }
 
+  return {
+    /**
+     * Prices the cart with the trade engine, places the order with its stock reserved (one
+     * transaction), then opens the payment page. If the page cannot be opened, the order is
+     * cancelled and its stock put back before the error goes on; if even that fails (the database
+     * went away), the unpaid-orders job cancels it after its grace period.
+     *
+     * `checkoutKey` is the request's Idempotency-Key: a retry with the same key (a lost answer, a
+     * 503) resumes the order it placed, reserving nothing again, and gets the same payment page
+     * (Stripe's own idempotency replays the session made for it). Once that order is cancelled the
+     * key places a new one.
+     */
+    async checkoutGreen(user: SessionUser, request: GreenCheckoutRequest, checkoutKey?: string): Promise<GreenCheckoutResponse> {
+      const resumed = checkoutKey ? await repo.orderForCheckoutKey(user.id, checkoutKey) : undefined;
+      const orderId = resumed ?? (await placeOrder(user, request, checkoutKey));
       try {
         const { checkoutUrl } = await payments.createCheckoutForOrder(orderId);
         return { orderId, checkoutUrl };
       } catch (error) {
-        await repo.cancelUnpaidOrder(orderId, clock.now(), 'payment page could not be opened');
+        // A database that is down here is down for the cancel too; the original error is the one to answer.
+        await repo.cancelUnpaidOrder(orderId, clock.now(), 'payment page could not be opened').catch(() => undefined);
         throw error;
       }
     },

@@ -34,7 +34,7 @@ export interface PaymentEventsDeps {
 const receivableEventSchema = z.object({
   id: z.string().min(1).max(255),
   type: z.string().min(1).max(255),
-  data: z.object({ object: z.looseObject({}) }),
+  data: z.object({ object: z.looseObject({ id: z.string().min(1).max(255) }) }),
 });
 
 /** The part of an event that must run in the ledger's transaction (after the Stripe reads, which must not). */

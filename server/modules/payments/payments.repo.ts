@@ -27,6 +27,7 @@ function queries(db: DbOrTx) {
         shipDate: orders.shipDate,
         stripeCheckoutSessionId: orders.stripeCheckoutSessionId,
         stripePaymentIntentId: orders.stripePaymentIntentId,
+        createdAt: orders.createdAt,
         customerEmail: users.email,
         customerName: users.name,
       })
@@ -93,8 +94,17 @@ function queries(db: DbOrTx) {
         .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id));
     },
 
-    async setOrderCheckoutSession(orderId: string, sessionId: string) {
-      await db.update(orders).set({ stripeCheckoutSessionId: sessionId }).where(eq(orders.id, orderId));
+    /**
+     * Records the session opened for an unpaid order; false when the order was cancelled meanwhile
+     * (the unpaid-orders job), so its payment page must not be handed out.
+     */
+    async setOrderCheckoutSession(orderId: string, sessionId: string): Promise<boolean> {
+      const saved = await db
+        .update(orders)
+        .set({ stripeCheckoutSessionId: sessionId })
+        .where(and(eq(orders.id, orderId), eq(orders.status, 'pending_payment')))
+        .returning({ id: orders.id });
+      return saved.length > 0;
     },
 
     async markOrderPaid(

@@ -43,6 +43,12 @@ export function createPaymentsService({ repo, gateway, config }: PaymentsService
   const baseUrl = shopBaseUrl(config);
   // Stripe checks this against its own time, so it is real time, never the shop's test clock.
   const expiresAt = () => Math.floor(Date.now() / 1000) + config.STRIPE_CHECKOUT_EXPIRES_MINUTES * 60;
+  /**
+   * An order's first session expires a fixed time after the order was placed (the database's real
+   * time), so a retry sends exactly the parameters of the first try and Stripe's idempotency replays
+   * the session that try made instead of refusing the key.
+   */
+  const orderExpiresAt = (createdAt: Date) => Math.floor(createdAt.getTime() / 1000) + config.STRIPE_CHECKOUT_EXPIRES_MINUTES * 60;
 
   /**
    * The open session a row already has, if any; a paid one is a conflict. An expired one gives way to
@@ -107,11 +113,13 @@ export function createPaymentsService({ repo, gateway, config }: PaymentsService
           payment_intent_data: { metadata: { [orderIdKey]: order.id } },
           success_url: `${baseUrl}${paths.successPath}`,
           cancel_url: `${baseUrl}${paths.cancelPath}`,
-          expires_at: expiresAt(),
+          expires_at: order.stripeCheckoutSessionId ? expiresAt() : orderExpiresAt(order.createdAt),
         },
         idempotencyKey('order', order.id, order.stripeCheckoutSessionId),
       );
-      await repo.setOrderCheckoutSession(order.id, session.id);
+      if (!(await repo.setOrderCheckoutSession(order.id, session.id))) {
+        throw AppError.conflict('order_not_payable', 'This order was cancelled before its payment page opened. Nothing was charged; check out again.');
+      }
       return started(session);
     },
 

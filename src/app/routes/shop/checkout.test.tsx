@@ -92,6 +92,31 @@ describe('checkout page', () => {
     expect(request?.headers.get('X-Restday-Client')).toBe('web');
   });
 
+  it('sends the same Idempotency-Key when the same cart and address are submitted again after a 503, and a new one after an edit', async () => {
+    const answers = [
+      () => apiErrorResponse(503, 'payments_unavailable', 'Payments cannot be taken right now.'),
+      () => apiErrorResponse(503, 'payments_unavailable', 'Payments cannot be taken right now.'),
+      () => jsonResponse({ orderId: '00000000-0000-4000-8000-000000000001', checkoutUrl: 'http://127.0.0.1:12111/pay/cs_test_1' }, 201),
+    ];
+    const fetchMock = checkoutServer(() => answers.shift()!());
+    renderApp('/checkout', { session: makeUser() });
+
+    await screen.findByRole('listitem', { name: 'Test Ridge Washed, 1 lb' });
+    fillAddress();
+    submit();
+    await screen.findByText('Payments cannot be taken right now.');
+    submit();
+    await waitFor(() => expect(sentRequests(fetchMock, 'POST', '/api/checkout/green')).toHaveLength(2));
+    fill('City or town', 'Ashford');
+    submit();
+    await waitFor(() => expect(leaveFor).toHaveBeenCalled());
+
+    const keys = sentRequests(fetchMock, 'POST', '/api/checkout/green').map((request) => request.headers.get('Idempotency-Key'));
+    expect(keys[0]).toMatch(/^[A-Za-z0-9_-]{8,100}$/);
+    expect(keys[1]).toBe(keys[0]);
+    expect(keys[2]).not.toBe(keys[0]);
+  });
+
   it('shows the server’s reasons on the address fields', async () => {
     checkoutServer(() =>
       apiErrorResponse(400, 'validation_failed', 'Check the highlighted fields.', { 'shippingAddress.postalCode': 'Use a postal code we ship to.' }),

@@ -50,6 +50,8 @@ export function CheckoutForm({ initialAddress, onLineErrors }: CheckoutFormProps
   const { lines } = useCart();
   const checkout = useCreateGreenCheckout();
   const [formError, setFormError] = useState<string>();
+  // One key per cart and address: submitting the same again (after a lost answer or a 503) resumes that order.
+  const [attempt, setAttempt] = useState<{ sent: string; checkoutKey: string }>();
   const form = useForm<CheckoutFields, unknown, z.output<typeof greenCheckoutRequestSchema>>({
     resolver: zodResolver(greenCheckoutRequestSchema),
     defaultValues: {
@@ -69,7 +71,10 @@ export function CheckoutForm({ initialAddress, onLineErrors }: CheckoutFormProps
     setFormError(undefined);
     onLineErrors({});
     try {
-      const { checkoutUrl } = await checkout.mutateAsync(input);
+      const sent = JSON.stringify(input);
+      const current = attempt?.sent === sent ? attempt : { sent, checkoutKey: crypto.randomUUID() };
+      setAttempt(current);
+      const { checkoutUrl } = await checkout.mutateAsync({ input, checkoutKey: current.checkoutKey });
       leaveFor(checkoutUrl);
     } catch (error) {
       onLineErrors(lineErrorsOf(error));
