@@ -123,21 +123,25 @@ function queries(db: DbOrTx) {
       if (lotLevels.length === 0) return [];
       const matches = lotLevels.map(({ lotId, roastLevel }) => and(eq(batches.lotId, lotId), eq(batches.roastLevel, roastLevel))!);
       const locked = await db
-        .select({ id: batches.id, lotId: batches.lotId, roastLevel: batches.roastLevel, roastedGramsOut: batches.roastedGramsOut, createdAt: batches.createdAt })
+        .select({ id: batches.id })
         .from(batches)
         .where(and(eq(batches.roastDate, roastDate), or(...matches)))
         .orderBy(asc(batches.id))
         .for('update');
       if (locked.length === 0) return [];
-      const taken = await db
-        .select({ batchId: bagAllocations.batchId, grams: sql<number>`sum(${bagAllocations.grams})::int` })
-        .from(bagAllocations)
-        .where(inArray(bagAllocations.batchId, locked.map((batch) => batch.id)))
-        .groupBy(bagAllocations.batchId);
-      const takenBy = new Map(taken.map((row) => [row.batchId, row.grams]));
-      return locked
-        .sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime() || a.id.localeCompare(b.id))
-        .map((batch) => ({ batchId: batch.id, lotId: batch.lotId, roastLevel: batch.roastLevel, freeGrams: batch.roastedGramsOut - (takenBy.get(batch.id) ?? 0) }));
+      // Ordered here, not in JavaScript: created_at keeps microseconds, a Date only milliseconds.
+      return db
+        .select({
+          batchId: batches.id,
+          lotId: batches.lotId,
+          roastLevel: batches.roastLevel,
+          freeGrams: sql<number>`(${batches.roastedGramsOut} - coalesce(sum(${bagAllocations.grams}), 0))::int`,
+        })
+        .from(batches)
+        .leftJoin(bagAllocations, eq(bagAllocations.batchId, batches.id))
+        .where(inArray(batches.id, locked.map((batch) => batch.id)))
+        .groupBy(batches.id)
+        .orderBy(asc(batches.createdAt), asc(batches.id));
     },
 
     async insertAllocations(orderId: string, allocations: { orderItemId: string; batchId: string; bags: number; grams: number }[]) {

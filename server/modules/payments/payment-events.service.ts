@@ -366,15 +366,15 @@ export function createPaymentEventsService({ repo, gateway, clock, logger, confi
       if (unstorable !== undefined) {
         throw new AppError(400, 'invalid_webhook', 'The event holds characters that cannot be stored.', { [unstorable]: unstorableTextMessage });
       }
-      const received = await repo.receiveEvent({ id: shape.data.id, type: shape.data.type, payload });
-      if (received && enqueueEvent) {
-        // If the queue cannot take it now, the inbox sweep applies it later: the event is already safe.
-        await enqueueEvent(shape.data.id).catch((error: unknown) => logger.warn({ err: error, eventId: shape.data.id }, 'payment event left for the sweep'));
-      } else if (!enqueueEvent) {
-        await applyEvent(shape.data.id);
+      const { duplicate, applied } = await repo.receiveEvent({ id: shape.data.id, type: shape.data.type, payload });
+      // An event not yet applied is queued on every delivery (the job's singleton key keeps one job),
+      // and a queue that cannot take it fails the delivery: Stripe sends it again, so none waits for the sweep.
+      if (!applied) {
+        if (enqueueEvent) await enqueueEvent(shape.data.id);
+        else await applyEvent(shape.data.id);
       }
-      logger.info({ eventId: shape.data.id, type: shape.data.type, duplicate: !received }, 'payment event received');
-      return { received: true, duplicate: !received };
+      logger.info({ eventId: shape.data.id, type: shape.data.type, duplicate }, 'payment event received');
+      return { received: true, duplicate };
     },
 
     applyEvent,

@@ -182,9 +182,12 @@ function queries(db: DbOrTx) {
     },
 
     /** Puts an event in the inbox, not yet applied. False when it is already there (a redelivery). */
+    /** Puts the event in the inbox once; says whether it was there already and whether it is applied. */
     async receiveEvent(event: ReceivedEvent) {
       const inserted = await db.insert(paymentEvents).values(event).onConflictDoNothing({ target: paymentEvents.id }).returning({ id: paymentEvents.id });
-      return inserted.length > 0;
+      if (inserted.length > 0) return { duplicate: false, applied: false };
+      const [row] = await db.select({ processedAt: paymentEvents.processedAt }).from(paymentEvents).where(eq(paymentEvents.id, event.id));
+      return { duplicate: true, applied: row?.processedAt != null };
     },
 
     /** The inbox row of an event still to apply, or undefined once it is applied (or unknown). */
