@@ -2,13 +2,15 @@ import { fileURLToPath } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vite';
+import { compression } from 'vite-plugin-compression2';
 
 // The Restday server serves `dist/` and the API under `/api`; in dev, Vite serves the SPA and
 // forwards `/api` to that server.
 const apiPort = process.env.RESTDAY_API_PORT ?? '3000';
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  // Brotli and gzip copies made once at build time; the server sends whichever the browser accepts.
+  plugins: [react(), tailwindcss(), compression({ algorithms: ['brotliCompress', 'gzip'] })],
   resolve: {
     alias: {
       '@shared': fileURLToPath(new URL('./shared', import.meta.url)),

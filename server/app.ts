@@ -1,6 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { existsSync } from 'node:fs';
-import path from 'node:path';
+import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -9,7 +8,6 @@ import type { Database } from './db/client';
 import type { Queue } from './jobs/queue';
 import type { Clock } from './lib/clock';
 import type { Logger } from './lib/logger';
-import { AppError } from './lib/app-error';
 import { apiNotFound, briefError, errorHandler } from './middleware/error-handler';
 import { requireClientHeader } from './middleware/require-client-header';
 import { createDevClockRepo } from './modules/dev-clock/dev-clock.repo';
@@ -20,6 +18,8 @@ import { healthRoutes } from './modules/health/health.routes';
 import { createLotsRepo } from './modules/lots/lots.repo';
 import { lotsRoutes } from './modules/lots/lots.routes';
 import { createLotsService } from './modules/lots/lots.service';
+import { storefrontRoutes } from './modules/storefront/storefront.routes';
+import { createStorefrontService } from './modules/storefront/storefront.service';
 import { createLotsAdminRepo } from './modules/lots/lots-admin.repo';
 import { greenStockRoutes, lotsAdminRoutes } from './modules/lots/lots-admin.routes';
 import { createLotsAdminService } from './modules/lots/lots-admin.service';
@@ -34,7 +34,8 @@ import { createPaymentsGateway } from './integrations/payments';
 import { createPaymentEventsService } from './modules/payments/payment-events.service';
 import { createPaymentsRepo } from './modules/payments/payments.repo';
 import { paymentsWebhookRoutes } from './modules/payments/payments.routes';
-import { createPaymentsService } from './modules/payments/payments.service';
+import { createPaymentsService, shopBaseUrl } from './modules/payments/payments.service';
+import { loadShopSettings } from './modules/settings/settings.repo';
 import { createCheckoutRepo } from './modules/checkout/checkout.repo';
 import { createShippingRepo } from './modules/shipping/shipping.repo';
 import { shippingRoutes } from './modules/shipping/shipping.routes';
@@ -93,6 +94,8 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // JSON and pages made per request, compressed above 1 kB; the built assets come precompressed and pass untouched.
+  app.use(compression({ threshold: 1024 }));
 
   app.use(
     pinoHttp({
@@ -165,7 +168,8 @@ export function createApp(deps: AppDeps): Express {
   // Every router after this line sees req.user; guard each non-public route with requireRole / requireUser.
   api.use(accounts.loadSession);
   for (const [mountPath, router] of accounts.routers) api.use(mountPath, router);
-  api.use('/lots', lotsRoutes(createLotsService(createLotsRepo(database.db))));
+  const lotsService = createLotsService(createLotsRepo(database.db));
+  api.use('/lots', lotsRoutes(lotsService));
   api.use('/shipping', shippingRoutes(createShippingRepo(database.db)));
   const fileStorage = createFileStorage(config.UPLOADS_DIR);
   const lotsAdmin = createLotsAdminService(createLotsAdminRepo(database.db), fileStorage, deps.clock);
@@ -218,17 +222,12 @@ export function createApp(deps: AppDeps): Express {
   api.use(accounts.auditDenials);
   app.use('/api', api);
 
-  const staticDir = path.resolve(config.STATIC_DIR);
-  const indexHtml = path.join(staticDir, 'index.html');
-  app.use('/assets', express.static(path.join(staticDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
-  app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
-  // Every other GET is a client-side route: the SPA decides what to show (its own 404 included).
-  app.get('/{*splat}', (_req, res, next) => {
-    // Without a build (API-only runs), answer through the error handler so every header still applies.
-    if (!existsSync(indexHtml)) return next(new AppError(404, 'client_not_built', 'The shop client is not built yet: run npm run build.'));
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(indexHtml);
-  });
+  app.use(
+    storefrontRoutes(
+      createStorefrontService({ lots: lotsService, baseUrl: shopBaseUrl(config), currency: async () => (await loadShopSettings(database.db)).settings.currency }),
+      { staticDir: config.STATIC_DIR, baseUrl: shopBaseUrl(config) },
+    ),
+  );
 
   app.use(errorHandler);
   return app;

@@ -48,6 +48,22 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+let preloadedAnswers: Map<string, unknown> | undefined;
+
+/**
+ * The public GET answers the server put into the page's HTML (script#restday-preloaded), each used
+ * once, by the first render: later reads ask the server, so they are never stale.
+ */
+function takePreloaded(url: string): unknown {
+  if (!preloadedAnswers) {
+    const script = typeof document === 'undefined' ? null : document.getElementById('restday-preloaded');
+    preloadedAnswers = new Map(Object.entries(script?.textContent ? (JSON.parse(script.textContent) as Record<string, unknown>) : {}));
+  }
+  const answer = preloadedAnswers.get(url);
+  preloadedAnswers.delete(url);
+  return answer;
+}
+
 /**
  * Calls Restday's API on the same origin. Every response body goes through `schema`; every
  * failure becomes an `ApiError`. State-changing requests carry `X-Restday-Client: web`, which the
@@ -57,6 +73,10 @@ export async function apiRequest<S extends z.ZodType>(path: string, options: Api
   const { schema, method = 'GET', body, params, signal, headers: extraHeaders } = options;
   const query = params?.toString();
   const url = query ? `${path}?${query}` : path;
+  if (method === 'GET') {
+    const preloaded = takePreloaded(url);
+    if (preloaded !== undefined) return schema.parse(preloaded);
+  }
 
   const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders };
   if (method !== 'GET') headers['X-Restday-Client'] = 'web';
