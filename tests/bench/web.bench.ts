@@ -68,9 +68,12 @@ async function visit(browser: Browser, url: string, throttled: boolean): Promise
       await cdp.send('Network.emulateNetworkConditions', slow4g);
       await cdp.send('Emulation.setCPUThrottlingRate', { rate: cpuSlowdown });
     }
-    await page.goto(url, { waitUntil: 'networkidle', timeout: 60_000 });
-    // LCP is final once the page is quiet; a short wait lets the last entries arrive.
-    await page.waitForTimeout(500);
+    await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
+    // A slowed CPU can leave the network quiet while it parses, so wait for a paint first, then for
+    // quiet; LCP is final once the page is quiet, and a short wait lets the last entries arrive.
+    await page.waitForFunction(() => (window as unknown as { __restdayPaints: { lcp: number } }).__restdayPaints.lcp > 0, undefined, { timeout: 60_000 });
+    await page.waitForLoadState('networkidle', { timeout: 60_000 });
+    await page.waitForTimeout(1000);
     const paints = await page.evaluate(() => (window as unknown as { __restdayPaints: { lcp: number; fcp: number; cls: number } }).__restdayPaints);
     return { lcpMs: paints.lcp, fcpMs: paints.fcp, cls: paints.cls, ...totals };
   } finally {
