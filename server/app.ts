@@ -18,6 +18,7 @@ import { healthRoutes } from './modules/health/health.routes';
 import { createLotsRepo } from './modules/lots/lots.repo';
 import { lotsRoutes } from './modules/lots/lots.routes';
 import { createLotsService } from './modules/lots/lots.service';
+import type { LotListCache } from './modules/lots/lot-list-cache';
 import { storefrontRoutes } from './modules/storefront/storefront.routes';
 import { createStorefrontService } from './modules/storefront/storefront.service';
 import { createLotsAdminRepo } from './modules/lots/lots-admin.repo';
@@ -81,6 +82,8 @@ export interface AppDeps {
   clock: Clock;
   /** Absent in API-only test apps; health then reports the queue as stopped. */
   queue?: Queue;
+  /** The lot list kept in memory by a server process; API-only test apps read the database each time. */
+  lotListCache?: LotListCache;
 }
 
 const requestIdPattern = /^[\w-]{8,64}$/;
@@ -168,7 +171,7 @@ export function createApp(deps: AppDeps): Express {
   // Every router after this line sees req.user; guard each non-public route with requireRole / requireUser.
   api.use(accounts.loadSession);
   for (const [mountPath, router] of accounts.routers) api.use(mountPath, router);
-  const lotsService = createLotsService(createLotsRepo(database.db));
+  const lotsService = createLotsService(createLotsRepo(database.db), deps.lotListCache);
   api.use('/lots', lotsRoutes(lotsService));
   api.use('/shipping', shippingRoutes(createShippingRepo(database.db)));
   const fileStorage = createFileStorage(config.UPLOADS_DIR);

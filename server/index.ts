@@ -7,6 +7,7 @@ import { startWorkers, type Workers } from './jobs/workers';
 import { createAdjustableClock, systemClock } from './lib/clock';
 import { createLogger, type Logger } from './lib/logger';
 import { isMainModule, runMain } from './lib/run-main';
+import { startLotListCache } from './modules/lots/lot-list-cache';
 
 export interface RunningServer {
   url: string;
@@ -32,7 +33,8 @@ export async function startServer(config: Config, logger: Logger = createLogger(
     await database.close();
     throw error;
   }
-  const app = createApp({ config, database, logger, queue, clock });
+  const lotListCache = startLotListCache({ databaseUrl: config.DATABASE_URL, logger });
+  const app = createApp({ config, database, logger, queue, clock, lotListCache });
 
   const server: Server = await new Promise((resolve, reject) => {
     const listening = app.listen(config.PORT, config.HOST, () => resolve(listening));
@@ -51,6 +53,7 @@ export async function startServer(config: Config, logger: Logger = createLogger(
       await closed;
       clearTimeout(forceAfter);
       await workers?.stop();
+      await lotListCache.stop();
       await queue.stop();
       await database.close();
       logger.info('Restday stopped');

@@ -15,6 +15,8 @@ export function startListener(options: {
   logger: Logger;
   channels: Record<string, (payload: string) => void>;
   onReconnect?: () => void;
+  /** Called when the connection drops: until `onReconnect`, notifications may be missed. */
+  onDisconnect?: () => void;
 }): Listener {
   const { logger } = options;
   let client: pg.Client | undefined;
@@ -31,6 +33,7 @@ export function startListener(options: {
       dropped = true;
       if (client === next) client = undefined;
       next.removeAllListeners('notification');
+      options.onDisconnect?.();
       void next.end().catch(() => undefined);
       if (stopped) return;
       failures += 1;

@@ -15,6 +15,7 @@ import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/index';
 import { systemClock } from '../../server/lib/clock';
 import { createLogger } from '../../server/lib/logger';
+import { startLotListCache } from '../../server/modules/lots/lot-list-cache';
 
 const connections = 50;
 const durationSeconds = 10;
@@ -52,7 +53,9 @@ try {
     res.json({ hello: 'world' });
   });
   const baseline = await listen(hello);
-  const restday = await listen(createApp({ config, database, logger: createLogger(config), clock: systemClock }));
+  // As a server process runs it: the lot list held in memory, dropped on each lots_changed notice.
+  const lotListCache = startLotListCache({ databaseUrl, logger: createLogger(config) });
+  const restday = await listen(createApp({ config, database, logger: createLogger(config), clock: systemClock, lotListCache }));
 
   const bare: Load[] = [];
   const lots: Load[] = [];
@@ -66,6 +69,7 @@ try {
   console.log(`throughput ratio ${ratio.toFixed(2)} (${connections} connections, ${durationSeconds} s a round, A-B-B-A)`);
   baseline.server.close();
   restday.server.close();
+  await lotListCache.stop();
   await database.close();
 } finally {
   if (cluster.startedHere) cluster.stop();

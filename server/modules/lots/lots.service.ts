@@ -5,17 +5,23 @@ import { greenBagSizes } from '@shared/domain/vocabulary';
 import type { LotDetail, LotListQuery, LotSummary, RoastGuideQuery } from '@shared/schemas/lots';
 import { AppError } from '../../lib/app-error';
 import { lotDetailOf, uploadUrl } from './lot-detail';
+import type { LotListCache } from './lot-list-cache';
 import type { LotsRepo } from './lots.repo';
 
 /** A lot is "in stock" while it can fill the smallest green bag sold. */
 const smallestGreenBagGrams = Math.min(...greenBagSizes.map(bagFillGrams));
 
-export function createLotsService(repo: LotsRepo) {
+/** `listCache`: the in-memory list kept by a server process (API-only test apps read through to the database). */
+export function createLotsService(repo: LotsRepo, listCache?: LotListCache) {
+  async function loadList(query: LotListQuery): Promise<LotSummary[]> {
+    const { inStock, ...filters } = query;
+    const rows = await repo.listListed({ ...filters, ...(inStock ? { minStockGrams: smallestGreenBagGrams } : {}) });
+    return rows.map(({ firstPhotoId, ...row }) => ({ ...row, photoUrl: firstPhotoId ? uploadUrl(firstPhotoId) : null }));
+  }
+
   return {
     async list(query: LotListQuery): Promise<LotSummary[]> {
-      const { inStock, ...filters } = query;
-      const rows = await repo.listListed({ ...filters, ...(inStock ? { minStockGrams: smallestGreenBagGrams } : {}) });
-      return rows.map(({ firstPhotoId, ...row }) => ({ ...row, photoUrl: firstPhotoId ? uploadUrl(firstPhotoId) : null }));
+      return listCache ? listCache.read(query, () => loadList(query)) : loadList(query);
     },
 
     async get(code: string): Promise<LotDetail> {
