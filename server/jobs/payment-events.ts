@@ -1,6 +1,5 @@
 import { createPaymentsGateway } from '../integrations/payments';
-import { createPaymentEventsService } from '../modules/payments/payment-events.service';
-import { createPaymentsRepo } from '../modules/payments/payments.repo';
+import { createPaymentEvents } from '../modules/payments';
 import type { JobContext } from './registry';
 import { defineJob } from './registry';
 
@@ -8,7 +7,7 @@ import { defineJob } from './registry';
 const SWEEP_AFTER_MS = 60_000;
 
 function paymentEvents({ db, clock, logger, config }: JobContext) {
-  return createPaymentEventsService({ repo: createPaymentsRepo(db), gateway: createPaymentsGateway(config), clock, logger, config });
+  return createPaymentEvents({ db, gateway: createPaymentsGateway(config), clock, logger, config });
 }
 
 /**

@@ -1,6 +1,6 @@
 import { isEmailTemplateName, renderEmail, type EmailContext } from '../../../emails/index';
 import type { OutboxItem, OutboxListQuery } from '@shared/schemas/outbox';
-import type { Config } from '../../config';
+import { publicBaseUrl, type Config } from '../../config';
 import { MailError, type Mailer } from '../../integrations/mailer';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
@@ -98,7 +98,7 @@ export function createOutboxRelay(deps: OutboxRelayDeps) {
     }
     return {
       shop: { name: shopCache.shopName, postalAddress: config.SHOP_POSTAL_ADDRESS },
-      baseUrl: config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}`,
+      baseUrl: publicBaseUrl(config),
       timeZone: shopCache.timeZone,
     };
   }
