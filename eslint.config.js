@@ -79,7 +79,7 @@ export default tseslint.config(
     },
   },
   {
-    files: ['dev-services/**/*.ts', 'tests/**/*.ts', 'server/index.ts', 'server/db/seed*.ts'],
+    files: ['dev-services/**/*.ts', 'tests/**/*.ts', 'server/index.ts', 'server/scripts/**/*.ts', 'server/db/seed*.ts'],
     rules: { 'no-console': 'off' },
   },
 );
