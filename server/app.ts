@@ -9,7 +9,7 @@ import { createPaymentsGateway } from './integrations/payments';
 import { createFileStorage } from './integrations/storage';
 import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
 import { sendJob, sendJobsDueBetween } from './jobs/registry';
-import { applyPaymentEventJob } from './jobs/payment-events';
+import { applyPaymentEventJob, paymentEventPorts } from './jobs/payment-events';
 import { jobs } from './jobs/workers';
 import type { ApiModule } from './lib/api-module';
 import { AppError } from './lib/app-error';
@@ -113,7 +113,7 @@ export function createApp(deps: AppDeps): Express {
         await sendJob(queue, applyPaymentEventJob, { eventId }, { singletonKey: eventId });
       }
     : undefined;
-  mount(createPaymentsWebhookModule({ db, gateway, clock, logger, config, enqueueEvent }));
+  mount(createPaymentsWebhookModule({ db, ports: paymentEventPorts, gateway, clock, logger, config, enqueueEvent }));
 
   // Personal and staff answers must never sit in a shared cache; public reads that may be kept say so themselves.
   api.use((_req, res, next) => {

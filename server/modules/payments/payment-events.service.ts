@@ -7,19 +7,41 @@ import type { WebhookReceipt } from '@shared/schemas/payments';
 import { subscriptionStatusOf, type PaymentStanding } from '@shared/domain/subscription-status';
 import { roastedBagSizes, type BagSize, type RoastedBagSize } from '@shared/domain/vocabulary';
 import { publicBaseUrl } from '../../config';
+import type { Tx } from '../../db/client';
 import type { PaymentsGateway } from '../../integrations/payments';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
-import { cancelUnpaidOrder } from '../checkout';
 import { queueEmail } from '../outbox';
 import { loadCalendarOverrides, loadShopSettings } from '../settings';
-import { holdUnpaidCycle, recordPaidCycle, type PaidInvoice } from '../subscriptions';
 import type { PaymentsRepo, PaymentsTransaction, SubscriptionForPayment } from './payments.repo';
 import { orderIdKey, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
 
+/** An invoice Stripe says is paid, as the subscriptions module records it. */
+export interface PaidInvoice {
+  id: string;
+  amountPaidCents: number;
+  currency: string;
+  paymentIntentId: string | null;
+}
+
+/**
+ * What applying an event does to other modules' records, inside the ledger's transaction. The
+ * composition root passes the checkout and subscriptions modules' own functions, so those modules
+ * depend on payments and never the other way round.
+ */
+export interface PaymentEventPorts {
+  /** An expired checkout: cancels the unpaid order and gives its held stock back. */
+  cancelUnpaidOrder(tx: Tx, orderId: string, at: Date, note: string): Promise<boolean>;
+  /** A paid renewal becomes the delivery's order; returns the order id (undefined when it already has one). */
+  recordPaidCycle(tx: Tx, subscriptionId: string, invoice: PaidInvoice, paidAt: Date, logger: Logger): Promise<string | undefined>;
+  /** A failed renewal holds the next delivery. */
+  holdUnpaidCycle(tx: Tx, subscriptionId: string, now: Date): Promise<boolean>;
+}
+
 export interface PaymentEventsDeps {
   repo: PaymentsRepo;
+  ports: PaymentEventPorts;
   gateway: PaymentsGateway;
   clock: Clock;
   logger: Logger;
@@ -107,7 +129,8 @@ async function greenShipDate(tx: PaymentsTransaction, paidAt: Date): Promise<str
  * transaction as its effect, so a redelivered event changes nothing. Events arrive in any order, so
  * each handler re-reads the object from Stripe and applies its current state, not the event's copy.
  */
-export function createPaymentEventsService({ repo, gateway, clock, logger, config, enqueueEvent }: PaymentEventsDeps) {
+export function createPaymentEventsService({ repo, ports, gateway, clock, logger, config, enqueueEvent }: PaymentEventsDeps) {
+  const { cancelUnpaidOrder, recordPaidCycle, holdUnpaidCycle } = ports;
   const baseUrl = publicBaseUrl(config);
   const shopToday = async () => localDateOf(clock.now(), (await repo.shopTimeZone()) ?? 'UTC');
 

@@ -9,7 +9,7 @@ import { createSubscriptionsService, type SubscriptionsServiceDeps } from './sub
 // For the subscribers and rotation modules: how a subscription and its kept deliveries read.
 export { choiceOf, keptDeliveryColumns, keptDeliveryOf } from './subscription-records.repo';
 // For the payments module: what a subscription's charges do to its deliveries.
-export { holdUnpaidCycle, recordPaidCycle, type PaidInvoice } from './subscription-billing';
+export { holdUnpaidCycle, recordPaidCycle } from './subscription-billing';
 
 export interface SubscriptionsModuleDeps {
   db: Db;

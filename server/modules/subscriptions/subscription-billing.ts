@@ -8,6 +8,7 @@ import type { RoastedBagSize } from '@shared/domain/vocabulary';
 import type { ShopSettings } from '@shared/schemas/settings';
 import type { Tx } from '../../db/client';
 import type { Logger } from '../../lib/logger';
+import type { PaidInvoice } from '../payments';
 import { keepDelivery, setAnchorDate } from './delivery-grid.repo';
 import { createDeliveryOrder, findOrderIdByInvoice, linkOrderToDelivery } from './delivery-orders.repo';
 import { choiceOf, keptDeliveries, loadScheduleContext, lockSubscription, type SubscriptionRecord } from './subscription-records.repo';
@@ -41,13 +42,6 @@ async function billingPlan(tx: Tx, subscription: SubscriptionRecord, now: Date) 
     lookAhead,
   );
   return { plan, settings, calendar };
-}
-
-export interface PaidInvoice {
-  id: string;
-  amountPaidCents: number;
-  currency: string;
-  paymentIntentId: string | null;
 }
 
 /**
