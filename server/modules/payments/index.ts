@@ -7,7 +7,7 @@ import { paymentsWebhookRoutes } from './payments.routes';
 import { createPaymentsService as createPaymentsServiceOn, type PaymentsServiceConfig } from './payments.service';
 
 export { orderIdKey, subscriptionIdKey, type PaymentsService } from './payments.service';
-export type { PaidInvoice, PaymentEventPorts } from './payment-events.service';
+export type { PaidInvoice, PaymentEventPorts } from './payment-event-ports';
 
 /** The one payments service of the app: starts Stripe checkouts for orders and subscriptions. */
 export function createPaymentsService({ db, gateway, config }: { db: Db; gateway: PaymentsGateway; config: PaymentsServiceConfig }) {
