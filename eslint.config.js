@@ -1,7 +1,21 @@
 import js from '@eslint/js';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
+import { importX } from 'eslint-plugin-import-x';
 import globals from 'globals';
 import reactHooks from 'eslint-plugin-react-hooks';
 import tseslint from 'typescript-eslint';
+
+/** Only the repos and server/db touch the database. */
+const drizzleOutsideRepos = {
+  group: ['drizzle-orm', 'drizzle-orm/*'],
+  message: 'Query the database only in *.repo.ts or server/db.',
+};
+
+/** A module in server/modules/<a>/ uses module <b> only through its front door, server/modules/<b>/index.ts. */
+const anotherModulesInternals = {
+  regex: String.raw`^\.\./(?!\.\.?/)[^/]+/`,
+  message: "Import another module through its front door ('../<module>'), never its repo, service or routes.",
+};
 
 export default tseslint.config(
   { ignores: ['dist', 'coverage', 'node_modules', 'drizzle', '.data'] },
@@ -28,15 +42,44 @@ export default tseslint.config(
     },
   },
   {
-    // Only the repos and server/db touch the database.
+    // A dependency cycle is a design smell and, with ES modules, an import that is undefined at start-up.
+    // The table groups in server/db/schema are the exception: their foreign keys name each other's
+    // tables inside `.references(() => table.id)`, which drizzle reads only after every file has loaded.
+    files: ['server/**/*.ts', 'shared/**/*.ts'],
+    ignores: ['server/db/schema/**'],
+    plugins: { 'import-x': importX },
+    settings: {
+      ...importX.flatConfigs.typescript.settings,
+      'import-x/resolver-next': [createTypeScriptImportResolver({ project: 'tsconfig.json' })],
+    },
+    rules: { 'import-x/no-cycle': 'error' },
+  },
+  {
     files: ['server/**/*.ts'],
-    ignores: ['server/**/*.repo.ts', 'server/db/**', 'server/jobs/**', 'server/index.ts', 'server/app.ts'],
+    ignores: ['server/modules/**', 'server/**/*.repo.ts', 'server/db/**'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [drizzleOutsideRepos] }] },
+  },
+  {
+    files: ['server/modules/**/*.ts'],
+    ignores: ['server/**/*.repo.ts'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [drizzleOutsideRepos, anotherModulesInternals] }] },
+  },
+  {
+    files: ['server/modules/**/*.repo.ts'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [anotherModulesInternals] }] },
+  },
+  {
+    // The composition root sees each module through its front door too.
+    files: ['server/app.ts'],
     rules: {
-      'no-restricted-imports': ['error', { paths: [{ name: 'drizzle-orm', message: 'Query the database only in *.repo.ts or server/db.' }] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: [drizzleOutsideRepos, { regex: String.raw`^\./modules/[^/]+/`, message: "Import a module through its front door ('./modules/<module>')." }] },
+      ],
     },
   },
   {
-    files: ['dev-services/**/*.ts', 'tests/**/*.ts', 'server/index.ts', 'server/db/seed*.ts'],
+    files: ['dev-services/**/*.ts', 'tests/**/*.ts', 'server/index.ts', 'server/scripts/**/*.ts', 'server/db/seed*.ts'],
     rules: { 'no-console': 'off' },
   },
 );

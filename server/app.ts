@@ -3,88 +3,38 @@ import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
-import type { Config } from './config';
-import type { Database } from './db/client';
-import type { Queue } from './jobs/queue';
-import type { Clock } from './lib/clock';
-import type { Logger } from './lib/logger';
-import { apiNotFound, briefError, errorHandler } from './middleware/error-handler';
-import { requireClientHeader } from './middleware/require-client-header';
-import { createDevClockRepo } from './modules/dev-clock/dev-clock.repo';
-import { devClockRoutes } from './modules/dev-clock/dev-clock.routes';
-import { createDevClockService, isAdjustableClock } from './modules/dev-clock/dev-clock.service';
-import { createAccountsModule } from './modules/auth/auth.module';
-import { healthRoutes } from './modules/health/health.routes';
-import { createLotsRepo } from './modules/lots/lots.repo';
-import { lotsRoutes } from './modules/lots/lots.routes';
-import { createLotsService } from './modules/lots/lots.service';
-import type { LotListCache } from './modules/lots/lot-list-cache';
-import { storefrontRoutes } from './modules/storefront/storefront.routes';
-import { createStorefrontService } from './modules/storefront/storefront.service';
-import { createLotsAdminRepo } from './modules/lots/lots-admin.repo';
-import { greenStockRoutes, lotsAdminRoutes } from './modules/lots/lots-admin.routes';
-import { createLotsAdminService } from './modules/lots/lots-admin.service';
-import { createUploadsRepo } from './modules/uploads/uploads.repo';
-import { uploadsRoutes } from './modules/uploads/uploads.routes';
-import { createUploadsService } from './modules/uploads/uploads.service';
-import { createFileStorage } from './integrations/storage';
-import { createOutboxRepo } from './modules/outbox/outbox.repo';
-import { outboxRoutes } from './modules/outbox/outbox.routes';
-import { createOutboxService } from './modules/outbox/outbox.service';
+import type { AppDeps } from './app-deps';
 import { createPaymentsGateway } from './integrations/payments';
-import { createPaymentEventsService } from './modules/payments/payment-events.service';
-import { createPaymentsRepo } from './modules/payments/payments.repo';
-import { paymentsWebhookRoutes } from './modules/payments/payments.routes';
-import { createPaymentsService, shopBaseUrl } from './modules/payments/payments.service';
-import { loadShopSettings } from './modules/settings/settings.repo';
-import { createCheckoutRepo } from './modules/checkout/checkout.repo';
-import { createShippingRepo } from './modules/shipping/shipping.repo';
-import { shippingRoutes } from './modules/shipping/shipping.routes';
-import { checkoutRoutes } from './modules/checkout/checkout.routes';
-import { createCheckoutService } from './modules/checkout/checkout.service';
-import { createSubscriptionsRepo } from './modules/subscriptions/subscriptions.repo';
-import { subscriptionCheckoutRoutes, subscriptionsRoutes } from './modules/subscriptions/subscriptions.routes';
-import { createSubscriptionsService } from './modules/subscriptions/subscriptions.service';
+import { createFileStorage } from './integrations/storage';
 import { subscriptionStripeSyncJob } from './jobs/subscription-stripe-sync';
 import { sendJob, sendJobsDueBetween } from './jobs/registry';
-import { refuseUnstorableText } from './middleware/refuse-unstorable-text';
-import { applyPaymentEventJob } from './jobs/payment-events';
+import { applyPaymentEventJob, paymentEventPorts } from './jobs/payment-events';
 import { jobs } from './jobs/workers';
-import { createOrdersRepo } from './modules/orders/orders.repo';
-import { ordersRoutes } from './modules/orders/orders.routes';
-import { createRoasteryServices, roasteryRoutes } from './modules/roastery/roastery.routes';
-import { createOrdersService } from './modules/orders/orders.service';
-import { createSubscriptionPreviewRepo } from './modules/subscription-preview/subscription-preview.repo';
-import { subscriptionPreviewRoutes } from './modules/subscription-preview/subscription-preview.routes';
-import { createSubscribersRepo } from './modules/subscribers/subscribers.repo';
-import { subscribersRoutes } from './modules/subscribers/subscribers.routes';
-import { createSubscribersService } from './modules/subscribers/subscribers.service';
-import { createAuditRepo } from './modules/audit/audit.repo';
-import { createAuditTrail } from './modules/audit/audit-trail';
-import { createRotationRepo } from './modules/rotation/rotation.repo';
-import { rotationRoutes } from './modules/rotation/rotation.routes';
-import { createRotationService } from './modules/rotation/rotation.service';
-import { createSubscriptionPreviewService } from './modules/subscription-preview/subscription-preview.service';
-import { createPackingRepo } from './modules/packing/packing.repo';
-import { packingRoutes } from './modules/packing/packing.routes';
-import { createPackingService } from './modules/packing/packing.service';
-import { createRefundsRepo } from './modules/packing/refunds.repo';
-import { createRefundsService } from './modules/packing/refunds.service';
-import { createTraceRepo } from './modules/trace/trace.repo';
-import { traceRoutes } from './modules/trace/trace.routes';
-import { createTraceService } from './modules/trace/trace.service';
-
-export interface AppDeps {
-  config: Config;
-  database: Database;
-  logger: Logger;
-  /** With RESTDAY_TEST_CLOCK on, an AdjustableClock (createAdjustableClock) that POST /api/dev/clock moves. */
-  clock: Clock;
-  /** Absent in API-only test apps; health then reports the queue as stopped. */
-  queue?: Queue;
-  /** The lot list kept in memory by a server process; API-only test apps read the database each time. */
-  lotListCache?: LotListCache;
-}
+import type { ApiModule } from './lib/api-module';
+import { apiNotFound, briefError, errorHandler } from './middleware/error-handler';
+import { refuseUnstorableText } from './middleware/refuse-unstorable-text';
+import { requireClientHeader } from './middleware/require-client-header';
+import { createAccountModule } from './modules/account';
+import { auditDenials, createAudit } from './modules/audit';
+import { createAuthModule } from './modules/auth';
+import { createCheckoutModule } from './modules/checkout';
+import { createDevClockModule, isAdjustableClock } from './modules/dev-clock';
+import { createHealthModule } from './modules/health';
+import { createLotsModule } from './modules/lots';
+import { createOrdersModule } from './modules/orders';
+import { createOutboxModule } from './modules/outbox';
+import { createPackingModule } from './modules/packing';
+import { createPaymentsService, createPaymentsWebhookModule } from './modules/payments';
+import { createRoasteryModule } from './modules/roastery';
+import { createRotationModule } from './modules/rotation';
+import { createShippingModule } from './modules/shipping';
+import { createStorefront } from './modules/storefront';
+import { createSubscribersModule } from './modules/subscribers';
+import { createSubscriptionPreviewModule } from './modules/subscription-preview';
+import { createSubscriptionsModule } from './modules/subscriptions';
+import { createTeamModule } from './modules/team';
+import { createTraceModule } from './modules/trace';
+import { createUploadsModule } from './modules/uploads';
 
 const requestIdPattern = /^[\w-]{8,64}$/;
 
@@ -145,19 +95,27 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const api = express.Router();
-  const paymentsGateway = createPaymentsGateway(config, 'request');
-  const paymentsRepo = createPaymentsRepo(database.db);
+  const mount = (module: ApiModule) => {
+    for (const { path: mountPath, router } of module.mounts) api.use(mountPath, router);
+  };
+  const { clock, queue } = deps;
+  const db = database.db;
+
+  // Shared services, built once.
+  const gateway = createPaymentsGateway(config, 'request');
+  const payments = createPaymentsService({ db, gateway, config });
+  const audit = createAudit({ db, logger, clock });
+  const storage = createFileStorage(config.UPLOADS_DIR);
+
   // Before express.json and the client-header check: Stripe signs the raw body, and that signature is its authentication.
-  const { queue: jobQueue } = deps;
-  const enqueueEvent = jobQueue
+  // Without a queue (API-only test apps) the webhook applies each event before it answers.
+  const enqueueEvent = queue
     ? async (eventId: string) => {
-        await sendJob(jobQueue, applyPaymentEventJob, { eventId }, { singletonKey: eventId });
+        await sendJob(queue, applyPaymentEventJob, { eventId }, { singletonKey: eventId });
       }
     : undefined;
-  api.use(
-    '/payments',
-    paymentsWebhookRoutes(createPaymentEventsService({ repo: paymentsRepo, gateway: paymentsGateway, clock: deps.clock, logger, config, ...(enqueueEvent ? { enqueueEvent } : {}) })),
-  );
+  mount(createPaymentsWebhookModule({ db, ports: paymentEventPorts, gateway, clock, logger, config, enqueueEvent }));
+
   // Personal and staff answers must never sit in a shared cache; public reads that may be kept say so themselves.
   api.use((_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
@@ -166,71 +124,51 @@ export function createApp(deps: AppDeps): Express {
   api.use(express.json({ limit: '100kb' }));
   api.use(refuseUnstorableText);
   api.use(requireClientHeader(config));
-  api.use('/health', healthRoutes(deps));
-  const accounts = createAccountsModule(deps);
+  mount(createHealthModule(deps));
+  const auth = createAuthModule({ config, db, logger, clock, audit });
   // Every router after this line sees req.user; guard each non-public route with requireRole / requireUser.
-  api.use(accounts.loadSession);
-  for (const [mountPath, router] of accounts.routers) api.use(mountPath, router);
-  const lotsService = createLotsService(createLotsRepo(database.db), deps.lotListCache);
-  api.use('/lots', lotsRoutes(lotsService));
-  api.use('/shipping', shippingRoutes(createShippingRepo(database.db)));
-  const fileStorage = createFileStorage(config.UPLOADS_DIR);
-  const lotsAdmin = createLotsAdminService(createLotsAdminRepo(database.db), fileStorage, deps.clock);
-  api.use('/lots', lotsAdminRoutes(lotsAdmin));
-  api.use('/roastery/green-stock', greenStockRoutes(lotsAdmin));
-  api.use('/uploads', uploadsRoutes(createUploadsService(createUploadsRepo(database.db), fileStorage)));
-  api.use('/roastery/outbox', outboxRoutes(createOutboxService(createOutboxRepo(database.db))));
-  api.use('/roastery', subscribersRoutes(createSubscribersService({ repo: createSubscribersRepo(database.db), clock: deps.clock })));
-  api.use(
-    '/roastery/rotation',
-    rotationRoutes(
-      createRotationService({
-        repo: createRotationRepo(database.db),
-        clock: deps.clock,
-        audit: createAuditTrail({ repo: createAuditRepo(database.db), logger, clock: deps.clock }),
-      }),
-    ),
-  );
-  const payments = createPaymentsService({ repo: paymentsRepo, gateway: paymentsGateway, config });
-  api.use('/checkout', checkoutRoutes(createCheckoutService({ repo: createCheckoutRepo(database.db), payments, clock: deps.clock })));
-  const subscriptionsService = createSubscriptionsService({
-    repo: createSubscriptionsRepo(database.db),
-    payments,
-    clock: deps.clock,
-    // The Stripe side follows in a job; without a queue (API-only tests) the scheduled sweep or a test pushes it.
-    onChanged: async (subscriptionId) => {
-      if (deps.queue) await sendJob(deps.queue, subscriptionStripeSyncJob, { subscriptionId });
-    },
-  });
-  api.use('/checkout', subscriptionCheckoutRoutes(subscriptionsService));
-  api.use(ordersRoutes(createOrdersService(createOrdersRepo(database.db))));
-  // Before the subscriptions router, so /subscriptions/preview is never read as a subscription id.
-  api.use('/subscriptions', subscriptionPreviewRoutes(createSubscriptionPreviewService({ repo: createSubscriptionPreviewRepo(database.db), clock: deps.clock })));
-  api.use('/subscriptions', subscriptionsRoutes(subscriptionsService));
-  api.use('/roastery', roasteryRoutes(createRoasteryServices(database.db)));
-  api.use(
-    packingRoutes(
-      createPackingService({ repo: createPackingRepo(database.db), clock: deps.clock }),
-      createRefundsService({ repo: createRefundsRepo(database.db), gateway: paymentsGateway }),
-    ),
-  );
-  api.use(traceRoutes(createTraceService(createTraceRepo(database.db))));
+  api.use(auth.loadSession);
+
+  const { sessions, throttles } = auth;
+  const lots = createLotsModule({ db, storage, clock, listCache: deps.lotListCache });
+  const modules: ApiModule[] = [
+    auth,
+    createAccountModule({ config, db, audit, sessions, throttles }),
+    createTeamModule({ config, db, clock, audit, sessions, throttles }),
+    lots,
+    createShippingModule({ db }),
+    createUploadsModule({ db, storage }),
+    createOutboxModule({ db }),
+    createSubscribersModule({ db, clock }),
+    createRotationModule({ db, clock, audit }),
+    createCheckoutModule({ db, payments, clock }),
+    createOrdersModule({ db, gateway }),
+    // Before the subscriptions module, so /subscriptions/preview is never read as a subscription id.
+    createSubscriptionPreviewModule({ db, clock }),
+    createSubscriptionsModule({
+      db,
+      payments,
+      clock,
+      // The Stripe side follows in a job; without a queue (API-only tests) the scheduled sweep or a test pushes it.
+      onChanged: async (subscriptionId) => {
+        if (queue) await sendJob(queue, subscriptionStripeSyncJob, { subscriptionId });
+      },
+    }),
+    createRoasteryModule({ db }),
+    createPackingModule({ db, clock }),
+    createTraceModule({ db }),
+  ];
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
-  if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(deps.clock)) {
-    const { queue } = deps;
+  if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(clock)) {
     const runDueJobs = queue ? (from: Date, to: Date) => sendJobsDueBetween(queue, jobs, from, to) : undefined;
-    api.use('/dev/clock', devClockRoutes(createDevClockService(deps.clock, createDevClockRepo(database.db), logger, runDueJobs)));
+    modules.push(createDevClockModule({ clock, db, logger, runDueJobs }));
   }
+  modules.forEach(mount);
   api.use(apiNotFound);
-  api.use(accounts.auditDenials);
+  api.use(auditDenials(audit));
   app.use('/api', api);
 
-  app.use(
-    storefrontRoutes(
-      createStorefrontService({ lots: lotsService, baseUrl: shopBaseUrl(config), currency: async () => (await loadShopSettings(database.db)).settings.currency }),
-      { staticDir: config.STATIC_DIR, baseUrl: shopBaseUrl(config) },
-    ),
-  );
+  app.use(createStorefront({ config, db, lots: lots.catalogue }));
 
   app.use(errorHandler);
   return app;

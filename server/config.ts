@@ -75,6 +75,11 @@ export const configSchema = z
 
 export type Config = z.infer<typeof configSchema>;
 
+/** Where customers reach the shop (links in e-mails, Stripe's return pages), without a trailing slash. */
+export function publicBaseUrl(config: Pick<Config, 'PUBLIC_URL' | 'HOST' | 'PORT'>): string {
+  return (config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}`).replace(/\/+$/, '');
+}
+
 export class ConfigError extends Error {
   constructor(readonly problems: { key: string; message: string }[]) {
     super(`Restday cannot start: ${problems.map((problem) => `${problem.key} ${problem.message}`).join('; ')}`);

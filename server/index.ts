@@ -7,7 +7,7 @@ import { startWorkers, type Workers } from './jobs/workers';
 import { createAdjustableClock, systemClock } from './lib/clock';
 import { createLogger, type Logger } from './lib/logger';
 import { isMainModule, runMain } from './lib/run-main';
-import { startLotListCache } from './modules/lots/lot-list-cache';
+import { startLotListCache } from './modules/lots';
 
 export interface RunningServer {
   url: string;

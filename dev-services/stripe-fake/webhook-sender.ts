@@ -1,5 +1,6 @@
 // Sends each event to the webhook endpoint, signed as Stripe signs it, and retries with
 // exponential backoff until the endpoint answers 2xx (or the attempts run out).
+import { backoffDelayMs } from '../../shared/domain/backoff';
 import { signatureHeader } from './signature';
 import type { Delivery, DeliveryAttempt, Store } from './store';
 import type { StripeEvent } from './stripe-objects';
@@ -17,7 +18,7 @@ export interface RetryPolicy {
 export const defaultRetryPolicy: RetryPolicy = { initialDelayMs: 1000, maxDelayMs: 60_000, maxAttempts: 40, timeoutMs: 10_000 };
 
 export function retryDelayMs(policy: RetryPolicy, failedAttempts: number): number {
-  return Math.min(policy.initialDelayMs * 2 ** Math.max(0, failedAttempts - 1), policy.maxDelayMs);
+  return backoffDelayMs(policy.initialDelayMs, policy.maxDelayMs, failedAttempts);
 }
 
 export function createWebhookSender(options: { store: Store; secret: string; endpointUrl: string | null; retry: RetryPolicy }) {

@@ -1,4 +1,5 @@
 import pg from 'pg';
+import { backoffDelayMs } from '@shared/domain/backoff';
 import type { Logger } from '../lib/logger';
 
 export interface Listener {
@@ -38,7 +39,7 @@ export function startListener(options: {
       if (stopped) return;
       failures += 1;
       if (failures === 1 || failures % 20 === 0) logger.warn({ err: error }, 'database listener disconnected; reconnecting');
-      retryTimer = setTimeout(() => void connect(), Math.min(5000, 250 * 2 ** Math.min(failures, 5)));
+      retryTimer = setTimeout(() => void connect(), backoffDelayMs(500, 5000, failures));
       retryTimer.unref();
     };
     next.on('error', drop);

@@ -1,14 +1,18 @@
 import { createPaymentsGateway } from '../integrations/payments';
-import { createPaymentEventsService } from '../modules/payments/payment-events.service';
-import { createPaymentsRepo } from '../modules/payments/payments.repo';
+import { cancelUnpaidOrder } from '../modules/checkout';
+import { createPaymentEvents, type PaymentEventPorts } from '../modules/payments';
+import { holdUnpaidCycle, recordPaidCycle } from '../modules/subscriptions';
 import type { JobContext } from './registry';
 import { defineJob } from './registry';
 
 /** How long an inbox event may wait for its job before the sweep applies it itself. */
 const SWEEP_AFTER_MS = 60_000;
 
+/** What an applied payment event changes in the checkout and subscriptions modules. */
+export const paymentEventPorts: PaymentEventPorts = { cancelUnpaidOrder, recordPaidCycle, holdUnpaidCycle };
+
 function paymentEvents({ db, clock, logger, config }: JobContext) {
-  return createPaymentEventsService({ repo: createPaymentsRepo(db), gateway: createPaymentsGateway(config), clock, logger, config });
+  return createPaymentEvents({ db, ports: paymentEventPorts, gateway: createPaymentsGateway(config), clock, logger, config });
 }
 
 /**

@@ -1,4 +1,4 @@
-/** The one error type routes and services throw; the error handler turns it into API.md's body. */
+/** The one error type routes and services throw; the error handler turns it into the API's error body `{ error: { code, message, fields? } }`. */
 export class AppError extends Error {
   constructor(
     readonly status: number,

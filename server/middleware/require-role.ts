@@ -2,7 +2,7 @@ import type { RequestHandler } from 'express';
 import type { Role } from '@shared/domain/vocabulary';
 import { AppError } from '../lib/app-error';
 
-/** Who is signed in, as the session middleware (server/modules/auth/load-session.ts) found them on this request. */
+/** Who is signed in, as the session middleware (the auth module's loadSession) found them on this request. */
 export interface SessionUser {
   id: string;
   email: string;
@@ -21,17 +21,32 @@ declare module 'express-serve-static-core' {
 
 const signInRequired = () => new AppError(401, 'sign_in_required', 'Please sign in to continue.');
 
+/** Who may call a route: anyone, any signed-in account, staff (and the owner), or the owner alone. */
+export type AccessRule = 'public' | 'customer' | 'staff' | 'owner';
+
+const accessRules = new WeakMap<RequestHandler, AccessRule>();
+
+/** The rule a guard enforces, or undefined for a handler that is not a guard (`npm run routes` reads it). */
+export const accessRuleOf = (handler: RequestHandler): AccessRule | undefined => accessRules.get(handler);
+
+function guard(rule: AccessRule, handler: RequestHandler): RequestHandler {
+  accessRules.set(handler, rule);
+  return handler;
+}
+
 /** Any signed-in account; routes behind it must still keep each customer to their own records. */
-export const requireUser: RequestHandler = (req, _res, next) => {
+export const requireUser: RequestHandler = guard('customer', (req, _res, next) => {
   next(req.user ? undefined : signInRequired());
-};
+});
 
 /** Signed in with one of `roles` (list every role allowed: `requireRole('staff', 'owner')`). */
 export function requireRole(...roles: Role[]): RequestHandler {
   const allowed = new Set(roles);
-  return (req, _res, next) => {
+  // The least role allowed names the rule: staff routes are open to the owner too.
+  const rule: AccessRule = allowed.has('customer') ? 'customer' : allowed.has('staff') ? 'staff' : 'owner';
+  return guard(rule, (req, _res, next) => {
     if (!req.user) return next(signInRequired());
     if (!allowed.has(req.user.role)) return next(new AppError(403, 'forbidden', 'Your account does not have access to this.'));
     next();
-  };
+  });
 }

@@ -166,7 +166,7 @@ describe('GET /api/roastery/days/:date/roast-list.csv and .pdf', () => {
     const response = await staff.get(`/api/roastery/days/${date}/roast-list.csv`);
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toMatch(/^text\/csv/);
-    expect(response.headers['content-disposition']).toBe(`attachment; filename="roast-list-${date}.csv"`);
+    expect(response.headers['content-disposition']).toBe(`attachment; filename=roast-list-${date}.csv`);
     const [header, row, ...rest] = response.text.trim().split('\n');
     expect(header).toBe(
       'roast_date,lot_code,lot_name,roast_level,bags,roasted_grams,loss_pct,loss_source,green_grams,batch_count,batch_green_grams,recorded_batches,recorded_green_grams,recorded_roasted_grams,to_roast_roasted_grams,to_roast_green_grams,to_roast_batch_green_grams,lot_pull_green_grams,lot_stock_grams,lot_shortfall_grams',

@@ -121,7 +121,7 @@ describe('GET /api/roastery/subscribers.csv', () => {
     const response = await staff.get('/api/roastery/subscribers.csv').query({ q: tag, status: 'active' });
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
-    expect(response.headers['content-disposition']).toBe('attachment; filename="restday-subscribers.csv"');
+    expect(response.headers['content-disposition']).toBe('attachment; filename=restday-subscribers.csv');
     // No cell here holds a comma, quote or line break, so the lines split plainly.
     const [header, ...rows] = response.text.trimEnd().split('\n').map((line) => line.split(','));
     expect(header).toEqual([...subscriberCsvColumns]);

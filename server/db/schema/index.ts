@@ -1,4 +1,4 @@
-// The whole Restday schema: every table, enum and relation. `import * as schema from './schema/index'`.
+// The whole Restday schema: every table and enum. `import * as schema from './schema/index'`.
 export * from './enums';
 export type { AddressSnapshot } from './common';
 export * from './accounts';
@@ -9,4 +9,3 @@ export * from './roastery';
 export * from './journal';
 export * from './messaging';
 export * from './payments';
-export * from './relations';

@@ -83,7 +83,7 @@ export const orders = pgTable(
  * One line of an order. Green lines name a lot; roasted lines carry the roast level, grind and brew
  * method. A roasted line for Roaster's Rotation has lotId null: the lot is the rotation pick for the
  * order's roast date (rotation_picks), and the bag allocations record what was really roasted.
- * fillGrams is the bag size's declared quantity rounded up to a whole gram (PRODUCT.md).
+ * fillGrams is the bag size's declared quantity rounded up to a whole gram, so no bag is ever short.
  */
 export const orderItems = pgTable(
   'order_items',

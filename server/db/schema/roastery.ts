@@ -11,7 +11,8 @@ import { orderItems, orders } from './orders';
 
 /**
  * The shop's settings: exactly one row (id = 1). Weekdays are ISO numbers (1 = Monday … 7 = Sunday)
- * in the shop's time zone. Column defaults are the product defaults from TRADE.md.
+ * in the shop's time zone. Column defaults are the shop's starting settings (defaultShopSettings)
+ * and the default roast loss model.
  */
 export const shopSettings = pgTable(
   'shop_settings',

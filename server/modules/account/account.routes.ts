@@ -4,9 +4,7 @@ import { addressInputSchema, emailChangeSchema, passwordChangeSchema, profileUpd
 import type { UserResponse } from '@shared/schemas/auth';
 import type { Config } from '../../config';
 import { requireUser } from '../../middleware/require-role';
-import { writeSessionCookie } from '../auth/session-tokens';
-import { requestContext } from '../auth/sessions.service';
-import type { AuthThrottles } from '../auth/throttles';
+import { type AuthThrottles, requestContext, writeSessionCookie } from '../auth';
 import type { AccountService } from './account.service';
 
 const addressParams = z.object({ id: z.uuid('No such address.') });

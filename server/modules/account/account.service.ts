@@ -3,16 +3,13 @@ import type { User } from '@shared/schemas/auth';
 import { AppError } from '../../lib/app-error';
 import { hashPassword, verifyPassword } from '../../lib/password-hashing';
 import type { SessionUser } from '../../middleware/require-role';
-import type { AuditTrail } from '../audit/audit-trail';
-import { createAuthRepo, type AuthRepo } from '../auth/auth.repo';
-import { toUser } from '../auth/auth.service';
-import { assertAcceptablePassword } from '../auth/password-policy';
-import type { RequestContext, SessionsService, StartedSession } from '../auth/sessions.service';
+import type { AuditTrail } from '../audit';
+import { assertAcceptablePassword, createUserAccounts, type RequestContext, type SessionsService, type StartedSession, toUser, type UserAccounts } from '../auth';
 import type { AccountRepo } from './account.repo';
 
 export interface AccountServiceDeps {
   repo: AccountRepo;
-  authRepo: AuthRepo;
+  authRepo: UserAccounts;
   sessions: SessionsService;
   audit: AuditTrail;
 }
@@ -53,7 +50,7 @@ export function createAccountService({ repo, authRepo, sessions, audit }: Accoun
       assertAcceptablePassword(change.newPassword, user, 'newPassword');
       const passwordHash = await hashPassword(change.newPassword);
       const session = await authRepo.transaction(async (tx) => {
-        const txRepo = createAuthRepo(tx);
+        const txRepo = createUserAccounts(tx);
         await txRepo.updateUser(user.id, { passwordHash });
         await sessions.endAllFor(user.id, txRepo);
         return sessions.start(user, context, txRepo);

@@ -4,7 +4,7 @@ import type { Config } from '../../config';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
-import type { AuditTrail } from '../audit/audit-trail';
+import type { AuditTrail } from '../audit';
 import { tokenDigest } from './session-tokens';
 import type { ThrottleRepo } from './throttle.repo';
 

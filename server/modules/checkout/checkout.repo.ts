@@ -4,7 +4,7 @@ import type { Db, DbOrTx } from '../../db/client';
 import { lotPriceBreaks, lots, orderItems, orders, stockMovements } from '../../db/schema/index';
 import type { GreenBagSize } from '@shared/domain/vocabulary';
 import type { ShopSettings } from '@shared/schemas/settings';
-import { loadShopSettings } from '../settings/settings.repo';
+import { loadShopSettings } from '../settings';
 
 export interface NewGreenOrder {
   userId: string;

@@ -4,8 +4,8 @@ import type { GreenCheckoutRequest, GreenCheckoutResponse } from '@shared/schema
 import type { Clock } from '../../lib/clock';
 import { AppError } from '../../lib/app-error';
 import type { SessionUser } from '../../middleware/require-role';
-import type { PaymentsService } from '../payments/payments.service';
-import { assertBagsShip } from '../shipping/shipping.service';
+import type { PaymentsService } from '../payments';
+import { assertBagsShip } from '../shipping';
 import { StockShortfall, type CheckoutRepo, type ShortLot } from './checkout.repo';
 
 export interface CheckoutServiceDeps {

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import type { AppDeps } from '../../app';
+import type { AppDeps } from '../../app-deps';
 
 export function healthRoutes({ database, queue }: Pick<AppDeps, 'database' | 'queue'>): Router {
   const router = Router();

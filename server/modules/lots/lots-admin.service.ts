@@ -14,7 +14,7 @@ import type { FileStorage } from '../../integrations/storage';
 import type { UploadKind } from '../../db/schema/enums';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
-import { detectFileType, fileSignatures, type FileType } from '../uploads/file-signature';
+import { detectFileType, fileSignatures, type FileType } from '../uploads';
 import { lotDetailOf, uploadUrl } from './lot-detail';
 import type { LotsAdminRepo, NewUpload } from './lots-admin.repo';
 

@@ -1,7 +1,7 @@
 import { and, asc, count, desc, eq, gte, lt, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lots, orderItems, orders, shopSettings, users } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { loadShopSettings } from '../settings';
 import type { OrderSort } from '@shared/schemas/orders';
 import type { OrderKind, OrderStatus } from '@shared/domain/vocabulary';
 

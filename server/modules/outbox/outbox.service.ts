@@ -1,6 +1,7 @@
 import { isEmailTemplateName, renderEmail, type EmailContext } from '../../../emails/index';
+import { backoffDelayMs } from '@shared/domain/backoff';
 import type { OutboxItem, OutboxListQuery } from '@shared/schemas/outbox';
-import type { Config } from '../../config';
+import { publicBaseUrl, type Config } from '../../config';
 import { MailError, type Mailer } from '../../integrations/mailer';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
@@ -98,7 +99,7 @@ export function createOutboxRelay(deps: OutboxRelayDeps) {
     }
     return {
       shop: { name: shopCache.shopName, postalAddress: config.SHOP_POSTAL_ADDRESS },
-      baseUrl: config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}`,
+      baseUrl: publicBaseUrl(config),
       timeZone: shopCache.timeZone,
     };
   }
@@ -107,7 +108,7 @@ export function createOutboxRelay(deps: OutboxRelayDeps) {
   const nowMs = () => Math.max(clock.now().getTime(), Date.now());
 
   function retryDelayMs(attempt: number): number {
-    const plain = Math.min(policy.maxDelayMs, policy.baseDelayMs * 2 ** Math.max(0, attempt - 1));
+    const plain = backoffDelayMs(policy.baseDelayMs, policy.maxDelayMs, attempt);
     return Math.round(plain * (0.8 + Math.random() * 0.4));
   }
 
@@ -125,7 +126,7 @@ export function createOutboxRelay(deps: OutboxRelayDeps) {
           logger.error({ err: error, outboxId: row.id }, 'e-mail was sent but could not be marked sent; it will be sent again when its lease runs out');
           return;
         }
-        await sleep(Math.min(5_000, 250 * 2 ** attempt));
+        await sleep(backoffDelayMs(500, 5_000, attempt));
       }
     }
   }

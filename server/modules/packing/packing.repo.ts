@@ -2,7 +2,7 @@ import { and, asc, desc, eq, inArray, or, sql, type SQL } from 'drizzle-orm';
 import type { Db, DbOrTx, Tx } from '../../db/client';
 import { bagAllocations, batches, deliveries, lots, orderItems, orders, users } from '../../db/schema/index';
 import { roastersRotationName, type DeliveryStatus, type OrderStatus, type RoastLevel } from '@shared/domain/vocabulary';
-import { loadShopSettings } from '../settings/settings.repo';
+import { loadShopSettings } from '../settings';
 import { orderLineLotId } from '../../db/order-line-lot';
 
 /** Orders a ship day's Pack List shows: paid and on their way through the roastery, or already out. */

@@ -6,7 +6,7 @@ import { roastLevelLabels, type OrderStatus } from '@shared/domain/vocabulary';
 import type { PackBag, PackListResponse, PackOrder } from '@shared/schemas/packing';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
-import { queueEmail } from '../outbox/outbox.repo';
+import { queueEmail } from '../outbox';
 import { allocateBags, type LineToFill, type Shortfall } from './bag-allocation';
 import { renderLabelsPdf } from './labels-pdf';
 import type { PackingRepo, PackingTransaction, PackListRow } from './packing.repo';

@@ -2,8 +2,8 @@ import { and, asc, between, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { emailOutbox, lots, orderItems, orders, users } from '../../db/schema/index';
 import { roastersRotationName } from '@shared/domain/vocabulary';
-import { queueEmail, type QueuedEmail } from '../outbox/outbox.repo';
-import { loadShopSettings } from '../settings/settings.repo';
+import { queueEmail, type QueuedEmail } from '../outbox';
+import { loadShopSettings } from '../settings';
 import { orderLineLotId } from '../../db/order-line-lot';
 
 export const restDayDedupeKey = (orderId: string) => `rest-day:${orderId}`;

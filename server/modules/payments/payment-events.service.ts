@@ -6,19 +6,20 @@ import { localDateOf } from '@shared/domain/shop-time';
 import type { WebhookReceipt } from '@shared/schemas/payments';
 import { subscriptionStatusOf, type PaymentStanding } from '@shared/domain/subscription-status';
 import { roastedBagSizes, type BagSize, type RoastedBagSize } from '@shared/domain/vocabulary';
+import { publicBaseUrl } from '../../config';
 import type { PaymentsGateway } from '../../integrations/payments';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
-import { cancelUnpaidOrder } from '../checkout/checkout.repo';
-import { queueEmail } from '../outbox/outbox.repo';
-import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
-import { holdUnpaidCycle, recordPaidCycle, type PaidInvoice } from '../subscriptions/subscription-billing';
+import { queueEmail } from '../outbox';
+import { loadCalendarOverrides, loadShopSettings } from '../settings';
+import type { PaidInvoice, PaymentEventPorts } from './payment-event-ports';
 import type { PaymentsRepo, PaymentsTransaction, SubscriptionForPayment } from './payments.repo';
-import { orderIdKey, shopBaseUrl, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
+import { orderIdKey, subscriptionIdKey, type PaymentsServiceConfig } from './payments.service';
 
 export interface PaymentEventsDeps {
   repo: PaymentsRepo;
+  ports: PaymentEventPorts;
   gateway: PaymentsGateway;
   clock: Clock;
   logger: Logger;
@@ -106,8 +107,9 @@ async function greenShipDate(tx: PaymentsTransaction, paidAt: Date): Promise<str
  * transaction as its effect, so a redelivered event changes nothing. Events arrive in any order, so
  * each handler re-reads the object from Stripe and applies its current state, not the event's copy.
  */
-export function createPaymentEventsService({ repo, gateway, clock, logger, config, enqueueEvent }: PaymentEventsDeps) {
-  const baseUrl = shopBaseUrl(config);
+export function createPaymentEventsService({ repo, ports, gateway, clock, logger, config, enqueueEvent }: PaymentEventsDeps) {
+  const { cancelUnpaidOrder, recordPaidCycle, holdUnpaidCycle } = ports;
+  const baseUrl = publicBaseUrl(config);
   const shopToday = async () => localDateOf(clock.now(), (await repo.shopTimeZone()) ?? 'UTC');
 
   async function completeOrderCheckout(session: Stripe.Checkout.Session): Promise<Effect | undefined> {

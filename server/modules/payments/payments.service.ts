@@ -1,7 +1,7 @@
 import type Stripe from 'stripe';
 import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, type BagSize } from '@shared/domain/vocabulary';
-import type { Config } from '../../config';
+import { publicBaseUrl, type Config } from '../../config';
 import type { PaymentsGateway } from '../../integrations/payments';
 import { AppError } from '../../lib/app-error';
 import type { PaymentsRepo } from './payments.repo';
@@ -29,10 +29,6 @@ export interface PaymentsServiceDeps {
   config: PaymentsServiceConfig;
 }
 
-export function shopBaseUrl(config: Pick<Config, 'PUBLIC_URL' | 'HOST' | 'PORT'>): string {
-  return (config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}`).replace(/\/$/, '');
-}
-
 const declaredSize = (size: BagSize) => `${bagSizeDeclarations[size].amount} ${bagSizeDeclarations[size].unit}`;
 
 /**
@@ -40,7 +36,7 @@ const declaredSize = (size: BagSize) => `${bagSizeDeclarations[size].amount} ${b
  * (payment-events.service.ts), never the payer's return to the success URL.
  */
 export function createPaymentsService({ repo, gateway, config }: PaymentsServiceDeps) {
-  const baseUrl = shopBaseUrl(config);
+  const baseUrl = publicBaseUrl(config);
   // Stripe checks this against its own time, so it is real time, never the shop's test clock.
   const expiresAt = () => Math.floor(Date.now() / 1000) + config.STRIPE_CHECKOUT_EXPIRES_MINUTES * 60;
   /**

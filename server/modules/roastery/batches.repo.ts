@@ -2,7 +2,7 @@ import { and, asc, eq, gte, sql } from 'drizzle-orm';
 import type { RoastLevel } from '@shared/domain/vocabulary';
 import type { Db, DbOrTx } from '../../db/client';
 import { batches, lots, stockMovements, users } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { loadShopSettings } from '../settings';
 
 export interface NewBatch {
   /** The client's id for the batch, when it sent one; otherwise the database makes one. */

@@ -7,8 +7,8 @@ import type { CalendarDayUpdate } from '@shared/schemas/roastery';
 import type { ShopSettings } from '@shared/schemas/settings';
 import type { Db, DbOrTx } from '../../db/client';
 import { batches, deliveries, lots, orderItems, orders, roastDays, subscriptions, users } from '../../db/schema/index';
-import { queueEmail } from '../outbox/outbox.repo';
-import { loadShopSettings } from '../settings/settings.repo';
+import { queueEmail } from '../outbox';
+import { loadShopSettings } from '../settings';
 import type { ClosurePlan, DeliveryOnClosedDay, LossHistoryRow, OrderOnClosedDay, ParcelToRedate, PlannedGroup, ShipMove } from './calendar-planning';
 
 export interface RoastedOnDay {

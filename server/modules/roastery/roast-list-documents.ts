@@ -66,7 +66,7 @@ export function roastListCsv(list: RoastListResponse): string {
 export const paperSizes = { letter: 'LETTER', a4: 'A4' } as const;
 export type Paper = keyof typeof paperSizes;
 
-/** The commercial-roasting cautions (PRODUCT.md), printed under every Roast List. */
+/** The safety cautions of commercial roasting (fire, fumes, licensed installation), printed under every Roast List. */
 export const roastingCautions = [
   'Chaff fires: chaff builds up in the chaff collector, cooling tray and ducting and burns easily; clear it as the maker and installer direct, and never leave a running roaster unattended.',
   'Carbon monoxide and smoke: the roaster gives off both, and freshly roasted coffee keeps giving off carbon monoxide as it rests; keep the exhaust running and the room ventilated.',

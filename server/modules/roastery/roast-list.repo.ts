@@ -2,7 +2,7 @@ import { eq, sql } from 'drizzle-orm';
 import type { RoastLevel } from '@shared/domain/vocabulary';
 import type { Db } from '../../db/client';
 import { roastDays } from '../../db/schema/index';
-import { loadShopSettings } from '../settings/settings.repo';
+import { loadShopSettings } from '../settings';
 
 /**
  * One group of a roast day's bags: a lot (or an unpicked Roaster's Rotation, lotCode null), a level

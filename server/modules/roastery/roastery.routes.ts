@@ -12,17 +12,13 @@ import {
   type RoastListResponse,
 } from '@shared/schemas/roastery';
 import { shopSettingsSchema, type ShopSettings } from '@shared/schemas/settings';
-import type { Db } from '../../db/client';
+import { sendDownload } from '../../lib/download';
 import { requireRole } from '../../middleware/require-role';
-import { createBatchesRepo } from './batches.repo';
-import { createBatchesService, type BatchesService } from './batches.service';
-import { createCalendarRepo } from './calendar.repo';
-import { createCalendarService, type CalendarService } from './calendar.service';
+import type { BatchesService } from './batches.service';
+import type { CalendarService } from './calendar.service';
 import { paperSizes, roastListCsv, roastListPdf } from './roast-list-documents';
-import { createRoastListRepo } from './roast-list.repo';
-import { createRoastListService, type RoastListService } from './roast-list.service';
-import { createRoasterySettingsRepo } from './settings.repo';
-import { createRoasterySettingsService, type RoasterySettingsService } from './settings.service';
+import type { RoastListService } from './roast-list.service';
+import type { RoasterySettingsService } from './settings.service';
 
 const staffOnly = requireRole('staff', 'owner');
 const ownerOnly = requireRole('owner');
@@ -69,17 +65,14 @@ export function roasteryRoutes(services: RoasteryServices): Router {
   router.get('/days/:date/roast-list.csv', staffOnly, async (req, res) => {
     const { date } = roastDayParamsSchema.parse(req.params);
     const { list } = await services.roastList.roastList(date);
-    res.set({ ...noStore, 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="roast-list-${date}.csv"` });
-    res.send(roastListCsv(list));
+    sendDownload(res, `roast-list-${date}.csv`, roastListCsv(list));
   });
 
   router.get('/days/:date/roast-list.pdf', staffOnly, async (req, res) => {
     const { date } = roastDayParamsSchema.parse(req.params);
     const { paper } = paperQuerySchema.parse(req.query);
     const { shopName, list } = await services.roastList.roastList(date);
-    const pdf = await roastListPdf(list, shopName, paper);
-    res.set({ ...noStore, 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="roast-list-${date}.pdf"` });
-    res.send(pdf);
+    sendDownload(res, `roast-list-${date}.pdf`, await roastListPdf(list, shopName, paper));
   });
 
   router.post('/batches', staffOnly, async (req, res) => {
@@ -93,14 +86,4 @@ export function roasteryRoutes(services: RoasteryServices): Router {
   });
 
   return router;
-}
-
-/** The Roastery's services on one database. */
-export function createRoasteryServices(db: Db): RoasteryServices {
-  return {
-    settings: createRoasterySettingsService(createRoasterySettingsRepo(db)),
-    calendar: createCalendarService(createCalendarRepo(db)),
-    roastList: createRoastListService(createRoastListRepo(db)),
-    batches: createBatchesService(createBatchesRepo(db)),
-  };
 }

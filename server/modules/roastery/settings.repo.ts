@@ -1,7 +1,7 @@
 import type { ShopSettings } from '@shared/schemas/settings';
 import type { Db } from '../../db/client';
 import { auditLog } from '../../db/schema/index';
-import { loadShopSettings, saveShopSettings, type ShopSettingsRecord } from '../settings/settings.repo';
+import { loadShopSettings, saveShopSettings, type ShopSettingsRecord } from '../settings';
 
 export interface SettingsChange {
   actorId: string;

@@ -1,8 +1,8 @@
 import { and, asc, between, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions } from '../../db/schema/index';
-import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
-import { keptDeliveryColumns } from '../subscriptions/subscriptions.repo';
+import { loadCalendarOverrides, loadShopSettings } from '../settings';
+import { keptDeliveryColumns } from '../subscriptions';
 
 /** Orders whose coffee has been roasted already. */
 const roastedOrderStatuses = ['roasted', 'packed', 'shipped'] as const;

@@ -8,9 +8,9 @@ import type { RotationPick, RotationPickResponse, RotationQuery, RotationRespons
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SessionUser } from '../../middleware/require-role';
-import type { AuditTrail } from '../audit/audit-trail';
+import type { AuditTrail } from '../audit';
 import type { RotationRepo } from './rotation.repo';
-import { choiceOf, keptDeliveryOf } from '../subscriptions/subscriptions.repo';
+import { choiceOf, keptDeliveryOf } from '../subscriptions';
 
 interface DayNeed {
   subscribers: Set<string>;

@@ -1,6 +1,6 @@
 import type { ShippingRules } from '@shared/schemas/shipping';
 import type { DbOrTx } from '../../db/client';
-import { loadShopSettings } from '../settings/settings.repo';
+import { loadShopSettings } from '../settings';
 
 /** The shipping part of the owner's settings, read fresh each time (one row). */
 export async function loadShippingRules(db: DbOrTx): Promise<ShippingRules> {

@@ -1,6 +1,6 @@
 import type { LotDetail, LotListResponse } from '@shared/schemas/lots';
 import { AppError } from '../../lib/app-error';
-import type { LotsService } from '../lots/lots.service';
+import type { LotsService } from '../lots';
 import { lotProductJsonLd, type PageHead } from './page-head';
 
 /** What the server puts into a page's HTML: its head, and the API answers its first render needs. */

@@ -1,8 +1,8 @@
 import { and, eq, gt, isNull, lt } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lots, subscriptions, users } from '../../db/schema/index';
-import { queueEmail, type QueuedEmail } from '../outbox/outbox.repo';
-import { loadShopSettings } from '../settings/settings.repo';
+import { queueEmail, type QueuedEmail } from '../outbox';
+import { loadShopSettings } from '../settings';
 
 export function createRenewalRemindersRepo(db: Db) {
   return {

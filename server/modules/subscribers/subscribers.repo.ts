@@ -4,8 +4,8 @@ import type { SubscriberSort } from '@shared/schemas/subscribers';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../db/client';
 import { deliveries, lots, orderItems, orders, rotationPicks, subscriptions, users } from '../../db/schema/index';
-import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
-import { keptDeliveryColumns } from '../subscriptions/subscriptions.repo';
+import { loadCalendarOverrides, loadShopSettings } from '../settings';
+import { keptDeliveryColumns } from '../subscriptions';
 
 export interface SubscriberFilters {
   status?: SubscriptionStatus;

@@ -1,35 +1,35 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { subscriberListQuerySchema, type SubscriberDetail, type SubscriberListResponse } from '@shared/schemas/subscribers';
+import { sendDownload } from '../../lib/download';
 import { requireRole } from '../../middleware/require-role';
 import type { SubscribersService } from './subscribers.service';
 
 const subscriberParams = z.object({ id: z.uuid('No such subscription.') });
 
-/**
- * Subscribers in the Roastery (staff): `/api/roastery/subscribers`, `…/subscribers.csv` and
- * `…/subscribers/:id`. Mounted on `/api/roastery` (the CSV path is not under `/subscribers/`).
- */
+const staff = requireRole('staff', 'owner');
+
+/** Subscribers in the Roastery (staff), mounted at `/api/roastery/subscribers`. */
 export function subscribersRoutes(service: SubscribersService): Router {
   const router = Router();
-  const staff = requireRole('staff', 'owner');
 
-  router.get('/subscribers', staff, async (req, res) => {
+  router.get('/', staff, async (req, res) => {
     res.json((await service.list(subscriberListQuerySchema.parse(req.query))) satisfies SubscriberListResponse);
   });
 
-  router.get('/subscribers.csv', staff, async (req, res) => {
-    const csv = await service.csv(subscriberListQuerySchema.parse(req.query));
-    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Content-Disposition', 'attachment; filename="restday-subscribers.csv"');
-    res.setHeader('Cache-Control', 'no-store');
-    res.send(csv);
-  });
-
-  router.get('/subscribers/:id', staff, async (req, res) => {
+  router.get('/:id', staff, async (req, res) => {
     const { id } = subscriberParams.parse(req.params);
     res.json((await service.get(id)) satisfies SubscriberDetail);
   });
 
+  return router;
+}
+
+/** The subscriber list as a CSV file (staff), mounted at `/api/roastery/subscribers.csv` (a sibling of `/subscribers`). */
+export function subscribersCsvRoutes(service: SubscribersService): Router {
+  const router = Router();
+  router.get('/', staff, async (req, res) => {
+    sendDownload(res, 'restday-subscribers.csv', await service.csv(subscriberListQuerySchema.parse(req.query)));
+  });
   return router;
 }

@@ -14,7 +14,7 @@ import {
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SubscriberFilters, SubscriberRow, SubscribersRepo } from './subscribers.repo';
-import { choiceOf, keptDeliveryOf } from '../subscriptions/subscriptions.repo';
+import { choiceOf, keptDeliveryOf } from '../subscriptions';
 
 /** Subscriptions sell roasted sizes only (a CHECK constraint keeps it so). */
 const roastedSize = (size: string) => size as RoastedBagSize;

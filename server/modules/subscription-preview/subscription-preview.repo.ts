@@ -2,7 +2,7 @@ import { and, eq, gte, inArray, sql } from 'drizzle-orm';
 import type { RoastLevel } from '@shared/domain/vocabulary';
 import type { Db } from '../../db/client';
 import { lots, orderItems, orders } from '../../db/schema/index';
-import { loadCalendarOverrides, loadShopSettings } from '../settings/settings.repo';
+import { loadCalendarOverrides, loadShopSettings } from '../settings';
 
 /** Orders whose bags claim their roast day's capacity: paid, and not cancelled or refunded. */
 const plannedStatuses = ['paid', 'held', 'roasted', 'packed', 'shipped'] as const;

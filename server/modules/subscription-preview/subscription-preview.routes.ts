@@ -3,12 +3,12 @@ import { subscriptionPreviewQuerySchema, type SubscriptionPreview } from '@share
 import type { SubscriptionPreviewService } from './subscription-preview.service';
 
 /**
- * `GET /api/subscriptions/preview` (public): the Roasted to Order builder's live price and first
- * deliveries. Mounted on `/subscriptions` before the subscriptions router, so "preview" is never read as an id.
+ * The Roasted to Order builder's live price and first deliveries (public), mounted at
+ * `/api/subscriptions/preview` ahead of the subscriptions router, so "preview" is never read as an id.
  */
 export function subscriptionPreviewRoutes(service: SubscriptionPreviewService): Router {
   const router = Router();
-  router.get('/preview', async (req, res) => {
+  router.get('/', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
     res.json((await service.preview(subscriptionPreviewQuerySchema.parse(req.query))) satisfies SubscriptionPreview);
   });

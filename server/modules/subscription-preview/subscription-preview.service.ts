@@ -9,7 +9,7 @@ import type { ShopSettings } from '@shared/schemas/settings';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SubscriptionPreviewRepo } from './subscription-preview.repo';
-import { assertBagsShip } from '../shipping/shipping.service';
+import { assertBagsShip } from '../shipping';
 
 /** Green grams a roasted weight needs at a level, by the level's default loss and the shop's overage. */
 function greenGramsFor(roastedGrams: number, level: keyof ShopSettings['lossModel'], settings: ShopSettings): number {

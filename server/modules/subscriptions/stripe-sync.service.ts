@@ -5,7 +5,9 @@ import type { Db } from '../../db/client';
 import type { PaymentsGateway } from '../../integrations/payments';
 import type { Clock } from '../../lib/clock';
 import type { Logger } from '../../lib/logger';
-import { choiceOf, createSubscriptionsRepo, deferredSkipCount, keptDeliveries, markSynced, skipsAwaitingStripe, unskipsAwaitingStripe } from './subscriptions.repo';
+import { deferredSkipCount, markSynced, skipsAwaitingStripe, unskipsAwaitingStripe } from './delivery-grid.repo';
+import { choiceOf, keptDeliveries } from './subscription-records.repo';
+import { createSubscriptionsRepo } from './subscriptions.repo';
 
 /** Metadata on the Stripe subscription naming the Restday state it holds, so a retried push after a crash is recognised. */
 export const syncMarkerKey = 'restday_sync';

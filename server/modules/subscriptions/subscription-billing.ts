@@ -8,18 +8,10 @@ import type { RoastedBagSize } from '@shared/domain/vocabulary';
 import type { ShopSettings } from '@shared/schemas/settings';
 import type { Tx } from '../../db/client';
 import type { Logger } from '../../lib/logger';
-import {
-  choiceOf,
-  createDeliveryOrder,
-  findOrderIdByInvoice,
-  keepDelivery,
-  keptDeliveries,
-  linkOrderToDelivery,
-  loadScheduleContext,
-  lockSubscription,
-  setAnchorDate,
-  type SubscriptionRecord,
-} from './subscriptions.repo';
+import type { PaidInvoice } from '../payments';
+import { keepDelivery, setAnchorDate } from './delivery-grid.repo';
+import { createDeliveryOrder, findOrderIdByInvoice, linkOrderToDelivery } from './delivery-orders.repo';
+import { choiceOf, keptDeliveries, loadScheduleContext, lockSubscription, type SubscriptionRecord } from './subscription-records.repo';
 
 /** Enough deliveries ahead to find the one a charge pays for, past skips and a pause. */
 const lookAhead = 26;
@@ -50,13 +42,6 @@ async function billingPlan(tx: Tx, subscription: SubscriptionRecord, now: Date) 
     lookAhead,
   );
   return { plan, settings, calendar };
-}
-
-export interface PaidInvoice {
-  id: string;
-  amountPaidCents: number;
-  currency: string;
-  paymentIntentId: string | null;
 }
 
 /**

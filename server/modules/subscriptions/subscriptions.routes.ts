@@ -78,10 +78,10 @@ export function subscriptionsRoutes(service: SubscriptionsService): Router {
   return router;
 }
 
-/** `POST /api/checkout/subscription`: Roasted to Order's checkout, for signed-in accounts. */
+/** Roasted to Order's checkout for signed-in accounts, mounted at `/api/checkout/subscription`. */
 export function subscriptionCheckoutRoutes(service: SubscriptionsService): Router {
   const router = Router();
-  router.post('/subscription', requireUser, async (req, res) => {
+  router.post('/', requireUser, async (req, res) => {
     const started = await service.startCheckout(req.user!, subscriptionCheckoutRequestSchema.parse(req.body));
     res.status(201).json(started satisfies SubscriptionCheckoutResponse);
   });

@@ -1,10 +1,8 @@
-import { deliveryGreenGrams, nextDelivery, planDeliveries, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
-import { quoteSubscriptionDelivery } from '@shared/domain/pricing';
-import { datesForRoastDate, type RoastCalendar, type ScheduleSettings } from '@shared/domain/roast-schedule';
+import { deliveryGreenGrams, nextDelivery, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
+import { datesForRoastDate } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
 import { subscriptionStatusOf } from '@shared/domain/subscription-status';
 import { paidDeliveryInPauseQuestion, pauseNotice, skipNotice, unskipNotice, writtenDay, type PauseOutcome } from '@shared/domain/subscription-wording';
-import { grindLabels, roastLevelLabels, type RoastLevel } from '@shared/domain/vocabulary';
 import type {
   PaidDeliveryChoice,
   Subscription,
@@ -14,29 +12,30 @@ import type {
   SubscriptionDelivery,
   SubscriptionUpdate,
 } from '@shared/schemas/subscriptions';
-import type { ShopSettings } from '@shared/schemas/settings';
-import type { Tx } from '../../db/client';
-import type { AddressSnapshot } from '../../db/schema/common';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SessionUser } from '../../middleware/require-role';
-import { queueEmail } from '../outbox/outbox.repo';
-import type { PaymentsService } from '../payments/payments.service';
-import { assertBagsShip } from '../shipping/shipping.service';
+import { queueEmail } from '../outbox';
+import type { PaymentsService } from '../payments';
+import { dropDelivery, keepDelivery } from './delivery-grid.repo';
+import { moveOrderToDelivery, reshapePaidOrder } from './delivery-orders.repo';
+import { choiceOf, keptDeliveries, loadScheduleContext, lockSubscription, type SubscriptionRecord } from './subscription-records.repo';
+import { changeSubscription, type SubscriptionFieldsChange, type SubscriptionsRepo } from './subscriptions.repo';
 import {
-  changeSubscription,
-  choiceOf,
-  dropDelivery,
-  keepDelivery,
-  keptDeliveries,
-  loadScheduleContext,
-  lockSubscription,
-  moveOrderToDelivery,
-  reshapePaidOrder,
-  type SubscriptionFieldsChange,
-  type SubscriptionRecord,
-  type SubscriptionsRepo,
-} from './subscriptions.repo';
+  deliveryPrice,
+  describeChoice,
+  levelNotOffered,
+  levelOffered,
+  maxPauseDays,
+  planLength,
+  planOf,
+  sameAddress,
+  toApiDelivery,
+  unchanged,
+  type ChangeContext,
+  type ChangeKind,
+  type ChangeOutcome,
+} from './subscription-plan';
 
 export interface SubscriptionsServiceDeps {
   repo: SubscriptionsRepo;
@@ -45,95 +44,6 @@ export interface SubscriptionsServiceDeps {
   /** Called after a change commits: hands the subscription to the Stripe sync (a queued job). */
   onChanged?: (subscriptionId: string) => Promise<void>;
 }
-
-/** Deliveries a change looks over: enough to find the next unlocked one past skips. */
-const planLength = 26;
-/** The longest pause a subscriber can set themselves. */
-const maxPauseDays = 366;
-
-const sameAddress = (a: AddressSnapshot, b: AddressSnapshot) =>
-  a.name === b.name && a.line1 === b.line1 && (a.line2 ?? null) === (b.line2 ?? null) && a.city === b.city && a.region === b.region && a.postalCode === b.postalCode && a.country === b.country;
-
-function levelOffered(level: RoastLevel, allowed: readonly RoastLevel[] | null) {
-  return allowed === null || allowed.includes(level);
-}
-
-const levelNotOffered = (level: RoastLevel, allowed: readonly RoastLevel[]) =>
-  new AppError(422, 'roast_level_not_offered', `This coffee is not roasted ${roastLevelLabels[level].toLowerCase()}.`, {
-    roastLevel: `Choose one of: ${allowed.map((each) => roastLevelLabels[each].toLowerCase()).join(', ')}.`,
-  });
-
-/** Price of one delivery: roasted bags less the subscription discount, plus shipping (the trade engine's quote). */
-function deliveryPrice(lotCode: string | null, choice: Pick<DeliveryChoice, 'bagSize' | 'bagsPerDelivery'>, settings: ShopSettings) {
-  assertBagsShip([{ field: 'bagSize', size: choice.bagSize }], settings.shipping);
-  return quoteSubscriptionDelivery({ lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings).totalCents;
-}
-
-function planOf(subscription: SubscriptionRecord, kept: Awaited<ReturnType<typeof keptDeliveries>>, settings: ScheduleSettings, calendar: RoastCalendar, now: Date, count: number) {
-  return planDeliveries(
-    {
-      status: subscription.status,
-      anchorDate: subscription.anchorDate ?? kept[0]?.nominalDate ?? null,
-      cadenceWeeks: subscription.cadenceWeeks,
-      pausedUntil: subscription.pausedUntil,
-      cancelAtPeriodEnd: subscription.cancelAtPeriodEnd,
-      choice: choiceOf(subscription),
-    },
-    kept,
-    settings,
-    calendar,
-    now,
-    count,
-  );
-}
-
-function toApiDelivery(delivery: PlannedDelivery, subscription: SubscriptionRecord, picks: ReadonlyMap<IsoDate, { code: string; name: string }>): SubscriptionDelivery {
-  const pick = subscription.lotCode ? { code: subscription.lotCode, name: subscription.coffee } : picks.get(delivery.roastDate);
-  return {
-    roastDate: delivery.roastDate,
-    shipDate: delivery.shipDate,
-    readyFrom: delivery.readyFrom,
-    bestBefore: delivery.bestBefore,
-    expectedArrival: delivery.expectedArrival,
-    readyOnArrival: delivery.expectedArrival >= delivery.readyFrom,
-    status: delivery.status,
-    locked: delivery.locked,
-    cutoffAt: delivery.cutoffAt,
-    lotCode: pick?.code ?? null,
-    coffee: pick?.name ?? null,
-    ...delivery.choice,
-    orderId: delivery.orderId,
-    paid: delivery.orderId !== null,
-  };
-}
-
-const describeChoice = {
-  roastLevel: (value: RoastLevel) => `Roast level: ${roastLevelLabels[value]}`,
-  grind: (value: DeliveryChoice['grind']) => `Grind: ${grindLabels[value]}`,
-  brewMethod: (value: DeliveryChoice['brewMethod']) => `Brew method: ${value === 'espresso' ? 'Espresso' : 'Filter'}`,
-  bagSize: (value: DeliveryChoice['bagSize']) => `Bag size: ${value}`,
-  bagsPerDelivery: (value: number) => `Bags per delivery: ${value}`,
-  cadenceWeeks: (value: number) => `Every ${value === 1 ? 'week' : `${value} weeks`}`,
-};
-
-type ChangeKind = 'changed' | 'skipped' | 'unskipped' | 'paused' | 'resumed' | 'cancelled';
-
-interface ChangeContext {
-  tx: Tx;
-  subscription: SubscriptionRecord;
-  plan: PlannedDelivery[];
-  settings: ShopSettings;
-  calendar: RoastCalendar;
-  today: IsoDate;
-  now: Date;
-}
-
-/**
- * What a change wants: the subscription's new fields, the e-mail's lines and what the subscriber is
- * told (`notice`, also the e-mail's lead when given), or nothing (it is already so, and `notice` says that).
- */
-type ChangeOutcome = { fields: SubscriptionFieldsChange; summary: string[]; notice?: string } | { unchanged: string };
-const unchanged = (notice: string): ChangeOutcome => ({ unchanged: notice });
 
 export function createSubscriptionsService({ repo, payments, clock, onChanged }: SubscriptionsServiceDeps) {
   async function present(subscription: SubscriptionRecord, count = 1): Promise<{ subscription: Subscription; plan: SubscriptionDelivery[] }> {

@@ -13,9 +13,7 @@ import {
 } from '@shared/schemas/team';
 import type { Config } from '../../config';
 import { requireRole } from '../../middleware/require-role';
-import { writeSessionCookie } from '../auth/session-tokens';
-import { requestContext } from '../auth/sessions.service';
-import type { AuthThrottles } from '../auth/throttles';
+import { type AuthThrottles, requestContext, writeSessionCookie } from '../auth';
 import type { TeamService } from './team.service';
 
 const idParams = z.object({ id: z.uuid('No such record.') });

@@ -15,13 +15,9 @@ import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import { hashPassword } from '../../lib/password-hashing';
 import type { SessionUser } from '../../middleware/require-role';
-import type { AuditTrail } from '../audit/audit-trail';
-import { createAuthRepo, type AuthRepo } from '../auth/auth.repo';
-import { toUser } from '../auth/auth.service';
-import { assertAcceptablePassword } from '../auth/password-policy';
-import { randomToken, tokenDigest } from '../auth/session-tokens';
-import type { RequestContext, SessionsService, StartedSession } from '../auth/sessions.service';
-import { queueEmail } from '../outbox/outbox.repo';
+import type { AuditTrail } from '../audit';
+import { assertAcceptablePassword, createUserAccounts, randomToken, type RequestContext, type SessionsService, type StartedSession, tokenDigest, toUser, type UserAccounts } from '../auth';
+import { queueEmail } from '../outbox';
 import { createTeamRepo, type TeamRepo } from './team.repo';
 
 /** An invitation link works once, for 7 days: long enough to reach someone on their days off. */
@@ -43,7 +39,7 @@ const invitationInvalid = () =>
 
 export interface TeamServiceDeps {
   repo: TeamRepo;
-  authRepo: AuthRepo;
+  authRepo: UserAccounts;
   sessions: SessionsService;
   audit: AuditTrail;
   clock: Clock;
@@ -142,7 +138,7 @@ export function createTeamService({ repo, authRepo, sessions, audit, clock, base
       const passwordHash = await hashPassword(input.password);
       const { user, session } = await repo.transaction(async (tx) => {
         if (!(await createTeamRepo(tx).markAccepted(invitation.id, now))) throw invitationInvalid();
-        const txAuth = createAuthRepo(tx);
+        const txAuth = createUserAccounts(tx);
         const created = await txAuth.insertUser({ email: invitation.email, name: input.name, passwordHash, role: asTeamRole(invitation.role) });
         if (!created) throw new AppError(409, 'account_exists', 'This e-mail address already has an account. Sign in instead.');
         return { user: created, session: await sessions.start(created, context, txAuth) };

@@ -7,20 +7,24 @@ import type { TraceService } from './trace.service';
 const orderParams = z.object({ id: z.uuid('No such order.') });
 const batchParams = z.object({ id: z.uuid('No such batch.') });
 
-/** Recall reads for staff. Mounted on `/api` itself: one path is under orders, the other under batches. */
-export function traceRoutes(service: TraceService): Router {
-  const router = Router();
-  const staff = requireRole('staff', 'owner');
+const staff = requireRole('staff', 'owner');
 
-  router.get('/orders/:id/trace', staff, async (req, res) => {
+/** Where an order's coffee came from (staff), mounted at `/api/orders` beside the orders module's routes. */
+export function orderTraceRoutes(service: TraceService): Router {
+  const router = Router();
+  router.get('/:id/trace', staff, async (req, res) => {
     const { id } = orderParams.parse(req.params);
     res.json((await service.order(id)) satisfies OrderTrace);
   });
+  return router;
+}
 
-  router.get('/roastery/batches/:id/trace', staff, async (req, res) => {
+/** Where a batch's coffee went (staff), mounted at `/api/roastery/batches`. */
+export function batchTraceRoutes(service: TraceService): Router {
+  const router = Router();
+  router.get('/:id/trace', staff, async (req, res) => {
     const { id } = batchParams.parse(req.params);
     res.json((await service.batch(id)) satisfies BatchTrace);
   });
-
   return router;
 }

@@ -18,9 +18,11 @@ export function uploadsRoutes(service: UploadsService): Router {
     const params = uploadParams.safeParse(req.params);
     if (!params.success) throw new AppError(404, 'upload_not_found', 'No such file.');
     const file = await service.get(params.data.id);
+    if (file.downloadName) res.attachment(file.downloadName);
+    else res.setHeader('Content-Disposition', 'inline');
+    // The type recorded at upload, never one guessed from the download name.
     res.setHeader('Content-Type', file.contentType);
     res.setHeader('X-Content-Type-Options', 'nosniff');
-    res.setHeader('Content-Disposition', file.disposition);
     res.setHeader('Content-Security-Policy', "default-src 'none'; sandbox");
     // A file never changes under its id, so this one answer may be kept (the API's default is no-store).
     res.removeHeader('Cache-Control');

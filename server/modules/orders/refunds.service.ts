@@ -2,7 +2,7 @@ import Stripe from 'stripe';
 import type { RefundOrderBody, RefundResponse } from '@shared/schemas/packing';
 import type { PaymentsGateway } from '../../integrations/payments';
 import { AppError } from '../../lib/app-error';
-import { orderIdKey } from '../payments/payments.service';
+import { orderIdKey } from '../payments';
 import type { RefundsRepo } from './refunds.repo';
 
 /** Metadata key on a Stripe refund holding the client's Idempotency-Key, so a repeated request finds its refund. */

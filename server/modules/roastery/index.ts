@@ -1,0 +1,22 @@
+import type { Db } from '../../db/client';
+import type { ApiModule } from '../../lib/api-module';
+import { createBatchesRepo } from './batches.repo';
+import { createBatchesService } from './batches.service';
+import { createCalendarRepo } from './calendar.repo';
+import { createCalendarService } from './calendar.service';
+import { roasteryRoutes } from './roastery.routes';
+import { createRoastListRepo } from './roast-list.repo';
+import { createRoastListService } from './roast-list.service';
+import { createRoasterySettingsRepo } from './settings.repo';
+import { createRoasterySettingsService } from './settings.service';
+
+/** The Roastery's settings, Roast Calendar, Roast List and batches. */
+export function createRoasteryModule({ db }: { db: Db }): ApiModule {
+  const router = roasteryRoutes({
+    settings: createRoasterySettingsService(createRoasterySettingsRepo(db)),
+    calendar: createCalendarService(createCalendarRepo(db)),
+    roastList: createRoastListService(createRoastListRepo(db)),
+    batches: createBatchesService(createBatchesRepo(db)),
+  });
+  return { mounts: [{ path: '/roastery', router }] };
+}

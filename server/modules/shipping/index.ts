@@ -1,0 +1,10 @@
+import type { Db } from '../../db/client';
+import type { ApiModule } from '../../lib/api-module';
+import { createShippingRepo } from './shipping.repo';
+import { shippingRoutes } from './shipping.routes';
+
+export { assertBagsShip } from './shipping.service';
+
+export function createShippingModule({ db }: { db: Db }): ApiModule {
+  return { mounts: [{ path: '/shipping', router: shippingRoutes(createShippingRepo(db)) }] };
+}
