@@ -2,11 +2,10 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { defaultLossModel } from '@shared/domain/roast-loss';
 import { batchCreatedSchema, calendarResponseSchema, roastListResponseSchema } from '@shared/schemas/roastery';
 import { createTestApp } from '../setup/test-app';
 import { signedInAgent } from '../setup/test-users';
-import { createPaidRoastedOrder, createStockedLot, createTestUser, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
+import { createPaidRoastedOrder, createStockedLot, createTestUser, roastListTestSettings, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
 
 const standardFontDataUrl = `${path.join(path.dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
 
@@ -18,17 +17,7 @@ let customer: TestUser;
 beforeAll(async () => {
   const app = createTestApp();
   [staff, customer] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), createTestUser('customer')]);
-  // 2 % overage, a 12 kg roaster at 50–80 % (a drum roaster's usual load is 50–80 % of its rated capacity, from memory),
-  // medium loss 15 % (medium roasts lose 14–16 %, midpoint, from memory).
-  await saveTestShopSettings({
-    overagePct: 2,
-    roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
-    lossModel: { ...defaultLossModel, medium: { minPct: 14, maxPct: 16, defaultPct: 15 } },
-    lossModelMinBatches: 3,
-    roastWeekdays: ['mon', 'wed', 'fri'],
-    shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'],
-    dayCapacityGrams: 60_000,
-  });
+  await saveTestShopSettings({ ...roastListTestSettings, shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'] });
 });
 
 async function roastList(date: string) {

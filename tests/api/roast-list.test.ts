@@ -3,12 +3,11 @@ import path from 'node:path';
 import request from 'supertest';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { defaultLossModel } from '@shared/domain/roast-loss';
 import { roastListResponseSchema } from '@shared/schemas/roastery';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { createTestApp } from '../setup/test-app';
 import { signedInAgent } from '../setup/test-users';
-import { createPaidRoastedOrder, createStockedLot, createTestUser, pickRotationLot, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
+import { createPaidRoastedOrder, createStockedLot, createTestUser, pickRotationLot, roastListTestSettings, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
 
 // pdf.js reads the standard fonts' metrics from its own package.
 const standardFontDataUrl = `${path.join(path.dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
@@ -22,18 +21,7 @@ let customer: TestUser;
 beforeAll(async () => {
   app = createTestApp();
   [staff, customer] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), createTestUser('customer')]);
-  // The figures the hand-worked example uses, set here rather than trusted to the defaults:
-  // 2 % overage (a small configurable overage on the Roast List), a 12 kg roaster at a
-  // preferred 50–80 % load (shop roasters hold about 12 kg, usually loaded at 50–80 % of rated
-  // capacity, from memory), medium loss 15 % (medium roasts lose 14–16 %, midpoint 15, from memory).
-  await saveTestShopSettings({
-    overagePct: 2,
-    roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
-    lossModel: { ...defaultLossModel, medium: { minPct: 14, maxPct: 16, defaultPct: 15 } },
-    lossModelMinBatches: 3,
-    roastWeekdays: ['mon', 'wed', 'fri'],
-    dayCapacityGrams: 60_000,
-  });
+  await saveTestShopSettings(roastListTestSettings);
 });
 
 describe('GET /api/roastery/days/:date/roast-list', () => {
