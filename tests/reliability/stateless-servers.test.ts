@@ -136,7 +136,9 @@ async function checkout(session: { cookie: string }, lotCode: string) {
 }
 
 describe('two stateless servers and a worker on one PostgreSQL', () => {
-  it('loses and doubles nothing when one server is killed mid-traffic and started again', async () => {
+  // Restarting a server process and 12 sign-ups, checkouts and payments outlast the API project's
+  // 20 s default on a busy machine; its own waits allow up to 30 s for payment alone.
+  it('loses and doubles nothing when one server is killed mid-traffic and started again', { timeout: 120_000 }, async () => {
     const lot = await createLotForSale(50_000);
     const [before] = await getTestDb().select({ stockGrams: lots.stockGrams }).from(lots).where(eq(lots.id, lot.id));
     const placed: { email: string; orderId: string }[] = [];
