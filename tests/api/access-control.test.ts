@@ -4,8 +4,9 @@ import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { listRoutes } from '../setup/route-list';
 import { createTestApp } from '../setup/test-app';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
 import { accessRules, type Access, type AccessRule } from './access-rules';
+import { createTestUser, type TestUser } from '../factories/index';
 
 const app = createTestApp();
 const apiRoutes = listRoutes(app).filter((route) => route.path.startsWith('/api/'));

@@ -1,8 +1,6 @@
 // Who may call each API route. tests/api/access-control.test.ts reads the app's own route list and
 // fails for any route missing here (and for any rule naming no route): add a row with every new route.
-import { addresses, orders, subscriptions } from '../../server/db/schema/index';
-import { getTestDb } from '../setup/test-db';
-import type { TestUser } from '../setup/test-users';
+import { createAddress, createOrder, createSubscription, type TestUser } from '../factories/index';
 
 export type Access =
   /** Anyone, signed in or not. */
@@ -36,44 +34,17 @@ export interface AccessRule {
 }
 
 async function addressOf(owner: TestUser) {
-  const [row] = await getTestDb()
-    .insert(addresses)
-    .values({ userId: owner.id, name: owner.name, line1: '7 Invented Lane', city: 'Larch Bend', region: 'MT', postalCode: '59701' })
-    .returning({ id: addresses.id });
-  return { id: row!.id };
+  return { id: (await createAddress(owner)).id };
 }
 
+/** A green order awaiting payment ($18.99 and $6.95 shipping, no lines). */
 async function orderOf(owner: TestUser) {
-  const [row] = await getTestDb()
-    .insert(orders)
-    .values({
-      userId: owner.id,
-      kind: 'green',
-      subtotalCents: 1899,
-      shippingCents: 695,
-      totalCents: 2594,
-      shippingAddress: { name: owner.name, line1: '7 Invented Lane', city: 'Larch Bend', region: 'MT', postalCode: '59701', country: 'US' },
-    })
-    .returning({ id: orders.id });
-  return { id: row!.id };
+  return { id: (await createOrder({ userId: owner.id, subtotalCents: 1899, shippingCents: 695 })).id };
 }
 
 /** An active Roaster's Rotation subscription whose deliveries start in 2031 (nothing about it is locked). */
 async function subscriptionOf(owner: TestUser) {
-  const [row] = await getTestDb()
-    .insert(subscriptions)
-    .values({
-      userId: owner.id,
-      status: 'active',
-      roastLevel: 'medium',
-      bagSize: '12oz',
-      cadenceWeeks: 2,
-      priceCents: 3200,
-      anchorDate: '2031-01-07',
-      shippingAddress: { name: owner.name, line1: '7 Invented Lane', city: 'Larch Bend', region: 'MT', postalCode: '59701', country: 'US' },
-    })
-    .returning({ id: subscriptions.id });
-  return { id: row!.id };
+  return { id: (await createSubscription({ userId: owner.id, status: 'active', priceCents: 3200, anchorDate: '2031-01-07' })).id };
 }
 
 export const accessRules: AccessRule[] = [

@@ -6,8 +6,8 @@ import { apiErrorSchema } from '@shared/schemas/errors';
 import { addresses } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { testAddress } from './outbox-support';
+import { signedInAgent } from '../setup/test-users';
+import { createTestUser, testAddress } from '../factories/index';
 
 const app = createTestApp();
 const web = { 'X-Restday-Client': 'web' };

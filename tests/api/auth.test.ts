@@ -1,52 +1,23 @@
 import { randomUUID } from 'node:crypto';
 import { parseOptions } from '@node-rs/argon2';
-import { and, eq, isNull, like } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { SignJWT } from 'jose';
-import request, { type Response } from 'supertest';
-import { afterAll, describe, expect, inject, it } from 'vitest';
-import { PASSWORD_MAX_LENGTH, tokenFromFragment, userResponseSchema } from '@shared/schemas/auth';
+import request from 'supertest';
+import { describe, expect, it } from 'vitest';
+import { PASSWORD_MAX_LENGTH, userResponseSchema } from '@shared/schemas/auth';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import type { Role } from '@shared/domain/vocabulary';
-import { emailOutbox, passwordResetTokens, sessions, users } from '../../server/db/schema/index';
+import { sessions, users } from '../../server/db/schema/index';
 import { demoSignIns, seedDemo } from '../../server/db/seed/index';
-import { createAdjustableClock } from '../../server/lib/clock';
 import { verifyPassword } from '../../server/lib/password-hashing';
 import { commonPasswordCount } from '../../server/modules/auth/password-policy';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, TEST_PASSWORD } from '../setup/test-users';
-import { inboxOf, testAddress, testRelay, waitFor } from './outbox-support';
+import { signedInAgent } from '../setup/test-users';
+import { authTestApp, DAY, HOUR, MINUTE, sessionCookie, web } from './auth-support';
+import { createTestUser, testAddress } from '../factories/index';
 
-const clock = createAdjustableClock();
-const app = createTestApp({ clock });
-const client = () => request(app);
-const web = { 'X-Restday-Client': 'web' };
-
-const MINUTE = 60_000;
-const HOUR = 60 * MINUTE;
-const DAY = 24 * HOUR;
-
-/** Moves the app's clock forward by `ms`, for session and link expiry. */
-const advance = (ms: number) => clock.set(new Date(clock.now().getTime() + ms));
-
-function sessionCookie(response: Response): string {
-  const header = ([] as string[]).concat(response.headers['set-cookie'] ?? []).find((cookie) => cookie.startsWith('restday_session='));
-  if (!header) throw new Error(`no session cookie in ${JSON.stringify(response.headers['set-cookie'])}`);
-  return header.split(';')[0]!;
-}
-
-const me = (cookie: string) => client().get('/api/auth/me').set('Cookie', cookie);
-
-function signUp(overrides: Partial<{ email: string; password: string; name: string }> = {}) {
-  return client()
-    .post('/api/auth/sign-up')
-    .set(web)
-    .send({ email: testAddress('signup'), password: 'amber lantern orchard', name: 'Sam Invented', ...overrides });
-}
-
-function signIn(email: string, password: string) {
-  return client().post('/api/auth/sign-in').set(web).send({ email, password });
-}
+const { app, client, advance, me, signUp, signIn } = authTestApp();
 
 describe('sign-up, sign-in, sign-out and me', () => {
   it('POST /api/auth/sign-up — with a sound password, then 201 {user} as a customer, signed in at once', async () => {
@@ -311,99 +282,6 @@ describe('disabled accounts', () => {
     expect(refused.status).toBe(403);
     expect(apiErrorSchema.parse(refused.body).error.code).toBe('account_disabled');
     expect((await signIn(user.email, 'a wrong password here')).status).toBe(401);
-  });
-});
-
-describe('password reset by e-mail', () => {
-  const mailCatcherUrl = inject('mailCatcherUrl');
-  const { relay, mailer } = testRelay({ smtpUrl: inject('smtpUrl') });
-  afterAll(() => mailer.close());
-
-  async function resetLinkFor(email: string): Promise<string> {
-    const [mail] = await waitFor(
-      async () => {
-        await relay.relayOnce();
-        return inboxOf(mailCatcherUrl, email);
-      },
-      (mails) => mails.length > 0,
-      10_000,
-      `a reset e-mail to ${email}`,
-    );
-    const link = /https?:\/\/[^\s"<>]+#token=[\w-]+/.exec(mail!.text ?? mail!.html ?? '')?.[0];
-    if (!link) throw new Error(`no reset link in ${mail!.text}`);
-    return link;
-  }
-
-  it('the e-mailed link resets the password: 202, a link carrying its token in the fragment, 204, every session ended, the new password works', async () => {
-    const user = await createTestUser('customer', { email: testAddress('forgetful') });
-    const before = sessionCookie(await signIn(user.email, user.password));
-
-    const requested = await client().post('/api/auth/password-reset').set(web).send({ email: user.email });
-    expect(requested.status).toBe(202);
-    const link = await resetLinkFor(user.email);
-    expect(new URL(link).pathname).toBe('/reset-password');
-    expect(new URL(link).search).toBe('');
-    const token = tokenFromFragment(new URL(link).hash)!;
-
-    const [stored] = await getTestDb().select().from(passwordResetTokens).where(eq(passwordResetTokens.userId, user.id));
-    expect(stored!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
-    expect(stored!.tokenHash).not.toBe(token);
-    expect(stored!.expiresAt.getTime() - stored!.createdAt.getTime()).toBe(30 * MINUTE);
-    // Once sent, the outbox keeps no copy of the link: the token lives only in the customer's inbox.
-    const [sentRow] = await getTestDb().select().from(emailOutbox).where(and(eq(emailOutbox.toAddress, user.email), eq(emailOutbox.status, 'sent')));
-    expect(JSON.stringify(sentRow!.payload)).not.toContain(token);
-
-    const confirmed = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'new kettle morning light' });
-    expect(confirmed.status).toBe(204);
-    expect((await me(before)).status).toBe(401);
-    expect((await signIn(user.email, user.password)).status).toBe(401);
-    expect((await signIn(user.email, 'new kettle morning light')).status).toBe(200);
-
-    const again = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'another fresh passphrase' });
-    expect(again.status).toBe(400);
-    expect(apiErrorSchema.parse(again.body).error.code).toBe('reset_link_invalid');
-  });
-
-  it('an unknown address gets the same 202 and no e-mail is queued', async () => {
-    const nobody = testAddress('unknown');
-    const response = await client().post('/api/auth/password-reset').set(web).send({ email: nobody });
-    expect(response.status).toBe(202);
-    expect(response.text).toBe('');
-    await new Promise((resolve) => setTimeout(resolve, 200));
-    expect(await getTestDb().select().from(emailOutbox).where(eq(emailOutbox.toAddress, nobody))).toEqual([]);
-  });
-
-  async function queuedToken(email: string): Promise<string> {
-    const [row] = await waitFor(
-      () => getTestDb().select({ payload: emailOutbox.payload }).from(emailOutbox).where(and(eq(emailOutbox.toAddress, email), like(emailOutbox.template, 'password-reset'))),
-      (rows) => rows.length > 0,
-      5000,
-      'a queued reset e-mail',
-    );
-    return tokenFromFragment(new URL(String(row!.payload.resetUrl)).hash)!;
-  }
-
-  it('a link used 31 minutes after it was sent, then 400 reset_link_invalid and the old password still works', async () => {
-    const user = await createTestUser('customer');
-    await client().post('/api/auth/password-reset').set(web).send({ email: user.email }).expect(202);
-    const token = await queuedToken(user.email);
-    advance(31 * MINUTE);
-    const late = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'too late for this one' });
-    expect(late.status).toBe(400);
-    expect(apiErrorSchema.parse(late.body).error.code).toBe('reset_link_invalid');
-    expect((await signIn(user.email, TEST_PASSWORD)).status).toBe(200);
-  });
-
-  it('a common password is refused at reset without using up the link', async () => {
-    const user = await createTestUser('customer');
-    await client().post('/api/auth/password-reset').set(web).send({ email: user.email }).expect(202);
-    const token = await queuedToken(user.email);
-    const weak = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'password123' });
-    expect(weak.status).toBe(400);
-    expect(apiErrorSchema.parse(weak.body).error.fields).toHaveProperty('password');
-    const unused = await getTestDb().select().from(passwordResetTokens).where(and(eq(passwordResetTokens.userId, user.id), isNull(passwordResetTokens.usedAt)));
-    expect(unused).toHaveLength(1);
-    await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'a much better passphrase' }).expect(204);
   });
 });
 

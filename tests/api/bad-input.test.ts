@@ -3,8 +3,8 @@ import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { createTestApp } from '../setup/test-app';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
+import { createLotForSale, createTestUser, shipTo } from '../factories/index';
 
 // Each case was a 500 (or a frozen event loop) before: found by fuzzing every route with bad input.
 const app = createTestApp();

@@ -7,8 +7,8 @@ import { batchCreatedSchema, batchListResponseSchema, roastListResponseSchema } 
 import { batches, lots, stockMovements } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { insertLot, insertRoastedOrder, runTag, useShopSettings } from './roastery-support';
+import { signedInAgent } from '../setup/test-users';
+import { createPaidRoastedOrder, createStockedLot, createTestUser, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
 
 // Invented lots and batches on dates of this file's own.
 const tag = runTag();
@@ -31,15 +31,15 @@ beforeAll(async () => {
   app = createTestApp();
   staffUser = await createTestUser('staff', { name: 'Invented Roaster' });
   [staff, customer] = await Promise.all([signedInAgent(app, staffUser), createTestUser('customer')]);
-  // Medium 14–16 %, default 15 % (TRADE.md "Roast loss", from memory); the lot's own loss after 3 batches.
-  await useShopSettings({ lossModel: defaultLossModel, lossModelMinBatches: 3 });
+  // Medium 14–16 %, default 15 % (from memory); the lot's own loss after 3 batches.
+  await saveTestShopSettings({ lossModel: defaultLossModel, lossModelMinBatches: 3 });
 });
 
 describe('POST /api/roastery/batches', () => {
   it('takes each batch’s green out of stock and, after the third batch, plans the lot with its own measured loss', async () => {
     const code = `${tag}-LEARN`;
-    const lotId = await insertLot(code, { stockGrams: 40_000 });
-    await insertRoastedOrder({ userId: customer.id, roastDate, lines: [{ lotId, size: '1lb', quantity: 10, roastLevel: 'medium' }] });
+    const lotId = await createStockedLot(code, { stockGrams: 40_000 });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate, lines: [{ lotId, size: '1lb', quantity: 10, roastLevel: 'medium' }] });
     const listSource = async () => roastListResponseSchema.parse((await staff.get(`/api/roastery/days/${roastDate}/roast-list`)).body).lines[0]!;
     expect(await listSource()).toMatchObject({ lossSource: 'level', lossPct: 15 });
 
@@ -50,7 +50,7 @@ describe('POST /api/roastery/batches', () => {
       expect(response.status).toBe(201);
       recorded.push(batchCreatedSchema.parse(response.body));
     }
-    // loss % = (in − out) ÷ in × 100 (TRADE.md "Roast loss").
+    // loss % = (in − out) ÷ in × 100 (the usual definition of roast loss).
     expect(recorded.map((batch) => batch.lossPct)).toEqual([15, 16, 15.5]);
     expect(recorded.map((batch) => batch.withinExpected)).toEqual([true, true, true]);
     expect(recorded.map((batch) => batch.lossSource)).toEqual(['level', 'level', 'lot']);
@@ -75,7 +75,7 @@ describe('POST /api/roastery/batches', () => {
 
   it('flags a loss outside the level’s range and works out the development time ratio', async () => {
     const code = `${tag}-FLAG`;
-    await insertLot(code, { stockGrams: 5_000 });
+    await createStockedLot(code, { stockGrams: 5_000 });
     // 5,000 → 4,000 g is a 20 % loss, above medium's 14–16 %. First crack at 480 s of 600 s:
     // development 120 s, DTR 120 ÷ 600 = 20 % (S. Rao, "Development Time Ratio", 2016).
     const response = await staff.post('/api/roastery/batches').send({
@@ -115,7 +115,7 @@ describe('POST /api/roastery/batches', () => {
 
   it('answers 409 when the lot’s stock cannot cover the green, and records nothing', async () => {
     const code = `${tag}-SHORT`;
-    const lotId = await insertLot(code, { stockGrams: 3_000 });
+    const lotId = await createStockedLot(code, { stockGrams: 3_000 });
     const response = await staff.post('/api/roastery/batches').send({ roastDate, lotCode: code, roastLevel: 'dark', greenGramsIn: 3_001, roastedGramsOut: 2_450 });
     expect(response.status).toBe(409);
     const body = apiErrorSchema.parse(response.body);
@@ -136,7 +136,7 @@ describe('POST /api/roastery/batches', () => {
   ])('answers 400 naming the field for %s, and takes no stock', async (_case, weights, field) => {
     badLots += 1;
     const code = `${tag}-BAD${badLots}`;
-    const lotId = await insertLot(code, { stockGrams: 2_000 });
+    const lotId = await createStockedLot(code, { stockGrams: 2_000 });
     const response = await staff.post('/api/roastery/batches').send({ roastDate, lotCode: code, roastLevel: 'medium', ...weights });
     expect(response.status).toBe(400);
     expect(apiErrorSchema.parse(response.body).error.fields).toHaveProperty(field);
@@ -151,7 +151,7 @@ describe('POST /api/roastery/batches', () => {
 
   it('records a batch once when the same request comes again with its id, at once or later', async () => {
     const code = `${tag}-RETRY`;
-    const lotId = await insertLot(code, { stockGrams: 20_000 });
+    const lotId = await createStockedLot(code, { stockGrams: 20_000 });
     const body = { id: randomUUID(), roastDate, lotCode: code, roastLevel: 'medium', greenGramsIn: 6_000, roastedGramsOut: 5_100 };
     const [first, racing] = await Promise.all([staff.post('/api/roastery/batches').send(body), staff.post('/api/roastery/batches').send(body)]);
     const later = await staff.post('/api/roastery/batches').send(body);
@@ -172,7 +172,7 @@ describe('POST /api/roastery/batches', () => {
 
   it('keeps two batches racing for the last green from taking stock below zero', async () => {
     const code = `${tag}-RACE`;
-    const lotId = await insertLot(code, { stockGrams: 6_000 });
+    const lotId = await createStockedLot(code, { stockGrams: 6_000 });
     const send = () => staff.post('/api/roastery/batches').send({ roastDate, lotCode: code, roastLevel: 'light', greenGramsIn: 4_000, roastedGramsOut: 3_500 });
     const statuses = (await Promise.all([send(), send()])).map((response) => response.status).sort();
     expect(statuses).toEqual([201, 409]);

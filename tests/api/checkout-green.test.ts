@@ -7,10 +7,11 @@ import { apiErrorSchema } from '@shared/schemas/errors';
 import { orderItems, orders } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { createLotForSale, movementsOf, shipTo, stockOf } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
+import { movementsOf, stockOf } from './checkout-support';
 import { waitFor } from './outbox-support';
 import { orderRow, startPaymentsServer, testStripe, type PaymentsServer } from './payments-support';
+import { createLotForSale, createTestUser, shipTo } from '../factories/index';
 
 const app = createTestApp();
 const stripe = testStripe();
@@ -71,7 +72,7 @@ describe('POST /api/checkout/green', () => {
     expect(error.code).toBe('insufficient_stock');
     expect(error.message).toContain(scarce.code);
     expect(error.message).toContain('Nothing was reserved or charged');
-    // 1 lb bags are filled to 454 g (PRODUCT.md), so 900 g fills one of them.
+    // 1 lb bags are filled to 454 g (1 lb rounded up to a whole gram), so 900 g fills one of them.
     expect(error.fields).toEqual({ 'items.1.quantity': 'Only 900 g in stock, enough for 1 bag of this size.' });
 
     expect(await stockOf(plenty.id)).toBe(50_000);
@@ -99,7 +100,7 @@ describe('POST /api/checkout/green', () => {
     expect(response.status).toBe(409);
     const { error } = apiErrorSchema.parse(response.body);
     expect(error.code).toBe('insufficient_stock');
-    // Fill weights 8 oz → 227 g, 2 lb → 908 g (PRODUCT.md): 1,000 g fills 4 small bags or 1 large one; 200 g fills none.
+    // Fill weights 8 oz → 227 g, 2 lb → 908 g (rounded up to a whole gram): 1,000 g fills 4 small bags or 1 large one; 200 g fills none.
     expect(error.fields).toEqual({
       'items.1.quantity': 'Only 1,000 g in stock, enough for 4 bags of this size.',
       'items.2.quantity': 'Only 1,000 g in stock, enough for 1 bag of this size.',

@@ -249,7 +249,7 @@ describe('demo scenario seed', () => {
       expect(await seedDemo(tx, { now })).toEqual({ seeded: false });
       expect(await counts(tx)).toEqual(afterFirst);
 
-      // The brief's demo scale: 8–12 lots, 20+ customers, 30+ subscriptions, something on every screen.
+      // The demo's promised scale: 8–12 lots, 20+ customers, 30+ subscriptions, something on every screen.
       expect(afterFirst.lots! - before.lots!).toBe(10);
       expect(afterFirst.users! - before.users!).toBeGreaterThanOrEqual(23);
       expect(afterFirst.subscriptions! - before.subscriptions!).toBeGreaterThanOrEqual(30);

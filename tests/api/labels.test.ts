@@ -4,9 +4,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { loadShopSettings } from '../../server/modules/settings/settings.repo';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale } from './checkout-support';
-import { createGreenOrderShipping, createRoastedOrder, uniqueDay } from './packing-support';
+import { signedInAgent } from '../setup/test-users';
+import { createGreenOrder, createLotForSale, createRoastedOrder, createTestUser, type TestUser, uniqueDay } from '../factories/index';
 
 const app = createTestApp();
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -54,7 +53,7 @@ describe('GET /api/roastery/days/:date/labels.pdf', () => {
         { lotId: lot.id, size: '2lb', quantity: 1, roastLevel: 'medium-dark', grind: 'french-press', brewMethod: 'filter' },
       ],
     });
-    await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!);
+    await createGreenOrder(customer.id, lot.id, { shipDate: roasted.shipDate!, status: 'paid' });
     const { shopName } = await loadShopSettings(getTestDb());
 
     const pages = await labelsFor(roasted.shipDate!);

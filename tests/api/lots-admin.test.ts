@@ -11,7 +11,8 @@ import { lotDetailSchema, lotStaffDetailSchema, stockAdjustmentResponseSchema, s
 import { lots, stockMovements } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
+import { createTestUser } from '../factories/index';
 
 // Invented lots; a run-unique tag keeps their codes apart from other files' rows.
 const tag = randomUUID().slice(0, 6).toUpperCase();

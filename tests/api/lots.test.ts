@@ -77,7 +77,7 @@ describe('GET /api/lots', () => {
     expect(await listCodes({ q: 'JASMINE' })).toEqual([`${tag}-A`]);
   });
 
-  it('treats a lot as in stock only while it can fill the smallest bag (8 oz → 227 g, rounded up; PRODUCT.md)', async () => {
+  it('treats a lot as in stock only while it can fill the smallest bag (8 oz → 227 g, rounded up)', async () => {
     expect(await listCodes({ inStock: 'true' })).toEqual([`${tag}-A`]);
   });
 

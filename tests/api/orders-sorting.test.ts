@@ -1,32 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { orderListResponseSchema } from '@shared/schemas/orders';
 import type { OrderStatus } from '@shared/domain/vocabulary';
-import { orderItems, orders } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
-import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
+import { createLotForSale, createOrder, createTestUser } from '../factories/index';
 
 const app = createTestApp();
 
 /** An order written directly, as checkout or a subscription would leave it; each test places its orders on its own day. */
 async function inventOrder(userId: string, lotId: string, { status, roastDate, placedAt }: { status: OrderStatus; roastDate: string | null; placedAt: Date }) {
-  const [order] = await getTestDb()
-    .insert(orders)
-    .values({
-      userId,
-      kind: 'green',
-      status,
-      subtotalCents: 4000,
-      shippingCents: 1000,
-      totalCents: 5000,
-      shippingAddress: { ...shipTo, line2: null, country: 'US' },
-      roastDate,
-      createdAt: placedAt,
-    })
-    .returning({ id: orders.id });
-  await getTestDb().insert(orderItems).values({ orderId: order!.id, lotId, kind: 'green', size: '1lb', quantity: 2, fillGrams: 454, unitPriceCents: 2000, lineTotalCents: 4000 });
-  return order!.id;
+  const order = await createOrder({ userId, status, shippingCents: 1000, roastDate, createdAt: placedAt, lines: [{ lotId, size: '1lb', quantity: 2, unitPriceCents: 2000 }] });
+  return order.id;
 }
 
 describe('GET /api/orders sorted for the staff table', () => {

@@ -4,11 +4,11 @@ import { describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { orderCsvColumns, orderDetailSchema, orderListResponseSchema } from '@shared/schemas/orders';
 import type { OrderStatus } from '@shared/domain/vocabulary';
-import { orderItems, orders } from '../../server/db/schema/index';
+import { orders } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
+import { createLotForSale, createOrder, createTestUser, shipTo, type TestUser } from '../factories/index';
 
 const app = createTestApp();
 
@@ -22,24 +22,16 @@ interface Invented {
 
 /** An order written directly (one line of two 1 lb bags), as checkout or a subscription would leave it. */
 async function inventOrder(owner: TestUser, lotId: string, { status = 'paid', placedAt = new Date(), roastDate, totalCents = 5000, carrier }: Invented = {}) {
-  const [order] = await getTestDb()
-    .insert(orders)
-    .values({
-      userId: owner.id,
-      kind: 'green',
-      status,
-      subtotalCents: totalCents - 1000,
-      shippingCents: 1000,
-      totalCents,
-      shippingAddress: { ...shipTo, line2: null, country: 'US' },
-      roastDate: roastDate ?? null,
-      carrier: carrier ?? null,
-      createdAt: placedAt,
-    })
-    .returning({ id: orders.id });
-  const unit = (totalCents - 1000) / 2;
-  await getTestDb().insert(orderItems).values({ orderId: order!.id, lotId, kind: 'green', size: '1lb', quantity: 2, fillGrams: 454, unitPriceCents: unit, lineTotalCents: unit * 2 });
-  return order!.id;
+  const order = await createOrder({
+    userId: owner.id,
+    status,
+    shippingCents: 1000,
+    roastDate: roastDate ?? null,
+    carrier: carrier ?? null,
+    createdAt: placedAt,
+    lines: [{ lotId, size: '1lb', quantity: 2, unitPriceCents: (totalCents - 1000) / 2 }],
+  });
+  return order.id;
 }
 
 describe('GET /api/orders and /api/orders/:id for a customer', () => {

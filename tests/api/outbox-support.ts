@@ -1,5 +1,4 @@
 // Helpers for the outbox tests: the mail catcher's REST API, a relay on the test database, waiting.
-import { randomUUID } from 'node:crypto';
 import { eq, inArray } from 'drizzle-orm';
 import { loadConfig, type Config } from '../../server/config';
 import { emailOutbox } from '../../server/db/schema/index';
@@ -34,11 +33,6 @@ export async function waitFor<T>(read: () => Promise<T>, done: (value: T) => boo
     if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}; last value: ${JSON.stringify(value).slice(0, 500)}`);
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
-}
-
-/** A fresh recipient per test, so each test reads only its own mail from the shared catcher. */
-export function testAddress(tag: string): string {
-  return `${tag}-${randomUUID().slice(0, 8)}@example.test`;
 }
 
 export function testConfig(overrides: Record<string, string> = {}): Config {

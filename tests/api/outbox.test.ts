@@ -16,8 +16,9 @@ import { createLogger } from '../../server/lib/logger';
 import { queueEmail } from '../../server/modules/outbox/outbox.repo';
 import { createTestApp } from '../setup/test-app';
 import { getTestDatabase, getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { inboxOf, outboxRow, outboxRows, restDayPayload, testAddress, testConfig, testRelay, waitFor } from './outbox-support';
+import { signedInAgent } from '../setup/test-users';
+import { inboxOf, outboxRow, outboxRows, restDayPayload, testConfig, testRelay, waitFor } from './outbox-support';
+import { createTestUser, testAddress, type TestUser } from '../factories/index';
 
 const smtpUrl = inject('smtpUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');

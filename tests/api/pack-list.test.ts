@@ -2,21 +2,13 @@ import { eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { packListResponseSchema, packOrderSchema } from '@shared/schemas/packing';
-import { deliveries, subscriptions } from '../../server/db/schema/index';
+import { deliveries } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
 import { outboxRows } from './outbox-support';
-import {
-  allocationsOf,
-  createGreenOrderShipping,
-  createRoastedOrder,
-  orderStatusOf,
-  pickRotationLot,
-  recordBatch,
-  uniqueDay,
-} from './packing-support';
+import { allocationsOf, orderStatusOf } from './packing-support';
+import { createDelivery, createGreenOrder, createLotForSale, createRoastedOrder, createSubscription, createTestUser, pickRotationLot, recordBatch, type TestUser, uniqueDay } from '../factories/index';
 
 const app = createTestApp();
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -29,7 +21,7 @@ beforeAll(async () => {
 
 // Net weights: 1 oz = 28.349523125 g and 1 lb = 453.59237 g exactly (NIST SP 811, App. B). Label
 // form "Net Wt 12 oz (340 g)" per the FPLA and FDA 21 CFR 101.105. Fill weights are the declared
-// mass rounded up to a whole gram (PRODUCT.md):
+// mass rounded up to a whole gram:
 //   12 oz = 340.194 g → label 340 g, fill 341 g;  1 lb = 453.592 g → label 454 g, fill 454 g;
 //   8 oz = 226.796 g → label 227 g, fill 227 g.
 const twelveOunce = { netLabel: 'Net Wt 12 oz (340 g)', netGrams: 341 };
@@ -50,12 +42,12 @@ describe('GET /api/roastery/days/:date/pack-list', () => {
       roastDate,
       lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'medium', grind: 'pour-over', brewMethod: 'filter' }],
     });
-    const green = await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!);
+    const green = await createGreenOrder(customer.id, lot.id, { shipDate: roasted.shipDate!, status: 'paid' });
     const left = [
-      await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!, 'pending_payment'),
-      await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!, 'cancelled'),
-      await createGreenOrderShipping(customer.id, lot.id, roasted.shipDate!, 'refunded'),
-      await createGreenOrderShipping(customer.id, lot.id, uniqueDay()),
+      await createGreenOrder(customer.id, lot.id, { shipDate: roasted.shipDate!, status: 'pending_payment' }),
+      await createGreenOrder(customer.id, lot.id, { shipDate: roasted.shipDate!, status: 'cancelled' }),
+      await createGreenOrder(customer.id, lot.id, { shipDate: roasted.shipDate!, status: 'refunded' }),
+      await createGreenOrder(customer.id, lot.id, { shipDate: uniqueDay(), status: 'paid' }),
     ];
 
     const list = await packList(roasted.shipDate!);
@@ -94,7 +86,7 @@ describe('GET /api/roastery/days/:date/pack-list', () => {
     const lot = await createLotForSale(20_000);
     const roastDate = uniqueDay();
     const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '1lb', quantity: 21, roastLevel: 'medium' }] });
-    const green = await createGreenOrderShipping(customer.id, lot.id, order.shipDate!);
+    const green = await createGreenOrder(customer.id, lot.id, { shipDate: order.shipDate!, status: 'paid' });
 
     const list = await packList(order.shipDate!);
 
@@ -222,7 +214,7 @@ describe('POST /api/orders/:id/pack', () => {
   it('packs a green order without any batch, and moves a subscription delivery to roasted when its order is packed', async () => {
     const lot = await createLotForSale(20_000);
     const shipDate = uniqueDay();
-    const green = await createGreenOrderShipping(customer.id, lot.id, shipDate);
+    const green = await createGreenOrder(customer.id, lot.id, { shipDate, status: 'paid' });
 
     const greenPacked = await staff.post(`/api/orders/${green.id}/pack`);
 
@@ -243,7 +235,7 @@ describe('POST /api/orders/:id/pack', () => {
   it('refuses with 409 to pack an order that is unpaid or cancelled, and changes nothing', async () => {
     const lot = await createLotForSale(20_000);
     for (const status of ['pending_payment', 'cancelled'] as const) {
-      const order = await createGreenOrderShipping(customer.id, lot.id, uniqueDay(), status);
+      const order = await createGreenOrder(customer.id, lot.id, { shipDate: uniqueDay(), status });
       const response = await staff.post(`/api/orders/${order.id}/pack`);
       expect(response.status).toBe(409);
       expect(apiErrorSchema.parse(response.body).error.code).toBe('not_packable');
@@ -258,14 +250,7 @@ describe('POST /api/orders/:id/pack', () => {
 
 /** A subscription delivery whose order is `orderId` (as the subscription step links them). */
 async function deliveryFor(orderId: string, roastDate: string, lotId: string) {
-  const db = getTestDb();
-  const [subscription] = await db
-    .insert(subscriptions)
-    .values({ userId: customer.id, lotId, roastLevel: 'medium', bagSize: '1lb', cadenceWeeks: 2, priceCents: 1500, shippingAddress: { ...shipTo, line2: null, country: 'US' } })
-    .returning({ id: subscriptions.id });
-  const [delivery] = await db
-    .insert(deliveries)
-    .values({ subscriptionId: subscription!.id, orderId, sequence: 1, roastDate, shipDate: roastDate, readyFrom: roastDate, bestBefore: roastDate })
-    .returning({ id: deliveries.id });
-  return delivery!.id;
+  const subscription = await createSubscription({ userId: customer.id, lotId, bagSize: '1lb', priceCents: 1500 });
+  const delivery = await createDelivery({ subscriptionId: subscription.id, orderId, roastDate, shipDate: roastDate, readyFrom: roastDate, bestBefore: roastDate });
+  return delivery.id;
 }

@@ -4,23 +4,8 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { decliningTestCard, succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { inboxOf, waitFor } from './outbox-support';
-import {
-  createCustomer,
-  createGreenOrder,
-  createPendingSubscription,
-  createTestLot,
-  eventsAbout,
-  ledgerCount,
-  orderRow,
-  outboxCount,
-  settle,
-  startPaymentsServer,
-  stripeFake,
-  subscriptionRow,
-  testPaymentsService,
-  testStripe,
-  type PaymentsServer,
-} from './payments-support';
+import { eventsAbout, ledgerCount, orderRow, outboxCount, settle, startPaymentsServer, stripeFake, subscriptionRow, testPaymentsService, testStripe, type PaymentsServer } from './payments-support';
+import { createCustomer, createGreenOrder, createLotForSale, createPendingSubscription } from '../factories/index';
 
 let running: PaymentsServer;
 let lot: { id: string; name: string };
@@ -31,7 +16,7 @@ const mailCatcherUrl = inject('mailCatcherUrl');
 beforeAll(async () => {
   running = await startPaymentsServer();
   payments = testPaymentsService(running.config);
-  lot = await createTestLot();
+  lot = await createLotForSale(50_000);
 });
 
 afterAll(async () => {

@@ -1,19 +1,18 @@
 // Helpers for the payments tests: a real listening server the fake's webhooks reach, the real Stripe
-// SDK pointed at the fake, and invented customers, lots, orders and subscriptions written directly.
-import { randomUUID } from 'node:crypto';
+// SDK pointed at the fake, and readers for the rows the payment flow writes.
 import { asc, count, eq, inArray } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { inject } from 'vitest';
 import { stripeFakeControl } from '../../dev-services/stripe-fake/control-client';
 import { loadConfig, type Config } from '../../server/config';
-import { deliveries, emailOutbox, lots, orderItems, orders, paymentEvents, subscriptions, users } from '../../server/db/schema/index';
+import { deliveries, emailOutbox, orders, paymentEvents, subscriptions } from '../../server/db/schema/index';
 import { createPaymentsGateway, createStripeClient } from '../../server/integrations/payments';
 import { startServer, type RunningServer } from '../../server/index';
 import { createLogger } from '../../server/lib/logger';
 import { createPaymentsRepo } from '../../server/modules/payments/payments.repo';
 import { createPaymentsService } from '../../server/modules/payments/payments.service';
 import { getTestDb } from '../setup/test-db';
-import { testAddress, waitFor } from './outbox-support';
+import { waitFor } from './outbox-support';
 import { freePort } from '../setup/free-port';
 
 /**
@@ -87,65 +86,6 @@ export function testStripe(): Stripe {
 /** The payments service as the server's own routes would build it (its return URLs point at `config`'s server). */
 export function testPaymentsService(config: Config) {
   return createPaymentsService({ repo: createPaymentsRepo(getTestDb()), gateway: createPaymentsGateway(config), config });
-}
-
-/** An invented customer (accounts come in a later step, so the row is written directly). */
-export async function createCustomer(tag: string) {
-  const email = testAddress(tag);
-  const [user] = await getTestDb()
-    .insert(users)
-    .values({ email, name: 'Robin Testroaster', passwordHash: 'not-a-password-hash' })
-    .returning({ id: users.id, email: users.email });
-  return user!;
-}
-
-const invented = { name: 'Robin Testroaster', line1: '1 Invented Lane', city: 'Sampleville', region: 'CO', postalCode: '80000', country: 'US' };
-
-export async function createTestLot() {
-  const code = `PAY-${randomUUID().slice(0, 8).toUpperCase()}`;
-  const [lot] = await getTestDb()
-    .insert(lots)
-    .values({
-      code,
-      name: `Invented Ridge ${code}`,
-      origin: 'Testland',
-      region: 'North Ridge',
-      producer: 'Invented Growers Cooperative',
-      variety: 'Bourbon',
-      process: 'washed',
-      altitudeM: 1700,
-      cropYear: 2026,
-      moisturePct: 10.8,
-      suggestedLevel: 'medium',
-      allowedLevels: ['light', 'medium'],
-      stockGrams: 50_000,
-      pricePerKgCents: 4000,
-    })
-    .returning({ id: lots.id, name: lots.name, code: lots.code });
-  return lot!;
-}
-
-/** A green order waiting for payment: 1 × 1 lb at $18.99 and 2 × 8 oz at $10.50, plus $8.50 shipping = $48.49. */
-export async function createGreenOrder(userId: string, lotId: string) {
-  const db = getTestDb();
-  const [order] = await db
-    .insert(orders)
-    .values({ userId, kind: 'green', subtotalCents: 3999, shippingCents: 850, totalCents: 4849, shippingAddress: invented })
-    .returning({ id: orders.id, totalCents: orders.totalCents });
-  await db.insert(orderItems).values([
-    { orderId: order!.id, lotId, kind: 'green', size: '1lb', quantity: 1, fillGrams: 454, unitPriceCents: 1899, lineTotalCents: 1899 },
-    { orderId: order!.id, lotId, kind: 'green', size: '8oz', quantity: 2, fillGrams: 227, unitPriceCents: 1050, lineTotalCents: 2100 },
-  ]);
-  return order!;
-}
-
-/** A subscription not started yet (2 × 12 oz, $36.00 every two weeks); its deliveries come with its first payment. */
-export async function createPendingSubscription(userId: string, lotId: string | null) {
-  const [subscription] = await getTestDb()
-    .insert(subscriptions)
-    .values({ userId, lotId, roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2, cadenceWeeks: 2, priceCents: 3600, shippingAddress: invented })
-    .returning({ id: subscriptions.id });
-  return { id: subscription!.id };
 }
 
 export async function orderRow(orderId: string) {

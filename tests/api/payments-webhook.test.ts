@@ -9,26 +9,8 @@ import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { loadCalendarOverrides, loadShopSettings } from '../../server/modules/settings/settings.repo';
 import { getTestDb } from '../setup/test-db';
 import { inboxOf, waitFor } from './outbox-support';
-import {
-  createCustomer,
-  createGreenOrder,
-  createPendingSubscription,
-  createTestLot,
-  deliveryRows,
-  eventsAbout,
-  ledgerCount,
-  orderCount,
-  eventApplied,
-  orderRow,
-  outboxCount,
-  settle,
-  startPaymentsServer,
-  stripeFake,
-  subscriptionRow,
-  testPaymentsService,
-  testStripe,
-  type PaymentsServer,
-} from './payments-support';
+import { deliveryRows, eventsAbout, ledgerCount, orderCount, eventApplied, orderRow, outboxCount, settle, startPaymentsServer, stripeFake, subscriptionRow, testPaymentsService, testStripe, type PaymentsServer } from './payments-support';
+import { createCustomer, createGreenOrder, createLotForSale, createPendingSubscription } from '../factories/index';
 
 // Stripe's published test card that saves to a customer and then fails every charge (Stripe docs, Testing).
 const failsOnCharge = '4000000000000341';
@@ -44,7 +26,7 @@ const webhookSecret = inject('stripeWebhookSecret');
 beforeAll(async () => {
   running = await startPaymentsServer();
   payments = testPaymentsService(running.config);
-  lot = await createTestLot();
+  lot = await createLotForSale(50_000);
 });
 
 afterAll(async () => {

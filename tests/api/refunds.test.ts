@@ -5,11 +5,11 @@ import { refundResponseSchema } from '@shared/schemas/packing';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { createTestApp } from '../setup/test-app';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { createLotForSale, movementsOf, shipTo, stockOf } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
+import { movementsOf, stockOf } from './checkout-support';
 import { waitFor } from './outbox-support';
 import { orderRow, startPaymentsServer, testStripe, type PaymentsServer } from './payments-support';
-import { createGreenOrderShipping } from './packing-support';
+import { createGreenOrder, createLotForSale, createTestUser, shipTo } from '../factories/index';
 
 const app = createTestApp();
 const stripe = testStripe();
@@ -43,7 +43,7 @@ async function paidGreenOrder() {
 describe('POST /api/orders/:id/refund', () => {
   it('refunds in full through Stripe, answers 202, lets the webhook mark the order refunded and returns the unshipped green stock exactly once', async () => {
     const { lot, order } = await paidGreenOrder();
-    // 2 × 454 g fill (1 lb = 453.59237 g, rounded up: NIST SP 811 App. B, PRODUCT.md) left at checkout.
+    // 2 × 454 g fill (1 lb = 453.59237 g, rounded up: NIST SP 811 App. B) left at checkout.
     expect(await stockOf(lot.id)).toBe(20_000 - 908);
 
     const response = await owner.post(`/api/orders/${order.id}/refund`).send({ reason: 'requested_by_customer' });
@@ -95,7 +95,7 @@ describe('POST /api/orders/:id/refund', () => {
 
   it('answers 409 for an order with no payment', async () => {
     const lot = await createLotForSale(5_000);
-    const unpaid = await createGreenOrderShipping((await createTestUser('customer')).id, lot.id, '2041-03-04', 'pending_payment');
+    const unpaid = await createGreenOrder((await createTestUser('customer')).id, lot.id, { shipDate: '2041-03-04', status: 'pending_payment' });
 
     const response = await owner.post(`/api/orders/${unpaid.id}/refund`).send({});
 

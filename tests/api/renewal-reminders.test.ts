@@ -9,9 +9,8 @@ import { createAdjustableClock } from '../../server/lib/clock';
 import { createLogger } from '../../server/lib/logger';
 import { saveShopSettings } from '../../server/modules/settings/settings.repo';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser } from '../setup/test-users';
-import { createLotForSale } from './checkout-support';
-import { inventSubscription, useShopSettings } from './subscriber-support';
+import { useShopSettings } from './subscriber-support';
+import { createLotForSale, createTestUser, inventSubscription } from '../factories/index';
 
 // The default shop is in New York and reminds 3 days before a charge (renewalReminderDays).
 useShopSettings({ ...defaultShopSettings, renewalReminderDays: 3 });

@@ -14,10 +14,9 @@ import { createLogger } from '../../server/lib/logger';
 import { loadShopSettings } from '../../server/modules/settings/settings.repo';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
 import { inboxOf, outboxRows, testConfig, waitFor } from './outbox-support';
-import { createRoastedOrder, dayAfter, recordBatch, uniqueDay } from './packing-support';
+import { createLotForSale, createRoastedOrder, createTestUser, dayAfter, recordBatch, type TestUser, uniqueDay } from '../factories/index';
 
 const databaseUrl = inject('databaseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');

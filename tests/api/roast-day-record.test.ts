@@ -2,11 +2,10 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { defaultLossModel } from '@shared/domain/roast-loss';
 import { batchCreatedSchema, calendarResponseSchema, roastListResponseSchema } from '@shared/schemas/roastery';
 import { createTestApp } from '../setup/test-app';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { insertLot, insertRoastedOrder, runTag, useShopSettings } from './roastery-support';
+import { signedInAgent } from '../setup/test-users';
+import { createPaidRoastedOrder, createStockedLot, createTestUser, roastListTestSettings, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
 
 const standardFontDataUrl = `${path.join(path.dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
 
@@ -18,17 +17,7 @@ let customer: TestUser;
 beforeAll(async () => {
   const app = createTestApp();
   [staff, customer] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), createTestUser('customer')]);
-  // 2 % overage, a 12 kg roaster at 50–80 % (TRADE.md "Roasting": usual load 50–80 %, from memory),
-  // medium loss 15 % (TRADE.md "Roast loss": medium 14–16 %, midpoint, from memory).
-  await useShopSettings({
-    overagePct: 2,
-    roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
-    lossModel: { ...defaultLossModel, medium: { minPct: 14, maxPct: 16, defaultPct: 15 } },
-    lossModelMinBatches: 3,
-    roastWeekdays: ['mon', 'wed', 'fri'],
-    shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'],
-    dayCapacityGrams: 60_000,
-  });
+  await saveTestShopSettings({ ...roastListTestSettings, shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'] });
 });
 
 async function roastList(date: string) {
@@ -57,11 +46,11 @@ describe('a roast day’s Roast List is its production record', () => {
   it('keeps the lines of packed and shipped orders with their batches, and has nothing left to pull for them (JSON, CSV and PDF)', async () => {
     const date = '2031-06-02';
     const code = `${tag}-REC`;
-    const lotId = await insertLot(code, { name: 'Invented Record Washed', stockGrams: 20_000 });
+    const lotId = await createStockedLot(code, { name: 'Invented Record Washed', stockGrams: 20_000 });
     const dates = { shipDate: '2031-06-03', readyFrom: '2031-06-04', bestBefore: '2031-06-30' };
-    // 6 × 12 oz + 4 × 1 lb at medium: 6 × 341 + 4 × 454 = 3,862 g roasted (fill weights, PRODUCT.md).
-    const first = await insertRoastedOrder({ userId: customer.id, roastDate: date, dates, lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }] });
-    const second = await insertRoastedOrder({ userId: customer.id, roastDate: date, dates, lines: [{ lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
+    // 6 × 12 oz + 4 × 1 lb at medium: 6 × 341 + 4 × 454 = 3,862 g roasted (fill weights: each bag size rounded up to a whole gram).
+    const first = await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates, lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }] });
+    const second = await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates, lines: [{ lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
 
     const before = await roastList(date);
     // Green: ceil(3,862 × 1.02 ÷ 0.85) = ceil(4,634.4) = 4,635 g, one batch (under the 9,600 g maximum load).
@@ -129,10 +118,10 @@ describe('a roast day’s Roast List is its production record', () => {
   it('plans only what the recorded batches do not cover yet, through the same loss and overage', async () => {
     const date = '2031-06-09';
     const code = `${tag}-PART`;
-    const lotId = await insertLot(code, { stockGrams: 30_000 });
+    const lotId = await createStockedLot(code, { stockGrams: 30_000 });
     // 20 × 1 lb at medium: 20 × 454 = 9,080 g roasted; green ceil(9,080 × 1.02 ÷ 0.85) = ceil(10,896) = 10,896 g,
     // over the 9,600 g maximum load, so two batches of 5,448 g.
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 20, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 20, roastLevel: 'medium' }] });
     expect((await roastList(date)).lines[0]).toMatchObject({ greenGrams: 10_896, batches: [{ greenGrams: 5_448 }, { greenGrams: 5_448 }] });
 
     // One batch recorded: 5,448 g in, 4,630 g out. Still to roast: 9,080 − 4,630 = 4,450 g roasted;

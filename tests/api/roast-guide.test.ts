@@ -35,14 +35,14 @@ describe('GET /api/lots/:code/roast-guide', () => {
     expect(response.status).toBe(200);
     const guide = response.body;
     expect(guide.level).toBe('medium');
-    // Popper batches hold about 75–80 g of green beans (TRADE.md, common practice): 454 g → 6 batches.
+    // Popper batches hold about 75–80 g of green beans (common home-roasting practice): 454 g → 6 batches.
     expect(guide.batchGrams).toEqual({ min: 75, max: 80 });
     expect(guide.batches).toBe(Math.ceil(454 / 80));
-    // Medium loses 14–16% (TRADE.md, from memory): roasted yield between 454 × 0.84 and 454 × 0.86.
+    // Medium loses 14–16% (a common rule of thumb, from memory): roasted yield between 454 × 0.84 and 454 × 0.86.
     expect(guide.expectedLossPct).toMatchObject({ min: 14, max: 16 });
     expect(guide.expectedRoastedGrams.min).toBeGreaterThanOrEqual(Math.floor(454 * 0.84));
     expect(guide.expectedRoastedGrams.max).toBeLessThanOrEqual(Math.ceil(454 * 0.86));
-    // Medium: about 20–30 s after first crack in a popper (TRADE.md, common practice).
+    // Medium: about 20–30 s after first crack in a popper (common practice).
     expect(guide.afterFirstCrackSeconds).toEqual({ min: 20, max: 30 });
     expect(guide.phases.map((phase: { name: string }) => phase.name.toLowerCase()).join(' ')).toMatch(/drying.*browning.*development/);
     expect(guide.cautions.join(' ')).toMatch(/unattended/i);

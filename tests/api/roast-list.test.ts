@@ -3,12 +3,11 @@ import path from 'node:path';
 import request from 'supertest';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { defaultLossModel } from '@shared/domain/roast-loss';
 import { roastListResponseSchema } from '@shared/schemas/roastery';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { createTestApp } from '../setup/test-app';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { insertLot, insertRoastedOrder, pickRotationLot, runTag, useShopSettings } from './roastery-support';
+import { signedInAgent } from '../setup/test-users';
+import { createPaidRoastedOrder, createStockedLot, createTestUser, pickRotationLot, roastListTestSettings, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
 
 // pdf.js reads the standard fonts' metrics from its own package.
 const standardFontDataUrl = `${path.join(path.dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
@@ -22,28 +21,17 @@ let customer: TestUser;
 beforeAll(async () => {
   app = createTestApp();
   [staff, customer] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), createTestUser('customer')]);
-  // The figures the hand-worked example uses, set here rather than trusted to the defaults:
-  // 2 % overage (a small configurable overage, PRODUCT.md "Roast list"), a 12 kg roaster at a
-  // preferred 50–80 % load (TRADE.md "Roasting": shop roasters 12 kg, usual load 50–80 % of rated
-  // capacity, from memory), medium loss 15 % (TRADE.md "Roast loss": medium 14–16 %, midpoint 15, from memory).
-  await useShopSettings({
-    overagePct: 2,
-    roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
-    lossModel: { ...defaultLossModel, medium: { minPct: 14, maxPct: 16, defaultPct: 15 } },
-    lossModelMinBatches: 3,
-    roastWeekdays: ['mon', 'wed', 'fri'],
-    dayCapacityGrams: 60_000,
-  });
+  await saveTestShopSettings(roastListTestSettings);
 });
 
 describe('GET /api/roastery/days/:date/roast-list', () => {
   it('plans one lot at medium exactly as worked by hand: 3,862 g roasted → 4,635 g green in one batch below the preferred load', async () => {
     const date = '2031-03-05';
     const code = `${tag}-ONE`;
-    const lotId = await insertLot(code, { name: 'Invented Hollow Washed', stockGrams: 10_000 });
+    const lotId = await createStockedLot(code, { name: 'Invented Hollow Washed', stockGrams: 10_000 });
     // 6 bags of 12 oz and 4 of 1 lb, spread over three orders.
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '12oz', quantity: 4, roastLevel: 'medium' }] });
-    await insertRoastedOrder({
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '12oz', quantity: 4, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({
       userId: customer.id,
       roastDate: date,
       status: 'held',
@@ -52,23 +40,23 @@ describe('GET /api/roastery/days/:date/roast-list', () => {
         { lotId, size: '1lb', quantity: 1, roastLevel: 'medium' },
       ],
     });
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 3, roastLevel: 'medium', brewMethod: 'espresso' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 3, roastLevel: 'medium', brewMethod: 'espresso' }] });
     // Not on the list: unpaid, cancelled, another day.
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, status: 'pending_payment', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, status: 'cancelled', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
-    await insertRoastedOrder({ userId: customer.id, roastDate: '2031-03-07', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, status: 'pending_payment', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, status: 'cancelled', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: '2031-03-07', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
 
     const response = await staff.get(`/api/roastery/days/${date}/roast-list`);
     expect(response.status).toBe(200);
     const list = roastListResponseSchema.parse(response.body);
 
-    // Fill weights (PRODUCT.md "Weights on the label and in the bag"): 12 oz → 341 g, 1 lb → 454 g.
+    // Fill weights (each declared weight rounded up to a whole gram): 12 oz → 341 g, 1 lb → 454 g.
     // Roasted: 6 × 341 + 4 × 454 = 2,046 + 1,816 = 3,862 g.
     // Green: ceil(3,862 × 1.02 ÷ (1 − 0.15)) = ceil(3,939.24 ÷ 0.85) = ceil(4,634.4) = 4,635 g
-    //   (green = roasted ÷ (1 − loss), TRADE.md "Roast loss", common practice; plus the 2 % overage).
+    //   (green = roasted ÷ (1 − loss), common practice; plus the 2 % overage).
     // Batches: the maximum load is 80 % of 12,000 = 9,600 g, so 4,635 g is one batch; the preferred
     //   minimum is 50 % of 12,000 = 6,000 g, so it is below it (warning); the hard floor is 25 % of
-    //   12,000 = 3,000 g (TRADE.md: under 25 % is hard to control, S. Rao 2014), so no floor proposal.
+    //   12,000 = 3,000 g (under 25 % is hard to control, S. Rao 2014), so no floor proposal.
     expect(list.lines).toEqual([
       {
         lotCode: code,
@@ -98,13 +86,13 @@ describe('GET /api/roastery/days/:date/roast-list', () => {
     const picked = '2031-03-10';
     const unpicked = '2031-03-12';
     const code = `${tag}-ROT`;
-    const lotId = await insertLot(code, { stockGrams: 1_000 });
+    const lotId = await createStockedLot(code, { stockGrams: 1_000 });
     await pickRotationLot(picked, lotId);
-    await insertRoastedOrder({ userId: customer.id, roastDate: picked, lines: [{ lotId: null, size: '2lb', quantity: 2, roastLevel: 'dark' }] });
-    await insertRoastedOrder({ userId: customer.id, roastDate: unpicked, lines: [{ lotId: null, size: '12oz', quantity: 3, roastLevel: 'light' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: picked, lines: [{ lotId: null, size: '2lb', quantity: 2, roastLevel: 'dark' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: unpicked, lines: [{ lotId: null, size: '12oz', quantity: 3, roastLevel: 'light' }] });
 
     const withPick = roastListResponseSchema.parse((await staff.get(`/api/roastery/days/${picked}/roast-list`)).body);
-    // 2 × 908 g (2 lb fill, PRODUCT.md) = 1,816 g roasted at dark, 19 % (TRADE.md, from memory):
+    // 2 × 908 g (2 lb fill) = 1,816 g roasted at dark, 19 % (from memory):
     // ceil(1,816 × 1.02 ÷ 0.81) = ceil(1,852.32 ÷ 0.81) = ceil(2,286.81…) = 2,287 g green.
     expect(withPick.lines).toMatchObject([{ lotCode: code, roastLevel: 'dark', roastedGrams: 1_816, greenGrams: 2_287 }]);
     // 2,287 g needed, 1,000 g in stock: 1,287 g short.
@@ -124,18 +112,18 @@ describe('GET /api/roastery/days/:date/roast-list', () => {
 
   it('warns when the day plans more green than its capacity', async () => {
     const date = '2031-03-14';
-    const lotId = await insertLot(`${tag}-BIG`, { stockGrams: 100_000 });
-    await useShopSettings({ dayCapacityGrams: 10_000, roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 }, overagePct: 2 });
+    const lotId = await createStockedLot(`${tag}-BIG`, { stockGrams: 100_000 });
+    await saveTestShopSettings({ dayCapacityGrams: 10_000, roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 }, overagePct: 2 });
     try {
       // 30 × 454 g = 13,620 g roasted at medium 15 %: ceil(13,620 × 1.02 ÷ 0.85) = ceil(16,344) = 16,344 g green, over 10,000 g.
-      await insertRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 30, roastLevel: 'medium' }] });
+      await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 30, roastLevel: 'medium' }] });
       const list = roastListResponseSchema.parse((await staff.get(`/api/roastery/days/${date}/roast-list`)).body);
       expect(list.totals.greenGrams).toBe(16_344);
       // 16,344 g over a 9,600 g maximum load: two batches of 8,172 g.
       expect(list.lines[0]!.batches).toEqual([{ greenGrams: 8_172 }, { greenGrams: 8_172 }]);
       expect(list.warnings[0]).toMatchObject({ code: 'over_day_capacity', message: expect.stringContaining('6,344 g over') });
     } finally {
-      await useShopSettings({ dayCapacityGrams: 60_000 });
+      await saveTestShopSettings({ dayCapacityGrams: 60_000 });
     }
   });
 
@@ -158,8 +146,8 @@ describe('GET /api/roastery/days/:date/roast-list.csv and .pdf', () => {
 
   beforeAll(async () => {
     code = `${tag}-DOC`;
-    const lotId = await insertLot(code, { name: '=HYPERLINK("http://invalid.example")', stockGrams: 20_000 });
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }, { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
+    const lotId = await createStockedLot(code, { name: '=HYPERLINK("http://invalid.example")', stockGrams: 20_000 });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }, { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
   });
 
   it('downloads the list as CSV, one row per lot and level, with text that could run as a formula kept as text', async () => {

@@ -8,9 +8,9 @@ import { calendarDayUpdateResponseSchema, calendarResponseSchema, roastListRespo
 import { deliveries, emailOutbox, orders, roastDays } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
 import { inboxOf, testRelay } from './outbox-support';
-import { insertLot, insertRoastedOrder, insertSubscriptionDelivery, runTag, useShopSettings } from './roastery-support';
+import { createPaidRoastedOrder, createStockedLot, createSubscriptionDelivery, createTestUser, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
 
 // Invented customers, lots and orders in May 2031, a month no other test file uses.
 const tag = runTag();
@@ -36,7 +36,7 @@ async function movedEmailsTo(addresses: string[]) {
 
 // The schedule the expected dates below are worked from: roast Monday, Wednesday and Friday;
 // ship Monday to Friday; one day's degassing hold; 3 transit days; rest 2 days for filter and 7 for
-// espresso, no level adjustments; best before 28 days after roasting (TRADE.md product defaults).
+// espresso, no level adjustments; best before 28 days after roasting (the product's defaults).
 // Ready on arrival and the weekend hold are on (the defaults): a parcel ships no earlier than its
 // expected arrival allows it to be ready, and never into a weekend in transit, so with 3 transit
 // days roasted parcels leave on a Monday or Tuesday (common practice: no parcel sits over a weekend).
@@ -57,8 +57,8 @@ const shopSettingsForDates = {
 beforeAll(async () => {
   app = createTestApp();
   staff = await createTestUser('staff').then((user) => signedInAgent(app, user));
-  lotId = await insertLot(`${tag}-CAL`, { name: 'Invented Saddle Washed', stockGrams: 50_000 });
-  await useShopSettings(shopSettingsForDates);
+  lotId = await createStockedLot(`${tag}-CAL`, { name: 'Invented Saddle Washed', stockGrams: 50_000 });
+  await saveTestShopSettings(shopSettingsForDates);
 });
 
 describe('PUT /api/roastery/calendar/:date', () => {
@@ -70,8 +70,8 @@ describe('PUT /api/roastery/calendar/:date', () => {
 
   beforeAll(async () => {
     [customerA, customerB, customerC] = await Promise.all([createTestUser('customer'), createTestUser('customer'), createTestUser('customer')]);
-    ids.a1 = await insertRoastedOrder({ userId: customerA.id, roastDate: closed, dates: oldDates, lines: [{ lotId, size: '12oz', quantity: 2, roastLevel: 'medium' }] });
-    ids.a2 = await insertRoastedOrder({
+    ids.a1 = await createPaidRoastedOrder({ userId: customerA.id, roastDate: closed, dates: oldDates, lines: [{ lotId, size: '12oz', quantity: 2, roastLevel: 'medium' }] });
+    ids.a2 = await createPaidRoastedOrder({
       userId: customerA.id,
       roastDate: closed,
       status: 'held',
@@ -79,8 +79,8 @@ describe('PUT /api/roastery/calendar/:date', () => {
       lines: [{ lotId, size: '1lb', quantity: 1, roastLevel: 'dark', brewMethod: 'espresso', grind: 'espresso' }],
     });
     // Customer B: a paid subscription delivery (an order carrying its delivery) and another subscription's delivery not paid yet.
-    const paidDelivery = await insertSubscriptionDelivery({ userId: customerB.id, lotId, roastLevel: 'light', brewMethod: 'filter', roastDate: closed, dates: oldDates });
-    ids.b1 = await insertRoastedOrder({
+    const paidDelivery = await createSubscriptionDelivery({ userId: customerB.id, lotId, roastLevel: 'light', brewMethod: 'filter', roastDate: closed, dates: oldDates });
+    ids.b1 = await createPaidRoastedOrder({
       userId: customerB.id,
       roastDate: closed,
       dates: oldDates,
@@ -89,9 +89,9 @@ describe('PUT /api/roastery/calendar/:date', () => {
       lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'light' }],
     });
     ids.b1Delivery = paidDelivery.deliveryId;
-    ids.b2Delivery = (await insertSubscriptionDelivery({ userId: customerB.id, lotId: null, roastLevel: 'medium', brewMethod: 'espresso', roastDate: closed, dates: oldDates })).deliveryId;
+    ids.b2Delivery = (await createSubscriptionDelivery({ userId: customerB.id, lotId: null, roastLevel: 'medium', brewMethod: 'espresso', roastDate: closed, dates: oldDates })).deliveryId;
     // Customer C: an order still waiting for payment, which the roastery does not plan.
-    ids.c1 = await insertRoastedOrder({ userId: customerC.id, roastDate: closed, status: 'pending_payment', dates: oldDates, lines: [{ lotId, size: '1lb', quantity: 1, roastLevel: 'medium' }] });
+    ids.c1 = await createPaidRoastedOrder({ userId: customerC.id, roastDate: closed, status: 'pending_payment', dates: oldDates, lines: [{ lotId, size: '1lb', quantity: 1, roastLevel: 'medium' }] });
   });
 
   it('closing a roast day moves its orders and deliveries to the next open roast day and sends one e-mail per affected customer', async () => {
@@ -171,9 +171,9 @@ describe('PUT /api/roastery/calendar/:date', () => {
     const customer = await createTestUser('customer');
     expect((await staff.put('/api/roastery/calendar/2031-05-23').send({ open: true, capacityGrams: 1_000 })).status).toBe(200);
     // Paid first: 1 × 341 g at medium 15 % → ceil(341 × 1.02 ÷ 0.85) = ceil(409.2) = 410 g, fits in 1,000 g.
-    const small = await insertRoastedOrder({ userId: customer.id, roastDate: closedDay, paidAt: new Date('2031-05-01T15:00:00Z'), dates: datesAfter(closedDay), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const small = await createPaidRoastedOrder({ userId: customer.id, roastDate: closedDay, paidAt: new Date('2031-05-01T15:00:00Z'), dates: datesAfter(closedDay), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
     // Paid second: 2 × 454 g = 908 g → ceil(908 × 1.02 ÷ 0.85) = ceil(1,089.6) = 1,090 g: 410 + 1,090 > 1,000, so Monday.
-    const large = await insertRoastedOrder({ userId: customer.id, roastDate: closedDay, paidAt: new Date('2031-05-02T15:00:00Z'), dates: datesAfter(closedDay), lines: [{ lotId, size: '1lb', quantity: 2, roastLevel: 'medium' }] });
+    const large = await createPaidRoastedOrder({ userId: customer.id, roastDate: closedDay, paidAt: new Date('2031-05-02T15:00:00Z'), dates: datesAfter(closedDay), lines: [{ lotId, size: '1lb', quantity: 2, roastLevel: 'medium' }] });
     const day = calendarDayUpdateResponseSchema.parse((await staff.put(`/api/roastery/calendar/${closedDay}`).send({ open: false })).body);
     expect(Object.fromEntries(day.moved.map((move) => [move.orderId, move.to]))).toEqual({ [small]: '2031-05-23', [large]: '2031-05-26' });
     // One customer, one e-mail listing both orders.
@@ -185,15 +185,15 @@ describe('PUT /api/roastery/calendar/:date', () => {
   it('answers 409 when no later roast day has room for an order, and leaves the day open and the order where it was', async () => {
     const day = '2031-05-19'; // a Monday
     const customer = await createTestUser('customer');
-    const order = await insertRoastedOrder({ userId: customer.id, roastDate: day, dates: datesAfter(day), lines: [{ lotId, size: '2lb', quantity: 3, roastLevel: 'medium' }] });
+    const order = await createPaidRoastedOrder({ userId: customer.id, roastDate: day, dates: datesAfter(day), lines: [{ lotId, size: '2lb', quantity: 3, roastLevel: 'medium' }] });
     // 3 × 908 g = 2,724 g roasted needs more than a 2,000 g day can roast, on any day.
-    await useShopSettings({ ...shopSettingsForDates, dayCapacityGrams: 2_000 });
+    await saveTestShopSettings({ ...shopSettingsForDates, dayCapacityGrams: 2_000 });
     try {
       const response = await staff.put(`/api/roastery/calendar/${day}`).send({ open: false });
       expect(response.status).toBe(409);
       expect(apiErrorSchema.parse(response.body).error.code).toBe('no_roast_day');
     } finally {
-      await useShopSettings(shopSettingsForDates);
+      await saveTestShopSettings(shopSettingsForDates);
     }
     expect(await getTestDb().select().from(roastDays).where(eq(roastDays.date, day))).toEqual([]);
     expect((await orderDates([order]))[order]).toEqual({ roastDate: day, ...datesAfter(day) });
@@ -205,8 +205,8 @@ describe('PUT /api/roastery/calendar/:date', () => {
     // one order of 1 × 341 g at medium: ceil(341 × 1.02 ÷ 0.85) = 410 g of green, so Friday has room for one.
     const customer = await createTestUser('customer');
     expect((await staff.put('/api/roastery/calendar/2031-06-20').send({ open: true, capacityGrams: 600 })).status).toBe(200);
-    const monday = await insertRoastedOrder({ userId: customer.id, roastDate: '2031-06-16', dates: datesAfter('2031-06-16'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
-    const wednesday = await insertRoastedOrder({ userId: customer.id, roastDate: '2031-06-18', dates: datesAfter('2031-06-18'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const monday = await createPaidRoastedOrder({ userId: customer.id, roastDate: '2031-06-16', dates: datesAfter('2031-06-16'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const wednesday = await createPaidRoastedOrder({ userId: customer.id, roastDate: '2031-06-18', dates: datesAfter('2031-06-18'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
     const responses = await Promise.all(['2031-06-16', '2031-06-18'].map((date) => staff.put(`/api/roastery/calendar/${date}`).send({ open: false })));
     expect(responses.map((response) => response.status)).toEqual([200, 200]);
     const dates = await orderDates([monday, wednesday]);
@@ -249,8 +249,8 @@ describe('PUT /api/roastery/calendar/:date with shipOpen', () => {
     // Filter, ready Fri 11 Jul. Thu 10 and Fri 11 would be in transit over 12–13 Jul; Mon 14 →
     // Tue 15, Wed 16, Thu 17: the schedule's ship date.
     const dates = { shipDate: shipDay, readyFrom: '2031-07-11', bestBefore: '2031-08-06' };
-    orderId = await insertRoastedOrder({ userId: customer.id, roastDate, dates, lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
-    deliveryId = (await insertSubscriptionDelivery({ userId: customer.id, lotId, roastLevel: 'medium', brewMethod: 'filter', roastDate, dates })).deliveryId;
+    orderId = await createPaidRoastedOrder({ userId: customer.id, roastDate, dates, lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    deliveryId = (await createSubscriptionDelivery({ userId: customer.id, lotId, roastLevel: 'medium', brewMethod: 'filter', roastDate, dates })).deliveryId;
   });
 
   const shipDates = async () => {
@@ -308,8 +308,8 @@ describe('GET /api/roastery/calendar', () => {
   it('lists each day open or closed with its capacity, its orders and the green its Roast List plans', async () => {
     const customer = await createTestUser('customer');
     const date = '2031-06-04'; // a Wednesday
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, dates: datesAfter(date), lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }, { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
-    await insertRoastedOrder({ userId: customer.id, roastDate: date, dates: datesAfter(date), lines: [{ lotId: null, size: '2lb', quantity: 1, roastLevel: 'dark' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates: datesAfter(date), lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }, { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates: datesAfter(date), lines: [{ lotId: null, size: '2lb', quantity: 1, roastLevel: 'dark' }] });
     await staff.put('/api/roastery/calendar/2031-06-06').send({ open: false, note: 'Invented holiday' });
     await staff.put('/api/roastery/calendar/2031-06-07').send({ open: true, capacityGrams: 20_000 });
 

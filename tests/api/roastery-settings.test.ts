@@ -5,8 +5,8 @@ import { defaultShopSettings, shopSettingsSchema } from '@shared/schemas/setting
 import { auditLog } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { useShopSettings } from './roastery-support';
+import { signedInAgent } from '../setup/test-users';
+import { createTestUser, saveTestShopSettings, type TestUser } from '../factories/index';
 
 let app: ReturnType<typeof createTestApp>;
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -27,12 +27,12 @@ beforeAll(async () => {
   app = createTestApp();
   ownerUser = await createTestUser('owner');
   [staff, owner] = await Promise.all([createTestUser('staff').then((user) => signedInAgent(app, user)), signedInAgent(app, ownerUser)]);
-  await useShopSettings();
+  await saveTestShopSettings();
 });
 
 // Leave the shared test database on the defaults other test files expect.
 afterAll(async () => {
-  await useShopSettings();
+  await saveTestShopSettings();
 });
 
 describe('GET /api/roastery/settings', () => {
@@ -62,8 +62,8 @@ describe('PUT /api/roastery/settings', () => {
   });
 
   it('saves the ship policy, the weekend hold and the rest by level, and defaults them when left out', async () => {
-    // Defaults: ready on arrival and no parcel over a weekend (PRODUCT.md); light +1 day, medium 0,
-    // medium-dark, dark and French −1 (TRADE.md: darker roasts degas faster, Smrke et al. 2017;
+    // Defaults: ready on arrival and no parcel over a weekend; light +1 day, medium 0,
+    // medium-dark, dark and French −1 (darker roasts degas faster, Smrke et al. 2017;
     // the days from memory).
     const current = shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body);
     expect(current).toMatchObject({

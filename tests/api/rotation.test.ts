@@ -6,12 +6,12 @@ import { auditLog, deliveries, lots, rotationPicks } from '../../server/db/schem
 import { createAdjustableClock } from '../../server/lib/clock';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { createLotForSale } from './checkout-support';
-import { inventDelivery, inventDeliveryOrder, inventSubscription, useCalendarOverrides, useShopSettings } from './subscriber-support';
+import { signedInAgent } from '../setup/test-users';
+import { useCalendarOverrides, useShopSettings } from './subscriber-support';
+import { createLotForSale, createTestUser, inventDelivery, inventDeliveryOrder, inventSubscription } from '../factories/index';
 
 // The default shop: roasts Mon, Wed, Fri in New York; loss model defaults medium 15 %, dark 19 %
-// (TRADE.md "Roast loss", from memory) with a 2 % overage.
+// (from memory) with a 2 % overage.
 useShopSettings();
 const override = useCalendarOverrides();
 // Today in the shop is Tue 2 Mar 2032 (10:00 EST).

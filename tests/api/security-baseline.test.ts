@@ -10,8 +10,9 @@ import { createLogger } from '../../server/lib/logger';
 import { loadConfig } from '../../server/config';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, TEST_PASSWORD } from '../setup/test-users';
-import { testAddress, waitFor } from './outbox-support';
+import { signedInAgent } from '../setup/test-users';
+import { waitFor } from './outbox-support';
+import { createTestUser, TEST_PASSWORD, testAddress } from '../factories/index';
 
 const web = { 'X-Restday-Client': 'web' };
 const app = createTestApp();

@@ -10,10 +10,9 @@ import { shippingRulesSchema } from '@shared/schemas/shipping';
 import { orders } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
 import { orderRow } from './payments-support';
-import { useShopSettings } from './roastery-support';
+import { createLotForSale, createTestUser, saveTestShopSettings, shipTo, type TestUser } from '../factories/index';
 
 const app = createTestApp();
 let owner: Awaited<ReturnType<typeof signedInAgent>>;
@@ -31,7 +30,7 @@ const editedShipping = {
 };
 
 beforeAll(async () => {
-  await useShopSettings();
+  await saveTestShopSettings();
   owner = await signedInAgent(app, await createTestUser('owner'));
   customer = await createTestUser('customer');
   shopper = await signedInAgent(app, customer);
@@ -39,7 +38,7 @@ beforeAll(async () => {
 
 // Leave the shared test database on the defaults other test files expect.
 afterAll(async () => {
-  await useShopSettings();
+  await saveTestShopSettings();
 });
 
 async function putShipping(shipping: typeof editedShipping) {
@@ -68,7 +67,7 @@ describe('GET /api/shipping', () => {
     expect(edited.status).toBe(200);
     expect(shippingRulesSchema.parse(edited.body)).toEqual({ currency: 'usd', ...editedShipping });
     expect(edited.headers.etag).not.toBe(etag);
-    await useShopSettings();
+    await saveTestShopSettings();
   });
 });
 
@@ -83,7 +82,7 @@ describe('the cart’s quote and the green checkout’s charge', () => {
     const items = [{ lotCode: lot.code, size: '5lb' as const, quantity: 3 }];
     const cartQuote = quoteGreenOrder(items, { [lot.code]: detail }, { shipping: rules });
 
-    // Hand-worked on the edited bands: a 5 lb bag packed is 2,268 (PRODUCT.md) + 30 = 2,298 g. The 3 kg band
+    // Hand-worked on the edited bands: a 5 lb bag packed is 2,268 (5 lb rounded up to a whole gram) + 30 = 2,298 g. The 3 kg band
     // leaves 3,000 − 250 = 2,750 g (1 bag), the 6 kg band 5,750 g (2 bags, 4,596 g). 3 bags: 2 + 1 →
     // 4,846 g ($15.00) + 2,548 g ($9.00) = $24.00 (1 + 1 + 1 would be $27.00).
     // Bags: $40.00/kg × 2.26796185 kg (NIST SP 811) = $90.718… → $90.72; 3 × $90.72 = $272.16. Total $296.16.
@@ -95,7 +94,7 @@ describe('the cart’s quote and the green checkout’s charge', () => {
     const row = await orderRow(greenCheckoutResponseSchema.parse(response.body).orderId);
     expect(row.shippingCents).toBe(cartQuote.shippingCents);
     expect(row.totalCents).toBe(cartQuote.totalCents);
-    await useShopSettings();
+    await saveTestShopSettings();
   });
 
   it('answers 422 too_heavy_to_ship on the size when one bag is over the heaviest band, and places nothing', async () => {
@@ -118,11 +117,11 @@ describe('the cart’s quote and the green checkout’s charge', () => {
     expect(Object.keys(error.fields ?? {})).toEqual(['items.1.size']);
     expect(error.fields?.['items.1.size']).toContain('2,468 g');
     expect(await ordersOf(customer.id)).toBe(before);
-    await useShopSettings();
+    await saveTestShopSettings();
   });
 
   it('answers 422 on bagSize when a subscription’s roasted bag is over the heaviest band', async () => {
-    // 2 lb roasted packed alone: 908 (PRODUCT.md) + 20 + 180 = 1,108 g, over a 1 kg top band.
+    // 2 lb roasted packed alone: 908 (2 lb rounded up to a whole gram) + 20 + 180 = 1,108 g, over a 1 kg top band.
     await putShipping({ bands: [{ maxGrams: 1000, cents: 895 }], bagTareGrams: 20, boxTareGrams: 180 });
     const query = { roastLevel: 'medium', bagsPerDelivery: '1', brewMethod: 'filter', cadenceWeeks: '2' };
 
@@ -134,6 +133,6 @@ describe('the cart’s quote and the green checkout’s charge', () => {
     expect(Object.keys(error.fields ?? {})).toEqual(['bagSize']);
     // 12 oz: 341 + 20 + 180 = 541 g still ships in the 1 kg band.
     expect((await request(app).get('/api/subscriptions/preview').query({ ...query, bagSize: '12oz' })).status).toBe(200);
-    await useShopSettings();
+    await saveTestShopSettings();
   });
 });

@@ -3,13 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { subscriberCsvColumns, subscriberDetailSchema, subscriberListResponseSchema } from '@shared/schemas/subscribers';
 import { eq } from 'drizzle-orm';
-import { rotationPicks, subscriptions } from '../../server/db/schema/index';
+import { subscriptions } from '../../server/db/schema/index';
 import { createAdjustableClock } from '../../server/lib/clock';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { createLotForSale } from './checkout-support';
-import { inventDelivery, inventDeliveryOrder, inventSubscription, useShopSettings } from './subscriber-support';
+import { signedInAgent } from '../setup/test-users';
+import { useShopSettings } from './subscriber-support';
+import { createLotForSale, createTestUser, inventDelivery, inventDeliveryOrder, inventSubscription, pickRotationLot } from '../factories/index';
 
 useShopSettings();
 // Today in the shop (New York) is Tue 4 Mar 2031.
@@ -148,7 +148,7 @@ describe('GET /api/roastery/subscribers/:id', () => {
     const roasted = await inventDelivery(subscriptionId, 1, '2031-02-26', 'roasted');
     const orderId = await inventDeliveryOrder(frankie, subscriptionId, roasted, { roastDate: '2031-02-26', size: '12oz', quantity: 1, status: 'roasted', lotId: picked.id });
     await inventDelivery(subscriptionId, 2, '2031-03-05');
-    await getTestDb().insert(rotationPicks).values({ roastDate: '2031-02-26', lotId: picked.id }).onConflictDoUpdate({ target: rotationPicks.roastDate, set: { lotId: picked.id } });
+    await pickRotationLot('2031-02-26', picked.id);
 
     const staff = await signedInAgent(app, await createTestUser('staff'));
     const response = await staff.get(`/api/roastery/subscribers/${subscriptionId}`);

@@ -7,12 +7,12 @@ import { lots } from '../../server/db/schema/index';
 import { createAdjustableClock } from '../../server/lib/clock';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createLotForSale } from './checkout-support';
 import { useCalendarOverrides, useShopSettings } from './subscriber-support';
+import { createLotForSale } from '../factories/index';
 
-// The default shop (TRADE.md product defaults in defaultShopSettings): New York; roasts Mon, Wed,
+// The default shop (the product's defaults in defaultShopSettings): New York; roasts Mon, Wed,
 // Fri; cutoff 12:00 the day before; ships Mon–Fri after a 1-day degassing hold, 3 transit days,
-// ready on arrival and never in transit over a weekend (PRODUCT.md); filter rests 2 days; best-before 28 days; 12 oz bag $18.00, 10 % subscription discount; shipping bands up to
+// ready on arrival and never in transit over a weekend (the default ship policy); filter rests 2 days; best-before 28 days; 12 oz bag $18.00, 10 % subscription discount; shipping bands up to
 // 1,000 g $8.95, bag tare 20 g, box tare 180 g.
 useShopSettings();
 const override = useCalendarOverrides();

@@ -15,10 +15,9 @@ import { saveShopSettings } from '../../server/modules/settings/settings.repo';
 import { recordPaidCycle } from '../../server/modules/subscriptions/subscription-billing';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
 import { orderRow, subscriptionRow, testStripe } from './payments-support';
-import { inventDelivery, inventDeliveryOrder } from './subscriber-support';
+import { createLotForSale, createTestUser, createWeeklySubscription, inventDelivery, inventDeliveryOrder, shipTo, type TestUser } from '../factories/index';
 
 // Restday's default settings (shared/schemas/settings.ts): New York, roasting Monday, Wednesday and
 // Friday, cutoff 12:00 the day before. Monday 6 January 2031, 10:00 in New York (EST, UTC−5).
@@ -38,30 +37,10 @@ async function signedIn() {
   return { user, agent: await signedInAgent(app, user) };
 }
 
-/** An active weekly subscription (2 × 12 oz medium, filter) whose grid starts Monday 6 January 2031. */
-async function weeklySubscription(owner: TestUser) {
-  const lot = await createLotForSale(20_000);
-  const [row] = await getTestDb()
-    .insert(subscriptions)
-    .values({
-      userId: owner.id,
-      status: 'active',
-      lotId: lot.id,
-      roastLevel: 'medium',
-      bagSize: '12oz',
-      bagsPerDelivery: 2,
-      cadenceWeeks: 1,
-      priceCents: 4135,
-      anchorDate: '2031-01-06',
-      shippingAddress: { ...shipTo, country: 'US' },
-    })
-    .returning({ id: subscriptions.id });
-  return { id: row!.id, lot };
-}
 
 /** The same, with the delivery roasting Monday 13 January already paid (its cutoff, Sunday 12:00, is ahead). */
 async function withPaidDelivery(owner: TestUser) {
-  const subscription = await weeklySubscription(owner);
+  const subscription = await createWeeklySubscription(owner);
   const deliveryId = await inventDelivery(subscription.id, 1, '2031-01-13');
   const orderId = await inventDeliveryOrder(owner, subscription.id, deliveryId, { roastDate: '2031-01-13', size: '12oz', quantity: 2, lotId: subscription.lot.id });
   return { ...subscription, orderId };
@@ -129,7 +108,7 @@ describe('skipping a paid delivery, and undoing a skip', () => {
   it('an unpaid skip says it will not be charged; any upcoming delivery can be skipped, not only the next', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const later = await agent.post(`/api/subscriptions/${id}/deliveries/2031-01-27/skip`);
     expect(later.status).toBe(200);
     expect(subscriptionChangeResponseSchema.parse(later.body).notice).toBe('Skipped the delivery roasting Monday, January 27, 2031. It will not be roasted, shipped or charged.');
@@ -148,7 +127,7 @@ describe('skipping a paid delivery, and undoing a skip', () => {
   it('after its cutoff a skip can no longer be undone: 409 delivery_locked, and it stays skipped', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     expect((await agent.post(`/api/subscriptions/${id}/deliveries/2031-01-13/skip`)).status).toBe(200);
     const version = (await subscriptionRow(id)).changeVersion;
 
@@ -219,7 +198,7 @@ describe('pausing across a paid delivery', () => {
 
 describe('POST /api/checkout/subscription — a lot that cannot be roasted', () => {
   // One delivery of 2 × 12 oz at medium: 2 × 341 g fill = 682 g roasted; + 2 % overage (Restday default) = 695.64 g;
-  // ÷ (1 − 0.15) medium loss (TRADE.md, from memory; green = roasted ÷ (1 − loss), common practice) = 818.4 g → 819 g of green.
+  // ÷ (1 − 0.15) medium loss (from memory; green = roasted ÷ (1 − loss), common practice) = 818.4 g → 819 g of green.
   const request = (lotCode: string) => ({
     lotCode,
     roastLevel: 'medium',
@@ -267,7 +246,7 @@ describe('a delivery order’s discount line', () => {
   it('GET /api/orders/:id shows bags, the subscription discount and shipping that add up to what was paid', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const logger = createLogger({ LOG_LEVEL: 'silent', NODE_ENV: 'test' });
     // $41.35 paid: 2 × $18.00 = $36.00 of bags, less the 10 % subscription discount $3.60, plus $8.95 shipping
     // for 2 × (341 g + 20 g bag) + 180 g box = 902 g in the ≤ 1 kg band (Restday defaults).

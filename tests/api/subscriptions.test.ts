@@ -13,9 +13,9 @@ import { createAdjustableClock } from '../../server/lib/clock';
 import { saveShopSettings } from '../../server/modules/settings/settings.repo';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale, shipTo } from './checkout-support';
+import { signedInAgent } from '../setup/test-users';
 import { subscriptionRow, testStripe } from './payments-support';
+import { createLotForSale, createTestUser, createWeeklySubscription, shipTo } from '../factories/index';
 
 // The shop runs on Restday's default settings here (shared/schemas/settings.ts): New York time,
 // roasting Monday, Wednesday and Friday, cutoff 12:00 the day before, filter rest 2 days,
@@ -32,27 +32,6 @@ beforeAll(async () => {
   await saveShopSettings(getTestDb(), defaultShopSettings);
 });
 
-/** An active subscription (2 × 12 oz, medium, whole bean, filter, weekly) whose grid starts on Monday 6 January 2031. */
-async function weeklySubscription(owner: TestUser, overrides: Partial<typeof subscriptions.$inferInsert> = {}) {
-  const lot = await createLotForSale(20_000);
-  const [row] = await getTestDb()
-    .insert(subscriptions)
-    .values({
-      userId: owner.id,
-      status: 'active',
-      lotId: lot.id,
-      roastLevel: 'medium',
-      bagSize: '12oz',
-      bagsPerDelivery: 2,
-      cadenceWeeks: 1,
-      priceCents: 4135,
-      anchorDate: '2031-01-06',
-      shippingAddress: { ...shipTo, country: 'US' },
-      ...overrides,
-    })
-    .returning({ id: subscriptions.id });
-  return { id: row!.id, lot };
-}
 
 async function deliveriesOf(agent: Awaited<ReturnType<typeof signedInAgent>>, id: string, count = 4): Promise<SubscriptionDelivery[]> {
   const response = await agent.get(`/api/subscriptions/${id}/deliveries?count=${count}`);
@@ -140,7 +119,7 @@ describe('GET /api/subscriptions and /api/subscriptions/:id/deliveries', () => {
   it('lists the grid from the anchor with roast, ship, ready-from and best-before dates; a delivery past its cutoff is locked', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id, lot } = await weeklySubscription(user);
+    const { id, lot } = await createWeeklySubscription(user);
     const items = await deliveriesOf(agent, id, 3);
     // Monday 6 Jan roasts today; its cutoff was Sunday 5 Jan 12:00, so it is locked. Monday 13 Jan's cutoff
     // (Sunday 12 Jan 12:00) is ahead. Ship: the first weekday on or after roast + 1 day's hold (Tuesday);
@@ -162,7 +141,7 @@ describe('GET /api/subscriptions and /api/subscriptions/:id/deliveries', () => {
   it('only the owner can read or change a subscription: anyone else gets 404 and nothing changes', async () => {
     clock.set(monday10am);
     const { user } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const other = await signedIn();
     expect((await other.agent.get(`/api/subscriptions/${id}`)).status).toBe(404);
     expect((await other.agent.get(`/api/subscriptions/${id}/deliveries`)).status).toBe(404);
@@ -180,7 +159,7 @@ describe('changing a subscription', () => {
   it('a change after the cutoff moves the following delivery, never the locked one', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
 
     const changed = await agent.patch(`/api/subscriptions/${id}`).send({ roastLevel: 'light' });
     expect(changed.status).toBe(200);
@@ -206,7 +185,7 @@ describe('changing a subscription', () => {
     // One minute earlier the same change would still have reached Monday 13.
     clock.set(new Date('2031-01-12T16:59:00Z'));
     const { user: early, agent: earlyAgent } = await signedIn();
-    const { id: earlyId } = await weeklySubscription(early);
+    const { id: earlyId } = await createWeeklySubscription(early);
     await earlyAgent.patch(`/api/subscriptions/${earlyId}`).send({ grind: 'drip' });
     expect(brief(await deliveriesOf(earlyAgent, earlyId, 1))).toEqual(['2031-01-13 scheduled medium drip']);
   });
@@ -214,7 +193,7 @@ describe('changing a subscription', () => {
   it('skip takes the next unlocked delivery, shows at once, and skipping again changes nothing', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const first = await agent.post(`/api/subscriptions/${id}/skip`);
     expect(first.status).toBe(200);
     const again = await agent.post(`/api/subscriptions/${id}/skip`);
@@ -239,7 +218,7 @@ describe('changing a subscription', () => {
   it('pause and resume: deliveries before the day are gone at once (the locked one stays); both are idempotent', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const paused = await agent.post(`/api/subscriptions/${id}/pause`).send({ until: '2031-02-01' });
     expect(paused.status).toBe(200);
     expect(subscriptionSchema.parse(paused.body)).toMatchObject({ status: 'paused', pausedUntil: '2031-02-01' });
@@ -257,7 +236,7 @@ describe('changing a subscription', () => {
   it('cancel ends it at the period end: no further deliveries, one e-mail however often it is asked', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user, { currentPeriodEnd: new Date('2031-01-10T17:00:00Z') });
+    const { id } = await createWeeklySubscription(user, { currentPeriodEnd: new Date('2031-01-10T17:00:00Z') });
     const cancelled = await agent.post(`/api/subscriptions/${id}/cancel`);
     expect(subscriptionSchema.parse(cancelled.body)).toMatchObject({ cancelAtPeriodEnd: true, endsOn: '2031-01-10' });
     expect((await agent.post(`/api/subscriptions/${id}/cancel`)).status).toBe(200);
@@ -269,7 +248,7 @@ describe('changing a subscription', () => {
   it('a new cadence starts at the first unlocked delivery; the same PATCH again changes nothing', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     expect((await agent.patch(`/api/subscriptions/${id}`).send({ cadenceWeeks: 2 })).status).toBe(200);
     expect((await agent.patch(`/api/subscriptions/${id}`).send({ cadenceWeeks: 2 })).status).toBe(200);
     expect((await deliveriesOf(agent, id, 3)).map((item) => item.roastDate)).toEqual(['2031-01-06', '2031-01-13', '2031-01-27']);
@@ -280,7 +259,7 @@ describe('changing a subscription', () => {
   it('a new size reprices the delivery with the trade engine', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const changed = await agent.patch(`/api/subscriptions/${id}`).send({ bagSize: '2lb', bagsPerDelivery: 1 });
     // 1 × $44.00 (default 2 lb price) less 10 % = $39.60; 908 g + 20 g + 180 g = 1,108 g → the ≤ 2 kg band, $11.95: $51.55.
     expect(subscriptionSchema.parse(changed.body)).toMatchObject({ bagSize: '2lb', bagsPerDelivery: 1, priceCents: 5155 });
@@ -289,7 +268,7 @@ describe('changing a subscription', () => {
   it('bad input answers 400 naming the field and changes nothing', async () => {
     clock.set(monday10am);
     const { user, agent } = await signedIn();
-    const { id } = await weeklySubscription(user);
+    const { id } = await createWeeklySubscription(user);
     const cases: [string, object, string][] = [
       ['patch', { bagsPerDelivery: 11 }, 'bagsPerDelivery'],
       ['patch', { cadenceWeeks: 5 }, 'cadenceWeeks'],

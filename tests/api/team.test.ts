@@ -9,8 +9,9 @@ import { tokenDigest } from '../../server/modules/auth/session-tokens';
 import { createAdjustableClock } from '../../server/lib/clock';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
-import { inboxOf, testAddress, testRelay, waitFor } from './outbox-support';
+import { signedInAgent } from '../setup/test-users';
+import { inboxOf, testRelay, waitFor } from './outbox-support';
+import { createTestUser, testAddress } from '../factories/index';
 
 const clock = createAdjustableClock();
 const app = createTestApp({ clock });

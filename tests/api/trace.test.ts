@@ -1,9 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { batchTraceSchema, orderTraceSchema } from '@shared/schemas/packing';
 import { createTestApp } from '../setup/test-app';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
-import { createLotForSale } from './checkout-support';
-import { createGreenOrderShipping, createRoastedOrder, recordBatch, uniqueDay } from './packing-support';
+import { signedInAgent } from '../setup/test-users';
+import { createGreenOrder, createLotForSale, createRoastedOrder, createTestUser, recordBatch, type TestUser, uniqueDay } from '../factories/index';
 
 const app = createTestApp();
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -65,7 +64,7 @@ describe('trace: lot → batch → bag → order', () => {
 
   it('traces a green order to its lot, with no batch', async () => {
     const lot = await createLotForSale(20_000);
-    const order = await createGreenOrderShipping(ana.id, lot.id, uniqueDay());
+    const order = await createGreenOrder(ana.id, lot.id, { shipDate: uniqueDay(), status: 'paid' });
 
     const trace = await orderTrace(order.id);
 

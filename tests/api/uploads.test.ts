@@ -10,7 +10,8 @@ import { lotDetailSchema, lotFileSchema } from '@shared/schemas/lots';
 import { uploads } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
+import { createTestUser } from '../factories/index';
 
 const tag = randomUUID().slice(0, 6).toUpperCase();
 const code = `${tag}-FILES`;

@@ -90,7 +90,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
 
     const guide = page.getByRole('region', { name: 'Home Roast Guide' });
     await guide.getByText('Expected roasted yield').waitFor();
-    // A 1 lb bag fills 454 g and a popper takes 75–80 g a batch (TRADE.md, common practice): 6 batches.
+    // A 1 lb bag fills 454 g and a popper takes 75–80 g a batch (common practice): 6 batches.
     expect(await guide.getByText('Batches for a 1 lb bag').locator('xpath=..').getByRole('definition').first().textContent()).toBe('6');
     expect(await guide.getByText('Suggested for this lot').count()).toBe(1);
     expect(await guide.getByRole('table', { name: 'Time after first crack' }).getByRole('row').count()).toBeGreaterThan(5);

@@ -3,15 +3,16 @@ import { describe, expect, it } from 'vitest';
 import { greenCheckoutResponseSchema } from '@shared/schemas/checkout';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { lots, stockMovements } from '../../server/db/schema/index';
-import { createLotForSale, movementsOf, shipTo, stockOf } from '../api/checkout-support';
+import { movementsOf, stockOf } from '../api/checkout-support';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
+import { createLotForSale, createTestUser, shipTo } from '../factories/index';
 
 const app = createTestApp();
 const buyers = 40;
 const bagsInStock = 10;
-const oneLbFillGrams = 454; // 1 lb = 453.59237 g, filled to the next whole gram (PRODUCT.md)
+const oneLbFillGrams = 454; // 1 lb = 453.59237 g, filled to the next whole gram so a bag never weighs short
 
 describe('concurrent checkouts for scarce stock', () => {
   it(`${buyers} buyers at once for ${bagsInStock} bags: exactly ${bagsInStock} get 201, the rest 409, stock ends at 0 and never below`, { timeout: 60_000 }, async () => {

@@ -13,8 +13,9 @@ import { createStripeClient } from '../../server/integrations/payments';
 import { listRoutes } from '../setup/route-list';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent, type TestUser } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
 import { accessRules, type Access, type AccessRule } from '../api/access-rules';
+import { createTestUser, type TestUser } from '../factories/index';
 
 const seed = 20_261_202;
 const bodiesPerRoute = 60;

@@ -9,7 +9,7 @@ import { defaultShopSettings } from '@shared/schemas/settings';
 import { subscriptionDeliveriesResponseSchema, subscriptionSchema } from '@shared/schemas/subscriptions';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
-import { paymentEvents, subscriptions } from '../../server/db/schema/index';
+import { paymentEvents } from '../../server/db/schema/index';
 import { createLogger } from '../../server/lib/logger';
 import { startServer, type RunningServer } from '../../server/index';
 import { applyPaymentEventJob } from '../../server/jobs/payment-events';
@@ -21,11 +21,11 @@ import { eventsAbout, ledgerCount, paymentsTestConfig, stripeFake, subscriptionO
 import { freePort } from '../setup/free-port';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
+import { createLotForSale, createSubscription, createTestUser } from '../factories/index';
 
 const fake = stripeFake();
 const stripe = testStripe();
-const invented = { name: 'Robin Testroaster', line1: '1 Invented Lane', city: 'Sampleville', region: 'CO', postalCode: '80000', country: 'US' };
 const app = createTestApp();
 
 let server: RunningServer;
@@ -44,8 +44,7 @@ beforeAll(async () => {
   stopEventWork = await workJobs(eventQueue, [applyPaymentEventJob], { db: getTestDb(), clock: systemClock, logger: createLogger(config), config });
   await fake.setWebhookEndpoint(`${server.url}/api/payments/webhook`);
   payments = testPaymentsService(config);
-  const { createTestLot } = await import('../api/payments-support');
-  lotId = (await createTestLot()).id;
+  lotId = (await createLotForSale(50_000)).id;
 });
 
 afterAll(async () => {
@@ -59,11 +58,7 @@ afterAll(async () => {
 /** A customer with a paid 2 × 12 oz fortnightly subscription (webhooks delivered as they happen). */
 async function paidSubscription() {
   const customer = await createTestUser('customer');
-  const [row] = await getTestDb()
-    .insert(subscriptions)
-    .values({ userId: customer.id, lotId, roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2, cadenceWeeks: 2, priceCents: 4135, shippingAddress: invented })
-    .returning({ id: subscriptions.id });
-  const id = row!.id;
+  const { id } = await createSubscription({ userId: customer.id, lotId, bagsPerDelivery: 2, priceCents: 4135 });
   const { checkoutUrl } = await payments.createCheckoutForSubscription(id);
   expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
   await waitFor(() => subscriptionOrders(id), (orders) => orders.length === 1, 10_000, 'the first delivery order');

@@ -11,7 +11,8 @@ import { createAdjustableClock } from '../../server/lib/clock';
 import { createLogger } from '../../server/lib/logger';
 import { queueEmail } from '../../server/modules/outbox/outbox.repo';
 import { getTestDatabase, getTestDb } from '../setup/test-db';
-import { inboxOf, outboxRows, testAddress, testConfig, waitFor } from '../api/outbox-support';
+import { inboxOf, outboxRows, testConfig, waitFor } from '../api/outbox-support';
+import { testAddress } from '../factories/index';
 
 // This file's own mail catcher, on ports of its own, so stopping it disturbs no other test.
 const smtpPort = Number(process.env.RESTDAY_TEST_OUTAGE_SMTP_PORT ?? 1035);

@@ -3,20 +3,8 @@ import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-cli
 import { startCluster, testClusterOptions } from '../../dev-services/postgres';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { inboxOf, waitFor } from '../api/outbox-support';
-import {
-  createCustomer,
-  createGreenOrder,
-  createTestLot,
-  eventsAbout,
-  ledgerCount,
-  orderRow,
-  outboxCount,
-  settle,
-  startPaymentsServer,
-  stripeFake,
-  testPaymentsService,
-  type PaymentsServer,
-} from '../api/payments-support';
+import { eventsAbout, ledgerCount, orderRow, outboxCount, settle, startPaymentsServer, stripeFake, testPaymentsService, type PaymentsServer } from '../api/payments-support';
+import { createCustomer, createGreenOrder, createLotForSale } from '../factories/index';
 
 // Stops the real test cluster mid-run, so this file restarts it (on the same port) whatever happens.
 const { port } = startCluster(testClusterOptions());
@@ -47,7 +35,7 @@ async function payableOrders(count: number, lotId: string) {
 
 describe('when PostgreSQL restarts while payment webhooks arrive', () => {
   it("the fake's retries land once it is back: the server was never restarted, and no event is lost or applied twice", async () => {
-    const lot = await createTestLot();
+    const lot = await createLotForSale(50_000);
     const orders = await payableOrders(6, lot.id);
     const [before, during] = [orders.slice(0, 2), orders.slice(2)];
 

@@ -6,12 +6,13 @@ import { desc, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { orders } from '../../server/db/schema/index';
-import { createLotForSale, movementsOf, shipTo, stockOf } from '../api/checkout-support';
+import { movementsOf, stockOf } from '../api/checkout-support';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
+import { createLotForSale, createTestUser, shipTo } from '../factories/index';
 
-const oneLbFillGrams = 454; // 1 lb = 453.59237 g, filled to the next whole gram (PRODUCT.md)
+const oneLbFillGrams = 454; // 1 lb = 453.59237 g, filled to the next whole gram so a bag never weighs short
 // Two tries of 2 s and the SDK's backoff (~0.5 s), with room for a busy machine; 3 × 10 s before.
 const deadlineMs = 8_000;
 

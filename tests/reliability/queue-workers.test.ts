@@ -10,7 +10,8 @@ import { createAdjustableClock } from '../../server/lib/clock';
 import { createLogger } from '../../server/lib/logger';
 import { queueEmail } from '../../server/modules/outbox/outbox.repo';
 import { getTestDb } from '../setup/test-db';
-import { inboxOf, outboxRows, testAddress, testConfig, waitFor } from '../api/outbox-support';
+import { inboxOf, outboxRows, testConfig, waitFor } from '../api/outbox-support';
+import { testAddress } from '../factories/index';
 
 const databaseUrl = inject('databaseUrl');
 const smtpUrl = inject('smtpUrl');

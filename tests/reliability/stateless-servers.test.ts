@@ -7,9 +7,10 @@ import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-cli
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { emailOutbox, lots, orders, paymentEvents } from '../../server/db/schema/index';
 import { inboxOf, waitFor } from '../api/outbox-support';
-import { createTestLot, stripeFake } from '../api/payments-support';
+import { stripeFake } from '../api/payments-support';
 import { getTestDb } from '../setup/test-db';
 import { freePort } from '../setup/free-port';
+import { createLotForSale } from '../factories/index';
 
 /**
  * Restday scaled out as the README says: stateless servers behind a load balancer, queue work in a
@@ -135,8 +136,10 @@ async function checkout(session: { cookie: string }, lotCode: string) {
 }
 
 describe('two stateless servers and a worker on one PostgreSQL', () => {
-  it('loses and doubles nothing when one server is killed mid-traffic and started again', async () => {
-    const lot = await createTestLot();
+  // Restarting a server process and 12 sign-ups, checkouts and payments outlast the API project's
+  // 20 s default on a busy machine; its own waits allow up to 30 s for payment alone.
+  it('loses and doubles nothing when one server is killed mid-traffic and started again', { timeout: 120_000 }, async () => {
+    const lot = await createLotForSale(50_000);
     const [before] = await getTestDb().select({ stockGrams: lots.stockGrams }).from(lots).where(eq(lots.id, lot.id));
     const placed: { email: string; orderId: string }[] = [];
 
@@ -160,7 +163,7 @@ describe('two stateless servers and a worker on one PostgreSQL', () => {
       30_000,
       'every order to be paid',
     );
-    // Stock went down by exactly one 1 lb bag (454 g fill, PRODUCT.md) per order.
+    // Stock went down by exactly one 1 lb bag (454 g fill: 1 lb rounded up to a whole gram) per order.
     const [after] = await getTestDb().select({ stockGrams: lots.stockGrams }).from(lots).where(eq(lots.id, lot.id));
     expect(before!.stockGrams - after!.stockGrams).toBe(12 * 454);
     // One confirmation e-mail per order: queued once, sent once by the worker.

@@ -7,38 +7,25 @@ import { subscriptionDeliveriesResponseSchema } from '@shared/schemas/subscripti
 import { defaultShopSettings } from '@shared/schemas/settings';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
-import { subscriptions } from '../../server/db/schema/index';
 import { createPaymentsGateway } from '../../server/integrations/payments';
 import { createLogger } from '../../server/lib/logger';
 import { systemClock } from '../../server/lib/clock';
 import { startServer, type RunningServer } from '../../server/index';
 import { createStripeSync } from '../../server/modules/subscriptions/stripe-sync.service';
 import { inboxOf, waitFor } from '../api/outbox-support';
-import {
-  createTestLot,
-  deliveryRows,
-  eventsAbout,
-  outboxCount,
-  paymentsTestConfig,
-  settle,
-  stripeFake,
-  subscriptionOrders,
-  subscriptionRow,
-  testPaymentsService,
-  testStripe,
-} from '../api/payments-support';
+import { deliveryRows, eventsAbout, outboxCount, paymentsTestConfig, settle, stripeFake, subscriptionOrders, subscriptionRow, testPaymentsService, testStripe } from '../api/payments-support';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
 import { freePort } from '../setup/free-port';
 import { startStripeRelay, type StripeRelay } from './stripe-relay';
+import { createLotForSale, createSubscription, createTestUser } from '../factories/index';
 
 // Stripe's published test card that saves to a customer and then fails every charge (Stripe docs, Testing).
 const failsOnCharge = '4000000000000341';
 const mailCatcherUrl = inject('mailCatcherUrl');
 const fake = stripeFake();
 const stripe = testStripe();
-const invented = { name: 'Robin Testroaster', line1: '1 Invented Lane', city: 'Sampleville', region: 'CO', postalCode: '80000', country: 'US' };
 
 let server: RunningServer;
 // The server reaches the fake through this relay, so an outage the test makes is an outage for the
@@ -55,7 +42,7 @@ beforeAll(async () => {
   server = await startServer(config, createLogger(config));
   await fake.setWebhookEndpoint(`${server.url}/api/payments/webhook`);
   payments = testPaymentsService(config);
-  lot = await createTestLot();
+  lot = await createLotForSale(50_000);
 });
 
 afterAll(async () => {
@@ -74,11 +61,7 @@ async function setShopClock(now: Date) {
 /** A customer who can sign in, with a paid 2 × 12 oz fortnightly subscription and its first delivery order. */
 async function paidSubscription() {
   const customer = await createTestUser('customer');
-  const [row] = await getTestDb()
-    .insert(subscriptions)
-    .values({ userId: customer.id, lotId: lot.id, roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2, cadenceWeeks: 2, priceCents: 4135, shippingAddress: invented })
-    .returning({ id: subscriptions.id });
-  const id = row!.id;
+  const { id } = await createSubscription({ userId: customer.id, lotId: lot.id, bagsPerDelivery: 2, priceCents: 4135 });
   const { checkoutUrl } = await payments.createCheckoutForSubscription(id);
   expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
   await waitFor(() => subscriptionOrders(id), (orders) => orders.length === 1, 10_000, 'the first delivery order');
@@ -215,12 +198,9 @@ describe('subscription renewals on the payment fake’s clock', () => {
 
   it('a subscription Stripe does not know (the demo seed’s invented ids) is recorded as pushed instead of retried forever', async () => {
     const customer = await createTestUser('customer');
-    const [row] = await getTestDb()
-      .insert(subscriptions)
-      .values({ userId: customer.id, status: 'active', roastLevel: 'medium', bagSize: '12oz', cadenceWeeks: 1, priceCents: 2315, anchorDate: '2031-01-06', changeVersion: 2, stripeSubscriptionId: 'sub_demo_invented01', shippingAddress: invented })
-      .returning({ id: subscriptions.id });
+    const row = await createSubscription({ userId: customer.id, status: 'active', cadenceWeeks: 1, anchorDate: '2031-01-06', changeVersion: 2, stripeSubscriptionId: 'sub_demo_invented01' });
     const sync = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig()), clock: systemClock, logger: createLogger(paymentsTestConfig()) });
-    expect(await sync.push(row!.id)).toBe('nothing');
-    expect(await subscriptionRow(row!.id)).toMatchObject({ stripeSyncedVersion: 2 });
+    expect(await sync.push(row.id)).toBe('nothing');
+    expect(await subscriptionRow(row.id)).toMatchObject({ stripeSyncedVersion: 2 });
   });
 });

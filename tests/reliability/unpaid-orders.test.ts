@@ -17,19 +17,20 @@ import { createLogger } from '../../server/lib/logger';
 import { createUnpaidOrdersRepo } from '../../server/modules/checkout/unpaid-orders.repo';
 import { createUnpaidOrdersService } from '../../server/modules/checkout/unpaid-orders.service';
 import { waitFor } from '../api/outbox-support';
-import { createLotForSale, movementsOf, shipTo, stockOf } from '../api/checkout-support';
-import { createCustomer, createGreenOrder, createTestLot, paymentsTestConfig, startPaymentsServer, testPaymentsService, type PaymentsServer } from '../api/payments-support';
+import { movementsOf, stockOf } from '../api/checkout-support';
+import { paymentsTestConfig, startPaymentsServer, testPaymentsService, type PaymentsServer } from '../api/payments-support';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
-import { createTestUser, signedInAgent } from '../setup/test-users';
+import { signedInAgent } from '../setup/test-users';
 import { startStripeRelay, type StripeRelay } from './stripe-relay';
+import { createCustomer, createGreenOrder, createLotForSale, createTestUser, shipTo } from '../factories/index';
 
 // Stops the real test cluster mid-run, so this file restarts it (on the same port) whatever happens.
 const { port } = startCluster(testClusterOptions());
 const restartCluster = () => startCluster({ ...testClusterOptions(), port });
 
 const graceMinutes = 5;
-const oneLbFillGrams = 454; // 1 lb = 453.59237 g, filled to the next whole gram (PRODUCT.md)
+const oneLbFillGrams = 454; // 1 lb = 453.59237 g, filled to the next whole gram so a bag never weighs short
 let relay: StripeRelay;
 let running: PaymentsServer;
 
@@ -129,7 +130,7 @@ describe('an order whose payment page was lost between commit and save', () => {
   });
 
   it('past the page’s lifetime, an order whose page Stripe does not know is cancelled; one whose page Stripe still has open is left alone', async () => {
-    const lot = await createTestLot();
+    const lot = await createLotForSale(50_000);
     const unknown = await createGreenOrder((await createCustomer('unknown-page')).id, lot.id);
     await getTestDb().update(orders).set({ stripeCheckoutSessionId: `cs_test_never_made_${randomUUID().slice(0, 8)}` }).where(eq(orders.id, unknown.id));
     const open = await createGreenOrder((await createCustomer('open-page')).id, lot.id);
