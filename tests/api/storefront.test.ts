@@ -7,7 +7,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { lotDetailSchema, lotListResponseSchema } from '@shared/schemas/lots';
 import { createTestApp } from '../setup/test-app';
-import { createLotForSale } from './checkout-support';
+import { createLotForSale } from '../factories/index';
 
 const publicUrl = 'https://shop.restday.test';
 // A stand-in for `vite build`'s output: an index.html and one hashed script with its precompressed copies.
@@ -78,7 +78,7 @@ describe('pages found and shared', () => {
     expect($('title').length).toBe(1);
     expect($('title').text()).toBe(`${lot.name}, green coffee from Testland | Restday`);
     expect($('meta[name="description"]').length).toBe(1);
-    expect($('meta[name="description"]').attr('content')).toContain('Testland, Lower Vale: Typica, washed');
+    expect($('meta[name="description"]').attr('content')).toContain('Testland, High Meadow: Bourbon, washed');
     expect($('link[rel="canonical"]').attr('href')).toBe(`${publicUrl}/lots/${lot.code}`);
     expect($('meta[property="og:type"]').attr('content')).toBe('product');
     expect($('meta[property="og:title"]').attr('content')).toBe($('title').text());

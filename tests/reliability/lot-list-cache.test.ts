@@ -5,7 +5,7 @@ import { lots } from '../../server/db/schema/index';
 import { createLogger } from '../../server/lib/logger';
 import { startLotListCache } from '../../server/modules/lots/lot-list-cache';
 import { waitFor } from '../api/outbox-support';
-import { createLotForSale } from '../api/checkout-support';
+import { createLotForSale } from '../factories/index';
 import { getTestDb } from '../setup/test-db';
 
 const logger = createLogger({ LOG_LEVEL: 'silent', NODE_ENV: 'test' });
