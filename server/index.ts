@@ -3,7 +3,8 @@ import { createApp } from './app';
 import type { Config } from './config';
 import { createDatabase } from './db/client';
 import { startQueue } from './jobs/queue';
-import { startWorkers, type Workers } from './jobs/workers';
+import { ensureJobQueues } from './jobs/registry';
+import { jobs, startWorkers, type Workers } from './jobs/workers';
 import { createAdjustableClock, systemClock } from './lib/clock';
 import { createLogger, type Logger } from './lib/logger';
 import { isMainModule, runMain } from './lib/run-main';
@@ -23,6 +24,8 @@ export async function startServer(config: Config, logger: Logger = createLogger(
     onIdleError: (error) => logger.warn({ err: error }, 'database connection dropped'),
   });
   const queue = await startQueue(config.DATABASE_URL, logger);
+  // Every process that queues jobs makes sure their queues exist, workers or not: pg-boss drops a job sent to a missing queue.
+  await ensureJobQueues(queue.boss, jobs);
   const clock = config.RESTDAY_TEST_CLOCK ? createAdjustableClock() : systemClock;
   // The queue workers (outbox relay, jobs) run here unless WORKERS_IN_SERVER=false leaves them to `npm run worker`.
   let workers: Workers | undefined;

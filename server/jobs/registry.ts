@@ -84,11 +84,14 @@ export async function sendJob<Data extends object>(
   job: JobDefinition<Data>,
   data: Data,
   options: { startAfter?: Date; singletonKey?: string } = {},
-): Promise<string | null> {
-  return queue.boss.send(job.name, data, {
+): Promise<string> {
+  const jobId = await queue.boss.send(job.name, data, {
     ...(options.startAfter ? { startAfter: options.startAfter } : {}),
     ...(options.singletonKey ? { singletonKey: options.singletonKey } : {}),
   });
+  // pg-boss answers null, not an error, for a queue that does not exist: the job would be lost.
+  if (jobId === null) throw new Error(`The job queue ${job.name} does not exist, so the job was not queued.`);
+  return jobId;
 }
 
 /** Starts this process's workers for `jobs` and their schedules; returns a function that stops them. */
