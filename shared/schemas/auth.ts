@@ -82,8 +82,8 @@ export type User = z.infer<typeof userSchema>;
 export const userResponseSchema = z.object({ user: userSchema });
 export type UserResponse = z.infer<typeof userResponseSchema>;
 
-/** `GET /api/auth/me` → 200, or 401 when no one is signed in. */
-export const meResponseSchema = userResponseSchema;
+/** `GET /api/auth/me` → 200 with the user, or `user: null` for a visitor (asking is not an error). */
+export const meResponseSchema = z.object({ user: userSchema.nullable() });
 export type MeResponse = z.infer<typeof meResponseSchema>;
 
 // E-mailed links carry their token in the URL fragment: browsers never send a fragment to a

@@ -42,7 +42,7 @@ const agents = new Map<Caller, ReturnType<typeof request.agent>>();
 async function agentFor(app: Express, caller: Caller) {
   if (caller === 'visitor') return request.agent(app).set('X-Restday-Client', 'web');
   const current = agents.get(caller);
-  if (current && (await current.get('/api/auth/me')).status === 200) return current;
+  if (current && (await current.get('/api/auth/me')).body.user) return current;
   const fresh = await signedInAgent(app, people[caller]);
   agents.set(caller, fresh);
   return fresh;

@@ -54,7 +54,7 @@ export const accessRules: AccessRule[] = [
   { method: 'POST', path: '/api/auth/sign-up', access: 'public' },
   { method: 'POST', path: '/api/auth/sign-in', access: 'public' },
   { method: 'POST', path: '/api/auth/sign-out', access: 'public' },
-  { method: 'GET', path: '/api/auth/me', access: 'signed-in' },
+  { method: 'GET', path: '/api/auth/me', access: 'public' },
   { method: 'POST', path: '/api/auth/password-reset', access: 'public' },
   { method: 'POST', path: '/api/auth/password-reset/confirm', access: 'public' },
   { method: 'POST', path: '/api/auth/invitations/preview', access: 'public' },

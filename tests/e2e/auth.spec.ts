@@ -1,6 +1,6 @@
 import type { Browser, BrowserContext, ConsoleMessage, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { isVisitorSessionCheck, launchChromium } from '../setup/chromium';
+import { launchChromium } from '../setup/chromium';
 
 const baseUrl = inject('baseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');
@@ -34,7 +34,7 @@ beforeAll(async () => {
   // A step that cannot happen fails with its locator named, well inside the test's own time limit.
   page.setDefaultTimeout(10_000);
   page.on('console', (message) => {
-    if (isVisitorSessionCheck(message) || isRefusedAuthRequest(message)) return;
+    if (isRefusedAuthRequest(message)) return;
     if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));

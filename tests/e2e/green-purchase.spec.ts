@@ -1,7 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, ConsoleMessage, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { isVisitorSessionCheck, launchChromium } from '../setup/chromium';
+import { launchChromium } from '../setup/chromium';
 
 const baseUrl = inject('baseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');
@@ -32,7 +32,7 @@ function isPaymentPageIcon(message: ConsoleMessage): boolean {
 /** A visitor's checkout starts signed out: the session check's 401 is the one failed load the shop is expected to have. */
 function watchConsole(target: Page, into: string[]) {
   target.on('console', (message) => {
-    if (isVisitorSessionCheck(message) || isPaymentPageIcon(message)) return;
+    if (isPaymentPageIcon(message)) return;
     if (message.type() === 'error' || message.type() === 'warning') into.push(`${message.type()}: ${message.text()} (${message.location().url})`);
   });
   target.on('pageerror', (error) => into.push(`page error: ${error.message}`));

@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { isVisitorSessionCheck, launchChromium } from '../setup/chromium';
+import { launchChromium } from '../setup/chromium';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -17,7 +17,6 @@ async function openPage(path: string) {
   const page = await context.newPage();
   const problems: string[] = [];
   page.on('console', (message) => {
-    if (isVisitorSessionCheck(message)) return;
     if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));

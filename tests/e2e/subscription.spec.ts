@@ -1,7 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { isVisitorSessionCheck, launchChromium } from '../setup/chromium';
+import { launchChromium } from '../setup/chromium';
 
 const baseUrl = inject('baseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');
@@ -26,7 +26,7 @@ beforeAll(async () => {
   page.setDefaultTimeout(15_000);
   page.on('console', (message) => {
     // The payment fake's page is not the product's (its missing favicon is its own affair).
-    if (isVisitorSessionCheck(message) || !page.url().startsWith(baseUrl)) return;
+    if (!page.url().startsWith(baseUrl)) return;
     if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()} (${message.location().url})`);
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
@@ -175,7 +175,6 @@ describe('Roasted to Order in a real browser', () => {
     staffPage.setDefaultTimeout(15_000);
     const staffProblems: string[] = [];
     staffPage.on('console', (message) => {
-      if (isVisitorSessionCheck(message)) return;
       if (message.type() === 'error' || message.type() === 'warning') staffProblems.push(`${message.type()}: ${message.text()} (${message.location().url})`);
     });
     try {

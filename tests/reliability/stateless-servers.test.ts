@@ -150,7 +150,7 @@ describe('two stateless servers and a worker on one PostgreSQL', () => {
       const session = await customerSession(index);
       // Sign in again on whichever server the balancer picks: the session is in PostgreSQL, not in a process.
       const me = await fetch(`${balancer.url}/api/auth/me`, { headers: { cookie: session.cookie } });
-      expect(me.status).toBe(200);
+      expect(((await me.json()) as { user: { email: string } | null }).user?.email).toBe(session.email);
       const { orderId, checkoutUrl } = await checkout(session, lot.code);
       expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
       placed.push({ email: session.email, orderId });

@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { chromium, type Browser, type ConsoleMessage } from 'playwright-core';
+import { chromium, type Browser } from 'playwright-core';
 
 const chromiumPath = '/usr/bin/chromium';
 
@@ -34,12 +34,4 @@ export async function launchChromium(): Promise<Browser> {
       '--disable-sync',
     ],
   });
-}
-
-/**
- * Every page asks `GET /api/auth/me` who is signed in, and a visitor's answer is a 401; Chromium
- * logs that response as a console error. It is the one failed load a page is expected to have.
- */
-export function isVisitorSessionCheck(message: ConsoleMessage): boolean {
-  return message.text().includes('status of 401') && new URL(message.location().url || 'about:blank').pathname === '/api/auth/me';
 }

@@ -1,7 +1,6 @@
 import { Router } from 'express';
 import { passwordResetConfirmSchema, passwordResetRequestSchema, signInSchema, signUpSchema, type MeResponse, type UserResponse } from '@shared/schemas/auth';
 import type { Config } from '../../config';
-import { AppError } from '../../lib/app-error';
 import { clearSessionCookie, writeSessionCookie } from './session-tokens';
 import { requestContext } from './sessions.service';
 import { toUser, type AuthService } from './auth.service';
@@ -30,8 +29,7 @@ export function authRoutes({ service, throttles, config }: { service: AuthServic
   });
 
   router.get('/me', (req, res) => {
-    if (!req.user) throw new AppError(401, 'not_signed_in', 'No one is signed in.');
-    res.json({ user: toUser(req.user) } satisfies MeResponse);
+    res.json({ user: req.user ? toUser(req.user) : null } satisfies MeResponse);
   });
 
   router.post('/password-reset', ...throttles.passwordReset, async (req, res) => {

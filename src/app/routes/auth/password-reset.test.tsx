@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -47,7 +47,7 @@ describe('reset-password page', () => {
   it('sets the new password with the token from the link and sends the person to sign in', async () => {
     // The reset ends every session of the account, so the page asks again who is signed in.
     const fetchMock = stubFetch((url) =>
-      url.pathname === '/api/auth/me' ? apiErrorResponse(401, 'not_signed_in', 'Sign in first.') : new Response(null, { status: 204 }),
+      url.pathname === '/api/auth/me' ? jsonResponse({ user: null }) : new Response(null, { status: 204 }),
     );
     const { router } = renderApp(`/reset-password#token=${token}`);
     await screen.findByRole('heading', { level: 1, name: 'Choose a new password' });

@@ -14,8 +14,8 @@ describe('getCurrentUser', () => {
     expect(await getCurrentUser()).toEqual(user);
   });
 
-  it('treats a 401 as a visitor, not a failure', async () => {
-    stubFetch(() => apiErrorResponse(401, 'not_signed_in', 'Sign in first.'));
+  it('reads a visitor from the 200 answer with no user', async () => {
+    stubFetch(() => jsonResponse({ user: null }));
     expect(await getCurrentUser()).toBeNull();
   });
 
