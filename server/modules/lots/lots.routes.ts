@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { lotListQuerySchema, roastGuideQuerySchema, type LotDetail, type LotListResponse } from '@shared/schemas/lots';
+import { lotListQuerySchema, roastGuideQuerySchema, type LotDetail, type LotListResponse, type LotSummary } from '@shared/schemas/lots';
 import type { LotsService } from './lots.service';
 
 const lotCodeParams = z.object({ code: z.string().trim().min(1).max(40) });
@@ -8,12 +8,19 @@ const lotCodeParams = z.object({ code: z.string().trim().min(1).max(40) });
 export function lotsRoutes(service: LotsService): Router {
   const router = Router();
 
+  // A list held in memory is the same array until it changes, so its JSON is written once.
+  const written = new WeakMap<LotSummary[], string>();
   router.get('/', async (req, res) => {
     const items = await service.list(lotListQuerySchema.parse(req.query));
+    let body = written.get(items);
+    if (body === undefined) {
+      body = JSON.stringify({ items } satisfies LotListResponse);
+      written.set(items, body);
+    }
     // The same for every visitor, so browsers and any shared cache may keep it briefly; stock shown
     // a few seconds old is safe, because checkout takes stock only if it is really there.
     res.setHeader('Cache-Control', 'public, max-age=10');
-    res.json({ items } satisfies LotListResponse);
+    res.type('json').send(body);
   });
 
   router.get('/:code', async (req, res) => {
