@@ -1,7 +1,8 @@
 import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
-import { formatGrams, formatMoney } from '@/lib/format';
+import { formatGrams } from '@/lib/format';
 import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { OrderStatusBadge } from './order-status-badge';
 
@@ -40,28 +41,28 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
                 <p className="text-small text-ink-muted">{itemDescription(item)}</p>
               </div>
               <p className="text-small">
-                {item.quantity} × {formatMoney(item.unitPriceCents)} = <span className="font-semibold">{formatMoney(item.lineTotalCents)}</span>
+                {item.quantity} × {formatMoney(item.unitPriceCents, order.currency)} = <span className="font-semibold">{formatMoney(item.lineTotalCents, order.currency)}</span>
               </p>
             </li>
           ))}
         </ul>
         <dl className="mt-4 ml-auto grid max-w-xs grid-cols-[1fr_auto] gap-x-6 gap-y-1">
           <dt>Bags</dt>
-          <dd className="text-right">{formatMoney(order.subtotalCents)}</dd>
+          <dd className="text-right">{formatMoney(order.subtotalCents, order.currency)}</dd>
           {order.discountCents > 0 ? (
             <>
               <dt>{order.discountLabel ?? 'Discount'}</dt>
-              <dd className="text-right">−{formatMoney(order.discountCents)}</dd>
+              <dd className="text-right">−{formatMoney(order.discountCents, order.currency)}</dd>
             </>
           ) : null}
           <dt>Shipping</dt>
-          <dd className="text-right">{formatMoney(order.shippingCents)}</dd>
+          <dd className="text-right">{formatMoney(order.shippingCents, order.currency)}</dd>
           <dt className="border-t border-rule pt-1 font-semibold">Total</dt>
-          <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(order.totalCents)}</dd>
+          <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(order.totalCents, order.currency)}</dd>
           {order.refundedCents > 0 ? (
             <>
               <dt>Refunded</dt>
-              <dd className="text-right">{formatMoney(order.refundedCents)}</dd>
+              <dd className="text-right">{formatMoney(order.refundedCents, order.currency)}</dd>
             </>
           ) : null}
         </dl>

@@ -2,9 +2,10 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
 import { paths } from '@/config/paths';
-import { formatGrams, formatMoney } from '@/lib/format';
+import { formatGrams } from '@/lib/format';
 import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { orderKindLabels, paymentState } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
@@ -40,11 +41,11 @@ function PaymentLine({ order }: { order: OrderDetail }) {
     case 'cancelled-unpaid':
       return <>Never paid; cancelled {order.cancelledAt ? formatInstant(order.cancelledAt) : ''}. Nothing was charged.</>;
     case 'refunded':
-      return <>Refunded in full ({formatMoney(order.refundedCents)}).</>;
+      return <>Refunded in full ({formatMoney(order.refundedCents, order.currency)}).</>;
     case 'partly-refunded':
       return (
         <>
-          Paid {formatMoney(order.totalCents)}, {formatMoney(order.refundedCents)} refunded.
+          Paid {formatMoney(order.totalCents, order.currency)}, {formatMoney(order.refundedCents, order.currency)} refunded.
         </>
       );
     case 'paid':
@@ -117,8 +118,8 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
                     <span className="block text-caption text-ink-muted">{lineDetails(item)}</span>
                   </th>
                   <td className="px-4 py-3 text-right tabular-nums">{item.quantity}</td>
-                  <td className="px-4 py-3 text-right tabular-nums">{formatMoney(item.unitPriceCents)}</td>
-                  <td className="px-4 py-3 text-right tabular-nums">{formatMoney(item.lineTotalCents)}</td>
+                  <td className="px-4 py-3 text-right tabular-nums">{formatMoney(item.unitPriceCents, order.currency)}</td>
+                  <td className="px-4 py-3 text-right tabular-nums">{formatMoney(item.lineTotalCents, order.currency)}</td>
                 </tr>
               ))}
             </tbody>
@@ -127,34 +128,34 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
                 <th scope="row" colSpan={3} className="px-4 pt-3 text-right font-normal">
                   Bags
                 </th>
-                <td className="px-4 pt-3 text-right tabular-nums">{formatMoney(order.subtotalCents)}</td>
+                <td className="px-4 pt-3 text-right tabular-nums">{formatMoney(order.subtotalCents, order.currency)}</td>
               </tr>
               {order.discountCents > 0 ? (
                 <tr>
                   <th scope="row" colSpan={3} className="px-4 pt-1 text-right font-normal">
                     {order.discountLabel ?? 'Discount'}
                   </th>
-                  <td className="px-4 pt-1 text-right tabular-nums">−{formatMoney(order.discountCents)}</td>
+                  <td className="px-4 pt-1 text-right tabular-nums">−{formatMoney(order.discountCents, order.currency)}</td>
                 </tr>
               ) : null}
               <tr>
                 <th scope="row" colSpan={3} className="px-4 pt-1 text-right font-normal">
                   Shipping
                 </th>
-                <td className="px-4 pt-1 text-right tabular-nums">{formatMoney(order.shippingCents)}</td>
+                <td className="px-4 pt-1 text-right tabular-nums">{formatMoney(order.shippingCents, order.currency)}</td>
               </tr>
               <tr>
                 <th scope="row" colSpan={3} className="px-4 py-2 text-right font-semibold">
                   Total ({order.currency.toUpperCase()})
                 </th>
-                <td className="px-4 py-2 text-right font-semibold tabular-nums">{formatMoney(order.totalCents)}</td>
+                <td className="px-4 py-2 text-right font-semibold tabular-nums">{formatMoney(order.totalCents, order.currency)}</td>
               </tr>
               {order.refundedCents > 0 ? (
                 <tr>
                   <th scope="row" colSpan={3} className="px-4 pb-3 text-right font-normal">
                     Refunded
                   </th>
-                  <td className="px-4 pb-3 text-right tabular-nums">−{formatMoney(order.refundedCents)}</td>
+                  <td className="px-4 pb-3 text-right tabular-nums">−{formatMoney(order.refundedCents, order.currency)}</td>
                 </tr>
               ) : null}
             </tfoot>

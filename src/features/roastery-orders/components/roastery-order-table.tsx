@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { OrderSort, OrderSummary } from '@shared/schemas/orders';
 import { paths } from '@/config/paths';
-import { formatMoney } from '@/lib/format';
+import { useShopMoney } from '@/lib/shop-currency';
 import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { orderKindLabels, orderReference, orderSortLabels } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
@@ -22,6 +22,7 @@ const headerCell = 'px-3 py-3 font-semibold whitespace-nowrap';
 const cell = 'px-3 py-3 align-top';
 
 export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; sort: OrderSort }) {
+  const { money } = useShopMoney();
   const sorted = sortedColumn[sort];
   const ariaSort = (column: SortedColumn) => (sorted.column === column ? sorted.direction : undefined);
 
@@ -73,7 +74,7 @@ export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; s
                 <span className="block text-caption break-all text-ink-muted">{order.customer.email}</span>
               </td>
               <td className={`${cell} text-right tabular-nums`}>{order.bagCount}</td>
-              <td className={`${cell} text-right tabular-nums`}>{formatMoney(order.totalCents)}</td>
+              <td className={`${cell} text-right tabular-nums`}>{money(order.totalCents)}</td>
               <td className={cell}>
                 <StaffOrderStatus status={order.status} />
               </td>

@@ -1,7 +1,7 @@
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { SubscriberDetail } from '@shared/schemas/subscribers';
 import { Badge } from '@/components/ui/badge';
-import { formatMoney } from '@/lib/format';
 import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
 
 const instant = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
@@ -20,7 +20,7 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
     ['Grind', grindLabels[subscriber.grind]],
     ['Brew method', brewMethodLabels[subscriber.brewMethod]],
     ['Cadence', cadenceLabel(subscriber.cadenceWeeks)],
-    ['Per delivery', formatMoney(subscriber.priceCents)],
+    ['Per delivery', formatMoney(subscriber.priceCents, subscriber.currency)],
     ['Subscribed', instant.format(new Date(subscriber.createdAt))],
     ...(subscriber.pausedUntil ? [['Paused until', formatDeliveryDay(subscriber.pausedUntil)] as [string, string]] : []),
     ...(subscriber.cancelledAt ? [['Cancelled', instant.format(new Date(subscriber.cancelledAt))] as [string, string]] : []),
@@ -101,7 +101,7 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
                       <td className="px-3 py-2">
                         {delivery.order ? (
                           <>
-                            {formatMoney(delivery.order.totalCents)}
+                            {formatMoney(delivery.order.totalCents, subscriber.currency)}
                             {delivery.order.trackingNumber ? (
                               <span className="block text-caption text-ink-muted">
                                 {delivery.order.carrier} {delivery.order.trackingNumber}

@@ -7,7 +7,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import { formatMoney } from '@/lib/format';
+import { useShopMoney } from '@/lib/shop-currency';
 import { bagsLabel, cadenceLabel, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
 import { subscribersCsvHref, useSubscribers } from '../api/get-subscribers';
 import type { SubscriberFilters } from '../utils/subscriber-filters';
@@ -19,6 +19,7 @@ type SubscribersTableProps = {
 
 /** One page of subscribers for the filters, with paging and the CSV of every match. */
 export function SubscribersTable({ filters, onPageChange }: SubscribersTableProps) {
+  const { money } = useShopMoney();
   const subscribersQuery = useSubscribers(filters);
   const csvLink = (
     <a href={subscribersCsvHref(filters)} download className={buttonStyles('secondary')}>
@@ -84,7 +85,7 @@ export function SubscribersTable({ filters, onPageChange }: SubscribersTableProp
                     <Badge tone={status.tone}>{status.label}</Badge>
                   </td>
                   <td className="px-3 py-2 whitespace-nowrap">{row.nextRoastDate ? formatDeliveryDay(row.nextRoastDate) : '—'}</td>
-                  <td className="px-3 py-2 text-right">{formatMoney(row.priceCents)}</td>
+                  <td className="px-3 py-2 text-right">{money(row.priceCents)}</td>
                 </tr>
               );
             })}

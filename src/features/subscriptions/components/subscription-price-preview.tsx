@@ -1,8 +1,8 @@
 import { shipPolicyCustomerNotes } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { SubscriptionPreview } from '@shared/schemas/subscription-preview';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
-import { formatMoney } from '@/lib/format';
 import { cadenceLabel, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
 
 type SubscriptionPricePreviewProps = {
@@ -33,17 +33,17 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
       <div aria-live="polite" aria-atomic="true">
         <p className="text-small font-semibold text-ink-muted">Each delivery</p>
         <p className="flex flex-wrap items-baseline gap-x-3">
-          <span className="font-heading text-h1 font-semibold">{formatMoney(preview.priceCents)}</span>
+          <span className="font-heading text-h1 font-semibold">{formatMoney(preview.priceCents, preview.currency)}</span>
           {preview.regularPriceCents > preview.priceCents ? (
             <span className="text-ink-muted">
               <span className="sr-only">instead of </span>
-              <s>{formatMoney(preview.regularPriceCents)}</s>
+              <s>{formatMoney(preview.regularPriceCents, preview.currency)}</s>
             </span>
           ) : null}
         </p>
         <p className="text-small text-ink-muted">
           {preview.discountPct > 0 ? `${preview.discountPct}% subscription discount on the coffee; ` : ''}
-          shipping of {formatMoney(preview.shippingCents)} included. Charged {cadenceLabel(cadenceWeeks).toLowerCase()}.
+          shipping of {formatMoney(preview.shippingCents, preview.currency)} included. Charged {cadenceLabel(cadenceWeeks).toLowerCase()}.
         </p>
       </div>
       <div>

@@ -1,6 +1,6 @@
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { Subscription } from '@shared/schemas/subscriptions';
-import { formatMoney } from '@/lib/format';
 import { bagsLabel, brewMethodLabels, cadenceLabel } from '@/lib/subscription-labels';
 
 function oneLineAddress(address: Subscription['shippingAddress']): string {
@@ -17,7 +17,7 @@ export function SubscriptionSummary({ subscription }: { subscription: Subscripti
     ['Grind', grindLabels[subscription.grind]],
     ['Brew method', brewMethodLabels[subscription.brewMethod]],
     ['How often', cadenceLabel(subscription.cadenceWeeks)],
-    ['Per delivery', `${formatMoney(subscription.priceCents)} with shipping`],
+    ['Per delivery', `${formatMoney(subscription.priceCents, subscription.currency)} with shipping`],
     ['Ships to', oneLineAddress(subscription.shippingAddress)],
   ];
   return (
