@@ -12,6 +12,7 @@
  */
 import { z } from 'zod';
 import { isCurrencyCode, type CurrencyCode } from '../shared/domain/money';
+import { postalAddressSchema } from '../shared/schemas/address';
 import { bagSizes, brewMethods, grinds, orderKinds, roastLevels, roastedBagSizes } from '../shared/domain/vocabulary';
 
 /** What a subscriber did to their subscription (the `subscription-changed` e-mail). */
@@ -45,16 +46,6 @@ export const emailLineSchema = z.object({
   lineTotalCents: minor.optional(),
   roastLevel: z.enum(roastLevels).optional(),
   grind: z.enum(grinds).optional(),
-});
-
-export const postalAddressSchema = z.object({
-  name: text(),
-  line1: text(),
-  line2: text().nullish(),
-  city: text(),
-  region: text(),
-  postalCode: text(20),
-  country: text(60),
 });
 
 export const emailPayloadSchemas = {

@@ -1,4 +1,5 @@
 import { bagLabel, formatDay, grindLabel, greeting, levelLabel } from '../parts/format';
+import { addressLines } from '../../shared/domain/address';
 import { formatMoney } from '../../shared/domain/money';
 import type { Block } from '../parts/layout';
 import { orderReference, shopLink, type EmailTemplate } from '../parts/template';
@@ -43,8 +44,7 @@ export const orderConfirmed: EmailTemplate<'order-confirmed'> = {
     }
     blocks.push({ kind: 'facts', rows: [['Order', orderReference(p.orderId)]] });
     if (p.shipTo) {
-      const a = p.shipTo;
-      blocks.push({ kind: 'address', title: 'Shipping to', lines: [a.name, a.line1, a.line2 ?? '', `${a.city}, ${a.region} ${a.postalCode}`, a.country].filter(Boolean) });
+      blocks.push({ kind: 'address', title: 'Shipping to', lines: addressLines(p.shipTo) });
     }
     blocks.push({ kind: 'button', label: 'See your account', url: shopLink(context, '/account') });
     return { heading: 'Your order is confirmed', preheader: `Order ${orderReference(p.orderId)}: ${formatMoney(p.totalCents, p.currency)}, paid.`, blocks };

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { postalAddressSchema } from './address';
 import { isoDate } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
@@ -74,16 +75,6 @@ export const orderItemSchema = z.object({
 });
 export type OrderItem = z.infer<typeof orderItemSchema>;
 
-export const orderAddressSchema = z.object({
-  name: z.string(),
-  line1: z.string(),
-  line2: z.string().nullable(),
-  city: z.string(),
-  region: z.string(),
-  postalCode: z.string(),
-  country: z.string(),
-});
-
 /** `GET /api/orders/:id` (the customer's own, or any for staff). */
 export const orderDetailSchema = z.object({
   id: z.uuid(),
@@ -101,7 +92,7 @@ export const orderDetailSchema = z.object({
   totalCents: z.number().int(),
   refundedCents: z.number().int(),
   currency: z.string(),
-  shippingAddress: orderAddressSchema,
+  shippingAddress: postalAddressSchema,
   roastDate: z.string().nullable(),
   shipDate: z.string().nullable(),
   readyFrom: z.string().nullable(),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { brewMethods, deliveryStatuses, grinds, orderStatuses, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
-import { orderAddressSchema } from './orders';
+import { postalAddressSchema } from './address';
 
 export const subscriberSorts = ['newest', 'oldest', 'name', 'next-roast'] as const;
 export type SubscriberSort = (typeof subscriberSorts)[number];
@@ -103,7 +103,7 @@ export const subscriberDetailSchema = subscriberSummarySchema.omit({ customerNam
   cancelAtPeriodEnd: z.boolean().optional(),
   currentPeriodEnd: z.iso.datetime({ offset: true }).nullable(),
   cancelledAt: z.iso.datetime({ offset: true }).nullable(),
-  shippingAddress: orderAddressSchema,
+  shippingAddress: postalAddressSchema,
   deliveries: z.array(subscriberDeliverySchema),
   orders: z.array(subscriberOrderSchema.extend({ bags: z.number().int() })),
 });

@@ -1,8 +1,8 @@
 import { z } from 'zod';
 import { isoDate } from './dates';
 import { brewMethods, deliveryStatuses, grinds, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
+import { postalAddressSchema } from './address';
 import { shippingAddressSchema } from './checkout';
-import { orderAddressSchema } from './orders';
 
 
 /** Most bags in one delivery. */
@@ -100,7 +100,7 @@ export const subscriptionSchema = z.object({
   endsOn: z.string().nullable(),
   priceCents: z.number().int(),
   currency: z.string(),
-  shippingAddress: orderAddressSchema,
+  shippingAddress: postalAddressSchema,
   nextDelivery: subscriptionDeliverySchema.nullable(),
   createdAt: z.iso.datetime({ offset: true }),
 });

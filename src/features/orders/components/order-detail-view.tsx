@@ -2,6 +2,7 @@ import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
 import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
+import { AddressDisplay } from '@/components/address/address-display';
 import { formatGrams } from '@/lib/format';
 import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { OrderStatusBadge } from './order-status-badge';
@@ -73,21 +74,7 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
           <h2 id="order-ships-to" className="text-h3">
             Ships to
           </h2>
-          <address className="mt-2 not-italic">
-            {address.name}
-            <br />
-            {address.line1}
-            {address.line2 ? (
-              <>
-                <br />
-                {address.line2}
-              </>
-            ) : null}
-            <br />
-            {address.city}, {address.region} {address.postalCode}
-            <br />
-            {address.country}
-          </address>
+          <AddressDisplay address={address} className="mt-2" />
         </section>
         {dates.length > 0 || order.trackingNumber ? (
           <section aria-labelledby="order-dates" className="rounded-card border border-rule bg-sheet p-4">

@@ -4,6 +4,7 @@ import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
 import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
+import { AddressDisplay } from '@/components/address/address-display';
 import { paths } from '@/config/paths';
 import { formatGrams } from '@/lib/format';
 import { formatInstant, formatShopDay } from '../utils/order-dates';
@@ -180,21 +181,7 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
           </p>
         </Panel>
         <Panel id="order-ship-to" title="Ships to">
-          <address className="not-italic">
-            {address.name}
-            <br />
-            {address.line1}
-            {address.line2 ? (
-              <>
-                <br />
-                {address.line2}
-              </>
-            ) : null}
-            <br />
-            {address.city}, {address.region} {address.postalCode}
-            <br />
-            {address.country}
-          </address>
+          <AddressDisplay address={address} />
         </Panel>
         <Panel id="order-payment" title="Payment">
           <p>

@@ -1,14 +1,11 @@
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import { formatMoney } from '@shared/domain/money';
 import type { SubscriberDetail } from '@shared/schemas/subscribers';
+import { AddressDisplay } from '@/components/address/address-display';
 import { Badge } from '@/components/ui/badge';
 import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
 
 const instant = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
-
-function addressLines(address: SubscriberDetail['shippingAddress']): string[] {
-  return [address.name, address.line1, address.line2 ?? '', `${address.city}, ${address.region} ${address.postalCode}`, address.country].filter(Boolean);
-}
 
 /** A subscriber's subscription, where it ships, and every delivery with the order it became. */
 export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDetail }) {
@@ -48,13 +45,7 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
           <h2 id="subscriber-address" className="text-h3">
             Ships to
           </h2>
-          <address className="mt-3 text-small not-italic">
-            {addressLines(subscriber.shippingAddress).map((line) => (
-              <span key={line} className="block">
-                {line}
-              </span>
-            ))}
-          </address>
+          <AddressDisplay address={subscriber.shippingAddress} className="mt-3 text-small" />
           <p className="mt-3 text-small break-all">
             <a href={`mailto:${subscriber.customer.email}`} className="text-leaf underline">
               {subscriber.customer.email}
