@@ -1,8 +1,9 @@
 import { bagLabel, formatDay, grindLabel, greeting, levelLabel } from '../parts/format';
 import { addressLines } from '../../shared/domain/address';
 import { formatMoney } from '../../shared/domain/money';
+import { orderReference } from '../../shared/domain/order-reference';
 import type { Block } from '../parts/layout';
-import { orderReference, shopLink, type EmailTemplate } from '../parts/template';
+import { shopLink, type EmailTemplate } from '../parts/template';
 import type { ParsedEmailPayloads } from '../payloads';
 
 type Line = ParsedEmailPayloads['order-confirmed']['lines'][number];

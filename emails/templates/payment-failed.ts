@@ -1,7 +1,8 @@
 import { formatDay, greeting } from '../parts/format';
 import { formatMoney } from '../../shared/domain/money';
+import { orderReference } from '../../shared/domain/order-reference';
 import type { Block } from '../parts/layout';
-import { orderReference, shopLink, type EmailTemplate } from '../parts/template';
+import { shopLink, type EmailTemplate } from '../parts/template';
 
 export const paymentFailed: EmailTemplate<'payment-failed'> = {
   subject: () => 'We could not take your payment',

@@ -3,6 +3,7 @@ import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { Batch } from '@shared/schemas/roastery';
 import { Badge } from '@/components/ui/badge';
 import { paths } from '@/config/paths';
+import { formatTime } from '@/lib/dates';
 import { formatExactGrams, formatLossPct, formatMinutesSeconds } from '../utils/roast-day-format';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
@@ -13,7 +14,6 @@ const numberCell = `${cell} whitespace-nowrap text-right tabular-nums`;
  * in `timeZone`, the shop's, when known.
  */
 export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?: string }) {
-  const time = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit', timeZone });
   if (batches.length === 0) return <p className="text-ink-muted">No batches recorded for this day yet.</p>;
   return (
     <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">
@@ -34,7 +34,7 @@ export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?:
         <tbody>
           {batches.map((batch) => (
             <tr key={batch.id}>
-              <td className={cell}>{time.format(new Date(batch.createdAt))}</td>
+              <td className={cell}>{formatTime(batch.createdAt, timeZone)}</td>
               <th scope="row" className={`${cell} font-semibold`}>
                 {batch.lotName}
                 <span className="block text-small font-normal text-ink-muted print:text-black">{batch.lotCode}</span>

@@ -3,11 +3,11 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
+import { formatInstant } from '@/lib/dates';
 import { useStockMovements } from '../api/stock';
 import { movementReasonLabels } from '../utils/stock-labels';
 import { formatGramsChange, formatPounds } from '../utils/weights';
 
-const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 
 /** Every stock movement of the lot, newest first: by hand, sales, roasts and refunds. */
 export function StockHistoryTable({ code }: { code: string }) {
@@ -58,7 +58,7 @@ export function StockHistoryTable({ code }: { code: string }) {
           {movements.map((movement) => (
             <tr key={movement.id} className="border-t border-rule">
               <th scope="row" className="px-3 py-2 font-normal whitespace-nowrap">
-                {when.format(new Date(movement.createdAt))}
+                {formatInstant(movement.createdAt)}
               </th>
               <td className={movement.deltaGrams < 0 ? 'px-3 py-2 text-right whitespace-nowrap text-alert tabular-nums' : 'px-3 py-2 text-right whitespace-nowrap text-ok tabular-nums'}>
                 {formatGramsChange(movement.deltaGrams)}

@@ -4,7 +4,7 @@ import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
 import { AddressDisplay } from '@/components/address/address-display';
 import { formatGrams } from '@/lib/format';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
+import { formatDay, formatInstant } from '@/lib/dates';
 import { OrderStatusBadge } from './order-status-badge';
 
 function itemDescription(item: OrderItem): string {
@@ -85,7 +85,7 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
               {dates.map((each) => (
                 <div key={each.term} className="contents">
                   <dt className="text-ink-muted">{each.term}</dt>
-                  <dd>{formatShopDay(each.value)}</dd>
+                  <dd>{formatDay(each.value)}</dd>
                 </div>
               ))}
               {order.trackingNumber ? (

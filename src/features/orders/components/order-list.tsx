@@ -5,8 +5,8 @@ import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { useShopMoney } from '@/lib/shop-currency';
+import { formatDay, formatInstant } from '@/lib/dates';
 import { useOrders } from '../api/get-orders';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { OrderStatusBadge } from './order-status-badge';
 
 /** The signed-in customer's orders, newest first, with their status. */
@@ -57,7 +57,7 @@ export function OrderList({ page, onPageChange }: { page: number; onPageChange: 
               </Link>
               <p className="text-small text-ink-muted">
                 {order.kind === 'green' ? 'Green coffee' : 'Roasted coffee'} · {order.bagCount} {order.bagCount === 1 ? 'bag' : 'bags'}
-                {order.shipDate ? ` · ships ${formatShopDay(order.shipDate)}` : ''}
+                {order.shipDate ? ` · ships ${formatDay(order.shipDate)}` : ''}
               </p>
             </div>
             <div className="flex items-center gap-3">

@@ -3,33 +3,30 @@ import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
+import { orderReference } from '@shared/domain/order-reference';
 import { Badge } from '@/components/ui/badge';
 import { Button, buttonStyles } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
+import { formatDayShort } from '@/lib/dates';
 import { labelsPdfPath } from '../api/get-pack-list';
 import { useMarkPacked } from '../api/mark-packed';
 import { canPack, packStatusOf } from '../utils/pack-status';
 import { ShipOrderDialog } from './ship-order-dialog';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
-const shortDate = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
 
 function day(date: string | null): string {
-  return date ? shortDate.format(new Date(`${date}T00:00:00Z`)) : '—';
-}
-
-function shortId(orderId: string): string {
-  return orderId.slice(0, 8).toUpperCase();
+  return date ? formatDayShort(date) : '—';
 }
 
 function OrderBags({ order }: { order: PackOrder }) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse">
-        <caption className="sr-only">Bags of order {shortId(order.orderId)}</caption>
+        <caption className="sr-only">Bags of order {orderReference(order.orderId)}</caption>
         <thead>
           <tr>
             {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
@@ -118,7 +115,7 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
     <li aria-labelledby={headingId} className="rounded-card border border-rule bg-sheet p-5 shadow-card print:break-inside-avoid print:shadow-none">
       <div className="flex flex-wrap items-center gap-2">
         <h2 id={headingId} className="text-h3">
-          {order.customerName} <span className="font-body text-small font-semibold text-ink-muted">order {shortId(order.orderId)}</span>
+          {order.customerName} <span className="font-body text-small font-semibold text-ink-muted">order {orderReference(order.orderId)}</span>
         </h2>
         <Badge tone={status.tone}>{status.label}</Badge>
       </div>

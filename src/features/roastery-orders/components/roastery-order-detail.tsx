@@ -7,7 +7,7 @@ import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
 import { AddressDisplay } from '@/components/address/address-display';
 import { paths } from '@/config/paths';
 import { formatGrams } from '@/lib/format';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
+import { formatDay, formatInstant } from '@/lib/dates';
 import { orderKindLabels, paymentState } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
 
@@ -63,7 +63,7 @@ function lineDetails(item: OrderItem): string {
   return parts.join(' · ');
 }
 
-const dayOrUnset = (day: string | null) => (day ? formatShopDay(day) : <span className="text-ink-muted">Not set</span>);
+const dayOrUnset = (day: string | null) => (day ? formatDay(day) : <span className="text-ink-muted">Not set</span>);
 
 /**
  * One order as the team needs it: who, where to, what, money, dates and shipping. `actions` is the

@@ -1,9 +1,10 @@
 import { Link } from 'react-router-dom';
+import { orderReference } from '@shared/domain/order-reference';
 import type { OrderSort, OrderSummary } from '@shared/schemas/orders';
 import { paths } from '@/config/paths';
 import { useShopMoney } from '@/lib/shop-currency';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
-import { orderKindLabels, orderReference, orderSortLabels } from '../utils/order-labels';
+import { formatDay, formatInstant } from '@/lib/dates';
+import { orderKindLabels, orderSortLabels } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
 
 type SortedColumn = 'placed' | 'total' | 'status' | 'roastDate';
@@ -78,8 +79,8 @@ export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; s
               <td className={cell}>
                 <StaffOrderStatus status={order.status} />
               </td>
-              <td className={`${cell} whitespace-nowrap`}>{order.roastDate ? formatShopDay(order.roastDate) : <NotSet />}</td>
-              <td className={`${cell} whitespace-nowrap`}>{order.shipDate ? formatShopDay(order.shipDate) : <NotSet />}</td>
+              <td className={`${cell} whitespace-nowrap`}>{order.roastDate ? formatDay(order.roastDate) : <NotSet />}</td>
+              <td className={`${cell} whitespace-nowrap`}>{order.shipDate ? formatDay(order.shipDate) : <NotSet />}</td>
             </tr>
           ))}
         </tbody>

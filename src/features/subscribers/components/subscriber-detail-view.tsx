@@ -3,9 +3,9 @@ import { formatMoney } from '@shared/domain/money';
 import type { SubscriberDetail } from '@shared/schemas/subscribers';
 import { AddressDisplay } from '@/components/address/address-display';
 import { Badge } from '@/components/ui/badge';
-import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday, formatInstantDate } from '@/lib/dates';
 
-const instant = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
 
 /** A subscriber's subscription, where it ships, and every delivery with the order it became. */
 export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDetail }) {
@@ -18,9 +18,9 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
     ['Brew method', brewMethodLabels[subscriber.brewMethod]],
     ['Cadence', cadenceLabel(subscriber.cadenceWeeks)],
     ['Per delivery', formatMoney(subscriber.priceCents, subscriber.currency)],
-    ['Subscribed', instant.format(new Date(subscriber.createdAt))],
-    ...(subscriber.pausedUntil ? [['Paused until', formatDeliveryDay(subscriber.pausedUntil)] as [string, string]] : []),
-    ...(subscriber.cancelledAt ? [['Cancelled', instant.format(new Date(subscriber.cancelledAt))] as [string, string]] : []),
+    ['Subscribed', formatInstantDate(subscriber.createdAt)],
+    ...(subscriber.pausedUntil ? [['Paused until', formatDayWithWeekday(subscriber.pausedUntil)] as [string, string]] : []),
+    ...(subscriber.cancelledAt ? [['Cancelled', formatInstantDate(subscriber.cancelledAt)] as [string, string]] : []),
   ];
   return (
     <div className="grid gap-8">
@@ -80,11 +80,11 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
                     <tr key={delivery.id}>
                       <td className="px-3 py-2">{delivery.sequence}</td>
                       <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
-                        {formatDeliveryDay(delivery.roastDate)}
+                        {formatDayWithWeekday(delivery.roastDate)}
                       </th>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.readyFrom)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.readyFrom)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</td>
                       <td className="px-3 py-2">{delivery.coffee ?? 'Not picked yet'}</td>
                       <td className="px-3 py-2">
                         <Badge tone={deliveryStatus.tone}>{deliveryStatus.label}</Badge>

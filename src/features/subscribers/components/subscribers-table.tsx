@@ -8,7 +8,8 @@ import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { useShopMoney } from '@/lib/shop-currency';
-import { bagsLabel, cadenceLabel, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { bagsLabel, cadenceLabel, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday } from '@/lib/dates';
 import { subscribersCsvHref, useSubscribers } from '../api/get-subscribers';
 import type { SubscriberFilters } from '../utils/subscriber-filters';
 
@@ -84,7 +85,7 @@ export function SubscribersTable({ filters, onPageChange }: SubscribersTableProp
                   <td className="px-3 py-2">
                     <Badge tone={status.tone}>{status.label}</Badge>
                   </td>
-                  <td className="px-3 py-2 whitespace-nowrap">{row.nextRoastDate ? formatDeliveryDay(row.nextRoastDate) : '—'}</td>
+                  <td className="px-3 py-2 whitespace-nowrap">{row.nextRoastDate ? formatDayWithWeekday(row.nextRoastDate) : '—'}</td>
                   <td className="px-3 py-2 text-right">{money(row.priceCents)}</td>
                 </tr>
               );

@@ -3,7 +3,8 @@ import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { SubscriptionDelivery } from '@shared/schemas/subscriptions';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
-import { bagsLabel, deliveryStatusLabels, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+import { bagsLabel, deliveryStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday, formatInstantWithWeekday } from '@/lib/dates';
 
 /** Skip and undo, per delivery whose cutoff is ahead; without them the schedule only reads. */
 export type DeliveryActions = {
@@ -74,15 +75,15 @@ export function DeliverySchedule({ deliveries, caption, actions }: DeliverySched
             return (
               <tr key={delivery.roastDate} className={skipped ? 'text-ink-muted' : undefined}>
                 <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
-                  {skipped ? <s>{formatDeliveryDay(delivery.roastDate)}</s> : formatDeliveryDay(delivery.roastDate)}
+                  {skipped ? <s>{formatDayWithWeekday(delivery.roastDate)}</s> : formatDayWithWeekday(delivery.roastDate)}
                 </th>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.expectedArrival)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.expectedArrival)}</td>
                 <td className="px-3 py-2 whitespace-nowrap">
-                  {formatDeliveryDay(delivery.readyFrom)}
+                  {formatDayWithWeekday(delivery.readyFrom)}
                   <p className="text-caption text-ink-muted">{delivery.readyOnArrival ? 'Ready to brew on arrival' : 'Arrives before it is ready'}</p>
                 </td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</td>
                 <td className="px-3 py-2">{coffeeOf(delivery)}</td>
                 <td className="px-3 py-2">{contentsOf(delivery)}</td>
                 <td className="px-3 py-2">
@@ -98,7 +99,7 @@ export function DeliverySchedule({ deliveries, caption, actions }: DeliverySched
                   </div>
                   {delivery.locked && delivery.status === 'scheduled' ? (
                     <p className="mt-1 text-caption text-ink-muted">
-                      Past its cutoff ({formatCutoff(delivery.cutoffAt)}): it roasts as it is, and changes reach the next delivery.
+                      Past its cutoff ({formatInstantWithWeekday(delivery.cutoffAt)}): it roasts as it is, and changes reach the next delivery.
                     </p>
                   ) : null}
                 </td>
@@ -106,11 +107,11 @@ export function DeliverySchedule({ deliveries, caption, actions }: DeliverySched
                   <td className="px-3 py-2 whitespace-nowrap">
                     {!delivery.locked && delivery.status === 'scheduled' ? (
                       <Button variant="secondary" disabled={actions.busy} onClick={() => actions.onSkip(delivery)}>
-                        Skip<span className="sr-only"> the delivery of {formatDeliveryDay(delivery.roastDate)}</span>
+                        Skip<span className="sr-only"> the delivery of {formatDayWithWeekday(delivery.roastDate)}</span>
                       </Button>
                     ) : !delivery.locked && skipped ? (
                       <Button variant="secondary" disabled={actions.busy} onClick={() => actions.onUnskip(delivery)}>
-                        Undo skip<span className="sr-only"> of the delivery of {formatDeliveryDay(delivery.roastDate)}</span>
+                        Undo skip<span className="sr-only"> of the delivery of {formatDayWithWeekday(delivery.roastDate)}</span>
                       </Button>
                     ) : null}
                   </td>

@@ -3,7 +3,8 @@ import { formatMoney } from '@shared/domain/money';
 import type { SubscriptionPreview } from '@shared/schemas/subscription-preview';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
-import { cadenceLabel, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+import { cadenceLabel } from '@/lib/subscription-labels';
+import { formatDayWithWeekday, formatInstantWithWeekday } from '@/lib/dates';
 
 type SubscriptionPricePreviewProps = {
   preview: SubscriptionPreview | undefined;
@@ -49,7 +50,7 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
       <div>
         <h3 className="text-h3">Your first deliveries</h3>
         {firstCutoff ? (
-          <p className="mt-1 text-small text-ink-muted">If you pay before {formatCutoff(firstCutoff)}; later, each date moves to the next roast day.</p>
+          <p className="mt-1 text-small text-ink-muted">If you pay before {formatInstantWithWeekday(firstCutoff)}; later, each date moves to the next roast day.</p>
         ) : null}
         <p className="mt-1 text-small">{shipPolicyCustomerNotes[preview.shipPolicy]}</p>
         <ol aria-label="First three deliveries" className="mt-3 grid gap-3">
@@ -58,15 +59,15 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
               <p className="font-semibold">Delivery {index + 1}</p>
               <dl className="mt-1 grid grid-cols-[max-content_1fr] gap-x-4 text-small">
                 <dt className="text-ink-muted">Roasted</dt>
-                <dd>{formatDeliveryDay(delivery.roastDate)}</dd>
+                <dd>{formatDayWithWeekday(delivery.roastDate)}</dd>
                 <dt className="text-ink-muted">Ships</dt>
-                <dd>{formatDeliveryDay(delivery.shipDate)}</dd>
+                <dd>{formatDayWithWeekday(delivery.shipDate)}</dd>
                 <dt className="text-ink-muted">Arrives about</dt>
-                <dd>{formatDeliveryDay(delivery.expectedArrival)}</dd>
+                <dd>{formatDayWithWeekday(delivery.expectedArrival)}</dd>
                 <dt className="text-ink-muted">Ready from</dt>
-                <dd>{formatDeliveryDay(delivery.readyFrom)}</dd>
+                <dd>{formatDayWithWeekday(delivery.readyFrom)}</dd>
                 <dt className="text-ink-muted">Best before</dt>
-                <dd>{formatDeliveryDay(delivery.bestBefore)}</dd>
+                <dd>{formatDayWithWeekday(delivery.bestBefore)}</dd>
               </dl>
             </li>
           ))}

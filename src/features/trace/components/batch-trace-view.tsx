@@ -1,9 +1,10 @@
 import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { BatchTrace } from '@shared/schemas/packing';
+import { orderReference } from '@shared/domain/order-reference';
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/empty-state';
 import { paths } from '@/config/paths';
-import { formatTraceDay, formatTraceGrams, shortOrderId, traceStatusLabels } from '../utils/trace-format';
+import { formatTraceDay, formatTraceGrams, traceStatusLabels } from '../utils/trace-format';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
 
@@ -51,7 +52,7 @@ export function BatchTraceView({ trace }: { trace: BatchTrace }) {
                   <tr key={order.orderId}>
                     <th scope="row" className={cell}>
                       <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="font-semibold text-leaf underline">
-                        {shortOrderId(order.orderId)}
+                        {orderReference(order.orderId)}
                       </Link>
                     </th>
                     <td className={cell}>

@@ -1,10 +1,11 @@
 import { Link } from 'react-router-dom';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
+import { orderReference } from '@shared/domain/order-reference';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { useOrderTrace } from '../api/get-order-trace';
-import { formatTraceDay, formatTraceGrams, shortOrderId, traceStatusLabels } from '../utils/trace-format';
+import { formatTraceDay, formatTraceGrams, traceStatusLabels } from '../utils/trace-format';
 
 const cell = 'border-b border-rule px-3 py-2 text-left align-top';
 
@@ -37,7 +38,7 @@ export function OrderTrace({ orderId, headingLevel = 2 }: OrderTraceProps) {
     body = (
       <>
         <p className="mb-3 text-ink-muted">
-          Order {shortOrderId(order.id)} for {order.customerName} ({order.customerEmail}) · {traceStatusLabels[order.status]}
+          Order {orderReference(order.id)} for {order.customerName} ({order.customerEmail}) · {traceStatusLabels[order.status]}
           {order.roastDate ? ` · roast day ${formatTraceDay(order.roastDate)}` : ''}
           {order.shipDate ? ` · ship day ${formatTraceDay(order.shipDate)}` : ''}
         </p>
