@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { postalAddressSchema } from './address';
-import { isoDate } from './dates';
+import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
 
@@ -41,7 +41,7 @@ export const orderSummarySchema = z.object({
   id: z.uuid(),
   kind: z.enum(orderKinds),
   status: z.enum(orderStatuses),
-  placedAt: z.iso.datetime({ offset: true }),
+  placedAt: instant,
   customer: orderCustomerSchema,
   bagCount: z.number().int(),
   totalCents: z.number().int(),
@@ -80,7 +80,7 @@ export const orderDetailSchema = z.object({
   id: z.uuid(),
   kind: z.enum(orderKinds),
   status: z.enum(orderStatuses),
-  placedAt: z.iso.datetime({ offset: true }),
+  placedAt: instant,
   customer: orderCustomerSchema,
   items: z.array(orderItemSchema),
   subtotalCents: z.number().int(),
@@ -93,19 +93,16 @@ export const orderDetailSchema = z.object({
   refundedCents: z.number().int(),
   currency: z.string(),
   shippingAddress: postalAddressSchema,
-  roastDate: z.string().nullable(),
-  shipDate: z.string().nullable(),
-  readyFrom: z.string().nullable(),
-  bestBefore: z.string().nullable(),
+  ...roastDatesOrNullSchema.shape,
   /** The day the parcel should land: ship date + transit days (weekends and carrier holidays not counted). */
   expectedArrival: z.string().nullable(),
   /** Roasted coffee: true when it lands on or after its ready-from date; null for green coffee or no dates yet. */
   readyOnArrival: z.boolean().nullable(),
   carrier: z.string().nullable(),
   trackingNumber: z.string().nullable(),
-  paidAt: z.iso.datetime({ offset: true }).nullable(),
-  shippedAt: z.iso.datetime({ offset: true }).nullable(),
-  cancelledAt: z.iso.datetime({ offset: true }).nullable(),
+  paidAt: instant.nullable(),
+  shippedAt: instant.nullable(),
+  cancelledAt: instant.nullable(),
 });
 export type OrderDetail = z.infer<typeof orderDetailSchema>;
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { areValidDates, isoDate } from './dates';
+import { areValidDates, instant, isoDate } from './dates';
 import { MAX_CALENDAR_SPAN_DAYS } from '../domain/roast-schedule';
 import { daysBetween } from '../domain/shop-time';
 import { roastLevels, weekdays } from '../domain/vocabulary';
@@ -230,7 +230,7 @@ export const batchSchema = z.object({
   developmentTimeRatio: z.number().nullable(),
   operatorName: z.string().nullable(),
   notes: z.string(),
-  createdAt: z.iso.datetime({ offset: true }),
+  createdAt: instant,
 });
 export type Batch = z.infer<typeof batchSchema>;
 
