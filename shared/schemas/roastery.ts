@@ -5,7 +5,7 @@ import { daysBetween } from '../domain/shop-time';
 import { roastLevels, weekdays } from '../domain/vocabulary';
 
 /**
- * The Roastery's API shapes (API.md "Roastery"): the Roast Calendar, the Roast List of a roast day
+ * The Roastery's API shapes: the Roast Calendar, the Roast List of a roast day
  * and the batches staff record. The shop settings are `shopSettingsSchema` in ./settings.
  */
 
