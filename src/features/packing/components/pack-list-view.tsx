@@ -11,12 +11,12 @@ import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { formatDayShort } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { labelsPdfPath } from '../api/get-pack-list';
 import { useMarkPacked } from '../api/mark-packed';
 import { canPack, packStatusOf } from '../utils/pack-status';
 import { ShipOrderDialog } from './ship-order-dialog';
 
-const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
 
 function day(date: string | null): string {
   return date ? formatDayShort(date) : '—';
@@ -25,34 +25,34 @@ function day(date: string | null): string {
 function OrderBags({ order }: { order: PackOrder }) {
   return (
     <div className="overflow-x-auto">
-      <table className="w-full border-collapse">
+      <Table variant="sheet">
         <caption className="sr-only">Bags of order {orderReference(order.orderId)}</caption>
-        <thead>
+        <TableHead>
           <tr>
             {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
-              <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+              <TableHeader key={heading}>
                 {heading}
-              </th>
+              </TableHeader>
             ))}
           </tr>
-        </thead>
-        <tbody>
+        </TableHead>
+        <TableBody>
           {order.bags.map((bag) => (
             <tr key={`${bag.orderItemId}-${bag.bagNumber}`}>
-              <td className={cell}>
+              <TableCell>
                 {bag.bagNumber} of {order.bags.length}
-              </td>
-              <th scope="row" className={`${cell} font-semibold`}>
+              </TableCell>
+              <TableRowHeader className="font-semibold">
                 {bag.coffee}
                 {bag.lotCode ? <span className="block text-small font-normal text-ink-muted">{bag.lotCode}</span> : null}
-              </th>
-              <td className={cell}>{bag.roastLevel ? roastLevelLabels[bag.roastLevel] : 'Green'}</td>
-              <td className={cell}>{bag.grind ? grindLabels[bag.grind] : '—'}</td>
-              <td className={cell}>{bag.netLabel}</td>
-              <td className={cell}>{day(bag.roastDate)}</td>
-              <td className={cell}>{day(bag.readyFrom)}</td>
-              <td className={cell}>{day(bag.bestBefore)}</td>
-              <td className={cell}>
+              </TableRowHeader>
+              <TableCell>{bag.roastLevel ? roastLevelLabels[bag.roastLevel] : 'Green'}</TableCell>
+              <TableCell>{bag.grind ? grindLabels[bag.grind] : '—'}</TableCell>
+              <TableCell>{bag.netLabel}</TableCell>
+              <TableCell>{day(bag.roastDate)}</TableCell>
+              <TableCell>{day(bag.readyFrom)}</TableCell>
+              <TableCell>{day(bag.bestBefore)}</TableCell>
+              <TableCell>
                 {bag.batchId ? (
                   <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
                     Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
@@ -60,11 +60,11 @@ function OrderBags({ order }: { order: PackOrder }) {
                 ) : (
                   '—'
                 )}
-              </td>
+              </TableCell>
             </tr>
           ))}
-        </tbody>
-      </table>
+        </TableBody>
+      </Table>
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { AddressDisplay } from '@/components/address/address-display';
 import { Badge } from '@/components/ui/badge';
 import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, subscriptionStatusLabels } from '@/lib/subscription-labels';
 import { formatDayWithWeekday, formatInstantDate } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 
 
 /** A subscriber's subscription, where it ships, and every delivery with the order it became. */
@@ -61,35 +62,35 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
         {subscriber.deliveries.length === 0 ? (
           <p className="text-ink-muted">No deliveries yet.</p>
         ) : (
-          <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-            <table className="w-full min-w-[48rem] border-collapse text-left text-small">
+          <TableFrame>
+            <Table className="min-w-[48rem]">
               <caption className="sr-only">Deliveries of this subscription</caption>
-              <thead className="bg-paper-shade">
+              <TableHead>
                 <tr>
                   {['#', 'Roasts', 'Ships', 'Ready from', 'Best before', 'Coffee', 'Status', 'Order'].map((column) => (
-                    <th key={column} scope="col" className="px-3 py-2 font-semibold whitespace-nowrap">
+                    <TableHeader key={column} className="whitespace-nowrap">
                       {column}
-                    </th>
+                    </TableHeader>
                   ))}
                 </tr>
-              </thead>
-              <tbody className="divide-y divide-rule">
+              </TableHead>
+              <TableBody>
                 {subscriber.deliveries.map((delivery) => {
                   const deliveryStatus = deliveryStatusLabels[delivery.status];
                   return (
                     <tr key={delivery.id}>
-                      <td className="px-3 py-2">{delivery.sequence}</td>
-                      <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
+                      <TableCell>{delivery.sequence}</TableCell>
+                      <TableRowHeader className="font-semibold whitespace-nowrap">
                         {formatDayWithWeekday(delivery.roastDate)}
-                      </th>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.readyFrom)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</td>
-                      <td className="px-3 py-2">{delivery.coffee ?? 'Not picked yet'}</td>
-                      <td className="px-3 py-2">
+                      </TableRowHeader>
+                      <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</TableCell>
+                      <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.readyFrom)}</TableCell>
+                      <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</TableCell>
+                      <TableCell>{delivery.coffee ?? 'Not picked yet'}</TableCell>
+                      <TableCell>
                         <Badge tone={deliveryStatus.tone}>{deliveryStatus.label}</Badge>
-                      </td>
-                      <td className="px-3 py-2">
+                      </TableCell>
+                      <TableCell>
                         {delivery.order ? (
                           <>
                             {formatMoney(delivery.order.totalCents, subscriber.currency)}
@@ -102,13 +103,13 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
                         ) : (
                           '—'
                         )}
-                      </td>
+                      </TableCell>
                     </tr>
                   );
                 })}
-              </tbody>
-            </table>
-          </div>
+              </TableBody>
+            </Table>
+          </TableFrame>
         )}
       </section>
     </div>
