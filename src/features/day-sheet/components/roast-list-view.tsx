@@ -1,11 +1,12 @@
 import clsx from 'clsx';
-import { Download, Printer, TriangleAlert } from 'lucide-react';
+import { Printer, TriangleAlert } from 'lucide-react';
 import { Fragment, useState } from 'react';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { RoastListLine, RoastListResponse } from '@shared/schemas/roastery';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { DownloadLink } from '@/components/ui/download-link';
 import { roastListPath, roastListPdfPath } from '../api/get-roast-list';
 import { formatExactGrams, formatLossPct } from '../utils/roast-day-format';
 import { RecordBatchForm } from './record-batch-form';
@@ -131,18 +132,9 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
           <Printer aria-hidden="true" className="size-4" />
           Print the Roast List
         </Button>
-        <a href={roastListPath(date, 'csv')} download className={buttonStyles('secondary')}>
-          <Download aria-hidden="true" className="size-4" />
-          Roast List (CSV)
-        </a>
-        <a href={roastListPdfPath(date, 'letter')} download className={buttonStyles('secondary')}>
-          <Download aria-hidden="true" className="size-4" />
-          Roast List (PDF, Letter)
-        </a>
-        <a href={roastListPdfPath(date, 'a4')} download className={buttonStyles('secondary')}>
-          <Download aria-hidden="true" className="size-4" />
-          Roast List (PDF, A4)
-        </a>
+        <DownloadLink href={roastListPath(date, 'csv')}>Roast List (CSV)</DownloadLink>
+        <DownloadLink href={roastListPdfPath(date, 'letter')}>Roast List (PDF, Letter)</DownloadLink>
+        <DownloadLink href={roastListPdfPath(date, 'a4')}>Roast List (PDF, A4)</DownloadLink>
       </div>
 
       <Totals roastList={roastList} />

@@ -1,7 +1,7 @@
-import { Download } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { processLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { LotDetail } from '@shared/schemas/lots';
+import { DownloadLink } from '@/components/ui/download-link';
 import { formatAltitude, formatGrams, formatPercent, formatScore } from '@/lib/format';
 import { useShopMoney } from '@/lib/shop-currency';
 import { LotPhoto } from './lot-photo';
@@ -76,10 +76,9 @@ export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: React
           {lot.description ? <p className="mt-5 max-w-prose">{lot.description}</p> : null}
 
           {lot.specSheetUrl ? (
-            <a href={lot.specSheetUrl} download className="mt-5 inline-flex min-h-11 items-center gap-2 font-semibold text-leaf underline">
-              <Download aria-hidden="true" className="size-4" />
+            <DownloadLink href={lot.specSheetUrl} className="mt-5 inline-flex min-h-11 items-center gap-2 font-semibold text-leaf underline">
               Download the spec sheet
-            </a>
+            </DownloadLink>
           ) : null}
         </div>
       </div>

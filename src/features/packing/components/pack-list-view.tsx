@@ -1,17 +1,18 @@
-import { FileDown, PackageCheck, Truck } from 'lucide-react';
+import { PackageCheck, Truck } from 'lucide-react';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
 import { orderReference } from '@shared/domain/order-reference';
 import { Badge } from '@/components/ui/badge';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { formatDayShort } from '@/lib/dates';
 import { Table, TableBody, TableCell, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { DownloadLink } from '@/components/ui/download-link';
 import { labelsPdfPath } from '../api/get-pack-list';
 import { useMarkPacked } from '../api/mark-packed';
 import { canPack, packStatusOf } from '../utils/pack-status';
@@ -163,10 +164,7 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
   return (
     <div>
       <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
-        <a href={labelsPdfPath(date)} download className={buttonStyles('secondary')}>
-          <FileDown aria-hidden="true" className="size-4" />
-          Labels (PDF)
-        </a>
+        <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
         <p className="text-small text-ink-muted">One label a bag, with both net weights.</p>
       </div>
       {shipped ? (

@@ -1,8 +1,7 @@
-import { Download } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
 import { Badge } from '@/components/ui/badge';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
@@ -11,6 +10,7 @@ import { useShopMoney } from '@/lib/shop-currency';
 import { bagsLabel, cadenceLabel, subscriptionStatusLabels } from '@/lib/subscription-labels';
 import { formatDayWithWeekday } from '@/lib/dates';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { DownloadLink } from '@/components/ui/download-link';
 import { subscribersCsvHref, useSubscribers } from '../api/get-subscribers';
 import type { SubscriberFilters } from '../utils/subscriber-filters';
 
@@ -24,10 +24,7 @@ export function SubscribersTable({ filters, onPageChange }: SubscribersTableProp
   const { money } = useShopMoney();
   const subscribersQuery = useSubscribers(filters);
   const csvLink = (
-    <a href={subscribersCsvHref(filters)} download className={buttonStyles('secondary')}>
-      <Download aria-hidden="true" className="size-4" />
-      Download these as CSV
-    </a>
+    <DownloadLink href={subscribersCsvHref(filters)}>Download these as CSV</DownloadLink>
   );
 
   if (subscribersQuery.isError) {
