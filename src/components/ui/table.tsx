@@ -2,17 +2,18 @@ import clsx from 'clsx';
 import { createContext, useContext, type ComponentProps } from 'react';
 
 /**
- * Tables share one set of parts so cells pad alike everywhere. Two looks: `panel`, a table on a
- * card with a shaded head (lists and histories), and `sheet`, ruled under every row and boxed in
- * black when printed (the day sheet, the pack list, trace reports).
+ * Tables share one set of parts so cells pad alike everywhere. Three looks: `panel`, a table on a
+ * card with a shaded head (lists and histories); `sheet`, ruled under every row and boxed in black
+ * when printed (the day sheet, the pack list, trace reports); `prose`, a small table in running
+ * text (guides), ruled under each row with no frame.
  */
-type TableVariant = 'panel' | 'sheet';
+type TableVariant = 'panel' | 'sheet' | 'prose';
 
 const VariantContext = createContext<TableVariant>('panel');
 
 type Align = 'left' | 'right';
 
-const cellBase = 'px-3 py-2 align-top';
+const cellPadding: Record<TableVariant, string> = { panel: 'px-3 py-2', sheet: 'px-3 py-2', prose: 'py-2 pr-4' };
 const sheetCell = 'border-b border-rule print:border print:border-black';
 
 /** The card a table sits on, scrolling sideways on a narrow screen. */
@@ -30,20 +31,25 @@ export function Table({ variant = 'panel', className, ...props }: ComponentProps
 
 export function TableHead({ className, ...props }: ComponentProps<'thead'>) {
   const variant = useContext(VariantContext);
-  return <thead className={clsx(variant === 'panel' && 'bg-paper-shade', className)} {...props} />;
+  return <thead className={clsx(variant === 'panel' && 'bg-paper-shade', variant === 'prose' && '[&>tr]:border-b [&>tr]:border-rule-strong', className)} {...props} />;
 }
 
 export function TableBody({ className, ...props }: ComponentProps<'tbody'>) {
   const variant = useContext(VariantContext);
-  return <tbody className={clsx(variant === 'panel' && '[&>tr]:border-t [&>tr]:border-rule', className)} {...props} />;
+  return (
+    <tbody
+      className={clsx(variant === 'panel' && '[&>tr]:border-t [&>tr]:border-rule', variant === 'prose' && '[&>tr]:border-b [&>tr]:border-rule', className)}
+      {...props}
+    />
+  );
 }
 
 // A class given to a cell replaces the default of its kind (padding on one axis, weight).
-const classGroup = (token: string) => /^(px|py|font)-/.exec(token)?.[1];
+const classGroup = (token: string) => /^(px|py|pr|font)-/.exec(token)?.[1];
 
 function cellClass(variant: TableVariant, align: Align, className: string | undefined, ...defaults: string[]) {
   const given = new Set((className ?? '').split(/\s+/).map(classGroup).filter(Boolean));
-  const base = [cellBase, ...defaults]
+  const base = [cellPadding[variant], 'align-top', ...defaults]
     .join(' ')
     .split(' ')
     .filter((token) => token && !given.has(classGroup(token)));
