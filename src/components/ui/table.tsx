@@ -45,7 +45,10 @@ export function TableBody({ className, ...props }: ComponentProps<'tbody'>) {
 }
 
 // A class given to a cell replaces the default of its kind (padding on one axis, weight).
-const classGroup = (token: string) => /^(px|py|pr|font)-/.exec(token)?.[1];
+const classGroup = (token: string) => {
+  const kind = /^(px|py|pt|pb|pr|font)-/.exec(token)?.[1];
+  return kind === 'pt' || kind === 'pb' ? 'py' : kind;
+};
 
 function cellClass(variant: TableVariant, align: Align, className: string | undefined, ...defaults: string[]) {
   const given = new Set((className ?? '').split(/\s+/).map(classGroup).filter(Boolean));
