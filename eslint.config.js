@@ -1,3 +1,4 @@
+import { readdirSync } from 'node:fs';
 import js from '@eslint/js';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import { importX } from 'eslint-plugin-import-x';
@@ -17,6 +18,31 @@ const anotherModulesInternals = {
   message: "Import another module through its front door ('../<module>'), never its repo, service or routes.",
 };
 
+// Client boundaries: a feature uses only itself and the shared layers (src/components, src/lib,
+// src/config, shared/); what two features need lives in one of those. Routes in src/app compose
+// features, so nothing below src/app may reach up into it.
+const features = readdirSync('src/features', { withFileTypes: true })
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
+const clientZones = [
+  ...features.map((feature) => ({
+    target: `./src/features/${feature}`,
+    from: './src/features',
+    except: [`./${feature}`],
+    message: 'A feature may not import another feature; move what both need to src/components, src/lib or shared/.',
+  })),
+  {
+    target: ['./src/features', './src/components', './src/lib', './src/config'],
+    from: './src/app',
+    message: 'Only src/app composes routes; import from the feature or shared layer instead.',
+  },
+  {
+    target: ['./src/components', './src/lib', './src/config'],
+    from: './src/features',
+    message: 'The shared layers know no feature; pass what they need in as props or arguments.',
+  },
+];
+
 export default tseslint.config(
   { ignores: ['dist', 'coverage', 'node_modules', 'drizzle', '.data'] },
   js.configs.recommended,
@@ -31,8 +57,12 @@ export default tseslint.config(
   },
   {
     files: ['src/**/*.{ts,tsx}'],
-    plugins: { 'react-hooks': reactHooks },
-    rules: reactHooks.configs.recommended.rules,
+    plugins: { 'react-hooks': reactHooks, 'import-x': importX },
+    settings: { 'import-x/resolver-next': [createTypeScriptImportResolver({ project: './tsconfig.json' })] },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      'import-x/no-restricted-paths': ['error', { zones: clientZones }],
+    },
   },
   {
     // shared/ is used by server and client alike, so it may import neither.

@@ -12,6 +12,8 @@
  */
 import { z } from 'zod';
 import { isCurrencyCode, type CurrencyCode } from '../shared/domain/money';
+import { postalAddressSchema } from '../shared/schemas/address';
+import { isoDate } from '../shared/schemas/dates';
 import { bagSizes, brewMethods, grinds, orderKinds, roastLevels, roastedBagSizes } from '../shared/domain/vocabulary';
 
 /** What a subscriber did to their subscription (the `subscription-changed` e-mail). */
@@ -21,7 +23,7 @@ const text = (max = 300) => z.string().trim().max(max);
 /** The recipient's name as the greeting uses it; empty greets them without a name. */
 const name = text(200);
 const id = text(100).min(1);
-const isoDate = z.iso.date();
+const day = isoDate('date');
 const instant = z
   .union([z.date(), z.iso.datetime({ offset: true })])
   .transform((value) => (value instanceof Date ? value : new Date(value)))
@@ -47,16 +49,6 @@ export const emailLineSchema = z.object({
   grind: z.enum(grinds).optional(),
 });
 
-export const postalAddressSchema = z.object({
-  name: text(),
-  line1: text(),
-  line2: text().nullish(),
-  city: text(),
-  region: text(),
-  postalCode: text(20),
-  country: text(60),
-});
-
 export const emailPayloadSchemas = {
   'order-confirmed': z.object({
     name,
@@ -69,8 +61,8 @@ export const emailPayloadSchemas = {
     currency,
     shipTo: postalAddressSchema.optional(),
     /** Roasted orders: the roast day and the day it ships. */
-    roastDate: isoDate.optional(),
-    shipDate: isoDate.optional(),
+    roastDate: day.optional(),
+    shipDate: day.optional(),
   }),
   'subscription-started': z.object({
     name,
@@ -85,15 +77,15 @@ export const emailPayloadSchemas = {
     /** Price of each delivery. */
     priceCents: minor,
     currency,
-    firstRoastDate: isoDate.optional(),
+    firstRoastDate: day.optional(),
   }),
   roasted: z.object({
     name,
     orderId: id,
-    roastDate: isoDate,
+    roastDate: day,
     lines: z.array(emailLineSchema).max(100).default([]),
-    shipDate: isoDate.optional(),
-    readyFrom: isoDate.optional(),
+    shipDate: day.optional(),
+    readyFrom: day.optional(),
   }),
   shipped: z.object({
     name,
@@ -103,26 +95,26 @@ export const emailPayloadSchemas = {
     trackingNumber: text(80).min(1),
     trackingUrl: link.optional(),
     /** Roasted coffee: the first day it is at its best (the rest-day). Green coffee has none. */
-    readyFrom: isoDate.optional(),
-    bestBefore: isoDate.optional(),
+    readyFrom: day.optional(),
+    bestBefore: day.optional(),
     /** The day the parcel should land (ship day + transit days). */
-    expectedArrival: isoDate.optional(),
+    expectedArrival: day.optional(),
     /** Roasted coffee: true when it lands rested (arrival on or after the ready-from date). */
     readyOnArrival: z.boolean().optional(),
   }),
   'rest-day': z.object({
     name,
     orderId: id,
-    readyFrom: isoDate,
+    readyFrom: day,
     brewMethod: z.enum(brewMethods),
     coffee: text().optional(),
-    bestBefore: isoDate.optional(),
+    bestBefore: day.optional(),
   }),
   'renewal-reminder': z.object({
     name,
     subscriptionId: id,
     coffee: text(),
-    renewsOn: isoDate,
+    renewsOn: day,
     amountCents: minor,
     currency,
   }),
@@ -137,10 +129,10 @@ export const emailPayloadSchemas = {
     /** What the change did, as Deliveries told the subscriber (leads the e-mail when given). */
     notice: text(600).optional(),
     /** The next delivery that will roast, after the change. */
-    nextDelivery: z.object({ roastDate: isoDate, shipDate: isoDate, readyFrom: isoDate }).optional(),
-    pausedUntil: isoDate.optional(),
+    nextDelivery: z.object({ roastDate: day, shipDate: day, readyFrom: day }).optional(),
+    pausedUntil: day.optional(),
     /** Cancelled at the period's end: the last day the subscription runs. */
-    endsOn: isoDate.optional(),
+    endsOn: day.optional(),
   }),
   'payment-failed': z.object({
     name,
@@ -151,7 +143,7 @@ export const emailPayloadSchemas = {
     /** Where the customer updates their card (e.g. a Stripe billing-portal or Restday account URL). */
     updatePaymentUrl: link.optional(),
     /** The day the payment is tried again, when Stripe will retry. */
-    nextAttemptOn: isoDate.optional(),
+    nextAttemptOn: day.optional(),
   }),
   'password-reset': z.object({
     name,
@@ -168,7 +160,7 @@ export const emailPayloadSchemas = {
   'roast-day-moved': z.object({
     name,
     /** The roast day the shop closed. */
-    closedDate: isoDate,
+    closedDate: day,
     items: z
       .array(
         z.object({
@@ -176,10 +168,10 @@ export const emailPayloadSchemas = {
           orderId: id.optional(),
           /** Lot name, or "Roaster's Rotation". */
           coffee: text(),
-          roastDate: isoDate,
-          shipDate: isoDate,
-          readyFrom: isoDate,
-          bestBefore: isoDate,
+          roastDate: day,
+          shipDate: day,
+          readyFrom: day,
+          bestBefore: day,
         }),
       )
       .min(1)

@@ -1,5 +1,4 @@
 import { bagNetWeightLabel } from '../../shared/domain/labels';
-import { formatMoney, type CurrencyCode } from '../../shared/domain/money';
 import { grindLabels, roastLevelLabels, type BagSize, type Grind, type RoastLevel } from '../../shared/domain/vocabulary';
 
 /** A shop-local day (YYYY-MM-DD) as people read it: "Thursday, December 3, 2026". */
@@ -13,10 +12,6 @@ export function formatDay(isoDate: string): string {
 /** An instant in the shop's time zone: "December 3, 2026 at 4:15 PM MST". */
 export function formatInstant(instant: Date, timeZone: string): string {
   return new Intl.DateTimeFormat('en-US', { month: 'long', day: 'numeric', year: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short', timeZone }).format(instant);
-}
-
-export function money(amount: number, currency: CurrencyCode): string {
-  return formatMoney(amount, currency);
 }
 
 /** "1 lb bag — Net Wt 16 oz (1 lb) 454 g"-style description of a bag size. */

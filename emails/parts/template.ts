@@ -11,8 +11,3 @@ export interface EmailTemplate<T extends EmailTemplateName> {
 export function shopLink(context: EmailContext, path: string): string {
   return `${context.baseUrl.replace(/\/+$/, '')}${path}`;
 }
-
-/** The short order reference customers and staff quote: the first 8 characters of its id. */
-export function orderReference(orderId: string): string {
-  return orderId.replace(/-/g, '').slice(0, 8).toUpperCase();
-}

@@ -1,6 +1,9 @@
-import { bagLabel, formatDay, grindLabel, greeting, levelLabel, money } from '../parts/format';
+import { bagLabel, formatDay, grindLabel, greeting, levelLabel } from '../parts/format';
+import { addressLines } from '../../shared/domain/address';
+import { formatMoney } from '../../shared/domain/money';
+import { orderReference } from '../../shared/domain/order-reference';
 import type { Block } from '../parts/layout';
-import { orderReference, shopLink, type EmailTemplate } from '../parts/template';
+import { shopLink, type EmailTemplate } from '../parts/template';
 import type { ParsedEmailPayloads } from '../payloads';
 
 type Line = ParsedEmailPayloads['order-confirmed']['lines'][number];
@@ -25,27 +28,26 @@ export const orderConfirmed: EmailTemplate<'order-confirmed'> = {
     }
     if (p.lines.length > 0) {
       const totals: [string, string][] = [];
-      if (p.subtotalCents !== undefined) totals.push(['Subtotal', money(p.subtotalCents, p.currency)]);
-      if (p.shippingCents !== undefined) totals.push(['Shipping', p.shippingCents === 0 ? 'Free' : money(p.shippingCents, p.currency)]);
-      totals.push(['Total', money(p.totalCents, p.currency)]);
+      if (p.subtotalCents !== undefined) totals.push(['Subtotal', formatMoney(p.subtotalCents, p.currency)]);
+      if (p.shippingCents !== undefined) totals.push(['Shipping', p.shippingCents === 0 ? 'Free' : formatMoney(p.shippingCents, p.currency)]);
+      totals.push(['Total', formatMoney(p.totalCents, p.currency)]);
       blocks.push({
         kind: 'lines',
         rows: p.lines.map((line) => ({
           description: line.description,
           detail: lineDetail(line),
-          ...(line.lineTotalCents !== undefined ? { amount: money(line.lineTotalCents, p.currency) } : {}),
+          ...(line.lineTotalCents !== undefined ? { amount: formatMoney(line.lineTotalCents, p.currency) } : {}),
         })),
         totals,
       });
     } else {
-      blocks.push({ kind: 'facts', rows: [['Total', money(p.totalCents, p.currency)]] });
+      blocks.push({ kind: 'facts', rows: [['Total', formatMoney(p.totalCents, p.currency)]] });
     }
     blocks.push({ kind: 'facts', rows: [['Order', orderReference(p.orderId)]] });
     if (p.shipTo) {
-      const a = p.shipTo;
-      blocks.push({ kind: 'address', title: 'Shipping to', lines: [a.name, a.line1, a.line2 ?? '', `${a.city}, ${a.region} ${a.postalCode}`, a.country].filter(Boolean) });
+      blocks.push({ kind: 'address', title: 'Shipping to', lines: addressLines(p.shipTo) });
     }
     blocks.push({ kind: 'button', label: 'See your account', url: shopLink(context, '/account') });
-    return { heading: 'Your order is confirmed', preheader: `Order ${orderReference(p.orderId)}: ${money(p.totalCents, p.currency)}, paid.`, blocks };
+    return { heading: 'Your order is confirmed', preheader: `Order ${orderReference(p.orderId)}: ${formatMoney(p.totalCents, p.currency)}, paid.`, blocks };
   },
 };

@@ -1,6 +1,7 @@
 import { formatDay, greeting } from '../parts/format';
 import type { Block } from '../parts/layout';
-import { orderReference, type EmailTemplate } from '../parts/template';
+import { orderReference } from '../../shared/domain/order-reference';
+import { type EmailTemplate } from '../parts/template';
 
 export const restDay: EmailTemplate<'rest-day'> = {
   subject: () => 'Your coffee is ready to brew',

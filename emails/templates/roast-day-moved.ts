@@ -1,6 +1,7 @@
 import { formatDay, greeting } from '../parts/format';
 import type { Block } from '../parts/layout';
-import { orderReference, type EmailTemplate } from '../parts/template';
+import { orderReference } from '../../shared/domain/order-reference';
+import { type EmailTemplate } from '../parts/template';
 
 /** Sent when the shop closes a roast day: the customer's coffee roasts on a later day, with its new dates. */
 export const roastDayMoved: EmailTemplate<'roast-day-moved'> = {

@@ -1,4 +1,5 @@
-import { bagLabel, cadenceLabel, formatDay, grindLabel, greeting, levelLabel, money } from '../parts/format';
+import { bagLabel, cadenceLabel, formatDay, grindLabel, greeting, levelLabel } from '../parts/format';
+import { formatMoney } from '../../shared/domain/money';
 import type { Block } from '../parts/layout';
 import { shopLink, type EmailTemplate } from '../parts/template';
 
@@ -8,7 +9,7 @@ export const subscriptionStarted: EmailTemplate<'subscription-started'> = {
     const rows: [string, string][] = [['Coffee', p.coffee]];
     if (p.roastLevel) rows.push(['Roast level', levelLabel(p.roastLevel)]);
     rows.push(['Bag', bagLabel(p.size)], ['Grind', grindLabel(p.grind)], ['Brewing for', p.brewMethod === 'espresso' ? 'Espresso' : 'Filter']);
-    rows.push(['Delivery', cadenceLabel(p.cadenceWeeks)], ['Each delivery', money(p.priceCents, p.currency)]);
+    rows.push(['Delivery', cadenceLabel(p.cadenceWeeks)], ['Each delivery', formatMoney(p.priceCents, p.currency)]);
     if (p.firstRoastDate) rows.push(['First roast day', formatDay(p.firstRoastDate)]);
     const blocks: Block[] = [
       { kind: 'paragraph', text: greeting(p.name) },

@@ -7,7 +7,7 @@ const twelveKilo = { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 };
 describe('load limits', () => {
   it('puts the hard floor at a quarter of rated capacity', () => {
     expect(HARD_FLOOR_LOAD_PCT).toBe(25); // S. Rao, The Coffee Roaster's Companion (2014)
-    expect(loadLimits(twelveKilo)).toEqual({ maxLoadGrams: 9600, preferredMinGrams: 6000, floorGrams: 3000 }); // usual 50–80 % load (TRADE.md, from memory)
+    expect(loadLimits(twelveKilo)).toEqual({ maxLoadGrams: 9600, preferredMinGrams: 6000, floorGrams: 3000 }); // usual 50–80 % load (from memory)
   });
 
   it('refuses a maximum below the floor and a roaster without capacity', () => {

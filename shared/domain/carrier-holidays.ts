@@ -1,7 +1,7 @@
 /**
  * Carrier holidays: the US federal holidays of 5 U.S.C. 6103, on the day they are observed
  * (a holiday on a Saturday is observed the Friday before, on a Sunday the Monday after: Executive
- * Order 11582). No parcel ships on one and transit does not count one (PRODUCT.md).
+ * Order 11582). No parcel ships on one and transit does not count one.
  *
  * A small rule table rather than a holiday package: the rules are eleven lines of law, the client
  * bundle carries this file too, and the packages that fit carry every country's rules or a date

@@ -91,7 +91,7 @@ describe('firstRoastDates and roastDatesWhenPaid', () => {
 describe('deliveryGreenGrams', () => {
   it('2 × 12 oz at medium needs 819 g of green', () => {
     // 2 × 341 g fill (12 oz = 340.19 g, rounded up; NIST SP 811) = 682 g roasted; + 2 % overage (Restday default)
-    // = 695.64 g; ÷ (1 − 0.15) medium loss (TRADE.md, from memory) = 818.4 g → rounded up to 819 g.
+    // = 695.64 g; ÷ (1 − 0.15) medium loss (usual trade figures, from memory) = 818.4 g → rounded up to 819 g.
     expect(deliveryGreenGrams({ roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2 }, { lossModel: defaultLossModel, overagePct: 2 })).toBe(819);
   });
 });

@@ -7,14 +7,14 @@ import { roastLevels } from './vocabulary';
 
 describe('Home Roast Guide for a hot-air popper', () => {
   it('guides a 1 lb bag to medium', () => {
-    // 454 g fill (PRODUCT.md) in batches of at most 80 g (popper 75–80 g, TRADE.md common practice): ceil(454 ÷ 80) = 6.
+    // 454 g fill (the product's rule) in batches of at most 80 g (popper 75–80 g, common practice): ceil(454 ÷ 80) = 6.
     const guide = homeRoastGuide({ device: 'popper', level: 'medium', greenGrams: bagFillGrams('1lb'), suggestedLevel: 'light' }, defaultLossModel);
-    expect(guide.batchGrams).toEqual({ min: 75, max: 80 }); // TRADE.md, popper batch (common practice)
+    expect(guide.batchGrams).toEqual({ min: 75, max: 80 }); // popper batch (common practice)
     expect(guide.batches).toBe(6);
     expect(guide.batchLoads).toEqual([76, 76, 76, 76, 75, 75]);
-    expect(guide.firstCrackSeconds).toBe(180); // TRADE.md: first crack at roughly 3 minutes (common practice)
-    expect(guide.afterFirstCrackSeconds).toEqual({ min: 20, max: 30 }); // TRADE.md: medium +20–30 s (common practice)
-    expect(guide.expectedLossPct).toEqual({ min: 14, max: 16, default: 15 }); // TRADE.md medium 14–16 % (from memory)
+    expect(guide.firstCrackSeconds).toBe(180); // first crack at roughly 3 minutes (common practice)
+    expect(guide.afterFirstCrackSeconds).toEqual({ min: 20, max: 30 }); // medium +20–30 s (common practice)
+    expect(guide.expectedLossPct).toEqual({ min: 14, max: 16, default: 15 }); // medium 14–16 % (from memory)
     // 454 × 0.84 = 381.36 → 381; 454 × 0.86 = 390.44 → 390; 454 × 0.85 = 385.9 → 385 (yields round down).
     expect(guide.expectedRoastedGrams).toEqual({ min: 381, max: 390, default: 385 });
     expect(guide.levels.find((entry) => entry.suggested)?.level).toBe('light');
@@ -24,10 +24,10 @@ describe('Home Roast Guide for a hot-air popper', () => {
   it('gives time after first crack for every level', () => {
     const after = (level: (typeof roastLevels)[number]) =>
       homeRoastGuide({ device: 'popper', level, greenGrams: 227 }, defaultLossModel).afterFirstCrackSeconds;
-    expect(after('light').max).toBe(10); // TRADE.md: light +10 s (common practice)
-    expect(after('medium-dark')).toEqual({ min: 30, max: 40 }); // TRADE.md: medium-dark +30–40 s (common practice)
-    expect(after('dark')).toEqual({ min: 60, max: 60 }); // TRADE.md: dark +60 s (common practice)
-    expect(after('french')).toEqual({ min: 90, max: 90 }); // TRADE.md: French +90 s (common practice)
+    expect(after('light').max).toBe(10); // light +10 s (common practice)
+    expect(after('medium-dark')).toEqual({ min: 30, max: 40 }); // medium-dark +30–40 s (common practice)
+    expect(after('dark')).toEqual({ min: 60, max: 60 }); // dark +60 s (common practice)
+    expect(after('french')).toEqual({ min: 90, max: 90 }); // French +90 s (common practice)
   });
 
   it('walks through the phases with their cues, adding second crack only for dark roasts', () => {
@@ -36,7 +36,7 @@ describe('Home Roast Guide for a hot-air popper', () => {
     expect(names('light')).toEqual(['Drying', 'Browning', 'First crack', 'Development', 'Cooling']);
     expect(names('french')).toEqual(['Drying', 'Browning', 'First crack', 'Development', 'Second crack', 'Cooling']);
     const phases = homeRoastGuide({ device: 'popper', level: 'french', greenGrams: 80 }, defaultLossModel).phases;
-    expect(phases.find((phase) => phase.name === 'Browning')?.cue).toMatch(/bread-like/); // TRADE.md phases (common practice)
+    expect(phases.find((phase) => phase.name === 'Browning')?.cue).toMatch(/bread-like/); // roast phases (common practice)
     expect(phases.find((phase) => phase.name === 'Development')?.cue).toMatch(/about 90 s .* French roast/);
   });
 
@@ -44,7 +44,7 @@ describe('Home Roast Guide for a hot-air popper', () => {
     const guide = homeRoastGuide({ device: 'popper', level: 'light', greenGrams: 80 }, defaultLossModel);
     expect(guide.cautions).toBe(homeRoastCautions);
     for (const topic of [/unattended/, /ventilation/, /[Cc]haff is flammable/, /mitt/, /Cool the beans/, /intended purpose/]) {
-      expect(homeRoastCautions.some((caution) => topic.test(caution))).toBe(true); // PRODUCT.md safety cautions
+      expect(homeRoastCautions.some((caution) => topic.test(caution))).toBe(true); // the product's safety cautions
     }
   });
 

@@ -2,7 +2,7 @@
  * The Home Roast Guide: how to take a lot to a roast level on a home device.
  *
  * - `homeRoastProfiles`: devices with values Restday can stand behind. Only the hot-air popper
- *   has them (TRADE.md, common practice); other home devices vary too much to print numbers.
+ *   has them (common practice); other home devices vary too much to print numbers.
  * - `roastGuideDevices`, `isRoastGuideDevice(name)`: the devices a guide can be asked for.
  * - `homeRoastGuide(request, lossModel)`: batches for a green weight, expected roasted grams as a
  *   range, phases with their cues, time after first crack for the level (and every level, the
@@ -23,7 +23,7 @@ export interface HomeRoastProfile {
   source: string;
 }
 
-/** Hot-air popper values: TRADE.md "Home roasting in a hot-air popper" (common practice). */
+/** Hot-air popper values for home roasting (common practice). */
 const popper: HomeRoastProfile = {
   device: 'popper',
   name: 'Hot-air popcorn popper',

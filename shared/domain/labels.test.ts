@@ -5,7 +5,7 @@ import { fillGrams } from './units';
 
 // Sources. Units: 1 oz = 28.349523125 g, 1 lb = 453.59237 g exactly (NIST SP 811, App. B).
 // Dual units on US packaged food: FPLA as amended 1992; 21 CFR 101.105; "Net Wt 12 oz (340 g)" form
-// (PRODUCT.md; 21 CFR 101.105 examples, from memory).
+// (21 CFR 101.105 examples, from memory).
 // From 1 lb up to 4 lb, ounces first and pounds in parentheses (15 U.S.C. 1453(a)(3)(A)). The statute's
 // text itself was not in the reference search; what it found agrees: an excerpt of 21 CFR Chapter I
 // speaks of "the initial statement of ounces in the dual declaration of net quantity" (§ 101.7(j)), and a
@@ -14,7 +14,7 @@ import { fillGrams } from './units';
 
 describe('net weight labels in both units (FPLA; 21 CFR 101.105)', () => {
   it('states bags under 1 lb in ounces with grams in parentheses', () => {
-    expect(bagNetWeightLabel('12oz')).toBe('Net Wt 12 oz (340 g)'); // 12 × 28.3495 = 340.19 g → 340 g (PRODUCT.md)
+    expect(bagNetWeightLabel('12oz')).toBe('Net Wt 12 oz (340 g)'); // 12 × 28.3495 = 340.19 g → 340 g (the product's rule)
     expect(bagNetWeightLabel('8oz')).toBe('Net Wt 8 oz (227 g)'); // 8 × 28.3495 = 226.80 g → 227 g (NIST SP 811)
   });
 
@@ -27,7 +27,7 @@ describe('net weight labels in both units (FPLA; 21 CFR 101.105)', () => {
   });
 
   it('states bags from 4 lb in pounds with kilograms rounded down', () => {
-    // 5 lb = 2,267.96 g = 2.26796 kg → 2.26 kg, never rounded up to 2.27 (TRADE.md: 5 lb → 2.26 kg).
+    // 5 lb = 2,267.96 g = 2.26796 kg → 2.26 kg, never rounded up to 2.27 (5 lb → 2.26 kg).
     expect(bagNetWeightLabel('5lb')).toBe('Net Wt 5 lb (2.26 kg)');
     // 4 lb = 1,814.37 g → 1.81 kg; the ounce-first form stops below 4 lb.
     expect(netWeightLabel({ amount: 4, unit: 'lb' })).toBe('Net Wt 4 lb (1.81 kg)');

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { currencies, currencyExponent, formatMoney, isCurrencyCode, percentOf, sumMinor, toMinorUnits } from './money';
+import { currencies, currencyExponent, formatMoney, isCurrencyCode, minorUnitDigits, percentOf, sumMinor, toMinorUnits } from './money';
 
 describe('currencies and their minor units', () => {
   it('knows two-, zero- and three-decimal currencies', () => {
@@ -14,6 +14,10 @@ describe('currencies and their minor units', () => {
     expect(isCurrencyCode('usd')).toBe(true);
     expect(isCurrencyCode('xyz')).toBe(false);
     expect(isCurrencyCode('constructor')).toBe(false);
+  });
+
+  it('holds the same minor-unit digits as ISO 4217, which Intl carries', () => {
+    for (const currency of currencies) expect(currencyExponent(currency), currency).toBe(minorUnitDigits(currency));
   });
 
   it('reads typed amounts into minor units without float error', () => {
@@ -32,6 +36,10 @@ describe('currencies and their minor units', () => {
     expect(formatMoney(1234, 'usd')).toBe('$12.34');
     expect(formatMoney(1000, 'jpy')).toBe('¥1,000');
     expect(formatMoney(1234, 'kwd')).toMatch(/1\.234/);
+    // Intl (en-US) with ISO 4217's minor units: yen have none, Kuwaiti dinars three, dollars two.
+    expect(formatMoney(1500, 'jpy')).toBe('¥1,500');
+    expect(formatMoney(1500, 'kwd')).toBe('KWD\u00a01.500');
+    expect(formatMoney(1500, 'USD')).toBe('$15.00');
     expect(() => formatMoney(12.5, 'usd')).toThrow(RangeError);
   });
 

@@ -1,6 +1,7 @@
 /**
  * Money as integers in the currency's minor unit (cents for USD, yen for JPY), as Stripe takes
- * amounts (Stripe docs, Currencies: zero-decimal and three-decimal currencies).
+ * amounts (Stripe docs, Currencies: zero-decimal and three-decimal currencies). Each currency's
+ * minor-unit digits are ISO 4217's, which Intl carries; the table below agrees with Intl (tested).
  *
  * Rounding rule, stated once for all of Restday: when an amount must be rounded to the minor
  * unit, round to the nearest unit, halves up (away from zero): `roundHalfUpDiv` in integer-math.ts.
@@ -8,7 +9,8 @@
  *
  * - `currencies`, `currencyExponent(code)`: minor-unit exponent (usd 2, jpy 0, kwd 3).
  * - `toMinorUnits(text, currency)`: "12.34" → 1234; refuses more decimals than the currency has.
- * - `formatMoney(minor, currency, locale?)`: 1234 usd → "$12.34".
+ * - `formatMoney(minor, currency, locale?)`: the one money formatter of the client and the e-mails:
+ *   1234 usd → "$12.34", 1500 jpy → "¥1,500", 1500 kwd → "KWD 1.500".
  * - `percentOf(amount, pct)`: a percentage of an amount, rounded by the rule above.
  * - `sumMinor(amounts)`: a checked sum (every term and the total safe integers).
  */
@@ -71,15 +73,27 @@ export function toMinorUnits(text: string, currency: CurrencyCode): ParseResult<
   return { ok: true, value: minor };
 }
 
-export function formatMoney(amount: number, currency: CurrencyCode, locale = 'en-US'): string {
+const moneyFormats = new Map<string, Intl.NumberFormat>();
+
+function moneyFormat(currency: string, locale: string): Intl.NumberFormat {
+  const key = `${locale}|${currency}`;
+  let format = moneyFormats.get(key);
+  if (!format) {
+    format = new Intl.NumberFormat(locale, { style: 'currency', currency: currency.toUpperCase() });
+    moneyFormats.set(key, format);
+  }
+  return format;
+}
+
+/** A currency's minor-unit digits as ISO 4217 sets them (JPY 0, USD 2, KWD 3), read from Intl. */
+export function minorUnitDigits(currency: string): number {
+  return moneyFormat(currency, 'en-US').resolvedOptions().maximumFractionDigits ?? 2;
+}
+
+/** `amount` minor units of `currency` (an ISO 4217 code, either case) as people read money. */
+export function formatMoney(amount: number, currency: string, locale = 'en-US'): string {
   assertMinor(amount);
-  const exponent = currencyExponent(currency);
-  return new Intl.NumberFormat(locale, {
-    style: 'currency',
-    currency: currency.toUpperCase(),
-    minimumFractionDigits: exponent,
-    maximumFractionDigits: exponent,
-  }).format(amount / 10 ** exponent);
+  return moneyFormat(currency, locale).format(amount / 10 ** minorUnitDigits(currency));
 }
 
 /** `pct` % of `amount` (pct with up to two decimals), rounded half-up to a whole minor unit. */

@@ -5,8 +5,8 @@ import { BagTooHeavyForShipping, planShipping, type ParcelContent, type Shipping
 
 // Restday's default bands (shared/schemas/settings.ts; invented prices, no carrier's): ≤500 g $6.95,
 // ≤1 kg $8.95, ≤2 kg $11.95, ≤5 kg $16.95, ≤10 kg $24.95; bag tare 20 g, box tare 180 g.
-// A parcel weighs its bags' fill + 20 g a bag + 180 g for the box (TRADE.md, common practice).
-// Fill weights: 8 oz 227 g, 12 oz 341 g, 1 lb 454 g, 2 lb 908 g, 5 lb 2,268 g (PRODUCT.md).
+// A parcel weighs its bags' fill + 20 g a bag + 180 g for the box (common practice).
+// Fill weights: 8 oz 227 g, 12 oz 341 g, 1 lb 454 g, 2 lb 908 g, 5 lb 2,268 g (the product's rule).
 const shipping = defaultShopSettings.shipping;
 
 describe('shipping on real parcels of whole bags', () => {

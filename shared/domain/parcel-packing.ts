@@ -1,7 +1,6 @@
 /**
- * Shipping priced on parcels a packer could really make (PRODUCT.md, "Shipping and the calendar";
- * TRADE.md: a parcel holds whole bags, weighing their fill plus bag tare plus box tare, common
- * practice).
+ * Shipping priced on parcels a packer could really make: a parcel holds whole bags and weighs
+ * their fill plus bag tare plus box tare (common practice).
  *
  * - `planShipping(contents, shipping)`: the cheapest packing of whole bags into parcels within the
  *   weight bands, each parcel listing its bags, weight, band and price.

@@ -4,7 +4,7 @@ import { defaultShopSettings } from '../schemas/settings';
 import { buildRoastList, type RoastListInput, type RoastOrderLine } from './roast-list';
 import { roastLevels } from './vocabulary';
 
-// A 12 kg roaster at 50–80 % (max load 9,600 g), 2 % overage, TRADE.md's loss defaults (medium 15 %,
+// A 12 kg roaster at 50–80 % (max load 9,600 g), 2 % overage, the usual loss defaults (medium 15 %,
 // from memory), 60 kg a day: the shop defaults.
 const settings = defaultShopSettings;
 const twentyPounds: RoastOrderLine[] = [{ lotCode: 'RD-201', roastLevel: 'medium', fillGrams: 454, quantity: 20 }];

@@ -7,7 +7,7 @@ import { bagFillGrams } from './units';
 import { roastLevels } from './vocabulary';
 
 // 12 kg roaster at 50–80 % (max load 9,600 g, preferred minimum 6,000 g, floor 3,000 g), 2 % overage,
-// TRADE.md loss defaults, 3 batches before a lot's own loss counts, 60 kg a day.
+// usual loss defaults, 3 batches before a lot's own loss counts, 60 kg a day.
 const settings = defaultShopSettings;
 
 function input(lines: RoastOrderLine[], extra: Partial<RoastListInput> = {}): RoastListInput {
@@ -17,7 +17,7 @@ function input(lines: RoastOrderLine[], extra: Partial<RoastListInput> = {}): Ro
 describe('buildRoastList', () => {
   it('works the hand example: one lot at medium, 6 × 12 oz + 4 × 1 lb', () => {
     // Roasted: 6 × 341 + 4 × 454 = 2,046 + 1,816 = 3,862 g.
-    // Green: ceil(3,862 × 1.02 ÷ 0.85) = ceil(4,634.4) = 4,635 g (15 % medium default, TRADE.md, from memory).
+    // Green: ceil(3,862 × 1.02 ÷ 0.85) = ceil(4,634.4) = 4,635 g (15 % medium default, usual trade figures, from memory).
     // One batch (≤ 9,600 g) of 4,635 g: 38.6 % of 12 kg, under the preferred 50 % but over the 25 % floor.
     const list = buildRoastList(
       input([

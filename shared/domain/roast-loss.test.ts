@@ -16,12 +16,12 @@ const lossPct = fc.integer({ min: 0, max: 3000 }).map((hundredths) => hundredths
 const overagePct = fc.integer({ min: 0, max: 2000 }).map((hundredths) => hundredths / 100);
 
 describe('the default loss model', () => {
-  it('holds the level ranges and midpoints from TRADE.md', () => {
-    expect(defaultLossModel.light).toEqual({ minPct: 11, maxPct: 14, defaultPct: 12.5 }); // TRADE.md, from memory
-    expect(defaultLossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15 }); // TRADE.md, from memory
-    expect(defaultLossModel['medium-dark']).toEqual({ minPct: 16, maxPct: 18, defaultPct: 17 }); // TRADE.md, from memory
-    expect(defaultLossModel.dark).toEqual({ minPct: 18, maxPct: 20, defaultPct: 19 }); // TRADE.md, from memory
-    expect(defaultLossModel.french).toEqual({ minPct: 20, maxPct: 25, defaultPct: 22 }); // TRADE.md, from memory
+  it('holds the usual level ranges and midpoints', () => {
+    expect(defaultLossModel.light).toEqual({ minPct: 11, maxPct: 14, defaultPct: 12.5 }); // usual trade figures, from memory
+    expect(defaultLossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15 }); // usual trade figures, from memory
+    expect(defaultLossModel['medium-dark']).toEqual({ minPct: 16, maxPct: 18, defaultPct: 17 }); // usual trade figures, from memory
+    expect(defaultLossModel.dark).toEqual({ minPct: 18, maxPct: 20, defaultPct: 19 }); // usual trade figures, from memory
+    expect(defaultLossModel.french).toEqual({ minPct: 20, maxPct: 25, defaultPct: 22 }); // usual trade figures, from memory
   });
 
   it('keeps medium to dark inside the typical 14–20 % total loss', () => {
@@ -43,7 +43,7 @@ describe('the default loss model', () => {
 
 describe('green needed and roasted yield', () => {
   it('works the roast list example by hand', () => {
-    // 6 × 341 g + 4 × 454 g = 3,862 g roasted; ceil(3,862 × 1.02 ÷ 0.85) = ceil(4,634.4) = 4,635 (common practice formula, TRADE.md)
+    // 6 × 341 g + 4 × 454 g = 3,862 g roasted; ceil(3,862 × 1.02 ÷ 0.85) = ceil(4,634.4) = 4,635 (common practice formula)
     expect(greenNeededForRoasted(3862, 15, 2)).toBe(4635);
     // 1,000 g green at 15 % loss yields 850 g (common practice: green × (1 − loss))
     expect(roastedYieldFromGreen(1000, 15)).toBe(850);
@@ -52,7 +52,7 @@ describe('green needed and roasted yield', () => {
   });
 
   it('rounds green up to the next whole gram, worked by hand', () => {
-    // Green = roasted × (1 + overage) ÷ (1 − loss), rounded up (common practice formula, TRADE.md):
+    // Green = roasted × (1 + overage) ÷ (1 − loss), rounded up (common practice formula):
     expect(greenNeededForRoasted(1000, 15)).toBe(1177); // 1,000 ÷ 0.85 = 1,176.47
     expect(greenNeededForRoasted(340, 12.5)).toBe(389); // 340 ÷ 0.875 = 388.57
     expect(greenNeededForRoasted(454, 19, 2)).toBe(572); // 454 × 1.02 = 463.08; ÷ 0.81 = 571.70

@@ -2,7 +2,7 @@
  * Roast loss: the mass green coffee loses in the roaster, by roast level, and the loss model
  * that plans with it (level default first, then the lot's own measured loss).
  *
- * - `defaultLossModel`: loss ranges and defaults per level (TRADE.md, from memory).
+ * - `defaultLossModel`: loss ranges and defaults per level (usual trade ranges, from memory).
  * - `greenNeededForRoasted(roastedGrams, lossPct, overagePct?)`: ceil(roasted × (1 + overage) ÷ (1 − loss)).
  * - `roastedYieldFromGreen(greenGrams, lossPct)`: floor(green × (1 − loss)).
  * - `roastedYieldRange(greenGrams, range)`: {min, max, default} roasted grams for a level's range.
@@ -26,7 +26,7 @@ export interface LossRange {
 }
 export type LossModel = Record<RoastLevel, LossRange>;
 
-/** Level ranges, midpoint as default (TRADE.md "Roast loss", from memory). */
+/** Level ranges, midpoint as default (usual trade ranges, from memory). */
 export const defaultLossModel: LossModel = {
   light: { minPct: 11, maxPct: 14, defaultPct: 12.5 },
   medium: { minPct: 14, maxPct: 16, defaultPct: 15 },

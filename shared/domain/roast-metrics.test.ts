@@ -37,7 +37,7 @@ describe('development time ratio', () => {
 
 describe('Roast Journal metrics', () => {
   it('computes a popper roast', () => {
-    // 80 g green → 68 g roasted = 15 % loss: medium (TRADE.md ranges, from memory).
+    // 80 g green → 68 g roasted = 15 % loss: medium (usual trade ranges, from memory).
     // First crack at 3:00 (popper, common practice), end at 3:45: 45 s development, 20 % of 225 s.
     const result = journalMetrics({ greenGrams: 80, roastedGrams: 68, yellowSeconds: 75, firstCrackSeconds: 180, endSeconds: 225 }, defaultLossModel, 'light');
     expect(result).toEqual({
@@ -77,7 +77,7 @@ describe('Roast Journal metrics', () => {
 
 describe('batch metrics', () => {
   it('reports loss inside the range and a development ratio on target', () => {
-    // 10 kg in, 8.5 kg out = 15 %: medium 14–16 % (TRADE.md, from memory); 132 s of 600 s = 22 % (S. Rao 2016 target 20–25 %)
+    // 10 kg in, 8.5 kg out = 15 %: medium 14–16 % (usual trade figures, from memory); 132 s of 600 s = 22 % (S. Rao 2016 target 20–25 %)
     const result = batchMetrics({ roastLevel: 'medium', greenGramsIn: 10_000, roastedGramsOut: 8_500, totalSeconds: 600, firstCrackSeconds: 468 }, defaultLossModel);
     expect(result).toEqual({
       ok: true,

@@ -3,8 +3,8 @@
 // The shop throughout is Restday's default (defaultShopSettings): America/New_York; roasts Mon, Wed
 // and Fri; order cutoff 12:00 the day before the roast; ships Mon–Fri once a 1-day degassing hold
 // is over; 3 business days in transit; rest 2 days for filter and 7 for espresso, medium level +0;
-// best-before 28 days after the roast (TRADE.md product defaults). Ship policy "ready on arrival"
-// and the weekend hold are on (PRODUCT.md defaults): with 3 transit days a parcel shipped Wed, Thu
+// best-before 28 days after the roast (product defaults). Ship policy "ready on arrival"
+// and the weekend hold are on (product defaults): with 3 transit days a parcel shipped Wed, Thu
 // or Fri would sit in transit over Sat and Sun (common practice: avoid that), so only Mon and Tue
 // ship. No US federal holiday falls in March 2027 (5 U.S.C. 6103).
 //

@@ -2,7 +2,7 @@
 //
 // The shop is Restday's default (defaultShopSettings): America/New_York; ships Mon–Fri after a
 // 1-day degassing hold; 3 transit days; rest 2 days for filter and 7 for espresso (medium +0);
-// ship policy "ready on arrival" and the weekend hold on (PRODUCT.md). Holidays: 5 U.S.C. 6103 as
+// ship policy "ready on arrival" and the weekend hold on (the product's rule). Holidays: 5 U.S.C. 6103 as
 // observed (OPM's federal holidays page, from memory): Washington's Birthday Mon 16 Feb 2026,
 // Thanksgiving Thu 26 Nov 2026, Christmas Fri 25 Dec 2026, New Year's Day Fri 1 Jan 2027.
 // Transit counts Mon–Fri that are not holidays. "Crosses a weekend": a Saturday or Sunday falls
@@ -136,7 +136,7 @@ describe('ready on arrival: the Mon 9 Feb 2026 example', () => {
 
 describe('rest by roast level', () => {
   it('rests light a day longer and medium-dark, dark and French a day shorter by default', () => {
-    // Defaults light +1, medium 0, medium-dark −1, dark −1, French −1 (TRADE.md: darker roasts
+    // Defaults light +1, medium 0, medium-dark −1, dark −1, French −1 (darker roasts
     // degas faster, Smrke et al. 2017; the days from memory). Espresso rests 7 days from Mon 9 Feb 2026.
     const readyFrom = (roastLevel: 'light' | 'medium' | 'medium-dark' | 'dark' | 'french') =>
       datesForRoastDate('2026-02-09', { brewMethod: 'espresso', roastLevel }, shop).readyFrom;

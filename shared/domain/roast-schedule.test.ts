@@ -23,7 +23,7 @@ import { addDays, localDateOf, weekdayOf } from './shop-time';
 
 // Default shop: New York; roasts Mon, Wed, Fri; cutoff 12:00 the day before; ships Mon–Fri after a
 // 1-day degassing hold; 3 transit days; rest filter 2 / espresso 7 (medium +0, light +1); best-before
-// 28 days (TRADE.md product defaults). Ready on arrival and the weekend hold are on (PRODUCT.md):
+// 28 days (product defaults). Ready on arrival and the weekend hold are on (the product's rule):
 // with 3 transit days, a parcel shipped Wed, Thu or Fri would be in transit over Sat and Sun, so
 // roasted parcels ship Mon or Tue (common practice: no parcel sits over a weekend). March 2025 has
 // no US federal holiday (5 U.S.C. 6103).
@@ -200,7 +200,7 @@ describe('dates that follow from a roast date', () => {
   });
 
   it('rests espresso longer than filter and adjusts rest by level', () => {
-    // Filter 2 days, espresso 7 (TRADE.md product defaults; filter 2–7, espresso 7–14 from memory);
+    // Filter 2 days, espresso 7 (product defaults; filter 2–7, espresso 7–14 from memory);
     // light +1 day by default (Smrke et al. 2017; the day from memory): 5 Mar + 8 = 13 Mar.
     expect(datesForRoastDate('2025-03-05', { brewMethod: 'espresso', roastLevel: 'light' }, shop).readyFrom).toBe('2025-03-13');
     const adjusted = { ...shop, restAdjustDays: { ...shop.restAdjustDays, dark: -1, light: 2 } };

@@ -18,11 +18,11 @@ describe('exact conversion factors', () => {
     expect(GRAMS_PER_OUNCE).toBeCloseTo(28.349523125, 12); // NIST SP 811 App. B (exact)
   });
 
-  it('converts the bag sizes as TRADE.md lists them', () => {
-    expect(toGrams({ amount: 12, unit: 'oz' })).toBeCloseTo(340.19, 2); // NIST SP 811 via TRADE.md
-    expect(toGrams({ amount: 1, unit: 'lb' })).toBeCloseTo(453.59, 2); // NIST SP 811 via TRADE.md
-    expect(toGrams({ amount: 2, unit: 'lb' })).toBeCloseTo(907.18, 2); // NIST SP 811 via TRADE.md
-    expect(toGrams({ amount: 5, unit: 'lb' })).toBeCloseTo(2267.96, 2); // NIST SP 811 via TRADE.md
+  it('converts the bag sizes by the NIST SP 811 factors', () => {
+    expect(toGrams({ amount: 12, unit: 'oz' })).toBeCloseTo(340.19, 2); // NIST SP 811
+    expect(toGrams({ amount: 1, unit: 'lb' })).toBeCloseTo(453.59, 2); // NIST SP 811
+    expect(toGrams({ amount: 2, unit: 'lb' })).toBeCloseTo(907.18, 2); // NIST SP 811
+    expect(toGrams({ amount: 5, unit: 'lb' })).toBeCloseTo(2267.96, 2); // NIST SP 811
     expect(toGrams({ amount: 0.5, unit: 'kg' })).toBe(500);
   });
 
@@ -33,12 +33,12 @@ describe('exact conversion factors', () => {
 });
 
 describe('fill grams: the declared quantity rounded up to a whole gram', () => {
-  it('fills each bag size to at least its label (PRODUCT.md)', () => {
-    expect(bagFillGrams('8oz')).toBe(227); // PRODUCT.md: 226.80 g → 227
-    expect(bagFillGrams('12oz')).toBe(341); // PRODUCT.md: 340.19 g → 341
-    expect(bagFillGrams('1lb')).toBe(454); // PRODUCT.md: 453.59 g → 454
-    expect(bagFillGrams('2lb')).toBe(908); // PRODUCT.md: 907.18 g → 908
-    expect(bagFillGrams('5lb')).toBe(2268); // PRODUCT.md: 2267.96 g → 2268
+  it('fills each bag size to at least its label', () => {
+    expect(bagFillGrams('8oz')).toBe(227); // 226.80 g → 227
+    expect(bagFillGrams('12oz')).toBe(341); // 340.19 g → 341
+    expect(bagFillGrams('1lb')).toBe(454); // 453.59 g → 454
+    expect(bagFillGrams('2lb')).toBe(908); // 907.18 g → 908
+    expect(bagFillGrams('5lb')).toBe(2268); // 2267.96 g → 2268
   });
 
   it('rounds typed amounts up to the next whole gram, worked by hand', () => {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { postalAddressInputSchema, postalAddressSchema } from './address';
 import { currentPasswordSchema, emailSchema, newPasswordSchema, personNameSchema } from './auth';
 
 /** `PATCH /api/account/profile` → 200 {user} */
@@ -22,45 +23,14 @@ export const passwordChangeSchema = z.object({
 });
 export type PasswordChange = z.infer<typeof passwordChangeSchema>;
 
-const addressLine = (what: string, max: number) =>
-  z.string({ error: `Enter the ${what}.` }).trim().min(1, `Enter the ${what}.`).max(max, `Use at most ${max} characters.`);
-
 /** A shipping address as a customer enters it (`POST /api/account/addresses`, `PUT /api/account/addresses/:id`). */
-export const addressInputSchema = z.object({
-  name: addressLine('name of the person receiving the parcel', 100),
-  line1: addressLine('street address', 200),
-  line2: z
-    .string()
-    .trim()
-    .max(200, 'Use at most 200 characters.')
-    .nullish()
-    .transform((line) => line || null),
-  city: addressLine('city or town', 100),
-  region: addressLine('state or region', 100),
-  postalCode: addressLine('postal code', 20),
-  /** ISO 3166-1 alpha-2. */
-  country: z
-    .string()
-    .trim()
-    .toUpperCase()
-    .regex(/^[A-Z]{2}$/, 'Use the two-letter country code, like US.')
-    .default('US'),
+export const addressInputSchema = postalAddressInputSchema.extend({
   /** The address checkout offers first; at most one per account. */
   isDefault: z.boolean().default(false),
 });
 export type AddressInput = z.infer<typeof addressInputSchema>;
 
-export const addressSchema = z.object({
-  id: z.uuid(),
-  name: z.string(),
-  line1: z.string(),
-  line2: z.string().nullable(),
-  city: z.string(),
-  region: z.string(),
-  postalCode: z.string(),
-  country: z.string(),
-  isDefault: z.boolean(),
-});
+export const addressSchema = postalAddressSchema.extend({ id: z.uuid(), isDefault: z.boolean() });
 export type Address = z.infer<typeof addressSchema>;
 
 /** `GET /api/account/addresses` → the default address first. */

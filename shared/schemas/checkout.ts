@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { greenBagSizes } from '../domain/vocabulary';
-import { addressInputSchema } from './account';
+import { postalAddressInputSchema } from './address';
 
 /** Where a checkout ships: an address as the customer enters it (the address-book default flag does not apply). */
-export const shippingAddressSchema = addressInputSchema.omit({ isDefault: true });
+export const shippingAddressSchema = postalAddressInputSchema;
 export type ShippingAddress = z.infer<typeof shippingAddressSchema>;
 
 /** Most bags of one size of one lot in a single order. */

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** The one error body every API failure returns (API.md). */
+/** The one error body every API failure returns. */
 export const apiErrorSchema = z.object({
   error: z.object({
     code: z.string(),

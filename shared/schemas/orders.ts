@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { isoDate } from './dates';
+import { postalAddressSchema } from './address';
+import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
 
@@ -40,7 +41,7 @@ export const orderSummarySchema = z.object({
   id: z.uuid(),
   kind: z.enum(orderKinds),
   status: z.enum(orderStatuses),
-  placedAt: z.iso.datetime({ offset: true }),
+  placedAt: instant,
   customer: orderCustomerSchema,
   bagCount: z.number().int(),
   totalCents: z.number().int(),
@@ -74,22 +75,12 @@ export const orderItemSchema = z.object({
 });
 export type OrderItem = z.infer<typeof orderItemSchema>;
 
-export const orderAddressSchema = z.object({
-  name: z.string(),
-  line1: z.string(),
-  line2: z.string().nullable(),
-  city: z.string(),
-  region: z.string(),
-  postalCode: z.string(),
-  country: z.string(),
-});
-
 /** `GET /api/orders/:id` (the customer's own, or any for staff). */
 export const orderDetailSchema = z.object({
   id: z.uuid(),
   kind: z.enum(orderKinds),
   status: z.enum(orderStatuses),
-  placedAt: z.iso.datetime({ offset: true }),
+  placedAt: instant,
   customer: orderCustomerSchema,
   items: z.array(orderItemSchema),
   subtotalCents: z.number().int(),
@@ -101,20 +92,17 @@ export const orderDetailSchema = z.object({
   totalCents: z.number().int(),
   refundedCents: z.number().int(),
   currency: z.string(),
-  shippingAddress: orderAddressSchema,
-  roastDate: z.string().nullable(),
-  shipDate: z.string().nullable(),
-  readyFrom: z.string().nullable(),
-  bestBefore: z.string().nullable(),
+  shippingAddress: postalAddressSchema,
+  ...roastDatesOrNullSchema.shape,
   /** The day the parcel should land: ship date + transit days (weekends and carrier holidays not counted). */
   expectedArrival: z.string().nullable(),
   /** Roasted coffee: true when it lands on or after its ready-from date; null for green coffee or no dates yet. */
   readyOnArrival: z.boolean().nullable(),
   carrier: z.string().nullable(),
   trackingNumber: z.string().nullable(),
-  paidAt: z.iso.datetime({ offset: true }).nullable(),
-  shippedAt: z.iso.datetime({ offset: true }).nullable(),
-  cancelledAt: z.iso.datetime({ offset: true }).nullable(),
+  paidAt: instant.nullable(),
+  shippedAt: instant.nullable(),
+  cancelledAt: instant.nullable(),
 });
 export type OrderDetail = z.infer<typeof orderDetailSchema>;
 

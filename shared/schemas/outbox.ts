@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { instant } from './dates';
 
 export const outboxStatuses = ['pending', 'sending', 'sent', 'failed'] as const;
 export type OutboxStatus = (typeof outboxStatuses)[number];
@@ -18,10 +19,10 @@ export const outboxItemSchema = z.object({
   subject: z.string(),
   status: z.enum(outboxStatuses),
   attempts: z.number().int(),
-  createdAt: z.iso.datetime({ offset: true }),
+  createdAt: instant,
   /** When the next attempt is due (pending rows). */
-  sendAfter: z.iso.datetime({ offset: true }).optional(),
-  sentAt: z.iso.datetime({ offset: true }).optional(),
+  sendAfter: instant.optional(),
+  sentAt: instant.optional(),
   /** Why the last attempt failed (pending after a failure, and failed rows). */
   lastError: z.string().optional(),
 });

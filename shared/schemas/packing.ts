@@ -1,8 +1,7 @@
 import { z } from 'zod';
-import { isoDate } from './dates';
+import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
-const instant = z.iso.datetime({ offset: true });
 
 /** Path of `GET /api/roastery/days/:date/pack-list` and `…/labels.pdf`: a ship day in shop time. */
 export const packDayParamsSchema = z.object({ date: isoDate('date') });
@@ -25,9 +24,7 @@ export const packBagSchema = z.object({
   size: z.enum(bagSizes),
   netGrams: z.number().int().positive(),
   netLabel: z.string(),
-  roastDate: z.string().nullable(),
-  readyFrom: z.string().nullable(),
-  bestBefore: z.string().nullable(),
+  ...roastDatesOrNullSchema.pick({ roastDate: true, readyFrom: true, bestBefore: true }).shape,
   batchId: z.uuid().nullable(),
 });
 export type PackBag = z.infer<typeof packBagSchema>;

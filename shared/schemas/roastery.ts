@@ -1,11 +1,11 @@
 import { z } from 'zod';
-import { areValidDates, isoDate } from './dates';
+import { areValidDates, instant, isoDate } from './dates';
 import { MAX_CALENDAR_SPAN_DAYS } from '../domain/roast-schedule';
 import { daysBetween } from '../domain/shop-time';
 import { roastLevels, weekdays } from '../domain/vocabulary';
 
 /**
- * The Roastery's API shapes (API.md "Roastery"): the Roast Calendar, the Roast List of a roast day
+ * The Roastery's API shapes: the Roast Calendar, the Roast List of a roast day
  * and the batches staff record. The shop settings are `shopSettingsSchema` in ./settings.
  */
 
@@ -230,7 +230,7 @@ export const batchSchema = z.object({
   developmentTimeRatio: z.number().nullable(),
   operatorName: z.string().nullable(),
   notes: z.string(),
-  createdAt: z.iso.datetime({ offset: true }),
+  createdAt: instant,
 });
 export type Batch = z.infer<typeof batchSchema>;
 

@@ -13,22 +13,22 @@ function errorPaths(input: unknown): string[] {
 }
 
 describe('shop settings', () => {
-  it("holds TRADE.md's defaults", () => {
-    expect(defaultShopSettings.restDays).toEqual({ filter: 2, espresso: 7 }); // TRADE.md product defaults
-    expect(defaultShopSettings.bestBeforeDays).toBe(28); // TRADE.md product defaults
-    expect(defaultShopSettings.degasHoldDays).toBe(1); // TRADE.md: most CO2 in the first 24–48 h (common practice)
-    expect(defaultShopSettings.roaster).toMatchObject({ minLoadPct: 50, maxLoadPct: 80 }); // TRADE.md usual load (from memory)
-    expect(defaultShopSettings.lossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15 }); // TRADE.md (from memory)
+  it("holds the product's defaults", () => {
+    expect(defaultShopSettings.restDays).toEqual({ filter: 2, espresso: 7 }); // product defaults
+    expect(defaultShopSettings.bestBeforeDays).toBe(28); // product defaults
+    expect(defaultShopSettings.degasHoldDays).toBe(1); // most CO2 in the first 24–48 h (common practice)
+    expect(defaultShopSettings.roaster).toMatchObject({ minLoadPct: 50, maxLoadPct: 80 }); // usual load (from memory)
+    expect(defaultShopSettings.lossModel.medium).toEqual({ minPct: 14, maxPct: 16, defaultPct: 15 }); // usual trade figures (from memory)
     expect(defaultShopSettings.lossModelMinBatches).toBe(3);
     expect(defaultShopSettings.timeZone).toBe('America/New_York');
-    // Ready to brew on arrival and no parcel over a weekend (PRODUCT.md; TRADE.md, common practice).
+    // Ready to brew on arrival and no parcel over a weekend (the product's promise; common practice).
     expect(defaultShopSettings).toMatchObject({ shipPolicy: 'ready_on_arrival', holdOverWeekend: true });
-    // Darker roasts degas faster (Smrke et al. 2017); the days from memory (TRADE.md).
+    // Darker roasts degas faster (Smrke et al. 2017); the days from memory (usual trade figures).
     expect(defaultShopSettings.restAdjustDays).toEqual({ light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 });
     expect(shopSettingsSchema.parse(defaultShopSettings)).toEqual(defaultShopSettings);
   });
 
-  it("fills in Restday's added fields when a body carries only API.md's", () => {
+  it("fills in Restday's added fields when a body carries only the first version's", () => {
     const minimal = withChange((settings) => {
       for (const key of [
         'currency',

@@ -7,8 +7,8 @@ import { isClockTime, isValidTimeZone } from '../domain/shop-time';
 import { roastedBagSizes, roastLevels, shipPolicies, weekdays } from '../domain/vocabulary';
 
 /**
- * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET (API.md).
- * Fields beyond API.md's sketch (currency, restAdjustDays, dayCapacityGrams, lossModelMinBatches,
+ * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET.
+ * Fields added after the first version of that body (currency, restAdjustDays, dayCapacityGrams, lossModelMinBatches,
  * roastedBagPriceCents, subscriptionDiscountPct, renewalReminderDays, shipping, shipPolicy,
  * holdOverWeekend) default when left out.
  */
@@ -74,7 +74,7 @@ const shippingSchema = z
   });
 
 // Darker roasts degas faster [Smrke et al. 2017]: light +1 day, medium-dark, dark and French −1
-// (TRADE.md, from memory).
+// (from memory).
 const defaultRestAdjustDays = { light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 };
 // Invented prices for the shop to replace.
 const defaultRoastedBagPriceCents = { '12oz': 1_800, '1lb': 2_300, '2lb': 4_400 };
@@ -148,7 +148,7 @@ export const shopSettingsSchema = z
 export type ShopSettings = z.output<typeof shopSettingsSchema>;
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;
 
-/** TRADE.md's defaults; the demo seed sets its own time zone (America/Denver). */
+/** The product's defaults; the demo seed sets its own time zone (America/Denver). */
 export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
   timeZone: 'America/New_York',
   currency: 'usd',
@@ -158,19 +158,19 @@ export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
   cutoff: { time: '12:00', daysBefore: 1 },
   shipWeekdays: ['mon', 'tue', 'wed', 'thu', 'fri'],
   transitDays: 3,
-  // Roasted coffee gives off most of its CO2 in the first 24–48 h (TRADE.md, common practice).
+  // Roasted coffee gives off most of its CO2 in the first 24–48 h (common practice).
   degasHoldDays: 1,
-  // The bag is ready to brew when it lands (PRODUCT.md); no parcel sits over a weekend (TRADE.md,
-  // common practice).
+  // The product promises a bag ready to brew when it lands; no parcel sits over a weekend (common
+  // practice).
   shipPolicy: 'ready_on_arrival',
   holdOverWeekend: true,
-  // Filter 2 days, espresso 7, best-before 28 days (TRADE.md product defaults).
+  // Filter 2 days, espresso 7, best-before 28 days (the product's defaults).
   restDays: { filter: 2, espresso: 7 },
   restAdjustDays: defaultRestAdjustDays,
   bestBeforeDays: 28,
   overagePct: 2,
   dayCapacityGrams: DEFAULT_DAY_CAPACITY_GRAMS,
-  // A 12 kg shop roaster at the usual 50–80 % load (TRADE.md, from memory).
+  // A 12 kg shop roaster at the usual 50–80 % load (from memory).
   roaster: { capacityGrams: 12_000, minLoadPct: 50, maxLoadPct: 80 },
   lossModel: defaultLossModel,
   lossModelMinBatches: DEFAULT_LOSS_MIN_BATCHES,

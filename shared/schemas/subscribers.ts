@@ -1,6 +1,7 @@
 import { z } from 'zod';
+import { instant, roastDatesSchema } from './dates';
 import { brewMethods, deliveryStatuses, grinds, orderStatuses, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
-import { orderAddressSchema } from './orders';
+import { postalAddressSchema } from './address';
 
 export const subscriberSorts = ['newest', 'oldest', 'name', 'next-roast'] as const;
 export type SubscriberSort = (typeof subscriberSorts)[number];
@@ -49,7 +50,7 @@ export const subscriberSummarySchema = z.object({
   cadenceWeeks: z.number().int(),
   priceCents: z.number().int(),
   nextRoastDate: z.string().nullable(),
-  createdAt: z.iso.datetime({ offset: true }),
+  createdAt: instant,
 });
 export type SubscriberSummary = z.infer<typeof subscriberSummarySchema>;
 
@@ -67,8 +68,8 @@ export const subscriberOrderSchema = z.object({
   id: z.uuid(),
   status: z.enum(orderStatuses),
   totalCents: z.number().int(),
-  placedAt: z.iso.datetime({ offset: true }),
-  paidAt: z.iso.datetime({ offset: true }).nullable(),
+  placedAt: instant,
+  paidAt: instant.nullable(),
   roastDate: z.string().nullable(),
   shipDate: z.string().nullable(),
   carrier: z.string().nullable(),
@@ -83,10 +84,7 @@ export type SubscriberOrder = z.infer<typeof subscriberOrderSchema>;
 export const subscriberDeliverySchema = z.object({
   id: z.uuid(),
   sequence: z.number().int(),
-  roastDate: z.string(),
-  shipDate: z.string(),
-  readyFrom: z.string(),
-  bestBefore: z.string(),
+  ...roastDatesSchema.shape,
   status: z.enum(deliveryStatuses),
   lotCode: z.string().nullable(),
   coffee: z.string().nullable(),
@@ -101,9 +99,9 @@ export const subscriberDetailSchema = subscriberSummarySchema.omit({ customerNam
   pausedUntil: z.string().nullable(),
   /** The subscriber cancelled: it ends with the paid period (always sent; optional for older readers). */
   cancelAtPeriodEnd: z.boolean().optional(),
-  currentPeriodEnd: z.iso.datetime({ offset: true }).nullable(),
-  cancelledAt: z.iso.datetime({ offset: true }).nullable(),
-  shippingAddress: orderAddressSchema,
+  currentPeriodEnd: instant.nullable(),
+  cancelledAt: instant.nullable(),
+  shippingAddress: postalAddressSchema,
   deliveries: z.array(subscriberDeliverySchema),
   orders: z.array(subscriberOrderSchema.extend({ bags: z.number().int() })),
 });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { instant, roastDatesSchema } from './dates';
 import { brewMethods, roastedBagSizes, roastLevels, shipPolicies } from '../domain/vocabulary';
 
 /** Most bags in one delivery (the subscriptions table allows 1–10). */
@@ -33,14 +34,10 @@ export type SubscriptionPreviewQuery = z.infer<typeof subscriptionPreviewQuerySc
 export const previewDeliveryCount = 3;
 
 /** One delivery of the preview; days in the shop's time zone, `cutoffAt` a UTC instant (a later payment misses it). */
-export const previewDeliverySchema = z.object({
-  roastDate: z.string(),
-  shipDate: z.string(),
-  readyFrom: z.string(),
-  bestBefore: z.string(),
+export const previewDeliverySchema = roastDatesSchema.extend({
   /** The day the parcel should land (ship date + transit days). */
   expectedArrival: z.string(),
-  cutoffAt: z.iso.datetime({ offset: true }),
+  cutoffAt: instant,
 });
 export type PreviewDelivery = z.infer<typeof previewDeliverySchema>;
 

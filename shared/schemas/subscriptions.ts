@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { isoDate } from './dates';
+import { instant, isoDate, roastDatesSchema } from './dates';
 import { brewMethods, deliveryStatuses, grinds, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
+import { postalAddressSchema } from './address';
 import { shippingAddressSchema } from './checkout';
-import { orderAddressSchema } from './orders';
 
 
 /** Most bags in one delivery. */
@@ -53,18 +53,14 @@ export type SubscriptionCheckoutResponse = z.infer<typeof subscriptionCheckoutRe
  * coffee, level, size and grind it had then, and changes reach the next one. `lotCode`/`coffee` are
  * null for a Roaster's Rotation delivery whose lot is not picked yet; `orderId` once it is paid.
  */
-export const subscriptionDeliverySchema = z.object({
-  roastDate: z.string(),
-  shipDate: z.string(),
-  readyFrom: z.string(),
-  bestBefore: z.string(),
+export const subscriptionDeliverySchema = roastDatesSchema.extend({
   /** The day the parcel should land (ship date + transit days, weekends and carrier holidays not counted). */
   expectedArrival: z.string(),
   /** True when it lands on or after its ready-from date: ready to brew on arrival. */
   readyOnArrival: z.boolean(),
   status: z.enum(deliveryStatuses),
   locked: z.boolean(),
-  cutoffAt: z.iso.datetime({ offset: true }),
+  cutoffAt: instant,
   lotCode: z.string().nullable(),
   coffee: z.string().nullable(),
   roastLevel: z.enum(roastLevels),
@@ -100,9 +96,9 @@ export const subscriptionSchema = z.object({
   endsOn: z.string().nullable(),
   priceCents: z.number().int(),
   currency: z.string(),
-  shippingAddress: orderAddressSchema,
+  shippingAddress: postalAddressSchema,
   nextDelivery: subscriptionDeliverySchema.nullable(),
-  createdAt: z.iso.datetime({ offset: true }),
+  createdAt: instant,
 });
 export type Subscription = z.infer<typeof subscriptionSchema>;
 

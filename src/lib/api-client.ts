@@ -1,7 +1,7 @@
 import type { z } from 'zod';
 import { apiErrorSchema } from '@shared/schemas/errors';
 
-/** A failed API call, carrying the error shape of API.md (`{ error: { code, message, fields? } }`). */
+/** A failed API call, carrying the API's one error shape (`{ error: { code, message, fields? } }`). */
 export class ApiError extends Error {
   readonly status: number;
   readonly code: string;

@@ -1,13 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { formatAltitude, formatGrams, formatMoney, formatPercent, formatPricePerKg, formatScore } from './format';
+import { formatAltitude, formatGrams, formatPercent, formatScore } from './format';
 
 describe('display formatting', () => {
-  it('shows cents as US dollars', () => {
-    expect(formatMoney(2450)).toBe('$24.50');
-    expect(formatMoney(5)).toBe('$0.05');
-    expect(formatPricePerKg(189_000)).toBe('$1,890.00 / kg');
-  });
-
   it('shows grams below a kilogram, kilograms to one decimal above', () => {
     expect(formatGrams(0)).toBe('0 g');
     expect(formatGrams(454)).toBe('454 g');

@@ -1,20 +1,10 @@
-// Display formatting only. Trade arithmetic (units, pricing) belongs to shared/domain.
+// Display formatting only. Trade arithmetic (units, pricing) belongs to shared/domain; money is
+// formatted by shared/domain/money.ts in the shop's currency (see shop-currency.ts).
 
 const locale = 'en-US';
 
-const money = new Intl.NumberFormat(locale, { style: 'currency', currency: 'USD' });
 const wholeNumber = new Intl.NumberFormat(locale, { maximumFractionDigits: 0 });
 const oneDecimal = new Intl.NumberFormat(locale, { minimumFractionDigits: 0, maximumFractionDigits: 1 });
-
-/** 2450 → "$24.50" */
-export function formatMoney(cents: number): string {
-  return money.format(cents / 100);
-}
-
-/** 2450 → "$24.50 / kg" */
-export function formatPricePerKg(cents: number): string {
-  return `${formatMoney(cents)} / kg`;
-}
 
 /** 850 → "850 g"; 12_400 → "12.4 kg" */
 export function formatGrams(grams: number): string {

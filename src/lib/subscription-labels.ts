@@ -44,15 +44,3 @@ export function bagsLabel(count: number, size: RoastedBagSize): string {
   return `${count} × ${bagSizeShort(size)} ${count === 1 ? 'bag' : 'bags'}`;
 }
 
-const shopDay = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
-const instant = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
-
-/** A shop day (`YYYY-MM-DD`) as written, whatever the reader's time zone: "Wed, Dec 9, 2026". */
-export function formatDeliveryDay(isoDate: string): string {
-  return shopDay.format(new Date(`${isoDate}T00:00:00Z`));
-}
-
-/** A UTC instant in the reader's own time: "Tue, Dec 8, 12:00 PM". */
-export function formatCutoff(iso: string): string {
-  return instant.format(new Date(iso));
-}

@@ -2,11 +2,13 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { configure, render } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { vi } from 'vitest';
+import type { CurrencyCode } from '@shared/domain/money';
 import type { User } from '@shared/schemas/auth';
 import type { LotDetail, LotSummary } from '@shared/schemas/lots';
 import { createAppRoutes } from '@/app/router';
 import { getCurrentUserQueryOptions } from '@/features/auth/api/get-current-user';
 import { createQueryClient } from '@/lib/query-client';
+import { getShopCurrencyQueryOptions } from '@/lib/shop-currency';
 
 // Every page is a lazy module; the first render in a test file waits for Vite to transform it.
 configure({ asyncUtilTimeout: 5000 });
@@ -17,14 +19,17 @@ type RenderAppOptions = {
    * in the query cache rather than in each test's `fetch` stub; the Roastery needs staff or owner.
    */
   session?: User | null;
+  /** The shop's currency, likewise in the cache from the start: US dollars unless given. */
+  currency?: CurrencyCode;
 };
 
 /** Renders the real route table at `url` in a memory router, with a fresh query client. */
-export function renderApp(url: string, { session = null }: RenderAppOptions = {}) {
+export function renderApp(url: string, { session = null, currency = 'usd' }: RenderAppOptions = {}) {
   const queryClient = createQueryClient();
   // Tests decide each response themselves; automatic retries would only slow them down.
   queryClient.setDefaultOptions({ queries: { ...queryClient.getDefaultOptions().queries, retry: false } });
   queryClient.setQueryData(getCurrentUserQueryOptions().queryKey, session);
+  queryClient.setQueryData(getShopCurrencyQueryOptions().queryKey, currency);
   const router = createMemoryRouter(createAppRoutes(queryClient), { initialEntries: [url] });
   const view = render(
     <QueryClientProvider client={queryClient}>

@@ -12,7 +12,7 @@ import { devClusterOptions, startCluster } from '../../dev-services/postgres';
 import { stripeFakeControl, payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { startStripeFake, type StripeFake } from '../../dev-services/stripe-fake/index';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
-import { orderReference } from '../../emails/parts/template';
+import { orderReference } from '../../shared/domain/order-reference';
 import { freePort } from '../setup/free-port';
 
 const webhookSecret = 'whsec_restday_local_development';

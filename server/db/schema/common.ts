@@ -1,16 +1,8 @@
 import { timestamp } from 'drizzle-orm/pg-core';
+import type { StoredPostalAddress } from '../../../shared/schemas/address';
 
-/** A postal address as copied onto an order or a subscription (a snapshot: later edits to the
- *  customer's address book do not change where a paid order goes). */
-export type AddressSnapshot = {
-  name: string;
-  line1: string;
-  line2?: string | null;
-  city: string;
-  region: string;
-  postalCode: string;
-  country: string;
-};
+/** A postal address as copied onto an order or a subscription: the one shared model. */
+export type AddressSnapshot = StoredPostalAddress;
 
 /** createdAt / updatedAt pair used by most tables (instants, UTC, `timestamp with time zone`). */
 export const timestamps = () => ({

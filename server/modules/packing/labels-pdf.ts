@@ -1,7 +1,7 @@
 import PDFDocument from 'pdfkit';
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { PackBag, PackOrder } from '@shared/schemas/packing';
-import { orderReference } from '../../../emails/parts/template';
+import { orderReference } from '../../../shared/domain/order-reference';
 
 /** 4 × 3 in, a common size of bag-label stock for desktop label printers (common practice). */
 const LABEL_WIDTH = 4 * 72;

@@ -1,14 +1,22 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { addDays, weekdayOf } from '@shared/domain/shop-time';
 import { defaultShopSettings } from '@shared/schemas/settings';
 import type { CalendarDay, CalendarDayUpdateResponse } from '@shared/schemas/roastery';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
 
+// The calendar marks the shop's today; these tests read December 2026 from a day before it, so no
+// day of it carries that mark whenever they run.
+beforeEach(() => {
+  vi.useFakeTimers({ toFake: ['Date'] });
+  vi.setSystemTime(new Date('2026-11-20T17:00:00Z'));
+});
+
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
+  vi.useRealTimers();
 });
 
 const staff = makeUser({ role: 'staff' });

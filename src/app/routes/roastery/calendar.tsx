@@ -12,9 +12,10 @@ import { paths } from '@/config/paths';
 import { getRoastCalendarQueryOptions, useRoastCalendar } from '@/features/roast-calendar/api/get-roast-calendar';
 import { RoastCalendarMonth } from '@/features/roast-calendar/components/roast-calendar-month';
 import { RoastDayEditor } from '@/features/roast-calendar/components/roast-day-editor';
-import { addMonths, formatMonth, monthOf, monthRange, parseMonth } from '@/features/roast-calendar/utils/calendar-month';
+import { addMonths, monthOf, monthRange, parseMonth } from '@/features/roast-calendar/utils/calendar-month';
 import { getShopSettingsQueryOptions, useShopSettings } from '@/features/shop-settings/api/get-shop-settings';
 import { shopToday } from '@/features/shop-settings/utils/shop-today';
+import { formatMonth } from '@/lib/dates';
 
 function monthFrom(search: URLSearchParams, today: string): string {
   return parseMonth(search.get('month')) ?? monthOf(today);

@@ -13,10 +13,10 @@ import { DayBatches } from '@/features/day-sheet/components/day-batches';
 import { DaySheetTabs, type DaySheetTab } from '@/features/day-sheet/components/day-sheet-tabs';
 import { RoastDayCautions } from '@/features/day-sheet/components/roast-day-cautions';
 import { RoastListView } from '@/features/day-sheet/components/roast-list-view';
-import { formatRoastDay } from '@/features/day-sheet/utils/roast-day-format';
 import { getPackListQueryOptions, usePackList } from '@/features/packing/api/get-pack-list';
 import { PackListView } from '@/features/packing/components/pack-list-view';
 import { useShopSettings } from '@/features/shop-settings/api/get-shop-settings';
+import { formatDayLong } from '@/lib/dates';
 
 function tabOf(search: URLSearchParams): DaySheetTab {
   return search.get('tab') === 'pack' ? 'pack' : 'roast';
@@ -84,7 +84,7 @@ export default function DaySheetRoute() {
   const [search, setSearch] = useSearchParams();
   if (!isIsoDate(date)) return <NotFoundMessage />;
   const tab = tabOf(search);
-  const dayName = formatRoastDay(date);
+  const dayName = formatDayLong(date);
 
   return (
     <>

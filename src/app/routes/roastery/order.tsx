@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { ArrowLeft } from 'lucide-react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { orderReference } from '@shared/domain/order-reference';
 import { NotFoundMessage } from '@/components/errors/not-found-message';
 import { PageTitle } from '@/components/seo/page-title';
 import { ErrorState } from '@/components/ui/error-state';
@@ -11,7 +12,6 @@ import { requireUser } from '@/features/auth/utils/require-user';
 import { roasteryRoles } from '@/features/auth/utils/roles';
 import { getRoasteryOrderQueryOptions, useRoasteryOrder } from '@/features/roastery-orders/api/get-roastery-order';
 import { RoasteryOrderDetail } from '@/features/roastery-orders/components/roastery-order-detail';
-import { orderReference } from '@/features/roastery-orders/utils/order-labels';
 import { ApiError } from '@/lib/api-client';
 
 export const clientLoader =

@@ -27,10 +27,7 @@ export default function CheckoutRoute() {
   const [lineErrors, setLineErrors] = useState<Record<number, string>>({});
   const addressesQuery = useAddresses();
   // The saved address checkout starts from: the one marked default, which the server lists first.
-  const saved = addressesQuery.data?.items[0];
-  const initialAddress = saved
-    ? { name: saved.name, line1: saved.line1, line2: saved.line2, city: saved.city, region: saved.region, postalCode: saved.postalCode, country: saved.country }
-    : undefined;
+  const initialAddress = addressesQuery.data?.items[0];
 
   return (
     <>

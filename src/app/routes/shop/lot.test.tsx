@@ -84,7 +84,7 @@ describe('lot page', () => {
     expect(screen.getByRole('button', { name: 'Ounces' }).getAttribute('aria-pressed')).toBe('true');
     expect(option('1 lb')).toBe('1 lbfills 16 oz$11.11');
     expect(option('5 lb')).toBe('5 lbfills 80 oz$49.90');
-    // The guide follows: 454 g green at light (11–14 % loss, TRADE.md from memory) → 390–404 g.
+    // The guide follows: 454 g green at light (11–14 % loss, the usual range for light roasts, from memory) → 390–404 g.
     expect(await screen.findByText('13.8 oz–14.3 oz')).toBeTruthy();
 
     fireEvent.click(screen.getByRole('button', { name: 'Grams' }));
@@ -98,10 +98,10 @@ describe('lot page', () => {
     const levels = await screen.findByRole('table', { name: 'Time after first crack' });
     const lightRow = within(levels).getByRole('rowheader', { name: /Light/ });
     expect(lightRow.textContent).toContain('Suggested for this lot');
-    // Popper times after first crack (TRADE.md, common practice).
+    // Popper times after first crack (common practice).
     expect(within(levels).getByRole('row', { name: /Medium-dark/ }).textContent).toContain('30–40 s');
     expect(screen.getByText('Never leave the roaster unattended while it runs.')).toBeTruthy();
-    // 454 g at up to 80 g a batch (TRADE.md, common practice) → 6 batches.
+    // 454 g at up to 80 g a batch (common practice) → 6 batches.
     expect(screen.getByText('Batches for a 1 lb bag').nextElementSibling?.textContent).toBe('6');
 
     fireEvent.click(screen.getByLabelText(/^5 lb/));

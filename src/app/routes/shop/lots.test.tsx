@@ -50,6 +50,14 @@ describe('Green Lots page', () => {
     await waitFor(() => expect(document.title).toBe('Green Lots · Restday'));
   });
 
+  it("prices lots in the shop's own currency", async () => {
+    stubFetch(() => jsonResponse({ items: [makeLot({ pricePerKgCents: 1500 })] }));
+    renderApp('/lots', { currency: 'jpy' });
+
+    const [card] = await screen.findAllByTestId('lot-card');
+    expect(within(card as HTMLElement).getByText('¥1,500 / kg')).toBeTruthy();
+  });
+
   it('shows a loading skeleton until the lots arrive', async () => {
     let answer: (response: Response) => void = () => undefined;
     stubFetch(() => new Promise<Response>((resolve) => (answer = resolve)));

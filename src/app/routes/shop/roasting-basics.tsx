@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import { HomeRoastingCautions } from '@/components/safety/home-roasting-cautions';
 import { PageTitle } from '@/components/seo/page-title';
 import { PageHeader } from '@/components/ui/page-header';
+import { Table, TableBody, TableCell, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { paths } from '@/config/paths';
 
 function Source({ children }: { children: ReactNode }) {
@@ -96,28 +97,28 @@ export default function RoastingBasicsRoute() {
 
         <h3 className="mt-6 text-h3">Time after first crack, by roast level</h3>
         <p className="mt-1 text-small text-ink-muted">A ballpark only: judge by colour and sound as well. (common practice)</p>
-        <table className="mt-3 w-full border-collapse text-left">
-          <thead>
-            <tr className="border-b border-rule-strong">
-              <th scope="col" className="py-2 pr-4 font-semibold">
+        <Table variant="prose" className="mt-3">
+          <TableHead>
+            <tr>
+              <TableHeader>
                 Roast level
-              </th>
-              <th scope="col" className="py-2 font-semibold">
+              </TableHeader>
+              <TableHeader>
                 Keep going after first crack for
-              </th>
+              </TableHeader>
             </tr>
-          </thead>
-          <tbody>
+          </TableHead>
+          <TableBody>
             {afterFirstCrack.map((row) => (
-              <tr key={row.level} className="border-b border-rule">
-                <th scope="row" className="py-2 pr-4 font-normal">
+              <tr key={row.level}>
+                <TableRowHeader>
                   {row.level}
-                </th>
-                <td className="py-2">{row.time}</td>
+                </TableRowHeader>
+                <TableCell>{row.time}</TableCell>
               </tr>
             ))}
-          </tbody>
-        </table>
+          </TableBody>
+        </Table>
       </section>
 
       <section aria-labelledby="after" className="mt-10">

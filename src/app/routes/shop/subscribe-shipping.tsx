@@ -32,10 +32,7 @@ function Shipping({ build }: { build: SubscriptionBuild }) {
   const { grind: _grind, ...previewChoice } = build;
   const preview = useSubscriptionPreview(previewChoice);
   // The saved address checkout starts from: the one marked default, which the server lists first.
-  const saved = addressesQuery.data?.items[0];
-  const initialAddress = saved
-    ? { name: saved.name, line1: saved.line1, line2: saved.line2, city: saved.city, region: saved.region, postalCode: saved.postalCode, country: saved.country }
-    : undefined;
+  const initialAddress = addressesQuery.data?.items[0];
   const coffee = build.lotCode === null ? roastersRotationName : (lotQuery.data?.name ?? build.lotCode);
 
   return (

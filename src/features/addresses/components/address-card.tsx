@@ -1,5 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import type { Address } from '@shared/schemas/account';
+import { AddressDisplay } from '@/components/address/address-display';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
@@ -59,19 +60,7 @@ export function AddressCard({ address, focusEdit = false, onEdit, onMakeDefault,
         </h3>
         {address.isDefault ? <Badge tone="ok">Used first at checkout</Badge> : null}
       </div>
-      <address className="mt-2 not-italic text-ink-muted">
-        {address.line1}
-        {address.line2 ? (
-          <>
-            <br />
-            {address.line2}
-          </>
-        ) : null}
-        <br />
-        {address.city}, {address.region} {address.postalCode}
-        <br />
-        {address.country}
-      </address>
+      <AddressDisplay address={address} withoutName className="mt-2 text-ink-muted" />
 
       {failure ? (
         <p role="alert" className="mt-3 text-small font-semibold text-alert">

@@ -1,11 +1,12 @@
 import { Trash2 } from 'lucide-react';
 import { useId, useMemo } from 'react';
 import { Link } from 'react-router-dom';
+import { formatMoney } from '@shared/domain/money';
 import { bagFillGrams, bagSizeDeclarations } from '@shared/domain/units';
 import { maxBagsPerLine } from '@shared/schemas/checkout';
 import { controlStyles } from '@/components/ui/control-styles';
 import { paths } from '@/config/paths';
-import { formatGrams, formatMoney } from '@/lib/format';
+import { formatGrams } from '@/lib/format';
 import { useShipping } from '../api/get-shipping';
 import { useCart } from '../hooks/use-cart';
 import { quoteCart } from '../utils/quote-cart';
@@ -54,6 +55,8 @@ export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
   const { lines, remove } = useCart();
   const shippingQuery = useShipping();
   const rules = shippingQuery.data;
+  // Priced with the bands the shop publishes, so in the currency published with them.
+  const money = (minor: number) => (rules ? formatMoney(minor, rules.currency) : '');
   // The parcel search can take a noticeable moment on a very large cart: price once per change.
   const priced = useMemo(() => (rules ? quoteCart(lines, rules) : undefined), [lines, rules]);
   const quote = priced?.ok ? priced.quote : undefined;
@@ -75,11 +78,11 @@ export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
                 </Link>
                 <p className="text-small text-ink-muted">
                   {sizeLabel(line)} · lot {line.lotCode}
-                  {linePrice ? ` · ${formatMoney(linePrice.unitCents)} a bag` : ''}
+                  {linePrice ? ` · ${money(linePrice.unitCents)} a bag` : ''}
                 </p>
               </div>
               {editable ? <QuantityInput line={line} /> : <p className="text-small">× {line.quantity}</p>}
-              <p className="w-24 text-right font-semibold">{linePrice ? formatMoney(linePrice.amountCents) : ''}</p>
+              <p className="w-24 text-right font-semibold">{linePrice ? money(linePrice.amountCents) : ''}</p>
               {editable ? (
                 <button
                   type="button"
@@ -113,21 +116,21 @@ export function CartLines({ editable, lineErrors = {} }: CartLinesProps) {
       {quote ? (
         <dl className="mt-4 ml-auto grid max-w-xs grid-cols-[1fr_auto] gap-x-6 gap-y-1">
           <dt>Bags</dt>
-          <dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
+          <dd className="text-right">{money(quote.subtotalCents)}</dd>
           <dt>{parcels.length > 1 ? `Shipping, ${parcels.length} parcels` : 'Shipping'}</dt>
-          <dd className="text-right">{formatMoney(quote.shippingCents)}</dd>
+          <dd className="text-right">{money(quote.shippingCents)}</dd>
           {parcels.length > 1
             ? parcels.map((parcel, index) => (
                 <div key={index} className="col-span-2 grid grid-cols-subgrid text-small text-ink-muted">
                   <dt className="pl-3">
                     Parcel {index + 1}: {parcel.bags.reduce((sum, bag) => sum + bag.quantity, 0)} bags, {formatGrams(parcel.grams)}
                   </dt>
-                  <dd className="text-right">{formatMoney(parcel.cents)}</dd>
+                  <dd className="text-right">{money(parcel.cents)}</dd>
                 </div>
               ))
             : null}
           <dt className="border-t border-rule pt-1 font-semibold">Total</dt>
-          <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
+          <dd className="border-t border-rule pt-1 text-right font-semibold">{money(quote.totalCents)}</dd>
         </dl>
       ) : shippingQuery.isPending ? (
         <p className="mt-4 text-right text-small text-ink-muted">Pricing shipping…</p>

@@ -3,52 +3,51 @@ import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { Batch } from '@shared/schemas/roastery';
 import { Badge } from '@/components/ui/badge';
 import { paths } from '@/config/paths';
+import { formatTime } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { formatExactGrams, formatLossPct, formatMinutesSeconds } from '../utils/roast-day-format';
 
-const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
-const numberCell = `${cell} whitespace-nowrap text-right tabular-nums`;
 
 /**
  * The batches recorded for the day, each with its loss, its flag and a way to trace it. Times read
  * in `timeZone`, the shop's, when known.
  */
 export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?: string }) {
-  const time = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit', timeZone });
   if (batches.length === 0) return <p className="text-ink-muted">No batches recorded for this day yet.</p>;
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">
-      <table className="w-full border-collapse">
+    <TableFrame className="print:overflow-visible print:rounded-none print:border-0">
+      <Table variant="sheet">
         <caption className="sr-only">Batches recorded for the day</caption>
-        <thead>
+        <TableHead>
           <tr>
             {['Recorded', 'Lot', 'Level', 'Green in', 'Roasted out', 'Loss', 'Times', 'Operator'].map((heading) => (
-              <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+              <TableHeader key={heading}>
                 {heading}
-              </th>
+              </TableHeader>
             ))}
-            <th scope="col" className={`${cell} print:hidden`}>
+            <TableHeader className="print:hidden">
               <span className="sr-only">Trace</span>
-            </th>
+            </TableHeader>
           </tr>
-        </thead>
-        <tbody>
+        </TableHead>
+        <TableBody>
           {batches.map((batch) => (
             <tr key={batch.id}>
-              <td className={cell}>{time.format(new Date(batch.createdAt))}</td>
-              <th scope="row" className={`${cell} font-semibold`}>
+              <TableCell>{formatTime(batch.createdAt, timeZone)}</TableCell>
+              <TableRowHeader className="font-semibold">
                 {batch.lotName}
                 <span className="block text-small font-normal text-ink-muted print:text-black">{batch.lotCode}</span>
-              </th>
-              <td className={cell}>{roastLevelLabels[batch.roastLevel]}</td>
-              <td className={numberCell}>{formatExactGrams(batch.greenGramsIn)}</td>
-              <td className={numberCell}>{formatExactGrams(batch.roastedGramsOut)}</td>
-              <td className={numberCell}>
+              </TableRowHeader>
+              <TableCell>{roastLevelLabels[batch.roastLevel]}</TableCell>
+              <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(batch.greenGramsIn)}</TableCell>
+              <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(batch.roastedGramsOut)}</TableCell>
+              <TableCell align="right" className="whitespace-nowrap">
                 {formatLossPct(batch.lossPct)}
                 <span className="block">
                   {batch.withinExpected ? <Badge tone="ok">Within expected</Badge> : <Badge tone="alert">Outside expected</Badge>}
                 </span>
-              </td>
-              <td className={cell}>
+              </TableCell>
+              <TableCell>
                 {batch.totalSeconds === null ? '—' : `${formatMinutesSeconds(batch.totalSeconds)} total`}
                 {batch.firstCrackSeconds === null ? null : (
                   <span className="block text-small">first crack {formatMinutesSeconds(batch.firstCrackSeconds)}</span>
@@ -56,20 +55,20 @@ export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?:
                 {batch.developmentTimeRatio === null ? null : (
                   <span className="block text-small">DTR {formatLossPct(batch.developmentTimeRatio)}</span>
                 )}
-              </td>
-              <td className={cell}>
+              </TableCell>
+              <TableCell>
                 {batch.operatorName ?? '—'}
                 {batch.notes ? <span className="block text-small text-ink-muted print:text-black">{batch.notes}</span> : null}
-              </td>
-              <td className={`${cell} print:hidden`}>
+              </TableCell>
+              <TableCell className="print:hidden">
                 <Link to={paths.roastery.batch.getHref(batch.id)} className="font-semibold text-leaf underline">
                   Trace<span className="sr-only"> the {formatExactGrams(batch.greenGramsIn)} batch of {batch.lotName}</span>
                 </Link>
-              </td>
+              </TableCell>
             </tr>
           ))}
-        </tbody>
-      </table>
-    </div>
+        </TableBody>
+      </Table>
+    </TableFrame>
   );
 }

@@ -1,16 +1,16 @@
-import { Download, Printer, TriangleAlert } from 'lucide-react';
+import clsx from 'clsx';
+import { Printer, TriangleAlert } from 'lucide-react';
 import { Fragment, useState } from 'react';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { RoastListLine, RoastListResponse } from '@shared/schemas/roastery';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { DownloadLink } from '@/components/ui/download-link';
 import { roastListPath, roastListPdfPath } from '../api/get-roast-list';
 import { formatExactGrams, formatLossPct } from '../utils/roast-day-format';
 import { RecordBatchForm } from './record-batch-form';
 
-const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
-const headCell = `${cell} text-small font-semibold`;
-const numberCell = `${cell} whitespace-nowrap text-right tabular-nums`;
 
 /** "2 × 4,200 g" when the loads are equal, else each load. */
 function describeLoads(batches: RoastListLine['batches']): string {
@@ -30,41 +30,41 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
   return (
     <Fragment>
       <tr>
-        <th scope="row" className={`${cell} font-semibold`}>
+        <TableRowHeader className="font-semibold">
           {line.lotName}
           <span className="block text-small font-normal text-ink-muted print:text-black">{line.lotCode}</span>
-        </th>
-        <td className={cell}>{roastLevelLabels[line.roastLevel]}</td>
-        <td className={numberCell}>{line.bags}</td>
-        <td className={numberCell}>{formatExactGrams(line.roastedGrams)}</td>
-        <td className={numberCell}>
+        </TableRowHeader>
+        <TableCell>{roastLevelLabels[line.roastLevel]}</TableCell>
+        <TableCell align="right" className="whitespace-nowrap">{line.bags}</TableCell>
+        <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(line.roastedGrams)}</TableCell>
+        <TableCell align="right" className="whitespace-nowrap">
           {formatLossPct(line.lossPct)}
           <span className="block text-small text-ink-muted print:text-black">{lossSourceLabels[line.lossSource]}</span>
-        </td>
-        <td className={`${numberCell} font-semibold`}>{formatExactGrams(line.greenGrams)}</td>
-        <td className={cell}>
+        </TableCell>
+        <TableCell align="right" className="whitespace-nowrap font-semibold">{formatExactGrams(line.greenGrams)}</TableCell>
+        <TableCell>
           {describeLoads(line.batches)}
           {line.floorProposal ? (
             <span className="block text-small text-ink-muted print:text-black">
               At the floor: {formatExactGrams(line.floorProposal.batchGreenGrams)} a batch, {formatExactGrams(line.floorProposal.extraGreenGrams)} more green
             </span>
           ) : null}
-        </td>
-        <td className={cell}>
+        </TableCell>
+        <TableCell>
           {line.recorded.batches} of {line.batches.length}
           {line.recorded.batches > 0 ? (
             <span className="block text-small text-ink-muted print:text-black">
               {formatExactGrams(line.recorded.greenGrams)} in, {formatExactGrams(line.recorded.roastedGrams)} out
             </span>
           ) : null}
-        </td>
-        <td className={cell}>
+        </TableCell>
+        <TableCell>
           {done ? 'Done' : describeLoads(line.toRoast.batches)}
           {done ? null : (
             <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>
           )}
-        </td>
-        <td className={`${cell} print:hidden`}>
+        </TableCell>
+        <TableCell className="print:hidden">
           <Button variant="secondary" className="whitespace-nowrap" aria-expanded={recording} aria-controls={formRowId} onClick={() => setRecording((open) => !open)}>
             {recording ? 'Close' : 'Record batch'}
             <span className="sr-only">
@@ -72,14 +72,14 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
               of {line.lotName}, {roastLevelLabels[line.roastLevel]}
             </span>
           </Button>
-        </td>
+        </TableCell>
       </tr>
       <tr id={formRowId} hidden={!recording} className="print:hidden">
-        <td colSpan={10} className="border-b border-rule bg-paper px-3 py-4">
+        <TableCell colSpan={10} className="bg-paper py-4">
           {recording ? (
             <RecordBatchForm line={{ roastDate: date, lotCode: line.lotCode, lotName: line.lotName, roastLevel: line.roastLevel }} suggestedGreenGrams={nextLoad} />
           ) : null}
-        </td>
+        </TableCell>
       </tr>
     </Fragment>
   );
@@ -132,18 +132,9 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
           <Printer aria-hidden="true" className="size-4" />
           Print the Roast List
         </Button>
-        <a href={roastListPath(date, 'csv')} download className={buttonStyles('secondary')}>
-          <Download aria-hidden="true" className="size-4" />
-          Roast List (CSV)
-        </a>
-        <a href={roastListPdfPath(date, 'letter')} download className={buttonStyles('secondary')}>
-          <Download aria-hidden="true" className="size-4" />
-          Roast List (PDF, Letter)
-        </a>
-        <a href={roastListPdfPath(date, 'a4')} download className={buttonStyles('secondary')}>
-          <Download aria-hidden="true" className="size-4" />
-          Roast List (PDF, A4)
-        </a>
+        <DownloadLink href={roastListPath(date, 'csv')}>Roast List (CSV)</DownloadLink>
+        <DownloadLink href={roastListPdfPath(date, 'letter')}>Roast List (PDF, Letter)</DownloadLink>
+        <DownloadLink href={roastListPdfPath(date, 'a4')}>Roast List (PDF, A4)</DownloadLink>
       </div>
 
       <Totals roastList={roastList} />
@@ -156,31 +147,31 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
           <h2 id="roast-lines" className="mb-3 text-h3">
             By lot and roast level
           </h2>
-          <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">
-            <table className="w-full border-collapse">
-              <thead>
+          <TableFrame className="print:overflow-visible print:rounded-none print:border-0">
+            <Table variant="sheet">
+              <TableHead>
                 <tr>
-                  <th scope="col" className={headCell}>Lot</th>
-                  <th scope="col" className={headCell}>Level</th>
-                  <th scope="col" className={`${headCell} text-right`}>Bags</th>
-                  <th scope="col" className={`${headCell} text-right`}>Roasted</th>
-                  <th scope="col" className={`${headCell} text-right`}>Loss</th>
-                  <th scope="col" className={`${headCell} text-right`}>Green</th>
-                  <th scope="col" className={headCell}>Batches</th>
-                  <th scope="col" className={headCell}>Recorded</th>
-                  <th scope="col" className={headCell}>Still to roast</th>
-                  <th scope="col" className={`${headCell} print:hidden`}>
+                  <TableHeader>Lot</TableHeader>
+                  <TableHeader>Level</TableHeader>
+                  <TableHeader align="right">Bags</TableHeader>
+                  <TableHeader align="right">Roasted</TableHeader>
+                  <TableHeader align="right">Loss</TableHeader>
+                  <TableHeader align="right">Green</TableHeader>
+                  <TableHeader>Batches</TableHeader>
+                  <TableHeader>Recorded</TableHeader>
+                  <TableHeader>Still to roast</TableHeader>
+                  <TableHeader className="print:hidden">
                     <span className="sr-only">Actions</span>
-                  </th>
+                  </TableHeader>
                 </tr>
-              </thead>
-              <tbody>
+              </TableHead>
+              <TableBody>
                 {roastList.lines.map((line) => (
                   <LineRows key={`${line.lotCode}-${line.roastLevel}`} line={line} date={date} />
                 ))}
-              </tbody>
-            </table>
-          </div>
+              </TableBody>
+            </Table>
+          </TableFrame>
         </section>
       )}
 
@@ -192,33 +183,33 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
           {roastList.pull.length === 0 ? (
             <p className="text-ink-muted print:text-black">Everything on this list is roasted: no green left to pull.</p>
           ) : (
-            <div className="overflow-x-auto rounded-card border border-rule bg-sheet print:overflow-visible print:rounded-none print:border-0">
-              <table className="w-full border-collapse">
-                <thead>
+            <TableFrame className="print:overflow-visible print:rounded-none print:border-0">
+              <Table variant="sheet">
+                <TableHead>
                   <tr>
-                    <th scope="col" className={headCell}>Lot</th>
-                    <th scope="col" className={`${headCell} text-right`}>Green to pull</th>
-                    <th scope="col" className={`${headCell} text-right`}>In stock</th>
-                    <th scope="col" className={`${headCell} text-right`}>Short by</th>
+                    <TableHeader>Lot</TableHeader>
+                    <TableHeader align="right">Green to pull</TableHeader>
+                    <TableHeader align="right">In stock</TableHeader>
+                    <TableHeader align="right">Short by</TableHeader>
                   </tr>
-                </thead>
-                <tbody>
+                </TableHead>
+                <TableBody>
                   {roastList.pull.map((pull) => (
                     <tr key={pull.lotCode}>
-                      <th scope="row" className={`${cell} font-semibold`}>
+                      <TableRowHeader className="font-semibold">
                         {pull.lotName}
                         <span className="block text-small font-normal text-ink-muted print:text-black">{pull.lotCode}</span>
-                      </th>
-                      <td className={numberCell}>{formatExactGrams(pull.greenGrams)}</td>
-                      <td className={numberCell}>{formatExactGrams(pull.stockGrams)}</td>
-                      <td className={`${numberCell} ${pull.shortfallGrams > 0 ? 'font-semibold text-alert print:text-black' : ''}`}>
+                      </TableRowHeader>
+                      <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(pull.greenGrams)}</TableCell>
+                      <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(pull.stockGrams)}</TableCell>
+                      <TableCell align="right" className={clsx('whitespace-nowrap', pull.shortfallGrams > 0 && 'font-semibold text-alert print:text-black')}>
                         {pull.shortfallGrams > 0 ? formatExactGrams(pull.shortfallGrams) : 'None'}
-                      </td>
+                      </TableCell>
                     </tr>
                   ))}
-                </tbody>
-              </table>
-            </div>
+                </TableBody>
+              </Table>
+            </TableFrame>
           )}
         </section>
       ) : null}

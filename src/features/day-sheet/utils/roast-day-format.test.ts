@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatExactGrams, formatMinutesSeconds, formatRoastDay, parseMinutesSeconds } from './roast-day-format';
+import { formatExactGrams, formatMinutesSeconds, parseMinutesSeconds } from './roast-day-format';
 
 describe('Day Sheet formatting', () => {
   it('reads roast-timer times as minutes and seconds, and refuses anything else', () => {
@@ -16,8 +16,7 @@ describe('Day Sheet formatting', () => {
     expect(formatMinutesSeconds(545)).toBe('9:05');
   });
 
-  it('keeps grams exact and names a roast day without shifting it by a time zone', () => {
+  it('keeps grams exact', () => {
     expect(formatExactGrams(4635)).toBe('4,635 g');
-    expect(formatRoastDay('2026-12-03')).toBe('Thursday, December 3, 2026');
   });
 });

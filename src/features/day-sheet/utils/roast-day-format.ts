@@ -28,9 +28,3 @@ export function formatMinutesSeconds(totalSeconds: number): string {
   return `${minutes}:${String(totalSeconds % 60).padStart(2, '0')}`;
 }
 
-const longDate = new Intl.DateTimeFormat('en-US', { weekday: 'long', month: 'long', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
-
-/** "2026-12-03" → "Thursday, December 3, 2026" (a day, so no time zone may shift it). */
-export function formatRoastDay(date: string): string {
-  return longDate.format(new Date(`${date}T00:00:00Z`));
-}

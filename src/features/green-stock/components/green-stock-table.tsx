@@ -3,6 +3,7 @@ import type { GreenStockItem } from '@shared/schemas/green-stock';
 import { Badge } from '@/components/ui/badge';
 import { paths } from '@/config/paths';
 import { formatGrams } from '@/lib/format';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { formatPounds } from '../utils/weights';
 import { CoverText } from './cover-text';
 
@@ -15,38 +16,36 @@ export function byUrgency(a: GreenStockItem, b: GreenStockItem): number {
   return a.stockGrams - b.stockGrams || a.code.localeCompare(b.code);
 }
 
-const head = 'px-3 py-3 font-semibold whitespace-nowrap';
-const cell = 'px-3 py-3 align-top';
 
 export function GreenStockTable({ items, windowDays }: { items: GreenStockItem[]; windowDays: number }) {
   const rows = [...items].sort(byUrgency);
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-      <table className="w-full min-w-[48rem] border-collapse text-left text-small">
+    <TableFrame>
+      <Table className="min-w-[48rem]">
         <caption className="sr-only">Green stock by lot: lots to reorder first, then the fewest days of cover</caption>
-        <thead className="bg-paper-shade">
+        <TableHead>
           <tr>
-            <th scope="col" className={head}>
+            <TableHeader className="whitespace-nowrap">
               Lot
-            </th>
-            <th scope="col" className={`${head} text-right`}>
+            </TableHeader>
+            <TableHeader align="right" className="whitespace-nowrap">
               On hand
-            </th>
-            <th scope="col" className={`${head} text-right`}>
+            </TableHeader>
+            <TableHeader align="right" className="whitespace-nowrap">
               Reorder point
-            </th>
-            <th scope="col" className={head}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap">
               Days of cover
-            </th>
-            <th scope="col" className={head}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap">
               Green Lots
-            </th>
+            </TableHeader>
           </tr>
-        </thead>
-        <tbody>
+        </TableHead>
+        <TableBody>
           {rows.map((item) => (
-            <tr key={item.code} className="border-t border-rule">
-              <th scope="row" className={`${cell} font-normal`}>
+            <tr key={item.code}>
+              <TableRowHeader>
                 <Link to={paths.roastery.lot.getHref(item.code)} className="font-semibold text-leaf underline">
                   {item.name}
                 </Link>
@@ -56,12 +55,12 @@ export function GreenStockTable({ items, windowDays }: { items: GreenStockItem[]
                     Time to reorder
                   </Badge>
                 ) : null}
-              </th>
-              <td className={`${cell} text-right whitespace-nowrap tabular-nums`}>
+              </TableRowHeader>
+              <TableCell align="right" className="whitespace-nowrap">
                 {item.stockGrams > 0 ? formatGrams(item.stockGrams) : <Badge tone="alert">Out of stock</Badge>}
                 <span className="block text-caption text-ink-muted">{formatPounds(item.stockGrams)}</span>
-              </td>
-              <td className={`${cell} text-right whitespace-nowrap tabular-nums`}>
+              </TableCell>
+              <TableCell align="right" className="whitespace-nowrap">
                 {item.reorderPointGrams > 0 ? (
                   <>
                     {formatGrams(item.reorderPointGrams)}
@@ -70,16 +69,16 @@ export function GreenStockTable({ items, windowDays }: { items: GreenStockItem[]
                 ) : (
                   <span className="text-ink-muted">None set</span>
                 )}
-              </td>
-              <td className={cell}>
+              </TableCell>
+              <TableCell>
                 <CoverText item={item} windowDays={windowDays} />
-              </td>
-              <td className={cell}>{item.isListed ? <Badge tone="ok">Listed</Badge> : <Badge>Not listed</Badge>}</td>
+              </TableCell>
+              <TableCell>{item.isListed ? <Badge tone="ok">Listed</Badge> : <Badge>Not listed</Badge>}</TableCell>
             </tr>
           ))}
-        </tbody>
-      </table>
-    </div>
+        </TableBody>
+      </Table>
+    </TableFrame>
   );
 }
 

@@ -1,13 +1,15 @@
+import clsx from 'clsx';
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
+import { formatInstant } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { useStockMovements } from '../api/stock';
 import { movementReasonLabels } from '../utils/stock-labels';
 import { formatGramsChange, formatPounds } from '../utils/weights';
 
-const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 
 /** Every stock movement of the lot, newest first: by hand, sales, roasts and refunds. */
 export function StockHistoryTable({ code }: { code: string }) {
@@ -30,54 +32,54 @@ export function StockHistoryTable({ code }: { code: string }) {
 
   return (
     // Focusable so a keyboard can scroll the table sideways on a narrow screen.
-    <div role="region" aria-labelledby="stock-history-caption" tabIndex={0} className="overflow-x-auto rounded-card border border-rule bg-sheet" aria-busy={movementsQuery.isFetching}>
-      <table className="w-full min-w-[40rem] border-collapse text-left text-small">
+    <TableFrame role="region" aria-labelledby="stock-history-caption" tabIndex={0} aria-busy={movementsQuery.isFetching}>
+      <Table className="min-w-[40rem]">
         <caption id="stock-history-caption" className="sr-only">
           Stock history of {code}, newest first
         </caption>
-        <thead className="bg-paper-shade">
+        <TableHead>
           <tr>
-            <th scope="col" className="px-3 py-3 font-semibold">
+            <TableHeader>
               When
-            </th>
-            <th scope="col" className="px-3 py-3 text-right font-semibold">
+            </TableHeader>
+            <TableHeader align="right">
               Change
-            </th>
-            <th scope="col" className="px-3 py-3 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Reason
-            </th>
-            <th scope="col" className="px-3 py-3 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Note
-            </th>
-            <th scope="col" className="px-3 py-3 font-semibold">
+            </TableHeader>
+            <TableHeader>
               By
-            </th>
+            </TableHeader>
           </tr>
-        </thead>
-        <tbody>
+        </TableHead>
+        <TableBody>
           {movements.map((movement) => (
-            <tr key={movement.id} className="border-t border-rule">
-              <th scope="row" className="px-3 py-2 font-normal whitespace-nowrap">
-                {when.format(new Date(movement.createdAt))}
-              </th>
-              <td className={movement.deltaGrams < 0 ? 'px-3 py-2 text-right whitespace-nowrap text-alert tabular-nums' : 'px-3 py-2 text-right whitespace-nowrap text-ok tabular-nums'}>
+            <tr key={movement.id}>
+              <TableRowHeader className="whitespace-nowrap">
+                {formatInstant(movement.createdAt)}
+              </TableRowHeader>
+              <TableCell align="right" className={clsx('whitespace-nowrap', movement.deltaGrams < 0 ? 'text-alert' : 'text-ok')}>
                 {formatGramsChange(movement.deltaGrams)}
                 <span className="block text-caption text-ink-muted">{formatPounds(Math.abs(movement.deltaGrams))}</span>
-              </td>
-              <td className="px-3 py-2">{movementReasonLabels[movement.reason]}</td>
-              <td className="px-3 py-2">
+              </TableCell>
+              <TableCell>{movementReasonLabels[movement.reason]}</TableCell>
+              <TableCell>
                 {movement.note}
                 {movement.orderId ? (
                   <Link to={paths.roastery.order.getHref(movement.orderId)} className="block font-semibold text-leaf underline">
                     Open the order
                   </Link>
                 ) : null}
-              </td>
-              <td className="px-3 py-2">{movement.actorName ?? <span className="text-ink-muted">Automatic</span>}</td>
+              </TableCell>
+              <TableCell>{movement.actorName ?? <span className="text-ink-muted">Automatic</span>}</TableCell>
             </tr>
           ))}
-        </tbody>
-      </table>
-    </div>
+        </TableBody>
+      </Table>
+    </TableFrame>
   );
 }

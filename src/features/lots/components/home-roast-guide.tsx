@@ -8,6 +8,7 @@ import { CautionPanel } from '@/components/ui/caution-panel';
 import { ErrorState } from '@/components/ui/error-state';
 import { SelectField } from '@/components/ui/select-field';
 import { Skeleton } from '@/components/ui/skeleton';
+import { Table, TableBody, TableCell, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { formatPercent } from '@/lib/format';
 import { useRoastGuide } from '../api/get-roast-guide';
 import { bagSizeLabel, formatWeight, type WeightUnit } from '../utils/weight-unit';
@@ -108,30 +109,30 @@ export function HomeRoastGuide({ lotCode, size, unit, device, onDeviceChange, le
           </div>
 
           <div>
-            <table className="w-full border-collapse text-left">
+            <Table variant="prose">
               <caption className="text-left text-h3 font-heading font-semibold">Time after first crack</caption>
-              <thead>
-                <tr className="border-b border-rule-strong text-small text-ink-muted">
-                  <th scope="col" className="py-2 pr-3 font-semibold">
+              <TableHead>
+                <tr className="text-small text-ink-muted">
+                  <TableHeader>
                     Roast level
-                  </th>
-                  <th scope="col" className="py-2 font-semibold">
+                  </TableHeader>
+                  <TableHeader>
                     Keep roasting
-                  </th>
+                  </TableHeader>
                 </tr>
-              </thead>
-              <tbody>
+              </TableHead>
+              <TableBody>
                 {guide.levels.map((each) => (
-                  <tr key={each.level} className={clsx('border-b border-rule', each.level === guide.level && 'bg-leaf-wash')}>
-                    <th scope="row" className="py-2 pr-3 font-semibold">
+                  <tr key={each.level} className={clsx(each.level === guide.level && 'bg-leaf-wash')}>
+                    <TableRowHeader className="font-semibold">
                       {roastLevelLabels[each.level]}{' '}
                       {each.suggested ? <Badge tone="ok">Suggested for this lot</Badge> : null}
-                    </th>
-                    <td className="py-2">{formatSeconds(each.afterFirstCrackSeconds)}</td>
+                    </TableRowHeader>
+                    <TableCell>{formatSeconds(each.afterFirstCrackSeconds)}</TableCell>
                   </tr>
                 ))}
-              </tbody>
-            </table>
+              </TableBody>
+            </Table>
             <p className="mt-2 text-small text-ink-muted">Times are a starting point ({guide.source}); judge the colour by eye as well.</p>
 
             <div className="mt-6">

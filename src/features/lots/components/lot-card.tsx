@@ -3,11 +3,13 @@ import { Link } from 'react-router-dom';
 import { processLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { LotSummary } from '@shared/schemas/lots';
 import { paths } from '@/config/paths';
-import { formatAltitude, formatPricePerKg } from '@/lib/format';
+import { formatAltitude } from '@/lib/format';
+import { useShopMoney } from '@/lib/shop-currency';
 import { LotPhoto } from './lot-photo';
 import { StockBadge } from './stock-badge';
 
 export function LotCard({ lot, headingLevel = 'h2' }: { lot: LotSummary; headingLevel?: 'h2' | 'h3' }) {
+  const { pricePerKg } = useShopMoney();
   const Heading = headingLevel;
   const outOfStock = lot.stockGrams <= 0;
 
@@ -62,7 +64,7 @@ export function LotCard({ lot, headingLevel = 'h2' }: { lot: LotSummary; heading
         ) : null}
 
         <div className="mt-auto flex flex-wrap items-center justify-between gap-2 border-t border-rule pt-3">
-          <p className="font-semibold">{formatPricePerKg(lot.pricePerKgCents)}</p>
+          <p className="font-semibold">{pricePerKg(lot.pricePerKgCents)}</p>
           <StockBadge stockGrams={lot.stockGrams} />
         </div>
       </div>

@@ -1,8 +1,9 @@
-import { Download } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { processLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { LotDetail } from '@shared/schemas/lots';
-import { formatAltitude, formatGrams, formatPercent, formatPricePerKg, formatScore } from '@/lib/format';
+import { DownloadLink } from '@/components/ui/download-link';
+import { formatAltitude, formatGrams, formatPercent, formatScore } from '@/lib/format';
+import { useShopMoney } from '@/lib/shop-currency';
 import { LotPhoto } from './lot-photo';
 import { StockBadge } from './stock-badge';
 
@@ -17,6 +18,7 @@ function Descriptor({ term, children }: { term: string; children: ReactNode }) {
 
 /** Everything Restday knows about one green lot, as a home roaster reads it; `purchase` sits under the price. */
 export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: ReactNode }) {
+  const { pricePerKg } = useShopMoney();
   const outOfStock = lot.stockGrams <= 0;
   const [firstPhoto = null, ...morePhotos] = lot.photos;
 
@@ -46,14 +48,14 @@ export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: React
           <p className="mt-1 text-small text-ink-muted">Lot code {lot.code}</p>
 
           <div className="mt-5 flex flex-wrap items-center gap-3">
-            <p className="text-h2 font-heading font-semibold">{formatPricePerKg(lot.pricePerKgCents)}</p>
+            <p className="text-h2 font-heading font-semibold">{pricePerKg(lot.pricePerKgCents)}</p>
             <StockBadge stockGrams={lot.stockGrams} />
           </div>
           {lot.priceBreaks.length > 0 ? (
             <ul aria-label="Quantity prices" className="mt-2 text-small text-ink-muted">
               {lot.priceBreaks.map((priceBreak) => (
                 <li key={priceBreak.minGrams}>
-                  {formatGrams(priceBreak.minGrams)} or more: {formatPricePerKg(priceBreak.pricePerKgCents)}
+                  {formatGrams(priceBreak.minGrams)} or more: {pricePerKg(priceBreak.pricePerKgCents)}
                 </li>
               ))}
             </ul>
@@ -74,10 +76,9 @@ export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: React
           {lot.description ? <p className="mt-5 max-w-prose">{lot.description}</p> : null}
 
           {lot.specSheetUrl ? (
-            <a href={lot.specSheetUrl} download className="mt-5 inline-flex min-h-11 items-center gap-2 font-semibold text-leaf underline">
-              <Download aria-hidden="true" className="size-4" />
+            <DownloadLink href={lot.specSheetUrl} className="mt-5 inline-flex min-h-11 items-center gap-2 font-semibold text-leaf underline">
               Download the spec sheet
-            </a>
+            </DownloadLink>
           ) : null}
         </div>
       </div>

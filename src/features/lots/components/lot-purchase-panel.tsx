@@ -10,7 +10,7 @@ import { Button } from '@/components/ui/button';
 import { controlStyles } from '@/components/ui/control-styles';
 import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
-import { formatMoney, formatPricePerKg } from '@/lib/format';
+import { useShopMoney } from '@/lib/shop-currency';
 import { bagSizeLabel, formatWeight, type WeightUnit } from '../utils/weight-unit';
 
 type LotPurchasePanelProps = {
@@ -30,6 +30,7 @@ function bagPrice(lot: LotDetail, size: GreenBagSize, quantity: number) {
 
 /** The size picker, quantity and "Add to cart" for one lot. */
 export function LotPurchasePanel({ lot, size, onSizeChange, unit, onAddToCart }: LotPurchasePanelProps) {
+  const { money, pricePerKg } = useShopMoney();
   const quantityId = useId();
   const [quantityText, setQuantityText] = useState('1');
   const [message, setMessage] = useState<{ tone: 'status' | 'alert'; text: string }>();
@@ -86,7 +87,7 @@ export function LotPurchasePanel({ lot, size, onSizeChange, unit, onAddToCart }:
                 />
                 <span className="font-semibold">{bagSizeLabel(each)}</span>
                 <span className="text-caption text-ink-muted">fills {formatWeight(fill, unit)}</span>
-                <span className="font-semibold">{formatMoney(price.bagCents)}</span>
+                <span className="font-semibold">{money(price.bagCents)}</span>
               </label>
             );
           })}
@@ -116,8 +117,8 @@ export function LotPurchasePanel({ lot, size, onSizeChange, unit, onAddToCart }:
           />
         </div>
         <p className="pb-2" aria-live="polite">
-          <span className="font-semibold">{formatMoney(bagCents * wanted)}</span>{' '}
-          <span className="text-small text-ink-muted">({formatPricePerKg(pricePerKgCents)})</span>
+          <span className="font-semibold">{money(bagCents * wanted)}</span>{' '}
+          <span className="text-small text-ink-muted">({pricePerKg(pricePerKgCents)})</span>
         </p>
       </div>
       {!quantityValid ? (

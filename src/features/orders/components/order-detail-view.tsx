@@ -1,8 +1,10 @@
 import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
-import { formatGrams, formatMoney } from '@/lib/format';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
+import { AddressDisplay } from '@/components/address/address-display';
+import { formatGrams } from '@/lib/format';
+import { formatDay, formatInstant } from '@/lib/dates';
 import { OrderStatusBadge } from './order-status-badge';
 
 function itemDescription(item: OrderItem): string {
@@ -40,28 +42,28 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
                 <p className="text-small text-ink-muted">{itemDescription(item)}</p>
               </div>
               <p className="text-small">
-                {item.quantity} × {formatMoney(item.unitPriceCents)} = <span className="font-semibold">{formatMoney(item.lineTotalCents)}</span>
+                {item.quantity} × {formatMoney(item.unitPriceCents, order.currency)} = <span className="font-semibold">{formatMoney(item.lineTotalCents, order.currency)}</span>
               </p>
             </li>
           ))}
         </ul>
         <dl className="mt-4 ml-auto grid max-w-xs grid-cols-[1fr_auto] gap-x-6 gap-y-1">
           <dt>Bags</dt>
-          <dd className="text-right">{formatMoney(order.subtotalCents)}</dd>
+          <dd className="text-right">{formatMoney(order.subtotalCents, order.currency)}</dd>
           {order.discountCents > 0 ? (
             <>
               <dt>{order.discountLabel ?? 'Discount'}</dt>
-              <dd className="text-right">−{formatMoney(order.discountCents)}</dd>
+              <dd className="text-right">−{formatMoney(order.discountCents, order.currency)}</dd>
             </>
           ) : null}
           <dt>Shipping</dt>
-          <dd className="text-right">{formatMoney(order.shippingCents)}</dd>
+          <dd className="text-right">{formatMoney(order.shippingCents, order.currency)}</dd>
           <dt className="border-t border-rule pt-1 font-semibold">Total</dt>
-          <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(order.totalCents)}</dd>
+          <dd className="border-t border-rule pt-1 text-right font-semibold">{formatMoney(order.totalCents, order.currency)}</dd>
           {order.refundedCents > 0 ? (
             <>
               <dt>Refunded</dt>
-              <dd className="text-right">{formatMoney(order.refundedCents)}</dd>
+              <dd className="text-right">{formatMoney(order.refundedCents, order.currency)}</dd>
             </>
           ) : null}
         </dl>
@@ -72,21 +74,7 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
           <h2 id="order-ships-to" className="text-h3">
             Ships to
           </h2>
-          <address className="mt-2 not-italic">
-            {address.name}
-            <br />
-            {address.line1}
-            {address.line2 ? (
-              <>
-                <br />
-                {address.line2}
-              </>
-            ) : null}
-            <br />
-            {address.city}, {address.region} {address.postalCode}
-            <br />
-            {address.country}
-          </address>
+          <AddressDisplay address={address} className="mt-2" />
         </section>
         {dates.length > 0 || order.trackingNumber ? (
           <section aria-labelledby="order-dates" className="rounded-card border border-rule bg-sheet p-4">
@@ -97,7 +85,7 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
               {dates.map((each) => (
                 <div key={each.term} className="contents">
                   <dt className="text-ink-muted">{each.term}</dt>
-                  <dd>{formatShopDay(each.value)}</dd>
+                  <dd>{formatDay(each.value)}</dd>
                 </div>
               ))}
               {order.trackingNumber ? (

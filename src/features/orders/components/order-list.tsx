@@ -4,13 +4,14 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import { formatMoney } from '@/lib/format';
+import { useShopMoney } from '@/lib/shop-currency';
+import { formatDay, formatInstant } from '@/lib/dates';
 import { useOrders } from '../api/get-orders';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
 import { OrderStatusBadge } from './order-status-badge';
 
 /** The signed-in customer's orders, newest first, with their status. */
 export function OrderList({ page, onPageChange }: { page: number; onPageChange: (page: number) => void }) {
+  const { money } = useShopMoney();
   const ordersQuery = useOrders(page);
 
   if (ordersQuery.isError) {
@@ -56,12 +57,12 @@ export function OrderList({ page, onPageChange }: { page: number; onPageChange: 
               </Link>
               <p className="text-small text-ink-muted">
                 {order.kind === 'green' ? 'Green coffee' : 'Roasted coffee'} · {order.bagCount} {order.bagCount === 1 ? 'bag' : 'bags'}
-                {order.shipDate ? ` · ships ${formatShopDay(order.shipDate)}` : ''}
+                {order.shipDate ? ` · ships ${formatDay(order.shipDate)}` : ''}
               </p>
             </div>
             <div className="flex items-center gap-3">
               <OrderStatusBadge status={order.status} />
-              <span className="font-semibold">{formatMoney(order.totalCents)}</span>
+              <span className="font-semibold">{money(order.totalCents)}</span>
             </div>
           </li>
         ))}

@@ -1,61 +1,59 @@
-import { FileDown, PackageCheck, Truck } from 'lucide-react';
+import { PackageCheck, Truck } from 'lucide-react';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
+import { orderReference } from '@shared/domain/order-reference';
 import { Badge } from '@/components/ui/badge';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
+import { formatDayShort } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { DownloadLink } from '@/components/ui/download-link';
 import { labelsPdfPath } from '../api/get-pack-list';
 import { useMarkPacked } from '../api/mark-packed';
 import { canPack, packStatusOf } from '../utils/pack-status';
 import { ShipOrderDialog } from './ship-order-dialog';
 
-const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
-const shortDate = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
 
 function day(date: string | null): string {
-  return date ? shortDate.format(new Date(`${date}T00:00:00Z`)) : '—';
-}
-
-function shortId(orderId: string): string {
-  return orderId.slice(0, 8).toUpperCase();
+  return date ? formatDayShort(date) : '—';
 }
 
 function OrderBags({ order }: { order: PackOrder }) {
   return (
     <div className="overflow-x-auto">
-      <table className="w-full border-collapse">
-        <caption className="sr-only">Bags of order {shortId(order.orderId)}</caption>
-        <thead>
+      <Table variant="sheet">
+        <caption className="sr-only">Bags of order {orderReference(order.orderId)}</caption>
+        <TableHead>
           <tr>
             {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
-              <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+              <TableHeader key={heading}>
                 {heading}
-              </th>
+              </TableHeader>
             ))}
           </tr>
-        </thead>
-        <tbody>
+        </TableHead>
+        <TableBody>
           {order.bags.map((bag) => (
             <tr key={`${bag.orderItemId}-${bag.bagNumber}`}>
-              <td className={cell}>
+              <TableCell>
                 {bag.bagNumber} of {order.bags.length}
-              </td>
-              <th scope="row" className={`${cell} font-semibold`}>
+              </TableCell>
+              <TableRowHeader className="font-semibold">
                 {bag.coffee}
                 {bag.lotCode ? <span className="block text-small font-normal text-ink-muted">{bag.lotCode}</span> : null}
-              </th>
-              <td className={cell}>{bag.roastLevel ? roastLevelLabels[bag.roastLevel] : 'Green'}</td>
-              <td className={cell}>{bag.grind ? grindLabels[bag.grind] : '—'}</td>
-              <td className={cell}>{bag.netLabel}</td>
-              <td className={cell}>{day(bag.roastDate)}</td>
-              <td className={cell}>{day(bag.readyFrom)}</td>
-              <td className={cell}>{day(bag.bestBefore)}</td>
-              <td className={cell}>
+              </TableRowHeader>
+              <TableCell>{bag.roastLevel ? roastLevelLabels[bag.roastLevel] : 'Green'}</TableCell>
+              <TableCell>{bag.grind ? grindLabels[bag.grind] : '—'}</TableCell>
+              <TableCell>{bag.netLabel}</TableCell>
+              <TableCell>{day(bag.roastDate)}</TableCell>
+              <TableCell>{day(bag.readyFrom)}</TableCell>
+              <TableCell>{day(bag.bestBefore)}</TableCell>
+              <TableCell>
                 {bag.batchId ? (
                   <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
                     Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
@@ -63,11 +61,11 @@ function OrderBags({ order }: { order: PackOrder }) {
                 ) : (
                   '—'
                 )}
-              </td>
+              </TableCell>
             </tr>
           ))}
-        </tbody>
-      </table>
+        </TableBody>
+      </Table>
     </div>
   );
 }
@@ -118,7 +116,7 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
     <li aria-labelledby={headingId} className="rounded-card border border-rule bg-sheet p-5 shadow-card print:break-inside-avoid print:shadow-none">
       <div className="flex flex-wrap items-center gap-2">
         <h2 id={headingId} className="text-h3">
-          {order.customerName} <span className="font-body text-small font-semibold text-ink-muted">order {shortId(order.orderId)}</span>
+          {order.customerName} <span className="font-body text-small font-semibold text-ink-muted">order {orderReference(order.orderId)}</span>
         </h2>
         <Badge tone={status.tone}>{status.label}</Badge>
       </div>
@@ -166,10 +164,7 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
   return (
     <div>
       <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
-        <a href={labelsPdfPath(date)} download className={buttonStyles('secondary')}>
-          <FileDown aria-hidden="true" className="size-4" />
-          Labels (PDF)
-        </a>
+        <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
         <p className="text-small text-ink-muted">One label a bag, with both net weights.</p>
       </div>
       {shipped ? (

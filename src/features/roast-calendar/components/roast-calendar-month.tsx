@@ -3,7 +3,8 @@ import { Link } from 'react-router-dom';
 import { weekdayLabels, weekdays } from '@shared/domain/vocabulary';
 import type { CalendarDay } from '@shared/schemas/roastery';
 import { paths } from '@/config/paths';
-import { formatCalendarDay, formatLoad } from '../utils/calendar-format';
+import { formatDayLongNoYear } from '@/lib/dates';
+import { formatLoad } from '../utils/calendar-format';
 import { monthWeeks } from '../utils/calendar-month';
 
 type RoastCalendarMonthProps = {
@@ -48,7 +49,7 @@ function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isT
         <time dateTime={day.date} className={clsx('font-heading font-semibold', isToday && 'rounded-pill bg-ink px-1.5 text-paper')}>
           <span aria-hidden="true">{dayNumber}</span>
           <span className="sr-only">
-            {formatCalendarDay(day.date)}
+            {formatDayLongNoYear(day.date)}
             {isToday ? ', today' : ''}
           </span>
         </time>
@@ -65,10 +66,10 @@ function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isT
       {day.note ? <p className="mt-1 line-clamp-2 text-caption text-ink-muted">{day.note}</p> : null}
       <div className="mt-1 flex flex-wrap items-baseline gap-x-3">
         <Link to={paths.roastery.daySheet.getHref(day.date)} className="text-caption font-semibold text-leaf underline">
-          Day Sheet<span className="sr-only"> for {formatCalendarDay(day.date)}</span>
+          Day Sheet<span className="sr-only"> for {formatDayLongNoYear(day.date)}</span>
         </Link>
         <button type="button" className="cursor-pointer text-caption font-semibold text-leaf underline" aria-pressed={isSelected} onClick={onChange}>
-          Change<span className="sr-only"> {formatCalendarDay(day.date)}</span>
+          Change<span className="sr-only"> {formatDayLongNoYear(day.date)}</span>
         </button>
       </div>
     </td>

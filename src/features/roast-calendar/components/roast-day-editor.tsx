@@ -3,12 +3,13 @@ import { useEffect, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import type { CalendarDay, CalendarDayUpdate, CalendarDayUpdateResponse } from '@shared/schemas/roastery';
+import { orderReference } from '@shared/domain/order-reference';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
+import { formatDayLongNoYear, formatDayShortWithWeekday } from '@/lib/dates';
 import { useUpdateRoastDay } from '../api/update-roast-day';
-import { formatCalendarDay, formatShortDay } from '../utils/calendar-format';
 
 const roastDayFieldsSchema = z.object({
   open: z.enum(['open', 'closed']),
@@ -34,17 +35,17 @@ function toUpdate(fields: RoastDayFields): CalendarDayUpdate {
 function MovedSummary({ result }: { result: CalendarDayUpdateResponse }) {
   const { moved, movedDeliveries, shipMoved } = result;
   if (moved.length === 0 && movedDeliveries.length === 0 && shipMoved.length === 0) {
-    return <FormAlert tone="status">Saved {formatCalendarDay(result.date)}. Nothing needed to move.</FormAlert>;
+    return <FormAlert tone="status">Saved {formatDayLongNoYear(result.date)}. Nothing needed to move.</FormAlert>;
   }
   return (
     <FormAlert tone="status">
       {moved.length > 0 || movedDeliveries.length > 0 ? (
         <p className="font-semibold">
-          Saved {formatCalendarDay(result.date)}: {moved.length} {moved.length === 1 ? 'order' : 'orders'} and {movedDeliveries.length}{' '}
+          Saved {formatDayLongNoYear(result.date)}: {moved.length} {moved.length === 1 ? 'order' : 'orders'} and {movedDeliveries.length}{' '}
           scheduled {movedDeliveries.length === 1 ? 'delivery' : 'deliveries'} moved; each customer is e-mailed the new dates.
         </p>
       ) : (
-        <p className="font-semibold">Saved {formatCalendarDay(result.date)}.</p>
+        <p className="font-semibold">Saved {formatDayLongNoYear(result.date)}.</p>
       )}
       {shipMoved.length > 0 ? (
         <p className="mt-1">
@@ -54,18 +55,18 @@ function MovedSummary({ result }: { result: CalendarDayUpdateResponse }) {
       <ul className="mt-2 list-disc pl-5 text-small">
         {moved.map((order) => (
           <li key={order.orderId}>
-            Order {order.orderId.slice(0, 8).toUpperCase()}: {formatShortDay(order.from)} → {formatShortDay(order.to)}
+            Order {orderReference(order.orderId)}: {formatDayShortWithWeekday(order.from)} → {formatDayShortWithWeekday(order.to)}
           </li>
         ))}
         {movedDeliveries.map((delivery) => (
           <li key={delivery.deliveryId}>
-            Subscription delivery: {formatShortDay(delivery.from)} → {formatShortDay(delivery.to)}
+            Subscription delivery: {formatDayShortWithWeekday(delivery.from)} → {formatDayShortWithWeekday(delivery.to)}
           </li>
         ))}
         {shipMoved.map((parcel) => (
           <li key={parcel.orderId ?? parcel.deliveryId}>
-            {parcel.orderId ? `Order ${parcel.orderId.slice(0, 8).toUpperCase()}` : 'Subscription delivery'} ships {formatShortDay(parcel.from)} →{' '}
-            {formatShortDay(parcel.to)}
+            {parcel.orderId ? `Order ${orderReference(parcel.orderId)}` : 'Subscription delivery'} ships {formatDayShortWithWeekday(parcel.from)} →{' '}
+            {formatDayShortWithWeekday(parcel.to)}
           </li>
         ))}
       </ul>
@@ -122,7 +123,7 @@ export function RoastDayEditor({ day, onDone }: { day: CalendarDay; onDone: () =
   return (
     <section aria-labelledby="roast-day-editor" className="rounded-card border border-rule bg-sheet p-5 shadow-card">
       <h2 id="roast-day-editor" ref={headingRef} tabIndex={-1} className="text-h3">
-        Change {formatCalendarDay(day.date)}
+        Change {formatDayLongNoYear(day.date)}
       </h2>
       <form noValidate onSubmit={(event) => void submit(event)} className="mt-4 grid gap-4">
         {formError ? <FormAlert>{formError}</FormAlert> : null}
@@ -174,7 +175,7 @@ export function RoastDayEditor({ day, onDone }: { day: CalendarDay; onDone: () =
         {confirming ? (
           <div ref={confirmRef} tabIndex={-1} role="alertdialog" aria-labelledby="close-day-title" aria-describedby="close-day-text" className="rounded-control border border-caution/40 bg-caution-wash p-4">
             <p id="close-day-title" className="font-semibold">
-              Close roasting on {formatCalendarDay(day.date)}?
+              Close roasting on {formatDayLongNoYear(day.date)}?
             </p>
             <p id="close-day-text" className="mt-1 text-small">
               Its {day.ordersCount} {day.ordersCount === 1 ? 'order' : 'orders'} and any scheduled subscription deliveries move to the next

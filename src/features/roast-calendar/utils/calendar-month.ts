@@ -41,9 +41,3 @@ export function monthWeeks(month: string): (string | null)[][] {
   return weeks;
 }
 
-const monthName = new Intl.DateTimeFormat('en-US', { month: 'long', year: 'numeric', timeZone: 'UTC' });
-
-/** "2026-12" → "December 2026" */
-export function formatMonth(month: string): string {
-  return monthName.format(new Date(`${month}-01T00:00:00Z`));
-}

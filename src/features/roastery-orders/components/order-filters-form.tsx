@@ -4,10 +4,11 @@ import { useId } from 'react';
 import { Link } from 'react-router-dom';
 import { orderSorts, type OrderSort } from '@shared/schemas/orders';
 import { orderKinds, orderStatuses, type OrderKind, type OrderStatus } from '@shared/domain/vocabulary';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { controlStyles } from '@/components/ui/control-styles';
 import { Field, fieldDescribedBy } from '@/components/ui/field';
 import { SelectField } from '@/components/ui/select-field';
+import { DownloadLink } from '@/components/ui/download-link';
 import { paths } from '@/config/paths';
 import { hasActiveFilters, ordersCsvHref, roasteryOrderFilterProblems, type RoasteryOrderFilters } from '../utils/order-filters';
 import { orderKindLabels, orderSortLabels, staffStatusLabels } from '../utils/order-labels';
@@ -86,11 +87,7 @@ export function OrderFiltersForm({ filters, onChange }: OrderFiltersFormProps) {
             Download CSV
           </Button>
         ) : (
-          // A plain link: the browser downloads the file with the session cookie.
-          <a href={ordersCsvHref(filters)} download className={buttonStyles('secondary')}>
-            <Download aria-hidden="true" className="size-4" />
-            Download CSV
-          </a>
+          <DownloadLink href={ordersCsvHref(filters)}>Download CSV</DownloadLink>
         )}
       </div>
     </div>

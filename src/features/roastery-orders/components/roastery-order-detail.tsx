@@ -2,10 +2,13 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
+import { AddressDisplay } from '@/components/address/address-display';
 import { paths } from '@/config/paths';
-import { formatGrams, formatMoney } from '@/lib/format';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
+import { formatGrams } from '@/lib/format';
+import { formatDay, formatInstant } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { orderKindLabels, paymentState } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
 
@@ -40,11 +43,11 @@ function PaymentLine({ order }: { order: OrderDetail }) {
     case 'cancelled-unpaid':
       return <>Never paid; cancelled {order.cancelledAt ? formatInstant(order.cancelledAt) : ''}. Nothing was charged.</>;
     case 'refunded':
-      return <>Refunded in full ({formatMoney(order.refundedCents)}).</>;
+      return <>Refunded in full ({formatMoney(order.refundedCents, order.currency)}).</>;
     case 'partly-refunded':
       return (
         <>
-          Paid {formatMoney(order.totalCents)}, {formatMoney(order.refundedCents)} refunded.
+          Paid {formatMoney(order.totalCents, order.currency)}, {formatMoney(order.refundedCents, order.currency)} refunded.
         </>
       );
     case 'paid':
@@ -61,7 +64,7 @@ function lineDetails(item: OrderItem): string {
   return parts.join(' · ');
 }
 
-const dayOrUnset = (day: string | null) => (day ? formatShopDay(day) : <span className="text-ink-muted">Not set</span>);
+const dayOrUnset = (day: string | null) => (day ? formatDay(day) : <span className="text-ink-muted">Not set</span>);
 
 /**
  * One order as the team needs it: who, where to, what, money, dates and shipping. `actions` is the
@@ -80,31 +83,31 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
         </div>
 
         {/* Focusable so a keyboard can scroll the table sideways on a narrow screen. */}
-        <div role="region" aria-labelledby="order-bags-caption" tabIndex={0} className="overflow-x-auto rounded-card border border-rule bg-sheet">
-          <table className="w-full min-w-[36rem] border-collapse text-left text-small">
-            <caption id="order-bags-caption" className="px-4 pt-3 text-left font-heading text-h3 font-semibold">
+        <TableFrame role="region" aria-labelledby="order-bags-caption" tabIndex={0}>
+          <Table className="min-w-[36rem]">
+            <caption id="order-bags-caption" className="px-3 pt-3 text-left font-heading text-h3 font-semibold">
               Bags
             </caption>
-            <thead>
+            <TableHead>
               <tr className="border-b border-rule">
-                <th scope="col" className="px-4 py-2 font-semibold">
+                <TableHeader>
                   Coffee
-                </th>
-                <th scope="col" className="px-4 py-2 text-right font-semibold">
+                </TableHeader>
+                <TableHeader align="right">
                   Quantity
-                </th>
-                <th scope="col" className="px-4 py-2 text-right font-semibold">
+                </TableHeader>
+                <TableHeader align="right">
                   Each
-                </th>
-                <th scope="col" className="px-4 py-2 text-right font-semibold">
+                </TableHeader>
+                <TableHeader align="right">
                   Line total
-                </th>
+                </TableHeader>
               </tr>
-            </thead>
-            <tbody>
+            </TableHead>
+            <TableBody>
               {order.items.map((item) => (
-                <tr key={item.id} className="border-t border-rule">
-                  <th scope="row" className="px-4 py-3 text-left font-normal">
+                <tr key={item.id}>
+                  <TableRowHeader>
                     <span className="font-semibold">{item.lotName ?? roastersRotationName}</span>
                     {item.lotCode ? (
                       <>
@@ -115,51 +118,51 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
                       </>
                     ) : null}
                     <span className="block text-caption text-ink-muted">{lineDetails(item)}</span>
-                  </th>
-                  <td className="px-4 py-3 text-right tabular-nums">{item.quantity}</td>
-                  <td className="px-4 py-3 text-right tabular-nums">{formatMoney(item.unitPriceCents)}</td>
-                  <td className="px-4 py-3 text-right tabular-nums">{formatMoney(item.lineTotalCents)}</td>
+                  </TableRowHeader>
+                  <TableCell align="right">{item.quantity}</TableCell>
+                  <TableCell align="right">{formatMoney(item.unitPriceCents, order.currency)}</TableCell>
+                  <TableCell align="right">{formatMoney(item.lineTotalCents, order.currency)}</TableCell>
                 </tr>
               ))}
-            </tbody>
+            </TableBody>
             <tfoot className="border-t border-rule-strong">
               <tr>
-                <th scope="row" colSpan={3} className="px-4 pt-3 text-right font-normal">
+                <TableRowHeader colSpan={3} align="right" className="pt-3">
                   Bags
-                </th>
-                <td className="px-4 pt-3 text-right tabular-nums">{formatMoney(order.subtotalCents)}</td>
+                </TableRowHeader>
+                <TableCell align="right" className="pt-3">{formatMoney(order.subtotalCents, order.currency)}</TableCell>
               </tr>
               {order.discountCents > 0 ? (
                 <tr>
-                  <th scope="row" colSpan={3} className="px-4 pt-1 text-right font-normal">
+                  <TableRowHeader colSpan={3} align="right" className="pt-1">
                     {order.discountLabel ?? 'Discount'}
-                  </th>
-                  <td className="px-4 pt-1 text-right tabular-nums">−{formatMoney(order.discountCents)}</td>
+                  </TableRowHeader>
+                  <TableCell align="right" className="pt-1">−{formatMoney(order.discountCents, order.currency)}</TableCell>
                 </tr>
               ) : null}
               <tr>
-                <th scope="row" colSpan={3} className="px-4 pt-1 text-right font-normal">
+                <TableRowHeader colSpan={3} align="right" className="pt-1">
                   Shipping
-                </th>
-                <td className="px-4 pt-1 text-right tabular-nums">{formatMoney(order.shippingCents)}</td>
+                </TableRowHeader>
+                <TableCell align="right" className="pt-1">{formatMoney(order.shippingCents, order.currency)}</TableCell>
               </tr>
               <tr>
-                <th scope="row" colSpan={3} className="px-4 py-2 text-right font-semibold">
+                <TableRowHeader colSpan={3} align="right" className="font-semibold">
                   Total ({order.currency.toUpperCase()})
-                </th>
-                <td className="px-4 py-2 text-right font-semibold tabular-nums">{formatMoney(order.totalCents)}</td>
+                </TableRowHeader>
+                <TableCell align="right" className="font-semibold">{formatMoney(order.totalCents, order.currency)}</TableCell>
               </tr>
               {order.refundedCents > 0 ? (
                 <tr>
-                  <th scope="row" colSpan={3} className="px-4 pb-3 text-right font-normal">
+                  <TableRowHeader colSpan={3} align="right" className="pb-3">
                     Refunded
-                  </th>
-                  <td className="px-4 pb-3 text-right tabular-nums">−{formatMoney(order.refundedCents)}</td>
+                  </TableRowHeader>
+                  <TableCell align="right" className="pb-3">−{formatMoney(order.refundedCents, order.currency)}</TableCell>
                 </tr>
               ) : null}
             </tfoot>
-          </table>
-        </div>
+          </Table>
+        </TableFrame>
 
         <section aria-labelledby="order-actions" className="rounded-card border border-rule-strong bg-leaf-wash p-4 sm:p-5">
           <h2 id="order-actions" className="text-h3">
@@ -179,21 +182,7 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
           </p>
         </Panel>
         <Panel id="order-ship-to" title="Ships to">
-          <address className="not-italic">
-            {address.name}
-            <br />
-            {address.line1}
-            {address.line2 ? (
-              <>
-                <br />
-                {address.line2}
-              </>
-            ) : null}
-            <br />
-            {address.city}, {address.region} {address.postalCode}
-            <br />
-            {address.country}
-          </address>
+          <AddressDisplay address={address} />
         </Panel>
         <Panel id="order-payment" title="Payment">
           <p>

@@ -1,9 +1,11 @@
 import { Link } from 'react-router-dom';
+import { orderReference } from '@shared/domain/order-reference';
 import type { OrderSort, OrderSummary } from '@shared/schemas/orders';
 import { paths } from '@/config/paths';
-import { formatMoney } from '@/lib/format';
-import { formatInstant, formatShopDay } from '../utils/order-dates';
-import { orderKindLabels, orderReference, orderSortLabels } from '../utils/order-labels';
+import { useShopMoney } from '@/lib/shop-currency';
+import { formatDay, formatInstant } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { orderKindLabels, orderSortLabels } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
 
 type SortedColumn = 'placed' | 'total' | 'status' | 'roastDate';
@@ -18,72 +20,71 @@ const sortedColumn: Record<OrderSort, { column: SortedColumn; direction: 'ascend
   status: { column: 'status', direction: 'ascending' },
 };
 
-const headerCell = 'px-3 py-3 font-semibold whitespace-nowrap';
-const cell = 'px-3 py-3 align-top';
 
 export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; sort: OrderSort }) {
+  const { money } = useShopMoney();
   const sorted = sortedColumn[sort];
   const ariaSort = (column: SortedColumn) => (sorted.column === column ? sorted.direction : undefined);
 
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-      <table className="w-full min-w-[52rem] border-collapse text-left text-small">
+    <TableFrame>
+      <Table className="min-w-[52rem]">
         <caption className="sr-only">Orders, {orderSortLabels[sort].toLowerCase()}</caption>
-        <thead className="bg-paper-shade">
+        <TableHead>
           <tr>
-            <th scope="col" className={headerCell}>
+            <TableHeader className="whitespace-nowrap">
               Order
-            </th>
-            <th scope="col" className={headerCell} aria-sort={ariaSort('placed')}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap" aria-sort={ariaSort('placed')}>
               Placed
-            </th>
-            <th scope="col" className={headerCell}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap">
               Customer
-            </th>
-            <th scope="col" className={`${headerCell} text-right`}>
+            </TableHeader>
+            <TableHeader align="right" className="whitespace-nowrap">
               Bags
-            </th>
-            <th scope="col" className={`${headerCell} text-right`} aria-sort={ariaSort('total')}>
+            </TableHeader>
+            <TableHeader align="right" className="whitespace-nowrap" aria-sort={ariaSort('total')}>
               Total
-            </th>
-            <th scope="col" className={headerCell} aria-sort={ariaSort('status')}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap" aria-sort={ariaSort('status')}>
               Status
-            </th>
-            <th scope="col" className={headerCell} aria-sort={ariaSort('roastDate')}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap" aria-sort={ariaSort('roastDate')}>
               Roast date
-            </th>
-            <th scope="col" className={headerCell}>
+            </TableHeader>
+            <TableHeader className="whitespace-nowrap">
               Ship date
-            </th>
+            </TableHeader>
           </tr>
-        </thead>
-        <tbody>
+        </TableHead>
+        <TableBody>
           {orders.map((order) => (
-            <tr key={order.id} className="border-t border-rule">
-              <th scope="row" className={`${cell} font-normal`}>
+            <tr key={order.id}>
+              <TableRowHeader>
                 <Link to={paths.roastery.order.getHref(order.id)} className="font-semibold text-leaf underline">
                   <span className="sr-only">Order </span>
                   {orderReference(order.id)}
                 </Link>
                 <span className="block text-caption text-ink-muted">{orderKindLabels[order.kind]}</span>
-              </th>
-              <td className={`${cell} whitespace-nowrap`}>{formatInstant(order.placedAt)}</td>
-              <td className={cell}>
+              </TableRowHeader>
+              <TableCell className="whitespace-nowrap">{formatInstant(order.placedAt)}</TableCell>
+              <TableCell>
                 {order.customer.name}
                 <span className="block text-caption break-all text-ink-muted">{order.customer.email}</span>
-              </td>
-              <td className={`${cell} text-right tabular-nums`}>{order.bagCount}</td>
-              <td className={`${cell} text-right tabular-nums`}>{formatMoney(order.totalCents)}</td>
-              <td className={cell}>
+              </TableCell>
+              <TableCell align="right">{order.bagCount}</TableCell>
+              <TableCell align="right">{money(order.totalCents)}</TableCell>
+              <TableCell>
                 <StaffOrderStatus status={order.status} />
-              </td>
-              <td className={`${cell} whitespace-nowrap`}>{order.roastDate ? formatShopDay(order.roastDate) : <NotSet />}</td>
-              <td className={`${cell} whitespace-nowrap`}>{order.shipDate ? formatShopDay(order.shipDate) : <NotSet />}</td>
+              </TableCell>
+              <TableCell className="whitespace-nowrap">{order.roastDate ? formatDay(order.roastDate) : <NotSet />}</TableCell>
+              <TableCell className="whitespace-nowrap">{order.shipDate ? formatDay(order.shipDate) : <NotSet />}</TableCell>
             </tr>
           ))}
-        </tbody>
-      </table>
-    </div>
+        </TableBody>
+      </Table>
+    </TableFrame>
   );
 }
 

@@ -36,8 +36,3 @@ export function paymentState(order: Pick<OrderDetail, 'status' | 'paidAt' | 'ref
   if (order.refundedCents > 0) return 'partly-refunded';
   return 'paid';
 }
-
-/** An order's short reference: the first block of its id, enough to tell orders apart on a screen. */
-export function orderReference(id: string): string {
-  return id.slice(0, 8).toUpperCase();
-}

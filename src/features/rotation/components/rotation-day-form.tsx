@@ -9,7 +9,7 @@ import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatGrams } from '@/lib/format';
-import { formatDeliveryDay } from '@/lib/subscription-labels';
+import { formatDayWithWeekday } from '@/lib/dates';
 import { usePickRotationLot } from '../api/pick-rotation-lot';
 
 type RotationDayFormProps = {
@@ -37,7 +37,7 @@ export function RotationDayForm({ day, lots, range }: RotationDayFormProps) {
       const saved = await pick.mutateAsync({ roastDate: day.roastDate, pick: values });
       setOutcome({
         tone: saved.warnings.length > 0 ? 'alert' : 'status',
-        lines: [`${saved.coffee} is the Roaster’s Rotation on ${formatDeliveryDay(saved.roastDate)}.`, ...saved.warnings.map((warning) => warning.message)],
+        lines: [`${saved.coffee} is the Roaster’s Rotation on ${formatDayWithWeekday(saved.roastDate)}.`, ...saved.warnings.map((warning) => warning.message)],
       });
     } catch (error) {
       const rest = applyServerErrors(error, form.setError, ['lotCode', 'note']);
@@ -49,7 +49,7 @@ export function RotationDayForm({ day, lots, range }: RotationDayFormProps) {
     <li aria-labelledby={headingId} className="rounded-card border border-rule bg-sheet p-4 sm:p-5">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 id={headingId} className="text-h3">
-          {formatDeliveryDay(day.roastDate)}
+          {formatDayWithWeekday(day.roastDate)}
         </h2>
         <p className="text-small text-ink-muted">
           {day.subscribers} {day.subscribers === 1 ? 'subscriber' : 'subscribers'} · {day.bags} {day.bags === 1 ? 'bag' : 'bags'} ·{' '}

@@ -1,14 +1,12 @@
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { SubscriberDetail } from '@shared/schemas/subscribers';
+import { AddressDisplay } from '@/components/address/address-display';
 import { Badge } from '@/components/ui/badge';
-import { formatMoney } from '@/lib/format';
-import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday, formatInstantDate } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 
-const instant = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
-
-function addressLines(address: SubscriberDetail['shippingAddress']): string[] {
-  return [address.name, address.line1, address.line2 ?? '', `${address.city}, ${address.region} ${address.postalCode}`, address.country].filter(Boolean);
-}
 
 /** A subscriber's subscription, where it ships, and every delivery with the order it became. */
 export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDetail }) {
@@ -20,10 +18,10 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
     ['Grind', grindLabels[subscriber.grind]],
     ['Brew method', brewMethodLabels[subscriber.brewMethod]],
     ['Cadence', cadenceLabel(subscriber.cadenceWeeks)],
-    ['Per delivery', formatMoney(subscriber.priceCents)],
-    ['Subscribed', instant.format(new Date(subscriber.createdAt))],
-    ...(subscriber.pausedUntil ? [['Paused until', formatDeliveryDay(subscriber.pausedUntil)] as [string, string]] : []),
-    ...(subscriber.cancelledAt ? [['Cancelled', instant.format(new Date(subscriber.cancelledAt))] as [string, string]] : []),
+    ['Per delivery', formatMoney(subscriber.priceCents, subscriber.currency)],
+    ['Subscribed', formatInstantDate(subscriber.createdAt)],
+    ...(subscriber.pausedUntil ? [['Paused until', formatDayWithWeekday(subscriber.pausedUntil)] as [string, string]] : []),
+    ...(subscriber.cancelledAt ? [['Cancelled', formatInstantDate(subscriber.cancelledAt)] as [string, string]] : []),
   ];
   return (
     <div className="grid gap-8">
@@ -48,13 +46,7 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
           <h2 id="subscriber-address" className="text-h3">
             Ships to
           </h2>
-          <address className="mt-3 text-small not-italic">
-            {addressLines(subscriber.shippingAddress).map((line) => (
-              <span key={line} className="block">
-                {line}
-              </span>
-            ))}
-          </address>
+          <AddressDisplay address={subscriber.shippingAddress} className="mt-3 text-small" />
           <p className="mt-3 text-small break-all">
             <a href={`mailto:${subscriber.customer.email}`} className="text-leaf underline">
               {subscriber.customer.email}
@@ -70,38 +62,38 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
         {subscriber.deliveries.length === 0 ? (
           <p className="text-ink-muted">No deliveries yet.</p>
         ) : (
-          <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-            <table className="w-full min-w-[48rem] border-collapse text-left text-small">
+          <TableFrame>
+            <Table className="min-w-[48rem]">
               <caption className="sr-only">Deliveries of this subscription</caption>
-              <thead className="bg-paper-shade">
+              <TableHead>
                 <tr>
                   {['#', 'Roasts', 'Ships', 'Ready from', 'Best before', 'Coffee', 'Status', 'Order'].map((column) => (
-                    <th key={column} scope="col" className="px-3 py-2 font-semibold whitespace-nowrap">
+                    <TableHeader key={column} className="whitespace-nowrap">
                       {column}
-                    </th>
+                    </TableHeader>
                   ))}
                 </tr>
-              </thead>
-              <tbody className="divide-y divide-rule">
+              </TableHead>
+              <TableBody>
                 {subscriber.deliveries.map((delivery) => {
                   const deliveryStatus = deliveryStatusLabels[delivery.status];
                   return (
                     <tr key={delivery.id}>
-                      <td className="px-3 py-2">{delivery.sequence}</td>
-                      <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
-                        {formatDeliveryDay(delivery.roastDate)}
-                      </th>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.readyFrom)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
-                      <td className="px-3 py-2">{delivery.coffee ?? 'Not picked yet'}</td>
-                      <td className="px-3 py-2">
+                      <TableCell>{delivery.sequence}</TableCell>
+                      <TableRowHeader className="font-semibold whitespace-nowrap">
+                        {formatDayWithWeekday(delivery.roastDate)}
+                      </TableRowHeader>
+                      <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</TableCell>
+                      <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.readyFrom)}</TableCell>
+                      <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</TableCell>
+                      <TableCell>{delivery.coffee ?? 'Not picked yet'}</TableCell>
+                      <TableCell>
                         <Badge tone={deliveryStatus.tone}>{deliveryStatus.label}</Badge>
-                      </td>
-                      <td className="px-3 py-2">
+                      </TableCell>
+                      <TableCell>
                         {delivery.order ? (
                           <>
-                            {formatMoney(delivery.order.totalCents)}
+                            {formatMoney(delivery.order.totalCents, subscriber.currency)}
                             {delivery.order.trackingNumber ? (
                               <span className="block text-caption text-ink-muted">
                                 {delivery.order.carrier} {delivery.order.trackingNumber}
@@ -111,13 +103,13 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
                         ) : (
                           '—'
                         )}
-                      </td>
+                      </TableCell>
                     </tr>
                   );
                 })}
-              </tbody>
-            </table>
-          </div>
+              </TableBody>
+            </Table>
+          </TableFrame>
         )}
       </section>
     </div>

@@ -1,14 +1,16 @@
-import { Download } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
 import { Badge } from '@/components/ui/badge';
-import { Button, buttonStyles } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import { formatMoney } from '@/lib/format';
-import { bagsLabel, cadenceLabel, formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { useShopMoney } from '@/lib/shop-currency';
+import { bagsLabel, cadenceLabel, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { DownloadLink } from '@/components/ui/download-link';
 import { subscribersCsvHref, useSubscribers } from '../api/get-subscribers';
 import type { SubscriberFilters } from '../utils/subscriber-filters';
 
@@ -19,12 +21,10 @@ type SubscribersTableProps = {
 
 /** One page of subscribers for the filters, with paging and the CSV of every match. */
 export function SubscribersTable({ filters, onPageChange }: SubscribersTableProps) {
+  const { money } = useShopMoney();
   const subscribersQuery = useSubscribers(filters);
   const csvLink = (
-    <a href={subscribersCsvHref(filters)} download className={buttonStyles('secondary')}>
-      <Download aria-hidden="true" className="size-4" />
-      Download these as CSV
-    </a>
+    <DownloadLink href={subscribersCsvHref(filters)}>Download these as CSV</DownloadLink>
   );
 
   if (subscribersQuery.isError) {
@@ -53,44 +53,44 @@ export function SubscribersTable({ filters, onPageChange }: SubscribersTableProp
         </p>
         {csvLink}
       </div>
-      <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-        <table className="w-full min-w-[48rem] border-collapse text-left text-small">
+      <TableFrame>
+        <Table className="min-w-[48rem]">
           <caption className="sr-only">Subscribers, page {page} of {pages}</caption>
-          <thead className="bg-paper-shade">
+          <TableHead>
             <tr>
               {['Customer', 'Coffee', 'Roast level', 'Each delivery', 'Cadence', 'Status', 'Next roast', 'Per delivery'].map((column) => (
-                <th key={column} scope="col" className="px-3 py-2 font-semibold whitespace-nowrap">
+                <TableHeader key={column} className="whitespace-nowrap">
                   {column}
-                </th>
+                </TableHeader>
               ))}
             </tr>
-          </thead>
-          <tbody className="divide-y divide-rule">
+          </TableHead>
+          <TableBody>
             {items.map((row) => {
               const status = subscriptionStatusLabels[row.status];
               return (
                 <tr key={row.id}>
-                  <th scope="row" className="px-3 py-2 text-left font-normal">
+                  <TableRowHeader>
                     <Link to={paths.roastery.subscriber.getHref(row.id)} className="font-semibold text-leaf underline">
                       {row.customerName}
                     </Link>
                     <span className="block text-caption break-all text-ink-muted">{row.email}</span>
-                  </th>
-                  <td className="px-3 py-2">{row.coffee}</td>
-                  <td className="px-3 py-2">{roastLevelLabels[row.roastLevel]}</td>
-                  <td className="px-3 py-2 whitespace-nowrap">{bagsLabel(row.bagsPerDelivery, row.bagSize)}</td>
-                  <td className="px-3 py-2 whitespace-nowrap">{cadenceLabel(row.cadenceWeeks)}</td>
-                  <td className="px-3 py-2">
+                  </TableRowHeader>
+                  <TableCell>{row.coffee}</TableCell>
+                  <TableCell>{roastLevelLabels[row.roastLevel]}</TableCell>
+                  <TableCell className="whitespace-nowrap">{bagsLabel(row.bagsPerDelivery, row.bagSize)}</TableCell>
+                  <TableCell className="whitespace-nowrap">{cadenceLabel(row.cadenceWeeks)}</TableCell>
+                  <TableCell>
                     <Badge tone={status.tone}>{status.label}</Badge>
-                  </td>
-                  <td className="px-3 py-2 whitespace-nowrap">{row.nextRoastDate ? formatDeliveryDay(row.nextRoastDate) : '—'}</td>
-                  <td className="px-3 py-2 text-right">{formatMoney(row.priceCents)}</td>
+                  </TableCell>
+                  <TableCell className="whitespace-nowrap">{row.nextRoastDate ? formatDayWithWeekday(row.nextRoastDate) : '—'}</TableCell>
+                  <TableCell align="right">{money(row.priceCents)}</TableCell>
                 </tr>
               );
             })}
-          </tbody>
-        </table>
-      </div>
+          </TableBody>
+        </Table>
+      </TableFrame>
       {pages > 1 ? (
         <nav aria-label="Pages of subscribers" className="flex items-center gap-3">
           <Button variant="secondary" disabled={page <= 1} onClick={() => onPageChange(page - 1)}>

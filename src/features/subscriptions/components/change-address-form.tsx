@@ -4,12 +4,12 @@ import { FormProvider, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { shippingAddressSchema } from '@shared/schemas/checkout';
 import type { Subscription } from '@shared/schemas/subscriptions';
+import { AddressFields, addressFieldPaths, addressFormValues } from '@/components/address/address-fields';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateSubscription } from '../api/update-subscription';
 import { describeChangeError } from '../utils/change-errors';
-import { ShippingAddressFields, shippingAddressFieldNames } from './shipping-address-fields';
 
 const addressChangeSchema = z.object({ shippingAddress: shippingAddressSchema });
 
@@ -25,7 +25,7 @@ export function ChangeAddressForm({ subscription, onDone, onCancel }: ChangeAddr
   const [formError, setFormError] = useState<string>();
   const form = useForm<z.input<typeof addressChangeSchema>, unknown, z.output<typeof addressChangeSchema>>({
     resolver: zodResolver(addressChangeSchema),
-    defaultValues: { shippingAddress: { ...subscription.shippingAddress, line2: subscription.shippingAddress.line2 ?? '' } },
+    defaultValues: { shippingAddress: addressFormValues(subscription.shippingAddress) },
   });
 
   const submit = form.handleSubmit(async ({ shippingAddress }) => {
@@ -34,7 +34,7 @@ export function ChangeAddressForm({ subscription, onDone, onCancel }: ChangeAddr
       await update.mutateAsync({ id: subscription.id, update: { shippingAddress } });
       onDone('The new address is saved for the next delivery whose cutoff has not passed.');
     } catch (error) {
-      const rest = applyServerErrors(error, form.setError, shippingAddressFieldNames);
+      const rest = applyServerErrors(error, form.setError, addressFieldPaths('shippingAddress'));
       if (rest !== undefined) setFormError(describeChangeError(error));
     }
   });
@@ -43,7 +43,7 @@ export function ChangeAddressForm({ subscription, onDone, onCancel }: ChangeAddr
     <FormProvider {...form}>
       <form noValidate aria-label="Change the shipping address" onSubmit={(event) => void submit(event)} className="grid max-w-xl gap-4">
         {formError ? <FormAlert>{formError}</FormAlert> : null}
-        <ShippingAddressFields />
+        <AddressFields at="shippingAddress" />
         <div className="flex flex-wrap gap-3">
           <Button type="submit" disabled={form.formState.isSubmitting}>
             {form.formState.isSubmitting ? 'Saving…' : 'Save the address'}

@@ -3,7 +3,9 @@ import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { SubscriptionDelivery } from '@shared/schemas/subscriptions';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
-import { bagsLabel, deliveryStatusLabels, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+import { bagsLabel, deliveryStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday, formatInstantWithWeekday } from '@/lib/dates';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 
 /** Skip and undo, per delivery whose cutoff is ahead; without them the schedule only reads. */
 export type DeliveryActions = {
@@ -31,61 +33,61 @@ function contentsOf(delivery: SubscriptionDelivery): string {
 /** Each delivery's dates, whether it lands ready to brew, its coffee and where it stands; a locked one says why. */
 export function DeliverySchedule({ deliveries, caption, actions }: DeliveryScheduleProps) {
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-      <table className="w-full min-w-[48rem] border-collapse text-left text-small">
+    <TableFrame>
+      <Table className="min-w-[48rem]">
         <caption className="sr-only">{caption}</caption>
-        <thead className="bg-paper-shade">
+        <TableHead>
           <tr>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            <TableHeader>
               Roasts
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Ships
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Arrives about
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Ready from
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Best before
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Coffee
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Brings
-            </th>
-            <th scope="col" className="px-3 py-2 font-semibold">
+            </TableHeader>
+            <TableHeader>
               Status
-            </th>
+            </TableHeader>
             {actions ? (
-              <th scope="col" className="px-3 py-2 font-semibold">
+              <TableHeader>
                 <span className="sr-only">Skip or undo</span>
-              </th>
+              </TableHeader>
             ) : null}
           </tr>
-        </thead>
-        <tbody className="divide-y divide-rule">
+        </TableHead>
+        <TableBody>
           {deliveries.map((delivery) => {
             const status = deliveryStatusLabels[delivery.status];
             const skipped = delivery.status === 'skipped';
             return (
               <tr key={delivery.roastDate} className={skipped ? 'text-ink-muted' : undefined}>
-                <th scope="row" className="px-3 py-2 font-semibold whitespace-nowrap">
-                  {skipped ? <s>{formatDeliveryDay(delivery.roastDate)}</s> : formatDeliveryDay(delivery.roastDate)}
-                </th>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.shipDate)}</td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.expectedArrival)}</td>
-                <td className="px-3 py-2 whitespace-nowrap">
-                  {formatDeliveryDay(delivery.readyFrom)}
+                <TableRowHeader className="font-semibold whitespace-nowrap">
+                  {skipped ? <s>{formatDayWithWeekday(delivery.roastDate)}</s> : formatDayWithWeekday(delivery.roastDate)}
+                </TableRowHeader>
+                <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</TableCell>
+                <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.expectedArrival)}</TableCell>
+                <TableCell className="whitespace-nowrap">
+                  {formatDayWithWeekday(delivery.readyFrom)}
                   <p className="text-caption text-ink-muted">{delivery.readyOnArrival ? 'Ready to brew on arrival' : 'Arrives before it is ready'}</p>
-                </td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatDeliveryDay(delivery.bestBefore)}</td>
-                <td className="px-3 py-2">{coffeeOf(delivery)}</td>
-                <td className="px-3 py-2">{contentsOf(delivery)}</td>
-                <td className="px-3 py-2">
+                </TableCell>
+                <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</TableCell>
+                <TableCell>{coffeeOf(delivery)}</TableCell>
+                <TableCell>{contentsOf(delivery)}</TableCell>
+                <TableCell>
                   <div className="flex flex-wrap items-center gap-1.5">
                     <Badge tone={status.tone}>{status.label}</Badge>
                     {delivery.paid ? <Badge tone="ok">Paid</Badge> : null}
@@ -98,28 +100,28 @@ export function DeliverySchedule({ deliveries, caption, actions }: DeliverySched
                   </div>
                   {delivery.locked && delivery.status === 'scheduled' ? (
                     <p className="mt-1 text-caption text-ink-muted">
-                      Past its cutoff ({formatCutoff(delivery.cutoffAt)}): it roasts as it is, and changes reach the next delivery.
+                      Past its cutoff ({formatInstantWithWeekday(delivery.cutoffAt)}): it roasts as it is, and changes reach the next delivery.
                     </p>
                   ) : null}
-                </td>
+                </TableCell>
                 {actions ? (
-                  <td className="px-3 py-2 whitespace-nowrap">
+                  <TableCell className="whitespace-nowrap">
                     {!delivery.locked && delivery.status === 'scheduled' ? (
                       <Button variant="secondary" disabled={actions.busy} onClick={() => actions.onSkip(delivery)}>
-                        Skip<span className="sr-only"> the delivery of {formatDeliveryDay(delivery.roastDate)}</span>
+                        Skip<span className="sr-only"> the delivery of {formatDayWithWeekday(delivery.roastDate)}</span>
                       </Button>
                     ) : !delivery.locked && skipped ? (
                       <Button variant="secondary" disabled={actions.busy} onClick={() => actions.onUnskip(delivery)}>
-                        Undo skip<span className="sr-only"> of the delivery of {formatDeliveryDay(delivery.roastDate)}</span>
+                        Undo skip<span className="sr-only"> of the delivery of {formatDayWithWeekday(delivery.roastDate)}</span>
                       </Button>
                     ) : null}
-                  </td>
+                  </TableCell>
                 ) : null}
               </tr>
             );
           })}
-        </tbody>
-      </table>
-    </div>
+        </TableBody>
+      </Table>
+    </TableFrame>
   );
 }

@@ -3,8 +3,9 @@ import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import type { z } from 'zod';
-import type { ShippingAddress } from '@shared/schemas/checkout';
+import type { StoredPostalAddress } from '@shared/schemas/address';
 import { subscriptionCheckoutRequestSchema } from '@shared/schemas/subscriptions';
+import { AddressFields, addressFieldPaths, addressFormValues } from '@/components/address/address-fields';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
@@ -14,14 +15,13 @@ import { leaveFor } from '@/lib/leave-for';
 import { useCreateSubscriptionCheckout } from '../api/create-subscription-checkout';
 import { searchFromBuilder } from '../utils/builder-search';
 import type { SubscriptionBuild } from '../utils/subscription-form';
-import { blankShippingAddress, ShippingAddressFields, shippingAddressFieldNames } from './shipping-address-fields';
 
 type CheckoutFields = z.input<typeof subscriptionCheckoutRequestSchema>;
 
 type SubscriptionCheckoutFormProps = {
   build: SubscriptionBuild;
   /** The address to start from (the customer's saved default), or blank fields. */
-  initialAddress?: ShippingAddress;
+  initialAddress?: StoredPostalAddress;
 };
 
 /** Where the deliveries ship; submitting creates the subscription and goes on to the payment page. */
@@ -33,7 +33,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
     resolver: zodResolver(subscriptionCheckoutRequestSchema),
     defaultValues: {
       ...build,
-      shippingAddress: initialAddress ? { ...initialAddress, line2: initialAddress.line2 ?? '' } : blankShippingAddress,
+      shippingAddress: addressFormValues(initialAddress),
     },
   });
 
@@ -44,7 +44,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
       leaveFor(checkoutUrl);
     } catch (error) {
       setSoldOut(error instanceof ApiError && error.code === 'lot_sold_out');
-      setFormError(applyServerErrors(error, form.setError, shippingAddressFieldNames));
+      setFormError(applyServerErrors(error, form.setError, addressFieldPaths('shippingAddress')));
     }
   });
 
@@ -67,7 +67,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
             </span>
           </FormAlert>
         ) : null}
-        <ShippingAddressFields />
+        <AddressFields at="shippingAddress" />
         <div>
           <Button type="submit" disabled={busy}>
             {busy ? 'Opening the payment page…' : 'Continue to payment'}

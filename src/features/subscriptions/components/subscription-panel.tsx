@@ -11,7 +11,8 @@ import { useResumeSubscription } from '../api/resume-subscription';
 import { useSkipDelivery } from '../api/skip-delivery';
 import { useUnskipDelivery } from '../api/unskip-delivery';
 import { describeChangeError } from '../utils/change-errors';
-import { formatDeliveryDay, subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { subscriptionStatusLabels } from '@/lib/subscription-labels';
+import { formatDayWithWeekday } from '@/lib/dates';
 import { ChangeAddressForm } from './change-address-form';
 import { ChangeSubscriptionForm } from './change-subscription-form';
 import { PauseSubscriptionForm } from './pause-subscription-form';
@@ -37,12 +38,12 @@ function StatusNotice({ subscription }: { subscription: Subscription }) {
     );
   }
   if (subscription.status === 'paused' && subscription.pausedUntil) {
-    return <p className="text-small">Paused: no delivery roasts before {formatDeliveryDay(subscription.pausedUntil)}.</p>;
+    return <p className="text-small">Paused: no delivery roasts before {formatDayWithWeekday(subscription.pausedUntil)}.</p>;
   }
   if (subscription.cancelAtPeriodEnd && subscription.status !== 'cancelled') {
     return (
       <p className="text-small">
-        Cancelled at the end of the paid period{subscription.endsOn ? `, on ${formatDeliveryDay(subscription.endsOn)}` : ''}. Deliveries
+        Cancelled at the end of the paid period{subscription.endsOn ? `, on ${formatDayWithWeekday(subscription.endsOn)}` : ''}. Deliveries
         already paid for still roast and ship; nothing more is charged.
       </p>
     );
@@ -143,7 +144,7 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
                 void run(() => skip.mutateAsync({ id: subscription.id, roastDate: nextSkippable.roastDate }))
               }
             >
-              Skip the delivery roasting {formatDeliveryDay(nextSkippable.roastDate)}
+              Skip the delivery roasting {formatDayWithWeekday(nextSkippable.roastDate)}
             </Button>
           ) : null}
           {subscription.status !== 'paused' ? (

@@ -1,9 +1,10 @@
 import { shipPolicyCustomerNotes } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { SubscriptionPreview } from '@shared/schemas/subscription-preview';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
-import { formatMoney } from '@/lib/format';
-import { cadenceLabel, formatCutoff, formatDeliveryDay } from '@/lib/subscription-labels';
+import { cadenceLabel } from '@/lib/subscription-labels';
+import { formatDayWithWeekday, formatInstantWithWeekday } from '@/lib/dates';
 
 type SubscriptionPricePreviewProps = {
   preview: SubscriptionPreview | undefined;
@@ -33,23 +34,23 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
       <div aria-live="polite" aria-atomic="true">
         <p className="text-small font-semibold text-ink-muted">Each delivery</p>
         <p className="flex flex-wrap items-baseline gap-x-3">
-          <span className="font-heading text-h1 font-semibold">{formatMoney(preview.priceCents)}</span>
+          <span className="font-heading text-h1 font-semibold">{formatMoney(preview.priceCents, preview.currency)}</span>
           {preview.regularPriceCents > preview.priceCents ? (
             <span className="text-ink-muted">
               <span className="sr-only">instead of </span>
-              <s>{formatMoney(preview.regularPriceCents)}</s>
+              <s>{formatMoney(preview.regularPriceCents, preview.currency)}</s>
             </span>
           ) : null}
         </p>
         <p className="text-small text-ink-muted">
           {preview.discountPct > 0 ? `${preview.discountPct}% subscription discount on the coffee; ` : ''}
-          shipping of {formatMoney(preview.shippingCents)} included. Charged {cadenceLabel(cadenceWeeks).toLowerCase()}.
+          shipping of {formatMoney(preview.shippingCents, preview.currency)} included. Charged {cadenceLabel(cadenceWeeks).toLowerCase()}.
         </p>
       </div>
       <div>
         <h3 className="text-h3">Your first deliveries</h3>
         {firstCutoff ? (
-          <p className="mt-1 text-small text-ink-muted">If you pay before {formatCutoff(firstCutoff)}; later, each date moves to the next roast day.</p>
+          <p className="mt-1 text-small text-ink-muted">If you pay before {formatInstantWithWeekday(firstCutoff)}; later, each date moves to the next roast day.</p>
         ) : null}
         <p className="mt-1 text-small">{shipPolicyCustomerNotes[preview.shipPolicy]}</p>
         <ol aria-label="First three deliveries" className="mt-3 grid gap-3">
@@ -58,15 +59,15 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
               <p className="font-semibold">Delivery {index + 1}</p>
               <dl className="mt-1 grid grid-cols-[max-content_1fr] gap-x-4 text-small">
                 <dt className="text-ink-muted">Roasted</dt>
-                <dd>{formatDeliveryDay(delivery.roastDate)}</dd>
+                <dd>{formatDayWithWeekday(delivery.roastDate)}</dd>
                 <dt className="text-ink-muted">Ships</dt>
-                <dd>{formatDeliveryDay(delivery.shipDate)}</dd>
+                <dd>{formatDayWithWeekday(delivery.shipDate)}</dd>
                 <dt className="text-ink-muted">Arrives about</dt>
-                <dd>{formatDeliveryDay(delivery.expectedArrival)}</dd>
+                <dd>{formatDayWithWeekday(delivery.expectedArrival)}</dd>
                 <dt className="text-ink-muted">Ready from</dt>
-                <dd>{formatDeliveryDay(delivery.readyFrom)}</dd>
+                <dd>{formatDayWithWeekday(delivery.readyFrom)}</dd>
                 <dt className="text-ink-muted">Best before</dt>
-                <dd>{formatDeliveryDay(delivery.bestBefore)}</dd>
+                <dd>{formatDayWithWeekday(delivery.bestBefore)}</dd>
               </dl>
             </li>
           ))}

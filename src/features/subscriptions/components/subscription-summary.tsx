@@ -1,13 +1,8 @@
+import { addressLines } from '@shared/domain/address';
 import { grindLabels, roastLevelLabels } from '@shared/domain/vocabulary';
+import { formatMoney } from '@shared/domain/money';
 import type { Subscription } from '@shared/schemas/subscriptions';
-import { formatMoney } from '@/lib/format';
 import { bagsLabel, brewMethodLabels, cadenceLabel } from '@/lib/subscription-labels';
-
-function oneLineAddress(address: Subscription['shippingAddress']): string {
-  return [address.name, address.line1, address.line2, `${address.city}, ${address.region} ${address.postalCode}`, address.country]
-    .filter(Boolean)
-    .join(', ');
-}
 
 /** What each delivery brings, how often, what it costs and where it goes. */
 export function SubscriptionSummary({ subscription }: { subscription: Subscription }) {
@@ -17,8 +12,8 @@ export function SubscriptionSummary({ subscription }: { subscription: Subscripti
     ['Grind', grindLabels[subscription.grind]],
     ['Brew method', brewMethodLabels[subscription.brewMethod]],
     ['How often', cadenceLabel(subscription.cadenceWeeks)],
-    ['Per delivery', `${formatMoney(subscription.priceCents)} with shipping`],
-    ['Ships to', oneLineAddress(subscription.shippingAddress)],
+    ['Per delivery', `${formatMoney(subscription.priceCents, subscription.currency)} with shipping`],
+    ['Ships to', addressLines(subscription.shippingAddress).join(', ')],
   ];
   return (
     <dl className="grid gap-x-6 gap-y-2 text-small sm:grid-cols-[max-content_1fr]">

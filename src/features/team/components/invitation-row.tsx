@@ -4,9 +4,9 @@ import type { PendingInvitation } from '@shared/schemas/team';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
+import { formatInstant } from '@/lib/dates';
 import { roleLabels } from '../utils/role-labels';
 
-const expiry = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 
 /** An invitation still waiting for an answer, which the owner can withdraw. */
 export function InvitationRow({ invitation, onWithdraw }: { invitation: PendingInvitation; onWithdraw: () => Promise<unknown> }) {
@@ -34,7 +34,7 @@ export function InvitationRow({ invitation, onWithdraw }: { invitation: PendingI
       </span>
       <Badge>{roleLabels[invitation.role]}</Badge>
       <span className="text-small text-ink-muted">
-        Link expires {expiry.format(new Date(invitation.expiresAt))}
+        Link expires {formatInstant(invitation.expiresAt)}
         {invitation.invitedBy ? ` · sent by ${invitation.invitedBy}` : ''}
       </span>
       <Button variant="secondary" className="ml-auto" disabled={busy} onClick={() => void withdraw()} aria-describedby={emailId}>

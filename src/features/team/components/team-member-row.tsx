@@ -4,6 +4,7 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/select-field';
 import { ApiError } from '@/lib/api-client';
+import { formatInstantDate } from '@/lib/dates';
 import { roleLabels, teamRoleDescriptions } from '../utils/role-labels';
 
 type TeamMemberRowProps = {
@@ -14,7 +15,6 @@ type TeamMemberRowProps = {
   onSetDisabled: (disabled: boolean) => Promise<unknown>;
 };
 
-const joined = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
 
 function isTeamRole(value: string): value is TeamRole {
   return (teamRoles as readonly string[]).includes(value);
@@ -54,7 +54,7 @@ export function TeamMemberRow({ member, isYou, onChangeRole, onSetDisabled }: Te
         {member.disabled ? <Badge tone="alert">Access disabled</Badge> : null}
       </div>
       <p className="mt-1 break-all text-ink-muted">{member.email}</p>
-      <p className="text-small text-ink-muted">Joined {joined.format(new Date(member.joinedAt))}</p>
+      <p className="text-small text-ink-muted">Joined {formatInstantDate(member.joinedAt)}</p>
 
       {failure ? (
         <p role="alert" className="mt-3 text-small font-semibold text-alert">

@@ -1,11 +1,12 @@
 import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { BatchTrace } from '@shared/schemas/packing';
+import { orderReference } from '@shared/domain/order-reference';
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/empty-state';
 import { paths } from '@/config/paths';
-import { formatTraceDay, formatTraceGrams, shortOrderId, traceStatusLabels } from '../utils/trace-format';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
+import { formatTraceDay, formatTraceGrams, traceStatusLabels } from '../utils/trace-format';
 
-const cell = 'border-b border-rule px-3 py-2 text-left align-top print:border print:border-black';
 
 /** A batch and every order it went into: who to reach in a recall. */
 export function BatchTraceView({ trace }: { trace: BatchTrace }) {
@@ -35,39 +36,39 @@ export function BatchTraceView({ trace }: { trace: BatchTrace }) {
         {orders.length === 0 ? (
           <EmptyState title="No bags filled from this batch yet">Bags are filled from a batch when their order is packed.</EmptyState>
         ) : (
-          <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-            <table className="w-full border-collapse">
-              <thead>
+          <TableFrame>
+            <Table variant="sheet">
+              <TableHead>
                 <tr>
                   {['Order', 'Customer', 'Bags', 'Status', 'Ship day'].map((heading) => (
-                    <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+                    <TableHeader key={heading}>
                       {heading}
-                    </th>
+                    </TableHeader>
                   ))}
                 </tr>
-              </thead>
-              <tbody>
+              </TableHead>
+              <TableBody>
                 {orders.map((order) => (
                   <tr key={order.orderId}>
-                    <th scope="row" className={cell}>
+                    <TableRowHeader>
                       <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="font-semibold text-leaf underline">
-                        {shortOrderId(order.orderId)}
+                        {orderReference(order.orderId)}
                       </Link>
-                    </th>
-                    <td className={cell}>
+                    </TableRowHeader>
+                    <TableCell>
                       {order.customerName}
                       <span className="block break-all text-small text-ink-muted">{order.customerEmail}</span>
-                    </td>
-                    <td className={cell}>
+                    </TableCell>
+                    <TableCell>
                       {order.bags} ({formatTraceGrams(order.grams)})
-                    </td>
-                    <td className={cell}>{traceStatusLabels[order.status]}</td>
-                    <td className={cell}>{formatTraceDay(order.shipDate)}</td>
+                    </TableCell>
+                    <TableCell>{traceStatusLabels[order.status]}</TableCell>
+                    <TableCell>{formatTraceDay(order.shipDate)}</TableCell>
                   </tr>
                 ))}
-              </tbody>
-            </table>
-          </div>
+              </TableBody>
+            </Table>
+          </TableFrame>
         )}
       </section>
     </>

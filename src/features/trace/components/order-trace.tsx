@@ -1,12 +1,13 @@
 import { Link } from 'react-router-dom';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
+import { orderReference } from '@shared/domain/order-reference';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
+import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { useOrderTrace } from '../api/get-order-trace';
-import { formatTraceDay, formatTraceGrams, shortOrderId, traceStatusLabels } from '../utils/trace-format';
+import { formatTraceDay, formatTraceGrams, traceStatusLabels } from '../utils/trace-format';
 
-const cell = 'border-b border-rule px-3 py-2 text-left align-top';
 
 type OrderTraceProps = {
   orderId: string;
@@ -37,34 +38,34 @@ export function OrderTrace({ orderId, headingLevel = 2 }: OrderTraceProps) {
     body = (
       <>
         <p className="mb-3 text-ink-muted">
-          Order {shortOrderId(order.id)} for {order.customerName} ({order.customerEmail}) · {traceStatusLabels[order.status]}
+          Order {orderReference(order.id)} for {order.customerName} ({order.customerEmail}) · {traceStatusLabels[order.status]}
           {order.roastDate ? ` · roast day ${formatTraceDay(order.roastDate)}` : ''}
           {order.shipDate ? ` · ship day ${formatTraceDay(order.shipDate)}` : ''}
         </p>
-        <div className="overflow-x-auto rounded-card border border-rule bg-sheet">
-          <table className="w-full border-collapse">
-            <thead>
+        <TableFrame>
+          <Table variant="sheet">
+            <TableHead>
               <tr>
                 {['Lot', 'Level', 'Bags', 'Roast day', 'Batch'].map((heading) => (
-                  <th key={heading} scope="col" className={`${cell} text-small font-semibold`}>
+                  <TableHeader key={heading}>
                     {heading}
-                  </th>
+                  </TableHeader>
                 ))}
               </tr>
-            </thead>
-            <tbody>
+            </TableHead>
+            <TableBody>
               {bags.map((row, index) => (
                 <tr key={`${row.batchId ?? 'none'}-${row.lotCode ?? 'none'}-${row.size}-${index}`}>
-                  <th scope="row" className={`${cell} font-semibold`}>
+                  <TableRowHeader className="font-semibold">
                     {row.lotName ?? 'Lot not picked yet'}
                     {row.lotCode ? <span className="block text-small font-normal text-ink-muted">{row.lotCode}</span> : null}
-                  </th>
-                  <td className={cell}>{row.roastLevel ? roastLevelLabels[row.roastLevel] : 'Green'}</td>
-                  <td className={cell}>
+                  </TableRowHeader>
+                  <TableCell>{row.roastLevel ? roastLevelLabels[row.roastLevel] : 'Green'}</TableCell>
+                  <TableCell>
                     {row.bags} × {row.size.replace(/(\d)([a-z])/, '$1 $2')} ({formatTraceGrams(row.grams)})
-                  </td>
-                  <td className={cell}>{formatTraceDay(row.roastDate)}</td>
-                  <td className={cell}>
+                  </TableCell>
+                  <TableCell>{formatTraceDay(row.roastDate)}</TableCell>
+                  <TableCell>
                     {row.batchId ? (
                       <Link to={paths.roastery.batch.getHref(row.batchId)} className="font-semibold text-leaf underline">
                         Open batch<span className="sr-only"> of {row.lotName ?? 'this line'}</span>
@@ -72,12 +73,12 @@ export function OrderTrace({ orderId, headingLevel = 2 }: OrderTraceProps) {
                     ) : (
                       <span className="text-ink-muted">{row.roastLevel ? 'Not filled from a batch yet' : 'Green coffee: no batch'}</span>
                     )}
-                  </td>
+                  </TableCell>
                 </tr>
               ))}
-            </tbody>
-          </table>
-        </div>
+            </TableBody>
+          </Table>
+        </TableFrame>
       </>
     );
   }

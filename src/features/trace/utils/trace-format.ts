@@ -1,7 +1,7 @@
 import type { OrderStatus } from '@shared/domain/vocabulary';
+import { formatDay } from '@/lib/dates';
 
 const grams = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
-const shortDate = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
 
 /** 4635 → "4,635 g": a recall counts to the gram. */
 export function formatTraceGrams(value: number): string {
@@ -10,7 +10,7 @@ export function formatTraceGrams(value: number): string {
 
 /** "2026-12-03" → "Dec 3, 2026"; null → "—". */
 export function formatTraceDay(date: string | null): string {
-  return date ? shortDate.format(new Date(`${date}T00:00:00Z`)) : '—';
+  return date ? formatDay(date) : '—';
 }
 
 export const traceStatusLabels: Record<OrderStatus, string> = {
@@ -24,6 +24,3 @@ export const traceStatusLabels: Record<OrderStatus, string> = {
   refunded: 'Refunded',
 };
 
-export function shortOrderId(orderId: string): string {
-  return orderId.slice(0, 8).toUpperCase();
-}
