@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { packListResponseSchema, packOrderSchema } from '@shared/schemas/packing';
-import { deliveries } from '../../server/db/schema/index';
+import { bagAllocations, deliveries, orderItems } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
@@ -150,6 +150,22 @@ describe('POST /api/orders/:id/pack', () => {
     expect(packOrderSchema.parse(again.body).packedAt).toBe(packed.packedAt);
     expect(await allocationsOf(order.id)).toHaveLength(1);
     expect(await outboxRows([`roasted:${order.id}`])).toHaveLength(1);
+  });
+
+  it('packs an order whose bags were already filled from their batch without filling them twice', async () => {
+    const lot = await createLotForSale(20_000);
+    const roastDate = uniqueDay();
+    // 700 g roasted: room for the order's two 341 g bags, and no more.
+    const batch = await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'light', roastedGramsOut: 700 });
+    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 2, roastLevel: 'light' }] });
+    const [item] = await getTestDb().select({ id: orderItems.id }).from(orderItems).where(eq(orderItems.orderId, order.id));
+    await getTestDb().insert(bagAllocations).values({ orderId: order.id, orderItemId: item!.id, batchId: batch.id, bags: 2, grams: 682 });
+
+    const response = await staff.post(`/api/orders/${order.id}/pack`);
+
+    expect(response.status, JSON.stringify(response.body)).toBe(200);
+    expect(packOrderSchema.parse(response.body).status).toBe('packed');
+    expect(await allocationsOf(order.id)).toEqual([expect.objectContaining({ batchId: batch.id, bags: 2, grams: 682 })]);
   });
 
   it('fills bags whole from the oldest batch first and carries the rest to the next batch', async () => {

@@ -6,6 +6,7 @@ import { load } from 'cheerio';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { lotDetailSchema, lotListResponseSchema } from '@shared/schemas/lots';
+import { shippingRulesSchema } from '@shared/schemas/shipping';
 import { createTestApp } from '../setup/test-app';
 import { createLotForSale } from '../factories/index';
 
@@ -87,6 +88,8 @@ describe('pages found and shared', () => {
 
     const preloaded = JSON.parse($('script#restday-preloaded').text()) as Record<string, unknown>;
     expect(lotDetailSchema.parse(preloaded[`/api/lots/${lot.code}`]).name).toBe(lot.name);
+    // Prices read in the shop's currency from the first render: its published shipping rules come along.
+    expect(shippingRulesSchema.parse(preloaded['/api/shipping']).currency).toBe('usd');
 
     const jsonLd = JSON.parse($('script[type="application/ld+json"]').text()) as Record<string, unknown>;
     expect(jsonLd).toMatchObject({ '@context': 'https://schema.org', '@type': 'Product', name: lot.name, sku: lot.code });

@@ -144,6 +144,16 @@ function queries(db: DbOrTx) {
         .orderBy(asc(batches.createdAt), asc(batches.id));
     },
 
+    /** How many bags of each line of the order are already filled from a batch. */
+    async filledBags(orderId: string) {
+      const rows = await db
+        .select({ orderItemId: bagAllocations.orderItemId, bags: sql<number>`sum(${bagAllocations.bags})::int` })
+        .from(bagAllocations)
+        .where(eq(bagAllocations.orderId, orderId))
+        .groupBy(bagAllocations.orderItemId);
+      return new Map(rows.map((row) => [row.orderItemId, row.bags]));
+    },
+
     async insertAllocations(orderId: string, allocations: { orderItemId: string; batchId: string; bags: number; grams: number }[]) {
       if (allocations.length === 0) return;
       await db.insert(bagAllocations).values(allocations.map((allocation) => ({ ...allocation, orderId })));

@@ -115,12 +115,15 @@ export function createPackingService({ repo, clock }: PackingDeps) {
   async function allocateRoastedBags(tx: PackingTransaction, order: { id: string; roastDate: string | null }) {
     const lines = await tx.lines(order.id);
     if (!order.roastDate) throw AppError.conflict('no_roast_date', 'This order has no roast date, so no batch can fill it.');
-    const toFill: LineToFill[] = lines.map((line) => {
+    // Bags already filled (recorded with their batch before packing) are not filled twice.
+    const filled = await tx.filledBags(order.id);
+    const unfilled = lines.filter((line) => (filled.get(line.id) ?? 0) < line.quantity);
+    const toFill: LineToFill[] = unfilled.map((line) => {
       if (!line.lotId) {
         throw AppError.conflict('rotation_not_picked', `No lot is picked for Roaster's Rotation on ${order.roastDate}. Pick it, roast it, then pack.`);
       }
       if (!line.roastLevel) throw new Error(`roasted order line ${line.id} has no roast level`);
-      return { orderItemId: line.id, lotId: line.lotId, roastLevel: line.roastLevel, bags: line.quantity, fillGrams: line.fillGrams };
+      return { orderItemId: line.id, lotId: line.lotId, roastLevel: line.roastLevel, bags: line.quantity - (filled.get(line.id) ?? 0), fillGrams: line.fillGrams };
     });
     const lotLevels = [...new Map(toFill.map((line) => [`${line.lotId}|${line.roastLevel}`, { lotId: line.lotId, roastLevel: line.roastLevel }])).values()];
     const plan = allocateBags(toFill, await tx.lockBatchRoom(order.roastDate, lotLevels));

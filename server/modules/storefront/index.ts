@@ -2,13 +2,13 @@ import type { Config } from '../../config';
 import { publicBaseUrl } from '../../config';
 import type { Db } from '../../db/client';
 import type { LotsService } from '../lots';
-import { loadShopSettings } from '../settings';
+import { publishedShippingRules } from '../shipping';
 import { storefrontRoutes } from './storefront.routes';
 import { createStorefrontService } from './storefront.service';
 
 /** The built shop at the site's root (not under /api): assets, pages with their own head, sitemap and robots. */
 export function createStorefront({ config, db, lots }: { config: Config; db: Db; lots: LotsService }) {
   const baseUrl = publicBaseUrl(config);
-  const service = createStorefrontService({ lots, baseUrl, currency: async () => (await loadShopSettings(db)).settings.currency });
+  const service = createStorefrontService({ lots, baseUrl, shippingRules: () => publishedShippingRules(db) });
   return storefrontRoutes(service, { staticDir: config.STATIC_DIR, baseUrl });
 }

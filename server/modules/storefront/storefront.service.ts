@@ -1,4 +1,5 @@
 import type { LotDetail, LotListResponse } from '@shared/schemas/lots';
+import type { ShippingRules } from '@shared/schemas/shipping';
 import { AppError } from '../../lib/app-error';
 import type { LotsService } from '../lots';
 import { lotProductJsonLd, type PageHead } from './page-head';
@@ -14,7 +15,8 @@ export interface StorefrontPage {
 export interface StorefrontDeps {
   lots: LotsService;
   baseUrl: string;
-  currency: () => Promise<string>;
+  /** The published shipping rules: the shop's currency and bands, which every public page reads. */
+  shippingRules: () => Promise<ShippingRules>;
 }
 
 const shopDescription = 'Green coffee lots for home roasters, coffee roasted to order by subscription, and the roastery behind both.';
@@ -32,10 +34,10 @@ const publicPages: Record<string, { title: string; description: string }> = {
 
 const lotPathPattern = /^\/lots\/([^/]+)$/;
 
-export function createStorefrontService({ lots, baseUrl, currency }: StorefrontDeps) {
+export function createStorefrontService({ lots, baseUrl, shippingRules }: StorefrontDeps) {
   const urlOf = (path: string) => `${baseUrl}${path === '/' ? '/' : path}`;
 
-  async function lotPage(code: string): Promise<StorefrontPage> {
+  async function lotPage(code: string, shipping: ShippingRules): Promise<StorefrontPage> {
     let lot: LotDetail;
     try {
       lot = await lots.get(code);
@@ -57,23 +59,25 @@ export function createStorefrontService({ lots, baseUrl, currency }: StorefrontD
         indexable: true,
         openGraphType: 'product',
         ...(imageUrls[0] ? { imageUrl: imageUrls[0] } : {}),
-        jsonLd: lotProductJsonLd(lot, { url: urlOf(path), imageUrls, currency: await currency() }),
+        jsonLd: lotProductJsonLd(lot, { url: urlOf(path), imageUrls, currency: shipping.currency }),
       },
-      preloaded: { [`/api/lots/${encodeURIComponent(code)}`]: lot },
+      preloaded: { '/api/shipping': shipping, [`/api/lots/${encodeURIComponent(code)}`]: lot },
     };
   }
 
   return {
     /** The page for a path (the query string is not part of it: filters are the client's). */
     async pageFor(path: string): Promise<StorefrontPage> {
+      const shipping = await shippingRules();
       const lotCode = lotPathPattern.exec(path)?.[1];
-      if (lotCode) return lotPage(decodeURIComponent(lotCode));
+      if (lotCode) return lotPage(decodeURIComponent(lotCode), shipping);
       const known = publicPages[path];
       const head: PageHead = known
         ? { ...known, canonicalUrl: urlOf(path), indexable: true, openGraphType: 'website' }
         : { title: 'Restday', description: shopDescription, canonicalUrl: urlOf(path), indexable: false, openGraphType: 'website' };
       const wantsLots = path === '/' || path === '/lots' || path === '/subscribe';
-      const preloaded: Record<string, unknown> = wantsLots ? { '/api/lots': { items: await lots.list({}) } satisfies LotListResponse } : {};
+      const preloaded: Record<string, unknown> = known ? { '/api/shipping': shipping } : {};
+      if (wantsLots) preloaded['/api/lots'] = { items: await lots.list({}) } satisfies LotListResponse;
       return { status: 200, head, preloaded };
     },
 
