@@ -51,7 +51,7 @@ describe('password reset by e-mail', () => {
 
     const confirmed = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'new kettle morning light' });
     expect(confirmed.status).toBe(204);
-    expect((await me(before)).status).toBe(401);
+    expect((await me(before)).body.user).toBeNull();
     expect((await signIn(user.email, user.password)).status).toBe(401);
     expect((await signIn(user.email, 'new kettle morning light')).status).toBe(200);
 
