@@ -104,7 +104,9 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [drizzleOutsideRepos, { regex: String.raw`^\./modules/[^/]+/`, message: "Import a module through its front door ('./modules/<module>')." }] },
+        {
+          patterns: [drizzleOutsideRepos, { regex: String.raw`^\./modules/[^/]+/`, message: "Import a module through its front door ('./modules/<module>')." }],
+        },
       ],
     },
   },

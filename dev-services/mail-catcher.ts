@@ -30,7 +30,20 @@ export async function startMailCatcher(options: { smtpPort: number; webPort: num
   const binary = path.join(projectRoot, 'node_modules', 'maildev', 'dist', 'bin', 'maildev.js');
   const child: ChildProcess = spawn(
     process.execPath,
-    [binary, '--smtp', String(options.smtpPort), '--web', String(options.webPort), '--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--mail-directory', mailDir, '--silent'],
+    [
+      binary,
+      '--smtp',
+      String(options.smtpPort),
+      '--web',
+      String(options.webPort),
+      '--ip',
+      '127.0.0.1',
+      '--web-ip',
+      '127.0.0.1',
+      '--mail-directory',
+      mailDir,
+      '--silent',
+    ],
     { stdio: ['ignore', 'ignore', 'inherit'] },
   );
   const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));

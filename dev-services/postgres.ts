@@ -63,9 +63,7 @@ export function findPostgresBinaries(): string {
 
   const installCommand = 'apt-get update && apt-get install -y postgresql';
   if (!isRoot) {
-    throw new PostgresSetupError(
-      `PostgreSQL is not installed. Install Debian's package as root, then try again:\n  sudo sh -c '${installCommand}'`,
-    );
+    throw new PostgresSetupError(`PostgreSQL is not installed. Install Debian's package as root, then try again:\n  sudo sh -c '${installCommand}'`);
   }
   console.log('PostgreSQL is missing; installing it from Debian packages (about a minute)…');
   const install = spawnSync('sh', ['-c', installCommand], {
@@ -124,9 +122,13 @@ function runningPort(dataDir: string): number {
 
 function freePort(): number {
   // A synchronous probe keeps cluster start-up a plain sequence of commands.
-  const probe = spawnSync(process.execPath, ['-e', "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})"], {
-    encoding: 'utf8',
-  });
+  const probe = spawnSync(
+    process.execPath,
+    ['-e', "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})"],
+    {
+      encoding: 'utf8',
+    },
+  );
   const port = Number(probe.stdout.trim());
   if (!Number.isInteger(port) || port <= 0) throw new PostgresSetupError('Could not find a free port for PostgreSQL');
   return port;
@@ -158,9 +160,7 @@ export function startCluster(options: ClusterOptions): RunningCluster {
     allowFailure: true,
   });
   if (started.status !== 0) {
-    throw new PostgresSetupError(
-      `PostgreSQL did not start on 127.0.0.1:${port} (is the port taken? set ${options.portVariable}). See ${logFile}`,
-    );
+    throw new PostgresSetupError(`PostgreSQL did not start on 127.0.0.1:${port} (is the port taken? set ${options.portVariable}). See ${logFile}`);
   }
   return cluster(port, true);
 }

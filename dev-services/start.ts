@@ -43,7 +43,10 @@ async function main() {
   const stripeFake = await startDevelopmentStripeFake(config);
   if (stripeFake) stops.push(() => stripeFake.stop());
 
-  const server = await startServer({ ...config, DATABASE_URL: database.url, ...(stripeFake ? { STRIPE_API_URL: stripeFake.url } : {}) }, createLogger({ ...config, LOG_LEVEL: process.env.LOG_LEVEL ? config.LOG_LEVEL : 'warn' }));
+  const server = await startServer(
+    { ...config, DATABASE_URL: database.url, ...(stripeFake ? { STRIPE_API_URL: stripeFake.url } : {}) },
+    createLogger({ ...config, LOG_LEVEL: process.env.LOG_LEVEL ? config.LOG_LEVEL : 'warn' }),
+  );
   stops.push(() => server.stop());
 
   const width = Math.max(...demoSignIns.map((signIn) => signIn.email.length));

@@ -107,8 +107,6 @@ export const demoEmailPayloads: { [T in EmailTemplateName]: EmailPayloads[T] } =
   'roast-day-moved': {
     name: 'Robin Alder',
     closedDate: '2026-12-24',
-    items: [
-      { orderId, coffee: 'Keraba Ridge', roastDate: '2026-12-28', shipDate: '2026-12-29', readyFrom: '2026-12-30', bestBefore: '2027-01-25' },
-    ],
+    items: [{ orderId, coffee: 'Keraba Ridge', roastDate: '2026-12-28', shipDate: '2026-12-29', readyFrom: '2026-12-30', bestBefore: '2027-01-25' }],
   },
 };

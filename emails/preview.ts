@@ -23,7 +23,10 @@ writeFileSync(
     `<body style="font-family:system-ui,sans-serif;max-width:40rem;margin:2rem auto;line-height:1.6">` +
     `<h1>Restday e-mail previews</h1><p>Rendered with invented demo data.</p><ul>` +
     entries
-      .map(({ template, subject }) => `<li><a href="${template}.html">${escapeHtml(template)}</a> (<a href="${template}.txt">text</a>): ${escapeHtml(subject)}</li>`)
+      .map(
+        ({ template, subject }) =>
+          `<li><a href="${template}.html">${escapeHtml(template)}</a> (<a href="${template}.txt">text</a>): ${escapeHtml(subject)}</li>`,
+      )
       .join('') +
     `</ul></body>`,
 );

@@ -152,7 +152,10 @@ export function createApp(deps: AppDeps): Express {
       // The Stripe side follows in a job; without a queue (API-only tests) the scheduled sweep or a test pushes it.
       onChanged: async (subscriptionId) => {
         // The change is committed: if the queue cannot take the push now, the every-minute sync sends it.
-        if (queue) await sendJob(queue, subscriptionStripeSyncJob, { subscriptionId }).catch((error: unknown) => logger.warn({ err: error, subscriptionId }, 'subscription push left for the sync'));
+        if (queue)
+          await sendJob(queue, subscriptionStripeSyncJob, { subscriptionId }).catch((error: unknown) =>
+            logger.warn({ err: error, subscriptionId }, 'subscription push left for the sync'),
+          );
       },
     }),
     createRoasteryModule({ db }),

@@ -20,9 +20,7 @@ import type { FakeState, Store } from './store';
 const idempotencyKeyLifetimeMs = 24 * 60 * 60 * 1000;
 
 const listShape = {
-  limit: formInt(1)
-    .pipe(z.number().max(100))
-    .optional(),
+  limit: formInt(1).pipe(z.number().max(100)).optional(),
   starting_after: z.string().optional(),
   ending_before: z.string().optional(),
   expand: expandParam,
@@ -62,7 +60,9 @@ function honourIdempotencyKeys(store: Store): RequestHandler {
     const cutoff = Date.now() - idempotencyKeyLifetimeMs;
     for (const [storedKey, stored] of Object.entries(state.idempotency)) if (stored.createdAt < cutoff) delete state.idempotency[storedKey];
 
-    const fingerprint = createHash('sha256').update(`${req.method} ${req.path} ${canonicalJson(req.body)}`).digest('hex');
+    const fingerprint = createHash('sha256')
+      .update(`${req.method} ${req.path} ${canonicalJson(req.body)}`)
+      .digest('hex');
     const stored = state.idempotency[key];
     if (stored) {
       if (stored.fingerprint !== fingerprint) {
@@ -79,7 +79,9 @@ function honourIdempotencyKeys(store: Store): RequestHandler {
       return;
     }
     if (running.has(key)) {
-      res.status(409).json({ error: { type: 'idempotency_error', message: 'Another request with this Idempotency-Key is still in progress. Try again shortly.' } });
+      res
+        .status(409)
+        .json({ error: { type: 'idempotency_error', message: 'Another request with this Idempotency-Key is still in progress. Try again shortly.' } });
       return;
     }
     running.add(key);
@@ -146,7 +148,14 @@ function listOf<T extends { id: string }>(items: T[], params: { limit?: number; 
   // Newest first, as Stripe lists.
   let ordered = [...items].reverse();
   if (params.starting_after) ordered = ordered.slice(ordered.findIndex((item) => item.id === params.starting_after) + 1);
-  if (params.ending_before) ordered = ordered.slice(0, Math.max(0, ordered.findIndex((item) => item.id === params.ending_before)));
+  if (params.ending_before)
+    ordered = ordered.slice(
+      0,
+      Math.max(
+        0,
+        ordered.findIndex((item) => item.id === params.ending_before),
+      ),
+    );
   const limit = params.limit ?? 10;
   return { ...emptyList(url, ordered.slice(0, limit)), has_more: ordered.length > limit };
 }
@@ -184,7 +193,13 @@ export function stripeApiRoutes(store: Store, account: FakeAccount): Router {
   });
   router.get('/checkout/sessions', (req, res) => {
     const params = parseParams(
-      z.strictObject({ ...listShape, customer: z.string().optional(), payment_intent: z.string().optional(), subscription: z.string().optional(), status: z.enum(['open', 'complete', 'expired']).optional() }),
+      z.strictObject({
+        ...listShape,
+        customer: z.string().optional(),
+        payment_intent: z.string().optional(),
+        subscription: z.string().optional(),
+        status: z.enum(['open', 'complete', 'expired']).optional(),
+      }),
       req.query,
     );
     const sessions = Object.keys(state.sessions)
@@ -238,7 +253,12 @@ export function stripeApiRoutes(store: Store, account: FakeAccount): Router {
 
   router.get('/invoices', (req, res) => {
     const params = parseParams(
-      z.strictObject({ ...listShape, customer: z.string().optional(), subscription: z.string().optional(), status: z.enum(['open', 'paid', 'void']).optional() }),
+      z.strictObject({
+        ...listShape,
+        customer: z.string().optional(),
+        subscription: z.string().optional(),
+        status: z.enum(['open', 'paid', 'void']).optional(),
+      }),
       req.query,
     );
     const invoices = Object.values(state.invoices).filter(
@@ -301,7 +321,12 @@ export function stripeApiRoutes(store: Store, account: FakeAccount): Router {
   });
 
   router.use((req, _res, next) => {
-    next(new StripeApiError(404, { type: 'invalid_request_error', message: `Unrecognized request URL (${req.method}: /v1${req.path}). The local payment fake does not implement it.` }));
+    next(
+      new StripeApiError(404, {
+        type: 'invalid_request_error',
+        message: `Unrecognized request URL (${req.method}: /v1${req.path}). The local payment fake does not implement it.`,
+      }),
+    );
   });
   router.use(stripeErrorHandler);
   return router;

@@ -45,7 +45,8 @@ export function stripeFakeControl(baseUrl: string) {
     setWebhookEndpoint: (url: string | null) => call<{ url: string | null }>('PUT', '/webhook-endpoint', { url }),
     pauseWebhooks: () => call<{ paused: boolean }>('POST', '/webhooks/pause'),
     resumeWebhooks: () => call<{ paused: boolean }>('POST', '/webhooks/resume'),
-    deliveries: (type?: EventType) => call<{ items: DeliveryView[] }>('GET', `/deliveries${type ? `?type=${encodeURIComponent(type)}` : ''}`).then((body) => body.items),
+    deliveries: (type?: EventType) =>
+      call<{ items: DeliveryView[] }>('GET', `/deliveries${type ? `?type=${encodeURIComponent(type)}` : ''}`).then((body) => body.items),
     /** Sends one event once more, now, and says how the endpoint answered. */
     deliverEvent: (eventId: string) => call<DeliveryAttempt>('POST', `/events/${encodeURIComponent(eventId)}/deliver`),
     setCustomerCard: (customerId: string, number: string) =>

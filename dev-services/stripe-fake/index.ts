@@ -54,13 +54,21 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
   app.use('/test-payment', testPaymentPageRoutes(account));
   app.use('/control', controlRoutes(store, account, sender));
   app.get('/', (_req, res) => {
-    res.type('text').send('Restday local payment fake (development and tests only). Stripe API under /v1, test-payment pages under /test-payment, control API under /control.');
+    res
+      .type('text')
+      .send(
+        'Restday local payment fake (development and tests only). Stripe API under /v1, test-payment pages under /test-payment, control API under /control.',
+      );
   });
 
   const server: Server = await new Promise((resolve, reject) => {
     const listening = app.listen(options.port, host, () => resolve(listening));
     listening.once('error', (error: NodeJS.ErrnoException) =>
-      reject(error.code === 'EADDRINUSE' ? new Error(`Port ${options.port} is taken; is another payment fake running? Set STRIPE_FAKE_PORT to use another port.`) : error),
+      reject(
+        error.code === 'EADDRINUSE'
+          ? new Error(`Port ${options.port} is taken; is another payment fake running? Set STRIPE_FAKE_PORT to use another port.`)
+          : error,
+      ),
     );
   });
   const port = (server.address() as AddressInfo).port;

@@ -256,17 +256,7 @@ export interface Invoice {
   livemode: false;
 }
 
-export type StripeObject =
-  | Product
-  | Price
-  | Customer
-  | PaymentMethod
-  | PaymentIntent
-  | Charge
-  | Refund
-  | CheckoutSession
-  | Subscription
-  | Invoice;
+export type StripeObject = Product | Price | Customer | PaymentMethod | PaymentIntent | Charge | Refund | CheckoutSession | Subscription | Invoice;
 
 /** The event types the fake sends: the ones Restday's webhook endpoint subscribes to. */
 export const eventTypes = [

@@ -157,7 +157,11 @@ export function testPaymentPageRoutes(account: FakeAccount): Router {
       cvc: typeof body.cvc === 'string' ? body.cvc : '',
     };
     const items = account.lineItemsOf(session.id);
-    const refuse = (status: number, message: string) => res.status(status).type('html').send(paymentForm(session, items, values, message));
+    const refuse = (status: number, message: string) =>
+      res
+        .status(status)
+        .type('html')
+        .send(paymentForm(session, items, values, message));
 
     const expiry = parseExpiry(values.expiry);
     if (!expiry) return void refuse(400, 'Enter the expiry date as MM/YY, in the future.');

@@ -11,7 +11,15 @@ export function formatDay(isoDate: string): string {
 
 /** An instant in the shop's time zone: "December 3, 2026 at 4:15 PM MST". */
 export function formatInstant(instant: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-US', { month: 'long', day: 'numeric', year: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short', timeZone }).format(instant);
+  return new Intl.DateTimeFormat('en-US', {
+    month: 'long',
+    day: 'numeric',
+    year: 'numeric',
+    hour: 'numeric',
+    minute: '2-digit',
+    timeZoneName: 'short',
+    timeZone,
+  }).format(instant);
 }
 
 /** "1 lb bag — Net Wt 16 oz (1 lb) 454 g"-style description of a bag size. */

@@ -24,7 +24,10 @@ export const orderConfirmed: EmailTemplate<'order-confirmed'> = {
         text: `Thank you: your payment went through. We will roast your coffee on ${formatDay(p.roastDate)}${p.shipDate ? ` and ship it on ${formatDay(p.shipDate)}` : ''}, once it has rested in the bag.`,
       });
     } else {
-      blocks.push({ kind: 'paragraph', text: 'Thank you: your payment went through. We will weigh out and pack your order, and e-mail you the tracking number when it ships.' });
+      blocks.push({
+        kind: 'paragraph',
+        text: 'Thank you: your payment went through. We will weigh out and pack your order, and e-mail you the tracking number when it ships.',
+      });
     }
     if (p.lines.length > 0) {
       const totals: [string, string][] = [];

@@ -9,7 +9,10 @@ export const roasted: EmailTemplate<'roasted'> = {
   content(p) {
     const blocks: Block[] = [
       { kind: 'paragraph', text: greeting(p.name) },
-      { kind: 'paragraph', text: `We roasted your coffee on ${formatDay(p.roastDate)}. It is resting in its bag now: the one-way valve lets the carbon dioxide out while the flavour settles.` },
+      {
+        kind: 'paragraph',
+        text: `We roasted your coffee on ${formatDay(p.roastDate)}. It is resting in its bag now: the one-way valve lets the carbon dioxide out while the flavour settles.`,
+      },
     ];
     if (p.lines.length > 0) blocks.push({ kind: 'lines', rows: p.lines.map((line) => ({ description: line.description, detail: lineDetail(line) })) });
     const rows: [string, string][] = [['Order', orderReference(p.orderId)]];

@@ -14,7 +14,11 @@ export const shipped: EmailTemplate<'shipped'> = {
     if (p.expectedArrival) rows.push(['Expected to arrive', formatDay(p.expectedArrival)]);
     if (p.readyFrom) rows.push(['Ready to brew from', formatDay(p.readyFrom)]);
     if (p.bestBefore) rows.push(['Best before', formatDay(p.bestBefore)]);
-    const blocks: Block[] = [{ kind: 'paragraph', text: greeting(p.name) }, { kind: 'paragraph', text: 'Your parcel has left the roastery.' }, { kind: 'facts', rows }];
+    const blocks: Block[] = [
+      { kind: 'paragraph', text: greeting(p.name) },
+      { kind: 'paragraph', text: 'Your parcel has left the roastery.' },
+      { kind: 'facts', rows },
+    ];
     if (p.trackingUrl) blocks.push({ kind: 'button', label: 'Track your parcel', url: p.trackingUrl });
     if (p.readyFrom && p.readyOnArrival) {
       blocks.push({

@@ -11,9 +11,15 @@ export const staffInvitation: EmailTemplate<'staff-invitation'> = {
       preheader: `${who} invited you to ${context.shop.name}.`,
       blocks: [
         { kind: 'paragraph', text: 'Hello,' },
-        { kind: 'paragraph', text: `${who} invited you to join ${context.shop.name} as ${as}. The Roastery is where the team plans roast days, records batches and packs orders.` },
+        {
+          kind: 'paragraph',
+          text: `${who} invited you to join ${context.shop.name} as ${as}. The Roastery is where the team plans roast days, records batches and packs orders.`,
+        },
         { kind: 'button', label: 'Accept the invitation', url: p.acceptUrl },
-        { kind: 'note', text: `The invitation expires ${formatInstant(p.expiresAt, context.timeZone)}. If you were not expecting it, you can ignore this e-mail.` },
+        {
+          kind: 'note',
+          text: `The invitation expires ${formatInstant(p.expiresAt, context.timeZone)}. If you were not expecting it, you can ignore this e-mail.`,
+        },
       ],
     };
   },

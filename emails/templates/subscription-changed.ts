@@ -37,8 +37,8 @@ function headline(p: Payload): { heading: string; text: string } {
         text: p.notice
           ? `${p.notice} Your ${p.coffee} subscription picks up again by itself.`
           : p.pausedUntil
-          ? `Your ${p.coffee} subscription is paused until ${formatDay(p.pausedUntil)}. We will not roast, ship or charge until then, and it picks up again by itself.`
-          : `Your ${p.coffee} subscription is paused. We will not roast, ship or charge until you resume it.`,
+            ? `Your ${p.coffee} subscription is paused until ${formatDay(p.pausedUntil)}. We will not roast, ship or charge until then, and it picks up again by itself.`
+            : `Your ${p.coffee} subscription is paused. We will not roast, ship or charge until you resume it.`,
       };
     case 'resumed':
       return { heading: 'Your subscription is back on', text: `Welcome back: your ${p.coffee} subscription is running again.` };

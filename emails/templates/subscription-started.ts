@@ -13,7 +13,10 @@ export const subscriptionStarted: EmailTemplate<'subscription-started'> = {
     if (p.firstRoastDate) rows.push(['First roast day', formatDay(p.firstRoastDate)]);
     const blocks: Block[] = [
       { kind: 'paragraph', text: greeting(p.name) },
-      { kind: 'paragraph', text: 'Welcome to Roasted to Order. We roast each delivery on a roast day, let it rest, then ship it: every delivery e-mail tells you the day it is ready to brew.' },
+      {
+        kind: 'paragraph',
+        text: 'Welcome to Roasted to Order. We roast each delivery on a roast day, let it rest, then ship it: every delivery e-mail tells you the day it is ready to brew.',
+      },
       { kind: 'facts', rows },
       { kind: 'paragraph', text: 'You can skip a delivery, pause, change your coffee or cancel at any time from your account.' },
       { kind: 'button', label: 'Manage your subscription', url: shopLink(context, '/account') },

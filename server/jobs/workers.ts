@@ -21,7 +21,14 @@ import { unpaidOrdersJob } from './unpaid-orders';
  * ./registry). The outbox relay is not among them: it runs beside them (see startWorkers).
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const jobs: JobDefinition<any>[] = [renewalRemindersJob, subscriptionStripeSyncJob, restDayEmailsJob, applyPaymentEventJob, paymentEventsSweepJob, unpaidOrdersJob];
+export const jobs: JobDefinition<any>[] = [
+  renewalRemindersJob,
+  subscriptionStripeSyncJob,
+  restDayEmailsJob,
+  applyPaymentEventJob,
+  paymentEventsSweepJob,
+  unpaidOrdersJob,
+];
 
 export interface WorkerDeps {
   config: Config;

@@ -44,7 +44,13 @@ function walk(stack: readonly Layer[], prefix: string, inherited: AccessRule, fo
       const routeAccess = handlers.reduce<AccessRule>((rule, handler) => stricter(rule, accessRuleOf(handler) ?? 'public'), access);
       const methods = Object.keys(layer.route.methods).filter((method) => method !== 'head');
       for (const routePath of pathsOf(layer.route.path)) {
-        for (const method of methods) found.push({ method: method === '_all' ? 'ALL' : method.toUpperCase(), path: joined(prefix, routePath), access: routeAccess, handler: handlers.at(-1)! });
+        for (const method of methods)
+          found.push({
+            method: method === '_all' ? 'ALL' : method.toUpperCase(),
+            path: joined(prefix, routePath),
+            access: routeAccess,
+            handler: handlers.at(-1)!,
+          });
       }
     } else if (layer.handle.stack) {
       for (const mountPath of pathsOf(layer.rawPath)) walk(layer.handle.stack, joined(prefix, mountPath), access, found);

@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { deliveryGreenGrams, deliveryToCharge, firstRoastDates, nextDelivery, planDeliveries, roastDatesWhenPaid, type KeptDelivery, type SubscriptionForPlan } from './delivery-plan';
+import {
+  deliveryGreenGrams,
+  deliveryToCharge,
+  firstRoastDates,
+  nextDelivery,
+  planDeliveries,
+  roastDatesWhenPaid,
+  type KeptDelivery,
+  type SubscriptionForPlan,
+} from './delivery-plan';
 import { defaultLossModel } from './roast-loss';
 import type { ScheduleSettings } from './roast-schedule';
 
@@ -26,7 +35,18 @@ const weekly: SubscriptionForPlan = { status: 'active', anchorDate: '2031-01-06'
 const now = new Date('2031-01-06T15:00:00Z');
 
 function row(nominalDate: string, overrides: Partial<KeptDelivery> = {}): KeptDelivery {
-  return { id: `row-${nominalDate}`, nominalDate, roastDate: nominalDate, shipDate: nominalDate, readyFrom: nominalDate, bestBefore: nominalDate, status: 'scheduled', orderId: null, choice: null, ...overrides };
+  return {
+    id: `row-${nominalDate}`,
+    nominalDate,
+    roastDate: nominalDate,
+    shipDate: nominalDate,
+    readyFrom: nominalDate,
+    bestBefore: nominalDate,
+    status: 'scheduled',
+    orderId: null,
+    choice: null,
+    ...overrides,
+  };
 }
 
 describe('planDeliveries', () => {
@@ -53,7 +73,9 @@ describe('planDeliveries', () => {
     // Monday 13 closed → Wednesday 15.
     expect(planDeliveries(weekly, [], settings, closed, now, 3).map((d) => d.roastDate)).toEqual(['2031-01-06', '2031-01-15', '2031-01-20']);
     expect(planDeliveries({ ...weekly, pausedUntil: '2031-01-25' }, [], settings, {}, now, 2).map((d) => d.roastDate)).toEqual(['2031-01-27', '2031-02-03']);
-    expect(planDeliveries({ ...weekly, cancelAtPeriodEnd: true }, [row('2031-01-13', { orderId: 'o' })], settings, {}, now, 3).map((d) => d.roastDate)).toEqual(['2031-01-13']);
+    expect(planDeliveries({ ...weekly, cancelAtPeriodEnd: true }, [row('2031-01-13', { orderId: 'o' })], settings, {}, now, 3).map((d) => d.roastDate)).toEqual(
+      ['2031-01-13'],
+    );
     expect(planDeliveries({ ...weekly, anchorDate: null }, [], settings, {}, now, 3)).toEqual([]);
   });
 

@@ -105,7 +105,16 @@ export function planDeliveries(
             expectedArrival: arrivalDate(row.shipDate, settings.transitDays),
           }
         : datesForRoastDate(row.roastDate, choice, settings, calendar);
-      return { ...dates, nominalDate: row.nominalDate, status: row.status, locked: isLocked(dates), orderId: row.orderId, choice, keptId: row.id, frozen: row.choice !== null };
+      return {
+        ...dates,
+        nominalDate: row.nominalDate,
+        status: row.status,
+        locked: isLocked(dates),
+        orderId: row.orderId,
+        choice,
+        keptId: row.id,
+        frozen: row.choice !== null,
+      };
     });
 
   const keptDates = new Set(kept.map((row) => row.nominalDate));
@@ -143,9 +152,7 @@ export function planDeliveries(
           }))
       : [];
 
-  return [...fromRows, ...fromGrid]
-    .sort((a, b) => a.roastDate.localeCompare(b.roastDate) || a.nominalDate.localeCompare(b.nominalDate))
-    .slice(0, count);
+  return [...fromRows, ...fromGrid].sort((a, b) => a.roastDate.localeCompare(b.roastDate) || a.nominalDate.localeCompare(b.nominalDate)).slice(0, count);
 }
 
 /** The delivery a charge pays for: a held one first, else the first neither paid nor skipped. */
@@ -175,6 +182,9 @@ export function roastDatesWhenPaid(delivery: PlannedDelivery, paidAt: Date, sett
  * Green coffee one delivery takes from its lot: the bags' fill weight plus the overage, over the
  * level's default loss (the Roast List's own rule). A lot holding less cannot roast a delivery.
  */
-export function deliveryGreenGrams(choice: Pick<DeliveryChoice, 'roastLevel' | 'bagSize' | 'bagsPerDelivery'>, settings: { lossModel: LossModel; overagePct: number }): number {
+export function deliveryGreenGrams(
+  choice: Pick<DeliveryChoice, 'roastLevel' | 'bagSize' | 'bagsPerDelivery'>,
+  settings: { lossModel: LossModel; overagePct: number },
+): number {
   return greenNeededForRoasted(bagFillGrams(choice.bagSize) * choice.bagsPerDelivery, settings.lossModel[choice.roastLevel].defaultPct, settings.overagePct);
 }

@@ -63,8 +63,7 @@ export interface RoastPhase {
 
 function phasesFor(profile: HomeRoastProfile, level: RoastLevel): RoastPhase[] {
   const afterCrack = profile.afterFirstCrackSeconds[level];
-  const afterCrackText =
-    afterCrack.min === afterCrack.max ? `about ${afterCrack.min} s` : `${afterCrack.min}–${afterCrack.max} s`;
+  const afterCrackText = afterCrack.min === afterCrack.max ? `about ${afterCrack.min} s` : `${afterCrack.min}–${afterCrack.max} s`;
   const phases: RoastPhase[] = [
     { name: 'Drying', cue: 'The beans turn from green to pale yellow and smell of cut grass or hay.' },
     {

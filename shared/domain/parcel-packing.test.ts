@@ -97,7 +97,9 @@ describe('shipping on real parcels of whole bags', () => {
     const small = { ...shipping, bands: [{ maxGrams: 2000, cents: 1195 }] };
     expect(() => planShipping([{ key: 'RD-101, green, 5lb', fillGrams: 2268, quantity: 1 }], small)).toThrow(BagTooHeavyForShipping);
     expect(() => planShipping([{ key: 'RD-101, green, 5lb', fillGrams: 2268, quantity: 1 }], small)).toThrow(/RD-101, green, 5lb.*2468 g.*2000 g/);
-    expect(() => planShipping([{ key: 'x', fillGrams: 10, quantity: 1 }], { ...shipping, bands: [{ maxGrams: 100, cents: 1 }] })).toThrow(/heavier than the empty box/);
+    expect(() => planShipping([{ key: 'x', fillGrams: 10, quantity: 1 }], { ...shipping, bands: [{ maxGrams: 100, cents: 1 }] })).toThrow(
+      /heavier than the empty box/,
+    );
   });
 });
 
@@ -110,7 +112,14 @@ function plainFirstFitCents(contents: readonly ParcelContent[]): number {
     if (at === -1) boxes.push(bag);
     else boxes[at]! += bag;
   }
-  const bandCents = (grams: number) => [[500, 695], [1000, 895], [2000, 1195], [5000, 1695], [10_000, 2495]].find(([max]) => grams <= max!)![1]!;
+  const bandCents = (grams: number) =>
+    [
+      [500, 695],
+      [1000, 895],
+      [2000, 1195],
+      [5000, 1695],
+      [10_000, 2495],
+    ].find(([max]) => grams <= max!)![1]!;
   return boxes.reduce((sum, grams) => sum + bandCents(grams + 180), 0);
 }
 
@@ -123,10 +132,13 @@ function bagsIn(plan: ShippingPlan): Map<string, number> {
 describe('any order', () => {
   it('holds every bag whole, keeps every parcel within the heaviest band, and costs no more than first-fit', () => {
     const fill = fc.constantFrom(227, 341, 454, 908, 2268);
-    const contents = fc.uniqueArray(fc.record({ key: fc.constantFrom<string>('a', 'b', 'c', 'd', 'e', 'f'), fillGrams: fill, quantity: fc.integer({ min: 1, max: 12 }) }), {
-      maxLength: 6,
-      selector: (item) => item.key,
-    });
+    const contents = fc.uniqueArray(
+      fc.record({ key: fc.constantFrom<string>('a', 'b', 'c', 'd', 'e', 'f'), fillGrams: fill, quantity: fc.integer({ min: 1, max: 12 }) }),
+      {
+        maxLength: 6,
+        selector: (item) => item.key,
+      },
+    );
     fc.assert(
       fc.property(contents, (items) => {
         const plan = planShipping(items, shipping);

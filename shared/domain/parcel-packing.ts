@@ -262,9 +262,7 @@ function nameBags(classes: readonly WeightClass[], parcels: readonly Counts[], p
 }
 
 function countsOf(classes: readonly WeightClass[], contents: readonly ParcelContent[]): Counts {
-  return classes.map((weightClass) =>
-    contents.filter((item) => weightClass.members.includes(item)).reduce((sum, item) => sum + item.quantity, 0),
-  );
+  return classes.map((weightClass) => contents.filter((item) => weightClass.members.includes(item)).reduce((sum, item) => sum + item.quantity, 0));
 }
 
 export function planShipping(contents: readonly ParcelContent[], shipping: ShippingSettings): ShippingPlan {
@@ -283,9 +281,7 @@ export function planShipping(contents: readonly ParcelContent[], shipping: Shipp
   for (let searched = Math.floor(firstFit.length / 2); searched >= 1; searched = Math.floor(searched / 2)) {
     const kept = firstFit.slice(0, firstFit.length - searched);
     const rest = firstFit.slice(firstFit.length - searched);
-    const restContents = rest.flatMap((parcel) =>
-      parcel.bags.map((bag) => ({ ...contents.find((item) => item.key === bag.key)!, quantity: bag.quantity })),
-    );
+    const restContents = rest.flatMap((parcel) => parcel.bags.map((bag) => ({ ...contents.find((item) => item.key === bag.key)!, quantity: bag.quantity })));
     const restClasses = weightClasses(restContents, packing);
     try {
       const counts = cheapestParcels(restClasses, countsOf(restClasses, restContents), packing);

@@ -7,7 +7,13 @@ import { greenBagSizes, roastedBagSizes } from './vocabulary';
 // Restday's default bands (shared/schemas/settings.ts; invented prices, no carrier's): ≤500 g $6.95, ≤1 kg $8.95,
 // ≤2 kg $11.95, ≤5 kg $16.95, ≤10 kg $24.95; bag tare 20 g, box tare 180 g.
 const shipping = defaultShopSettings.shipping;
-const lot = { pricePerKgCents: 2200, priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2000 }, { minGrams: 9072, pricePerKgCents: 1800 }] };
+const lot = {
+  pricePerKgCents: 2200,
+  priceBreaks: [
+    { minGrams: 2268, pricePerKgCents: 2000 },
+    { minGrams: 9072, pricePerKgCents: 1800 },
+  ],
+};
 
 function expectBalanced(quote: Quote): void {
   expect(quote.totalCents).toBe(quote.lines.reduce((sum, line) => sum + line.amountCents, 0));
@@ -29,7 +35,15 @@ describe('green coffee prices', () => {
     expect(pricePerKgFor(1362, lot)).toBe(2200); // 3 × 1 lb fill = 1,362 g: no break
     expect(pricePerKgFor(2270, lot)).toBe(2000); // 5 × 1 lb = 2,270 g ≥ 2,268 g
     expect(pricePerKgFor(9072, lot)).toBe(1800);
-    expect(pricePerKgFor(9072, { pricePerKgCents: 2200, priceBreaks: [{ minGrams: 9072, pricePerKgCents: 1800 }, { minGrams: 2268, pricePerKgCents: 2000 }] })).toBe(1800);
+    expect(
+      pricePerKgFor(9072, {
+        pricePerKgCents: 2200,
+        priceBreaks: [
+          { minGrams: 9072, pricePerKgCents: 1800 },
+          { minGrams: 2268, pricePerKgCents: 2000 },
+        ],
+      }),
+    ).toBe(1800);
   });
 
   it('quotes a green order with shipping and a zero tax line that adds up', () => {
@@ -49,7 +63,15 @@ describe('green coffee prices', () => {
     expect(quote.totalCents).toBe(4536 + 907 + 1695);
     expect(quote.lines.map((line) => line.kind)).toEqual(['item', 'item', 'shipping', 'tax']);
     expect(quote.shipping.parcels).toEqual([
-      { bags: [{ key: 'RD-101, green, 5lb', quantity: 1 }, { key: 'RD-101, green, 1lb', quantity: 1 }], grams: 2942, bandMaxGrams: 5000, cents: 1695 },
+      {
+        bags: [
+          { key: 'RD-101, green, 5lb', quantity: 1 },
+          { key: 'RD-101, green, 1lb', quantity: 1 },
+        ],
+        grams: 2942,
+        bandMaxGrams: 5000,
+        cents: 1695,
+      },
     ]);
     expectBalanced(quote);
     expect(() => quoteGreenOrder([{ lotCode: 'RD-999', size: '1lb', quantity: 1 }], {}, { shipping })).toThrow(/no price/);
@@ -64,7 +86,10 @@ describe('subscription deliveries', () => {
     expect(quote).toMatchObject({ subtotalCents: 3600, discountCents: 360, shippingCents: 895, taxCents: 0, totalCents: 4135 });
     expect(quote.lines[0]?.description).toMatch(/Roaster's Rotation/);
     expectBalanced(quote);
-    const noDiscount = quoteSubscriptionDelivery({ lotCode: 'RD-101', bagSize: '1lb', bagsPerDelivery: 1 }, { ...defaultShopSettings, subscriptionDiscountPct: 0 });
+    const noDiscount = quoteSubscriptionDelivery(
+      { lotCode: 'RD-101', bagSize: '1lb', bagsPerDelivery: 1 },
+      { ...defaultShopSettings, subscriptionDiscountPct: 0 },
+    );
     expect(noDiscount.lines.map((line) => line.kind)).toEqual(['item', 'shipping', 'tax']);
   });
 
@@ -76,7 +101,11 @@ describe('subscription deliveries', () => {
         fc.integer({ min: 1, max: 6 }),
         fc.integer({ min: 0, max: 5000 }).map((hundredths) => hundredths / 100),
         (bagSize, bags, discountPct) => {
-          const quote = quoteSubscriptionDelivery({ lotCode: 'RD-101', bagSize, bagsPerDelivery: bags }, { ...defaultShopSettings, subscriptionDiscountPct: discountPct }, flatTax);
+          const quote = quoteSubscriptionDelivery(
+            { lotCode: 'RD-101', bagSize, bagsPerDelivery: bags },
+            { ...defaultShopSettings, subscriptionDiscountPct: discountPct },
+            flatTax,
+          );
           expectBalanced(quote);
           expect(quote.taxCents).toBe(Math.round(quote.subtotalCents * 0.05));
         },

@@ -97,12 +97,8 @@ function shippingLine(plan: ShippingPlan): PriceLine {
 function assembleQuote(goods: readonly PriceLine[], shipping: ShippingPlan, taxRule: TaxRule): Quote {
   const lines = [...goods, shippingLine(shipping)];
   const taxCents = taxRule({ lines });
-  const all: PriceLine[] = [
-    ...lines,
-    { kind: 'tax', description: 'Sales tax', quantity: 1, unitCents: taxCents, amountCents: taxCents },
-  ];
-  const sumOf = (kind: PriceLine['kind']): number =>
-    sumMinor(all.filter((line) => line.kind === kind).map((line) => line.amountCents));
+  const all: PriceLine[] = [...lines, { kind: 'tax', description: 'Sales tax', quantity: 1, unitCents: taxCents, amountCents: taxCents }];
+  const sumOf = (kind: PriceLine['kind']): number => sumMinor(all.filter((line) => line.kind === kind).map((line) => line.amountCents));
   return {
     lines: all,
     subtotalCents: sumOf('item'),
@@ -152,17 +148,9 @@ export interface SubscriptionChoice {
   bagsPerDelivery: number;
 }
 
-export function quoteSubscriptionDelivery(
-  choice: SubscriptionChoice,
-  settings: PricingSettings,
-  taxRule: TaxRule = noSalesTax,
-): Quote {
+export function quoteSubscriptionDelivery(choice: SubscriptionChoice, settings: PricingSettings, taxRule: TaxRule = noSalesTax): Quote {
   const coffee = choice.lotCode ?? "Roaster's Rotation";
-  const bags = itemLine(
-    `${coffee}, roasted, ${choice.bagSize}`,
-    choice.bagsPerDelivery,
-    settings.roastedBagPriceCents[choice.bagSize],
-  );
+  const bags = itemLine(`${coffee}, roasted, ${choice.bagSize}`, choice.bagsPerDelivery, settings.roastedBagPriceCents[choice.bagSize]);
   const discountCents = percentOf(bags.amountCents, settings.subscriptionDiscountPct);
   const discount: PriceLine = {
     kind: 'discount',

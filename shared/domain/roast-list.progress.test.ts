@@ -22,7 +22,11 @@ describe('buildRoastList — what is still to roast', () => {
     // 5,000 g roasted already covered: 4,080 g to go; green ceil(4,080 × 1.02 ÷ 0.85) = ceil(4,896) = 4,896 g, one batch,
     // under the preferred 6,000 g (50 % of 12 kg), over the floor, within stock.
     const partly = buildRoastList(input({ coveredRoastedGrams: { 'RD-201': { medium: 5_000 } } }));
-    expect(partly.lines[0]).toMatchObject({ greenGrams: 10_896, batches: [{ greenGrams: 5_448 }, { greenGrams: 5_448 }], toRoast: { roastedGrams: 4_080, greenGrams: 4_896, batches: [{ greenGrams: 4_896 }] } });
+    expect(partly.lines[0]).toMatchObject({
+      greenGrams: 10_896,
+      batches: [{ greenGrams: 5_448 }, { greenGrams: 5_448 }],
+      toRoast: { roastedGrams: 4_080, greenGrams: 4_896, batches: [{ greenGrams: 4_896 }] },
+    });
     expect(partly.pull).toEqual([{ lotCode: 'RD-201', greenGrams: 4_896, stockGrams: 8_000, shortfallGrams: 0 }]);
     expect(partly.warnings.map((warning) => warning.code)).toEqual(['below_preferred_load']);
   });

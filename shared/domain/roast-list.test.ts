@@ -74,7 +74,10 @@ describe('buildRoastList', () => {
     expect(list.lines[1]?.greenGrams).toBe(5293);
     expect(list.lines[2]?.greenGrams).toBe(5718);
     expect(list.pull[1]).toEqual({ lotCode: 'RD-102', greenGrams: 11_011, stockGrams: 9_000, shortfallGrams: 2_011 });
-    expect(list.warnings.find((warning) => warning.code === 'green_shortfall')).toMatchObject({ lotCode: 'RD-102', message: expect.stringContaining('2,011 g short') });
+    expect(list.warnings.find((warning) => warning.code === 'green_shortfall')).toMatchObject({
+      lotCode: 'RD-102',
+      message: expect.stringContaining('2,011 g short'),
+    });
   });
 
   it('proposes raising a batch under the floor, and warns when the day is over capacity', () => {
@@ -91,7 +94,13 @@ describe('buildRoastList', () => {
   it('treats a lot with no stock record as out of stock, and an empty day as empty', () => {
     const list = buildRoastList(input([{ lotCode: 'RD-777', roastLevel: 'medium', fillGrams: 9000, quantity: 1 }]));
     expect(list.pull[0]).toMatchObject({ stockGrams: 0, shortfallGrams: list.pull[0]?.greenGrams });
-    expect(buildRoastList(input([]))).toEqual({ date: '2025-03-05', lines: [], pull: [], totals: { roastedGrams: 0, greenGrams: 0, batches: 0, toRoast: { roastedGrams: 0, greenGrams: 0, batches: 0 } }, warnings: [] });
+    expect(buildRoastList(input([]))).toEqual({
+      date: '2025-03-05',
+      lines: [],
+      pull: [],
+      totals: { roastedGrams: 0, greenGrams: 0, batches: 0, toRoast: { roastedGrams: 0, greenGrams: 0, batches: 0 } },
+      warnings: [],
+    });
     expect(() => buildRoastList(input([{ lotCode: 'RD-101', roastLevel: 'medium', fillGrams: 341, quantity: 0 }]))).toThrow(RangeError);
     expect(() => buildRoastList(input([{ lotCode: 'RD-101', roastLevel: 'blonde' as 'light', fillGrams: 341, quantity: 1 }]))).toThrow(/unknown roast level/);
   });
@@ -101,7 +110,12 @@ describe('buildRoastList', () => {
     const lotCode = fc
       .tuple(fc.constantFrom('ET', 'CO', 'KE', 'GT', 'BR', 'PE'), fc.integer({ min: 0, max: 60 }))
       .map(([origin, number]) => `${origin}-${String(number % 12).padStart(2, '0')}${'x'.repeat(number >= 12 ? number % 5 : 0)}`);
-    const line = fc.record({ lotCode, roastLevel: fc.constantFrom(...roastLevels), fillGrams: fc.integer({ min: 1, max: 3000 }), quantity: fc.integer({ min: 1, max: 5 }) });
+    const line = fc.record({
+      lotCode,
+      roastLevel: fc.constantFrom(...roastLevels),
+      fillGrams: fc.integer({ min: 1, max: 3000 }),
+      quantity: fc.integer({ min: 1, max: 5 }),
+    });
     fc.assert(
       fc.property(fc.array(line, { minLength: 1, maxLength: 600 }), (lines) => {
         const expected = new Map<string, { roasted: number; bags: number }>();
@@ -111,7 +125,9 @@ describe('buildRoastList', () => {
           expected.set(key, { roasted: total.roasted + each.fillGrams * each.quantity, bags: total.bags + each.quantity });
         }
         const list = buildRoastList(input(lines));
-        expect(new Map(list.lines.map((planned) => [`${planned.lotCode} ${planned.roastLevel}`, { roasted: planned.roastedGrams, bags: planned.bags }]))).toEqual(expected);
+        expect(
+          new Map(list.lines.map((planned) => [`${planned.lotCode} ${planned.roastLevel}`, { roasted: planned.roastedGrams, bags: planned.bags }])),
+        ).toEqual(expected);
         // Lines run by lot code, then from light to French.
         const keys = list.lines.map((planned) => [planned.lotCode, roastLevels.indexOf(planned.roastLevel)] as const);
         expect(keys).toEqual([...keys].sort((a, b) => (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : a[1] - b[1])));

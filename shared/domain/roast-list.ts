@@ -13,14 +13,7 @@
  * shipped. What is still to roast is the roasted weight not yet covered (`coveredRoastedGrams`),
  * planned the same way; the pull list and the warnings count only that.
  */
-import {
-  checkDayCapacity,
-  HARD_FLOOR_LOAD_PCT,
-  planBatches,
-  type BatchPlan,
-  type FloorProposal,
-  type RoasterSettings,
-} from './batch-planner';
+import { checkDayCapacity, HARD_FLOOR_LOAD_PCT, planBatches, type BatchPlan, type FloorProposal, type RoasterSettings } from './batch-planner';
 import { greenNeededForRoasted, resolveExpectedLoss, type LossModel, type LotLossRecord } from './roast-loss';
 import { roastLevels, type RoastLevel } from './vocabulary';
 
@@ -144,13 +137,7 @@ function newTable(capacity: number): TotalsTable {
 // Lot codes mostly differ in their last characters (numbering); levels differ in length and first letter.
 function slotHash(lotCode: string, level: string): number {
   const length = lotCode.length;
-  return (
-    length * 7 +
-    lotCode.charCodeAt(length - 1) * 37 +
-    lotCode.charCodeAt(length - 2) * 1031 +
-    level.length * 59 +
-    level.charCodeAt(0) * 3
-  );
+  return length * 7 + lotCode.charCodeAt(length - 1) * 37 + lotCode.charCodeAt(length - 2) * 1031 + level.length * 59 + level.charCodeAt(0) * 3;
 }
 
 /** The slot holding (lotCode, level), claiming an empty one when the pair is new (checked then). */
@@ -286,12 +273,7 @@ export function buildRoastList(input: RoastListInput): RoastList {
     let lotGreenToPull = 0;
     for (const group of lotGroups) {
       const { roastLevel } = group;
-      const loss = resolveExpectedLoss(
-        roastLevel,
-        settings.lossModel,
-        input.lotLoss?.[lotCode]?.[roastLevel],
-        settings.lossModelMinBatches,
-      );
+      const loss = resolveExpectedLoss(roastLevel, settings.lossModel, input.lotLoss?.[lotCode]?.[roastLevel], settings.lossModelMinBatches);
       const greenGrams = greenNeededForRoasted(group.roastedGrams, loss.lossPct, settings.overagePct);
       const plan = planBatches(greenGrams, settings.roaster, loss.lossPct);
       const covered = input.coveredRoastedGrams?.[lotCode]?.[roastLevel] ?? 0;

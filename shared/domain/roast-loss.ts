@@ -100,12 +100,7 @@ export interface ExpectedLoss {
  * mass-weighted measured loss (1 − Σ roasted ÷ Σ green) replaces the default, rounded UP to
  * 0.01 % so a measured figure never under-plans green.
  */
-export function resolveExpectedLoss(
-  level: RoastLevel,
-  lossModel: LossModel,
-  lotRecord?: LotLossRecord,
-  minBatches = DEFAULT_LOSS_MIN_BATCHES,
-): ExpectedLoss {
+export function resolveExpectedLoss(level: RoastLevel, lossModel: LossModel, lotRecord?: LotLossRecord, minBatches = DEFAULT_LOSS_MIN_BATCHES): ExpectedLoss {
   const range = lossModel[level];
   if (!lotRecord || lotRecord.batchCount < minBatches || lotRecord.greenGramsIn <= 0) {
     return { lossPct: range.defaultPct, source: 'level', range };
@@ -123,21 +118,11 @@ export interface BatchLossAssessment {
 }
 
 /** Compares exactly (no rounding) against the range, so a batch on the edge is within it. */
-export function assessBatchLoss(
-  level: RoastLevel,
-  greenGrams: number,
-  roastedGrams: number,
-  lossModel: LossModel,
-): BatchLossAssessment {
+export function assessBatchLoss(level: RoastLevel, greenGrams: number, roastedGrams: number, lossModel: LossModel): BatchLossAssessment {
   const lossPct = lossPctOf(greenGrams, roastedGrams);
   const range = lossModel[level];
   const lostScaled = (greenGrams - roastedGrams) * WHOLE;
-  const position =
-    lostScaled < toHundredths(range.minPct) * greenGrams
-      ? 'below'
-      : lostScaled > toHundredths(range.maxPct) * greenGrams
-        ? 'above'
-        : 'within';
+  const position = lostScaled < toHundredths(range.minPct) * greenGrams ? 'below' : lostScaled > toHundredths(range.maxPct) * greenGrams ? 'above' : 'within';
   return { lossPct, withinExpected: position === 'within', position };
 }
 
@@ -160,11 +145,7 @@ export function estimateLevelFromLoss(lossPct: number, lossModel: LossModel): Le
     const max = toHundredths(range.maxPct);
     const distance = loss < min ? min - loss : loss > max ? loss - max : 0;
     const defaultDistance = Math.abs(loss - toHundredths(range.defaultPct));
-    if (
-      !best ||
-      distance < best.distance ||
-      (distance === best.distance && defaultDistance < best.defaultDistance)
-    ) {
+    if (!best || distance < best.distance || (distance === best.distance && defaultDistance < best.defaultDistance)) {
       best = { level, distance, defaultDistance };
     }
   }

@@ -78,7 +78,10 @@ describe('Roast Journal metrics', () => {
 describe('batch metrics', () => {
   it('reports loss inside the range and a development ratio on target', () => {
     // 10 kg in, 8.5 kg out = 15 %: medium 14–16 % (usual trade figures, from memory); 132 s of 600 s = 22 % (S. Rao 2016 target 20–25 %)
-    const result = batchMetrics({ roastLevel: 'medium', greenGramsIn: 10_000, roastedGramsOut: 8_500, totalSeconds: 600, firstCrackSeconds: 468 }, defaultLossModel);
+    const result = batchMetrics(
+      { roastLevel: 'medium', greenGramsIn: 10_000, roastedGramsOut: 8_500, totalSeconds: 600, firstCrackSeconds: 468 },
+      defaultLossModel,
+    );
     expect(result).toEqual({
       ok: true,
       value: { lossPct: 15, withinExpected: true, lossPosition: 'within', developmentSeconds: 132, developmentTimeRatio: 22, developmentWithinTarget: true },
@@ -86,7 +89,10 @@ describe('batch metrics', () => {
   });
 
   it('flags a loss outside the level range and a short development', () => {
-    const result = batchMetrics({ roastLevel: 'dark', greenGramsIn: 10_000, roastedGramsOut: 8_700, totalSeconds: 720, firstCrackSeconds: 660 }, defaultLossModel);
+    const result = batchMetrics(
+      { roastLevel: 'dark', greenGramsIn: 10_000, roastedGramsOut: 8_700, totalSeconds: 720, firstCrackSeconds: 660 },
+      defaultLossModel,
+    );
     expect(result.ok && result.value).toMatchObject({ lossPct: 13, withinExpected: false, lossPosition: 'below', developmentWithinTarget: false });
   });
 

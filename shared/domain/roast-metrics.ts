@@ -68,9 +68,7 @@ function checkTimes({ yellow, firstCrack, end }: TimeFields, fields: FieldErrors
   if (end.value !== undefined && !fields[end.name] && end.value === 0) {
     fields[end.name] = 'The roast must last more than 0 seconds.';
   }
-  const ordered = [yellow, firstCrack, end].filter(
-    (field): field is { name: string; value: number } => field?.value !== undefined && !fields[field.name],
-  );
+  const ordered = [yellow, firstCrack, end].filter((field): field is { name: string; value: number } => field?.value !== undefined && !fields[field.name]);
   for (let index = 1; index < ordered.length; index += 1) {
     const earlier = ordered[index - 1] as { name: string; value: number };
     const later = ordered[index] as { name: string; value: number };
@@ -105,16 +103,9 @@ export interface JournalMetrics {
   comparedWithSuggestion?: 'lighter' | 'same' | 'darker';
 }
 
-export function journalMetrics(
-  entry: JournalEntryInput,
-  lossModel: LossModel,
-  suggestedLevel?: RoastLevel,
-): MetricsResult<JournalMetrics> {
+export function journalMetrics(entry: JournalEntryInput, lossModel: LossModel, suggestedLevel?: RoastLevel): MetricsResult<JournalMetrics> {
   const fields: FieldErrors = {};
-  checkWeights(
-    { green: { name: 'greenGrams', value: entry.greenGrams }, roasted: { name: 'roastedGrams', value: entry.roastedGrams } },
-    fields,
-  );
+  checkWeights({ green: { name: 'greenGrams', value: entry.greenGrams }, roasted: { name: 'roastedGrams', value: entry.roastedGrams } }, fields);
   checkTimes(
     {
       yellow: { name: 'yellowSeconds', value: entry.yellowSeconds },

@@ -109,7 +109,11 @@ describe('ready on arrival: the Mon 9 Feb 2026 example', () => {
   it('espresso: after the degassing hold it lands Fri 13, three days before it is ready', () => {
     // Roast Mon 9 Feb; ready Mon 16 Feb (+7). Hold → Tue 10 → Wed 11, Thu 12, Fri 13. The customer
     // is told the ready-from date. With the weekend hold too: Tue 10's transit has no weekend.
-    expect(datesForRoastDate('2026-02-09', espresso, straight)).toMatchObject({ shipDate: '2026-02-10', readyFrom: '2026-02-16', expectedArrival: '2026-02-13' });
+    expect(datesForRoastDate('2026-02-09', espresso, straight)).toMatchObject({
+      shipDate: '2026-02-10',
+      readyFrom: '2026-02-16',
+      expectedArrival: '2026-02-13',
+    });
     expect(shipAndArrival(datesForRoastDate('2026-02-09', espresso, weekendOnly))).toEqual(['2026-02-10', '2026-02-13']);
   });
 
@@ -125,7 +129,11 @@ describe('ready on arrival: the Mon 9 Feb 2026 example', () => {
   it('filter: ready Wed 11, so it ships Tue 10 under either policy', () => {
     // Tue 10 → Fri 13 ≥ Wed 11, and no weekend in transit.
     for (const settings of [straight, readyOnly, weekendOnly, shop]) {
-      expect(datesForRoastDate('2026-02-09', filter, settings)).toMatchObject({ shipDate: '2026-02-10', readyFrom: '2026-02-11', expectedArrival: '2026-02-13' });
+      expect(datesForRoastDate('2026-02-09', filter, settings)).toMatchObject({
+        shipDate: '2026-02-10',
+        readyFrom: '2026-02-11',
+        expectedArrival: '2026-02-13',
+      });
     }
   });
 

@@ -295,20 +295,25 @@ describe('subscription deliveries', () => {
   it('never drifts: each delivery is the first open roast day on or after its grid date', () => {
     const closures = fc.uniqueArray(fc.integer({ min: 0, max: 200 }), { maxLength: 40 });
     fc.assert(
-      fc.property(closures, fc.constantFrom(1, 2, 3, 4 as const), fc.uniqueArray(fc.integer({ min: 0, max: 8 }), { maxLength: 3 }), (closed, cadence, skips) => {
-        const cadenceWeeks = cadence as 1 | 2 | 3 | 4;
-        const calendar: RoastCalendar = { overrides: Object.fromEntries(closed.map((offset) => [addDays('2025-03-05', offset), { open: false }])) };
-        const skippedDates = skips.map((index) => addDays('2025-03-05', index * 7 * cadenceWeeks));
-        const deliveries = subscriptionDeliveries({ ...base, cadenceWeeks, count: 8, skippedDates }, shop, calendar);
-        deliveries.forEach((delivery, index) => {
-          expect(delivery.nominalDate).toBe(addDays('2025-03-05', index * 7 * cadenceWeeks));
-          expect(isOpenRoastDay(delivery.roastDate, shop, calendar)).toBe(true);
-          for (let date = delivery.nominalDate; date < delivery.roastDate; date = addDays(date, 1)) {
-            expect(isOpenRoastDay(date, shop, calendar)).toBe(false);
-          }
-          expect(delivery.status).toBe(skippedDates.includes(delivery.nominalDate) ? 'skipped' : 'scheduled');
-        });
-      }),
+      fc.property(
+        closures,
+        fc.constantFrom(1, 2, 3, 4 as const),
+        fc.uniqueArray(fc.integer({ min: 0, max: 8 }), { maxLength: 3 }),
+        (closed, cadence, skips) => {
+          const cadenceWeeks = cadence as 1 | 2 | 3 | 4;
+          const calendar: RoastCalendar = { overrides: Object.fromEntries(closed.map((offset) => [addDays('2025-03-05', offset), { open: false }])) };
+          const skippedDates = skips.map((index) => addDays('2025-03-05', index * 7 * cadenceWeeks));
+          const deliveries = subscriptionDeliveries({ ...base, cadenceWeeks, count: 8, skippedDates }, shop, calendar);
+          deliveries.forEach((delivery, index) => {
+            expect(delivery.nominalDate).toBe(addDays('2025-03-05', index * 7 * cadenceWeeks));
+            expect(isOpenRoastDay(delivery.roastDate, shop, calendar)).toBe(true);
+            for (let date = delivery.nominalDate; date < delivery.roastDate; date = addDays(date, 1)) {
+              expect(isOpenRoastDay(date, shop, calendar)).toBe(false);
+            }
+            expect(delivery.status).toBe(skippedDates.includes(delivery.nominalDate) ? 'skipped' : 'scheduled');
+          });
+        },
+      ),
     );
   });
 });

@@ -133,7 +133,7 @@ function firstShipDayFrom(start: IsoDate, settings: ScheduleSettings, calendar: 
 /** The date after `transitDays` transit days (business days that are not carrier holidays). */
 export function arrivalDate(shipDate: IsoDate, transitDays: number): IsoDate {
   let date = shipDate;
-  for (let remaining = transitDays; remaining > 0; ) {
+  for (let remaining = transitDays; remaining > 0;) {
     date = addDays(date, 1);
     if (isTransitDay(date)) remaining -= 1;
   }
@@ -153,14 +153,10 @@ export function crossesWeekend(shipDate: IsoDate, expectedArrival: IsoDate): boo
  * ready to brew from `readyFrom`: the first ship day the ship policy and the weekend hold accept.
  */
 export function shipDateFor(earliest: IsoDate, readyFrom: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): IsoDate {
-  const readyOnArrival = (date: IsoDate) =>
-    settings.shipPolicy !== 'ready_on_arrival' || arrivalDate(date, settings.transitDays) >= readyFrom;
+  const readyOnArrival = (date: IsoDate) => settings.shipPolicy !== 'ready_on_arrival' || arrivalDate(date, settings.transitDays) >= readyFrom;
   const byPolicy = firstShipDayFrom(earliest, settings, calendar, readyOnArrival);
   if (!settings.holdOverWeekend) return byPolicy;
-  const noWeekend = firstDayFrom(
-    byPolicy,
-    (date) => isShipDay(date, settings, calendar) && !crossesWeekend(date, arrivalDate(date, settings.transitDays)),
-  );
+  const noWeekend = firstDayFrom(byPolicy, (date) => isShipDay(date, settings, calendar) && !crossesWeekend(date, arrivalDate(date, settings.transitDays)));
   return noWeekend ?? byPolicy;
 }
 
@@ -183,12 +179,7 @@ export function restDaysFor(coffee: CoffeeForRest, settings: ScheduleSettings): 
   return Math.max(0, settings.restDays[coffee.brewMethod] + settings.restAdjustDays[coffee.roastLevel]);
 }
 
-export function datesForRoastDate(
-  roastDate: IsoDate,
-  coffee: CoffeeForRest,
-  settings: ScheduleSettings,
-  calendar: RoastCalendar = {},
-): RoastDates {
+export function datesForRoastDate(roastDate: IsoDate, coffee: CoffeeForRest, settings: ScheduleSettings, calendar: RoastCalendar = {}): RoastDates {
   const readyFrom = addDays(roastDate, restDaysFor(coffee, settings));
   const shipDate = shipDateFor(addDays(roastDate, settings.degasHoldDays), readyFrom, settings, calendar);
   return {
@@ -202,12 +193,7 @@ export function datesForRoastDate(
 }
 
 /** The dates of a parcel of several coffees roasted on one day: the slowest-resting bag decides. */
-export function datesForLines(
-  roastDate: IsoDate,
-  lines: readonly CoffeeForRest[],
-  settings: ScheduleSettings,
-  calendar: RoastCalendar = {},
-): RoastDates {
+export function datesForLines(roastDate: IsoDate, lines: readonly CoffeeForRest[], settings: ScheduleSettings, calendar: RoastCalendar = {}): RoastDates {
   const slowest = lines.reduce<CoffeeForRest | undefined>(
     (current, line) => (current === undefined || restDaysFor(line, settings) > restDaysFor(current, settings) ? line : current),
     undefined,
@@ -221,11 +207,7 @@ export interface OrderToSchedule extends CoffeeForRest {
   greenGrams: number;
 }
 
-export function scheduleOrder(
-  order: OrderToSchedule,
-  settings: ScheduleSettings,
-  calendar: RoastCalendar = {},
-): RoastDates {
+export function scheduleOrder(order: OrderToSchedule, settings: ScheduleSettings, calendar: RoastCalendar = {}): RoastDates {
   const paidMs = order.paidAt.getTime();
   const paidDate = localDateOf(order.paidAt, settings.timeZone);
   const roastDate = firstDayFrom(
@@ -267,11 +249,7 @@ export interface ScheduledDelivery extends RoastDates {
   locked: boolean;
 }
 
-export function subscriptionDeliveries(
-  subscription: SubscriptionForSchedule,
-  settings: ScheduleSettings,
-  calendar: RoastCalendar = {},
-): ScheduledDelivery[] {
+export function subscriptionDeliveries(subscription: SubscriptionForSchedule, settings: ScheduleSettings, calendar: RoastCalendar = {}): ScheduledDelivery[] {
   const periodDays = subscription.cadenceWeeks * 7;
   const from = subscription.from ?? localDateOf(subscription.now, settings.timeZone);
   const skipped = new Set(subscription.skippedDates ?? []);
@@ -316,12 +294,7 @@ export interface CalendarDay {
 
 export const MAX_CALENDAR_SPAN_DAYS = 366;
 
-export function roastCalendarDays(
-  from: IsoDate,
-  to: IsoDate,
-  settings: ScheduleSettings,
-  calendar: RoastCalendar = {},
-): CalendarDay[] {
+export function roastCalendarDays(from: IsoDate, to: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): CalendarDay[] {
   const span = daysBetween(from, to);
   if (span < 0 || span >= MAX_CALENDAR_SPAN_DAYS) {
     throw new RangeError(`the range must run forwards and span at most ${MAX_CALENDAR_SPAN_DAYS} days`);
@@ -342,11 +315,7 @@ export function roastCalendarDays(
   });
 }
 
-export function greenOrderDates(
-  paidAt: Date,
-  settings: ScheduleSettings,
-  calendar: RoastCalendar = {},
-): { shipDate: IsoDate; expectedArrival: IsoDate } {
+export function greenOrderDates(paidAt: Date, settings: ScheduleSettings, calendar: RoastCalendar = {}): { shipDate: IsoDate; expectedArrival: IsoDate } {
   const paidDate = localDateOf(paidAt, settings.timeZone);
   const beforeCutoff = paidAt.getTime() < instantAt(paidDate, settings.cutoff.time, settings.timeZone).getTime();
   const shipDate = firstShipDayFrom(beforeCutoff ? paidDate : addDays(paidDate, 1), settings, calendar);

@@ -159,9 +159,7 @@ export function instantAt(date: IsoDate, time: string, timeZone: string): Date {
   // Offsets a day either side straddle at most one change; try both and keep those that round-trip.
   const offsetBefore = offsetMsAt(wallMs - MS_PER_DAY, timeZone);
   const offsetAfter = offsetMsAt(wallMs + MS_PER_DAY, timeZone);
-  const candidates = [wallMs - offsetBefore, wallMs - offsetAfter].filter(
-    (ms) => ms + offsetMsAt(ms, timeZone) === wallMs,
-  );
+  const candidates = [wallMs - offsetBefore, wallMs - offsetAfter].filter((ms) => ms + offsetMsAt(ms, timeZone) === wallMs);
   if (candidates.length === 0) return new Date(wallMs - offsetBefore);
   return new Date(Math.min(...candidates));
 }

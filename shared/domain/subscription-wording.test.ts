@@ -12,7 +12,9 @@ describe('what a subscriber is told', () => {
     expect(skipNotice({ roastDate: '2026-12-03', paymentMovesTo: '2026-12-10' })).toBe(
       'Skipped the delivery roasting Thursday, December 3, 2026. It is already paid, so your payment moves to the delivery of Thursday, December 10, 2026.',
     );
-    expect(skipNotice({ roastDate: '2026-12-03' })).toBe('Skipped the delivery roasting Thursday, December 3, 2026. It will not be roasted, shipped or charged.');
+    expect(skipNotice({ roastDate: '2026-12-03' })).toBe(
+      'Skipped the delivery roasting Thursday, December 3, 2026. It will not be roasted, shipped or charged.',
+    );
   });
 
   it('undo and pause notices carry no ISO dates', () => {

@@ -49,7 +49,8 @@ export interface PauseOutcome {
 export function pauseNotice({ until, shipping, held }: PauseOutcome): string {
   const parts = [`Paused until ${writtenDay(until)}.`];
   for (const day of shipping) parts.push(`The paid delivery roasting ${writtenDay(day)} still roasts and ships.`);
-  for (const { from, to } of held) parts.push(`The paid delivery roasting ${writtenDay(from)} is held: your payment moves to the delivery of ${writtenDay(to)}.`);
+  for (const { from, to } of held)
+    parts.push(`The paid delivery roasting ${writtenDay(from)} is held: your payment moves to the delivery of ${writtenDay(to)}.`);
   return parts.join(' ');
 }
 

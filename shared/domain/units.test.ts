@@ -1,16 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  bagFillGrams,
-  fillGrams,
-  GRAMS_PER_OUNCE,
-  GRAMS_PER_POUND,
-  gramsToOunces,
-  gramsToPounds,
-  parseQuantity,
-  toGrams,
-  type MassUnit,
-} from './units';
+import { bagFillGrams, fillGrams, GRAMS_PER_OUNCE, GRAMS_PER_POUND, gramsToOunces, gramsToPounds, parseQuantity, toGrams, type MassUnit } from './units';
 
 describe('exact conversion factors', () => {
   it('uses the defined pound and ounce', () => {

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 
 const addressLine = (what: string, max: number) =>
-  z.string({ error: `Enter the ${what}.` }).trim().min(1, `Enter the ${what}.`).max(max, `Use at most ${max} characters.`);
+  z
+    .string({ error: `Enter the ${what}.` })
+    .trim()
+    .min(1, `Enter the ${what}.`)
+    .max(max, `Use at most ${max} characters.`);
 
 /** The fields of a postal address, in the order a form and a label show them. */
 export const postalAddressFields = ['name', 'line1', 'line2', 'city', 'region', 'postalCode', 'country'] as const;

@@ -24,7 +24,10 @@ export const newPasswordSchema = z
   });
 
 /** A password someone already has: never judged by today's rules, only checked against its hash. */
-export const currentPasswordSchema = z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(4 * PASSWORD_MAX_LENGTH);
+export const currentPasswordSchema = z
+  .string({ error: 'Enter your password.' })
+  .min(1, 'Enter your password.')
+  .max(4 * PASSWORD_MAX_LENGTH);
 
 /** E-mail addresses are trimmed and stored lower-case, so Sam@Example.test and sam@example.test are one account. */
 export const emailSchema = z
@@ -35,11 +38,7 @@ export const emailSchema = z
   .max(254, 'That e-mail address is too long.')
   .pipe(z.email('Enter an e-mail address like name@example.com.'));
 
-export const personNameSchema = z
-  .string({ error: 'Enter your name.' })
-  .trim()
-  .min(1, 'Enter your name.')
-  .max(100, 'Use at most 100 characters.');
+export const personNameSchema = z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(100, 'Use at most 100 characters.');
 
 /** Single-use tokens from e-mailed links (password reset, team invitation). */
 export const linkTokenSchema = z.string({ error: 'This link is not complete.' }).regex(/^[\w-]{20,200}$/, 'This link is not complete.');

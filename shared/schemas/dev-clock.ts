@@ -5,7 +5,10 @@ import { instant } from './dates';
 export const devClockBodySchema = z.object({
   now: z.iso
     .datetime({ offset: true })
-    .refine((now) => Date.parse(now) >= Date.parse('2000-01-01T00:00:00Z') && Date.parse(now) < Date.parse('2101-01-01T00:00:00Z'), 'Use an instant between 2000 and 2100.'),
+    .refine(
+      (now) => Date.parse(now) >= Date.parse('2000-01-01T00:00:00Z') && Date.parse(now) < Date.parse('2101-01-01T00:00:00Z'),
+      'Use an instant between 2000 and 2100.',
+    ),
 });
 export type DevClockBody = z.infer<typeof devClockBodySchema>;
 

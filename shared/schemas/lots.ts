@@ -2,9 +2,7 @@ import { z } from 'zod';
 import { isRoastGuideDevice, roastGuideDevices } from '../domain/home-roast-guide';
 import { processes, roastLevels, stockMovementReasons } from '../domain/vocabulary';
 
-const booleanFlag = z
-  .enum(['true', 'false', '1', '0'])
-  .transform((value) => value === 'true' || value === '1');
+const booleanFlag = z.enum(['true', 'false', '1', '0']).transform((value) => value === 'true' || value === '1');
 
 const pricePerKgBound = z.coerce
   .number({ error: 'must be a whole number of cents per kg' })
@@ -28,11 +26,10 @@ export const lotListQuerySchema = z
     maxPricePerKgCents: pricePerKgBound.optional(),
     sort: z.enum(lotSorts).optional(),
   })
-  .refine(
-    (query) =>
-      query.minPricePerKgCents === undefined || query.maxPricePerKgCents === undefined || query.minPricePerKgCents <= query.maxPricePerKgCents,
-    { path: ['minPricePerKgCents'], message: 'must not be more than maxPricePerKgCents' },
-  );
+  .refine((query) => query.minPricePerKgCents === undefined || query.maxPricePerKgCents === undefined || query.minPricePerKgCents <= query.maxPricePerKgCents, {
+    path: ['minPricePerKgCents'],
+    message: 'must not be more than maxPricePerKgCents',
+  });
 export type LotListQuery = z.infer<typeof lotListQuerySchema>;
 
 export const lotSummarySchema = z.object({

@@ -3,7 +3,6 @@ import { postalAddressSchema } from './address';
 import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
-
 /** `status` follows an order's life (awaiting payment first, refunded last); roast-date sorts put orders without a roast date last. */
 export const orderSorts = ['newest', 'oldest', 'total-high', 'total-low', 'roast-date-soonest', 'roast-date-latest', 'status'] as const;
 export type OrderSort = (typeof orderSorts)[number];

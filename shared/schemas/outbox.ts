@@ -30,4 +30,3 @@ export type OutboxItem = z.infer<typeof outboxItemSchema>;
 
 export const outboxListResponseSchema = z.object({ items: z.array(outboxItemSchema) });
 export type OutboxListResponse = z.infer<typeof outboxListResponseSchema>;
-

@@ -2,7 +2,6 @@ import { z } from 'zod';
 import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
-
 /** Path of `GET /api/roastery/days/:date/pack-list` and `…/labels.pdf`: a ship day in shop time. */
 export const packDayParamsSchema = z.object({ date: isoDate('date') });
 export type PackDayParams = z.infer<typeof packDayParamsSchema>;
@@ -69,11 +68,7 @@ export type PackListResponse = z.infer<typeof packListResponseSchema>;
 
 /** Body of `POST /api/orders/:id/ship`. The tracking number is kept upper-case without spaces. */
 export const shipOrderBodySchema = z.object({
-  carrier: z
-    .string({ error: 'Name the carrier.' })
-    .trim()
-    .min(1, 'Name the carrier.')
-    .max(60, 'Keep the carrier to 60 characters.'),
+  carrier: z.string({ error: 'Name the carrier.' }).trim().min(1, 'Name the carrier.').max(60, 'Keep the carrier to 60 characters.'),
   trackingNumber: z
     .string({ error: 'Enter the tracking number.' })
     .trim()
@@ -90,7 +85,11 @@ export type RefundReason = (typeof refundReasons)[number];
 
 /** Body of `POST /api/orders/:id/refund` (owner). No amount: whatever is not refunded yet. */
 export const refundOrderBodySchema = z.object({
-  amountCents: z.number({ error: 'Give the amount in whole cents.' }).int('Give the amount in whole cents.').positive('The amount must be more than zero.').optional(),
+  amountCents: z
+    .number({ error: 'Give the amount in whole cents.' })
+    .int('Give the amount in whole cents.')
+    .positive('The amount must be more than zero.')
+    .optional(),
   reason: z.enum(refundReasons, { error: `Choose one of: ${refundReasons.join(', ')}.` }).optional(),
 });
 export type RefundOrderBody = z.infer<typeof refundOrderBodySchema>;

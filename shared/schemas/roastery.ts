@@ -133,9 +133,7 @@ export const roastListLineSchema = z.object({
   /** Green load of each planned batch, largest first. */
   batches: z.array(z.object({ greenGrams: wholeGrams })),
   /** Below the hard floor (25 % of capacity): raising each batch to the floor, and what that adds. */
-  floorProposal: z
-    .object({ batchGreenGrams: wholeGrams, extraGreenGrams: wholeGrams, extraRoastedGrams: wholeGrams })
-    .optional(),
+  floorProposal: z.object({ batchGreenGrams: wholeGrams, extraGreenGrams: wholeGrams, extraRoastedGrams: wholeGrams }).optional(),
   /** Batches already recorded for this day, lot and level. */
   recorded: z.object({ batches: z.number().int().min(0), greenGrams: wholeGrams, roastedGrams: wholeGrams }),
   /**

@@ -2,7 +2,6 @@ import { z } from 'zod';
 import { areValidDates, isoDate } from './dates';
 import { daysBetween } from '../domain/shop-time';
 
-
 /** Longest range `GET /api/roastery/rotation` answers at once. */
 export const maxRotationSpanDays = 92;
 

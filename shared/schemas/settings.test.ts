@@ -53,12 +53,36 @@ describe('shop settings', () => {
     ['no roast day', (s: ShopSettingsInput) => void (s.roastWeekdays = []), 'roastWeekdays'],
     ['a day twice', (s: ShopSettingsInput) => void (s.shipWeekdays = ['mon', 'mon']), 'shipWeekdays'],
     ['a preferred load under the 25 % floor', (s: ShopSettingsInput) => void (s.roaster.minLoadPct = 20), 'roaster.minLoadPct'],
-    ['a minimum load over the maximum', (s: ShopSettingsInput) => void (s.roaster = { capacityGrams: 12_000, minLoadPct: 85, maxLoadPct: 80 }), 'roaster.minLoadPct'],
-    ['a loss default outside its range', (s: ShopSettingsInput) => void (s.lossModel.dark = { minPct: 18, maxPct: 20, defaultPct: 21 }), 'lossModel.dark.defaultPct'],
+    [
+      'a minimum load over the maximum',
+      (s: ShopSettingsInput) => void (s.roaster = { capacityGrams: 12_000, minLoadPct: 85, maxLoadPct: 80 }),
+      'roaster.minLoadPct',
+    ],
+    [
+      'a loss default outside its range',
+      (s: ShopSettingsInput) => void (s.lossModel.dark = { minPct: 18, maxPct: 20, defaultPct: 21 }),
+      'lossModel.dark.defaultPct',
+    ],
     ['an overage with three decimals', (s: ShopSettingsInput) => void (s.overagePct = 2.125), 'overagePct'],
     ['a best-before before the coffee is ready', (s: ShopSettingsInput) => void (s.bestBeforeDays = 7), 'bestBeforeDays'],
-    ['shipping bands out of order', (s: ShopSettingsInput) => void (s.shipping = { bands: [{ maxGrams: 1000, cents: 900 }, { maxGrams: 500, cents: 700 }], bagTareGrams: 20, boxTareGrams: 180 }), 'shipping.bands'],
-    ['a box heavier than every band', (s: ShopSettingsInput) => void (s.shipping = { bands: [{ maxGrams: 100, cents: 900 }], bagTareGrams: 20, boxTareGrams: 180 }), 'shipping.bands'],
+    [
+      'shipping bands out of order',
+      (s: ShopSettingsInput) =>
+        void (s.shipping = {
+          bands: [
+            { maxGrams: 1000, cents: 900 },
+            { maxGrams: 500, cents: 700 },
+          ],
+          bagTareGrams: 20,
+          boxTareGrams: 180,
+        }),
+      'shipping.bands',
+    ],
+    [
+      'a box heavier than every band',
+      (s: ShopSettingsInput) => void (s.shipping = { bands: [{ maxGrams: 100, cents: 900 }], bagTareGrams: 20, boxTareGrams: 180 }),
+      'shipping.bands',
+    ],
     ['an unknown currency', (s: ShopSettingsInput) => void ((s as Record<string, unknown>).currency = 'xyz'), 'currency'],
   ])('rejects %s, naming the field', (_, change, path) => {
     expect(errorPaths(withChange(change))).toContain(path);

@@ -35,10 +35,7 @@ const lossRangeSchema = z
   });
 
 const lossModelSchema = z.object(
-  Object.fromEntries(roastLevels.map((level) => [level, lossRangeSchema])) as Record<
-    (typeof roastLevels)[number],
-    typeof lossRangeSchema
-  >,
+  Object.fromEntries(roastLevels.map((level) => [level, lossRangeSchema])) as Record<(typeof roastLevels)[number], typeof lossRangeSchema>,
 );
 
 const roasterSchema = z
@@ -114,12 +111,7 @@ export const shopSettingsSchema = z
     holdOverWeekend: z.boolean().default(true),
     restDays: z.object({ filter: wholeDays(60), espresso: wholeDays(60) }),
     restAdjustDays: z
-      .object(
-        Object.fromEntries(roastLevels.map((level) => [level, z.number().int().min(-14).max(14)])) as Record<
-          (typeof roastLevels)[number],
-          z.ZodNumber
-        >,
-      )
+      .object(Object.fromEntries(roastLevels.map((level) => [level, z.number().int().min(-14).max(14)])) as Record<(typeof roastLevels)[number], z.ZodNumber>)
       .default(() => ({ ...defaultRestAdjustDays })),
     bestBeforeDays: z.number().int().min(1).max(365),
     overagePct: percent(20),
@@ -128,12 +120,7 @@ export const shopSettingsSchema = z
     lossModel: lossModelSchema,
     lossModelMinBatches: z.number().int().min(1).max(100).default(DEFAULT_LOSS_MIN_BATCHES),
     roastedBagPriceCents: z
-      .object(
-        Object.fromEntries(roastedBagSizes.map((size) => [size, z.number().int().min(0)])) as Record<
-          (typeof roastedBagSizes)[number],
-          z.ZodNumber
-        >,
-      )
+      .object(Object.fromEntries(roastedBagSizes.map((size) => [size, z.number().int().min(0)])) as Record<(typeof roastedBagSizes)[number], z.ZodNumber>)
       .default(() => ({ ...defaultRoastedBagPriceCents })),
     subscriptionDiscountPct: percent(50).default(DEFAULT_SUBSCRIPTION_DISCOUNT_PCT),
     /** Days before a subscription's charge that the renewal reminder goes out; 0 sends none. */

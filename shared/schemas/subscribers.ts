@@ -27,7 +27,12 @@ export const subscriberListQuerySchema = z.object({
   q: z.string().trim().max(100, 'Use at most 100 characters.').optional(),
   sort: z.enum(subscriberSorts, { error: 'Sort by newest, oldest, name or next-roast.' }).default('newest'),
   page: z.coerce.number({ error: 'Use a page number.' }).int('Use a whole page number.').min(1, 'Pages start at 1.').default(1),
-  pageSize: z.coerce.number({ error: 'Use a page size.' }).int('Use a whole page size.').min(1, 'Use a page size of at least 1.').max(200, 'Use a page size of at most 200.').default(50),
+  pageSize: z.coerce
+    .number({ error: 'Use a page size.' })
+    .int('Use a whole page size.')
+    .min(1, 'Use a page size of at least 1.')
+    .max(200, 'Use a page size of at most 200.')
+    .default(50),
 });
 export type SubscriberListQuery = z.infer<typeof subscriberListQuerySchema>;
 

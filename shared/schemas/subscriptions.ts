@@ -4,7 +4,6 @@ import { brewMethods, deliveryStatuses, grinds, roastedBagSizes, roastLevels, su
 import { postalAddressSchema } from './address';
 import { shippingAddressSchema } from './checkout';
 
-
 /** Most bags in one delivery. */
 export const maxBagsPerDelivery = 10;
 /** Most deliveries `GET /api/subscriptions/:id/deliveries` lists at once. */

@@ -8,11 +8,7 @@ const UNEXPECTED = 'Something unexpected went wrong. Please try again.';
  * form's own fields, focusing the first, and returns what is left to say about the form as a
  * whole: `undefined` when every reason found its field.
  */
-export function applyServerErrors<T extends FieldValues>(
-  error: unknown,
-  setError: UseFormSetError<T>,
-  fieldNames: readonly Path<T>[],
-): string | undefined {
+export function applyServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fieldNames: readonly Path<T>[]): string | undefined {
   if (!(error instanceof ApiError)) return UNEXPECTED;
   const known = new Set<string>(fieldNames);
   let placed = 0;

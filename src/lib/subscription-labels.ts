@@ -43,4 +43,3 @@ export function bagSizeNetLabel(size: RoastedBagSize): string {
 export function bagsLabel(count: number, size: RoastedBagSize): string {
   return `${count} × ${bagSizeShort(size)} ${count === 1 ? 'bag' : 'bags'}`;
 }
-

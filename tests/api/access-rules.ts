@@ -65,7 +65,13 @@ export const accessRules: AccessRule[] = [
   { method: 'PUT', path: '/api/account/password', access: 'signed-in' },
   { method: 'GET', path: '/api/account/addresses', access: 'signed-in' },
   { method: 'POST', path: '/api/account/addresses', access: 'signed-in' },
-  { method: 'PUT', path: '/api/account/addresses/:id', access: 'own-record', record: addressOf, body: { name: 'Changed', line1: '1 Other Road', city: 'Greyhaven', region: 'WA', postalCode: '98201' } },
+  {
+    method: 'PUT',
+    path: '/api/account/addresses/:id',
+    access: 'own-record',
+    record: addressOf,
+    body: { name: 'Changed', line1: '1 Other Road', city: 'Greyhaven', region: 'WA', postalCode: '98201' },
+  },
   { method: 'DELETE', path: '/api/account/addresses/:id', access: 'own-record', record: addressOf },
 
   { method: 'GET', path: '/api/owner/team', access: 'owner' },

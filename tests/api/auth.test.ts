@@ -69,7 +69,10 @@ describe('sign-up, sign-in, sign-out and me', () => {
     const timings = { known: [] as number[], unknown: [] as number[] };
     // Interleaved, after one warm-up each, so neither side pays for a cold start.
     for (let attempt = -1; attempt < 9; attempt++) {
-      for (const [side, email] of [['known', user.email], ['unknown', ghost]] as const) {
+      for (const [side, email] of [
+        ['known', user.email],
+        ['unknown', ghost],
+      ] as const) {
         const started = performance.now();
         await signIn(email, `wrong password ${attempt}`).expect(401);
         if (attempt >= 0) timings[side].push(performance.now() - started);

@@ -32,7 +32,10 @@ describe('text PostgreSQL cannot store answers 400 naming the field', () => {
 
   it('a NUL in a JSON field, nested or not, and nothing is created', async () => {
     const email = `nul-${randomUUID().slice(0, 8)}@example.test`;
-    const response = await request(app).post('/api/auth/sign-up').set('X-Restday-Client', 'web').send({ email, password: 'a long invented passphrase', name: 'Robin\u0000Tester' });
+    const response = await request(app)
+      .post('/api/auth/sign-up')
+      .set('X-Restday-Client', 'web')
+      .send({ email, password: 'a long invented passphrase', name: 'Robin\u0000Tester' });
     expectBadInput(response, 'name');
     const signIn = await request(app).post('/api/auth/sign-in').set('X-Restday-Client', 'web').send({ email, password: 'a long invented passphrase' });
     expect(signIn.status).toBe(401);
@@ -40,7 +43,9 @@ describe('text PostgreSQL cannot store answers 400 naming the field', () => {
 
   it('a lone surrogate in a shipping address', async () => {
     const lot = await createLotForSale(5_000);
-    const response = await customer.post('/api/checkout/green').send({ items: [{ lotCode: lot.code, size: '1lb', quantity: 1 }], shippingAddress: { ...shipTo, line1: '4 Larkspur \ud800Lane' } });
+    const response = await customer
+      .post('/api/checkout/green')
+      .send({ items: [{ lotCode: lot.code, size: '1lb', quantity: 1 }], shippingAddress: { ...shipTo, line1: '4 Larkspur \ud800Lane' } });
     expectBadInput(response, 'shippingAddress.line1');
   });
 });

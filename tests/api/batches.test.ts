@@ -46,7 +46,9 @@ describe('POST /api/roastery/batches', () => {
     // Three batches: 10,000 → 8,500 g (15 % loss), 10,000 → 8,400 g (16 %), 10,000 → 8,450 g (15.5 %).
     const recorded = [];
     for (const roastedGramsOut of [8_500, 8_400, 8_450]) {
-      const response = await staff.post('/api/roastery/batches').send({ roastDate, lotCode: code, roastLevel: 'medium', greenGramsIn: 10_000, roastedGramsOut });
+      const response = await staff
+        .post('/api/roastery/batches')
+        .send({ roastDate, lotCode: code, roastLevel: 'medium', greenGramsIn: 10_000, roastedGramsOut });
       expect(response.status).toBe(201);
       recorded.push(batchCreatedSchema.parse(response.body));
     }
@@ -116,7 +118,9 @@ describe('POST /api/roastery/batches', () => {
   it('answers 409 when the lot’s stock cannot cover the green, and records nothing', async () => {
     const code = `${tag}-SHORT`;
     const lotId = await createStockedLot(code, { stockGrams: 3_000 });
-    const response = await staff.post('/api/roastery/batches').send({ roastDate, lotCode: code, roastLevel: 'dark', greenGramsIn: 3_001, roastedGramsOut: 2_450 });
+    const response = await staff
+      .post('/api/roastery/batches')
+      .send({ roastDate, lotCode: code, roastLevel: 'dark', greenGramsIn: 3_001, roastedGramsOut: 2_450 });
     expect(response.status).toBe(409);
     const body = apiErrorSchema.parse(response.body);
     expect(body.error.code).toBe('stock_below_zero');
@@ -144,7 +148,9 @@ describe('POST /api/roastery/batches', () => {
   });
 
   it('answers 404 naming the lot for a lot code that does not exist', async () => {
-    const response = await staff.post('/api/roastery/batches').send({ roastDate, lotCode: `${tag}-NONE`, roastLevel: 'medium', greenGramsIn: 1_000, roastedGramsOut: 850 });
+    const response = await staff
+      .post('/api/roastery/batches')
+      .send({ roastDate, lotCode: `${tag}-NONE`, roastLevel: 'medium', greenGramsIn: 1_000, roastedGramsOut: 850 });
     expect(response.status).toBe(404);
     expect(apiErrorSchema.parse(response.body).error.fields).toHaveProperty('lotCode');
   });
@@ -179,7 +185,10 @@ describe('POST /api/roastery/batches', () => {
     const state = await lotState(lotId);
     expect(state.stockGrams).toBe(2_000);
     expect(state.batches).toHaveLength(1);
-    const [batch] = await getTestDb().select().from(batches).where(and(eq(batches.lotId, lotId), eq(batches.roastLevel, 'light')));
+    const [batch] = await getTestDb()
+      .select()
+      .from(batches)
+      .where(and(eq(batches.lotId, lotId), eq(batches.roastLevel, 'light')));
     expect(batch!.greenGramsIn).toBe(4_000);
   });
 });

@@ -179,7 +179,12 @@ describe('after checkout, on the payment fake', () => {
     expect(await stockOf(lot.id)).toBe(5_000 - 1816);
 
     await stripe.checkout.sessions.expire((await orderRow(orderId)).stripeCheckoutSessionId!);
-    const cancelled = await waitFor(() => orderRow(orderId), (row) => row.status === 'cancelled', 10_000, 'the order to be cancelled');
+    const cancelled = await waitFor(
+      () => orderRow(orderId),
+      (row) => row.status === 'cancelled',
+      10_000,
+      'the order to be cancelled',
+    );
     expect(cancelled.cancelledAt).toBeInstanceOf(Date);
     expect(await stockOf(lot.id)).toBe(5_000);
     expect(await movementsOf(lot.id, orderId)).toEqual({ sum: 0, count: 2 });
@@ -193,7 +198,12 @@ describe('after checkout, on the payment fake', () => {
     const { orderId, checkoutUrl } = greenCheckoutResponseSchema.parse(response.body);
 
     expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
-    await waitFor(() => orderRow(orderId), (row) => row.status === 'paid', 10_000, 'the order to be paid');
+    await waitFor(
+      () => orderRow(orderId),
+      (row) => row.status === 'paid',
+      10_000,
+      'the order to be paid',
+    );
     expect(await stockOf(lot.id)).toBe(5_000 - 2268);
     expect(await movementsOf(lot.id, orderId)).toEqual({ sum: -2268, count: 1 });
   });

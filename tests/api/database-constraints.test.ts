@@ -197,7 +197,15 @@ describe('database constraints', () => {
         .insert(schema.orders)
         .values({ userId: user.id, kind: 'green', shippingAddress: address, subtotalCents: 1089, shippingCents: 0, totalCents: 1089 })
         .returning();
-      const line = { orderId: order?.id as string, lotId: lot.id, kind: 'green' as const, size: '1lb' as const, quantity: 1, unitPriceCents: 1089, lineTotalCents: 1089 };
+      const line = {
+        orderId: order?.id as string,
+        lotId: lot.id,
+        kind: 'green' as const,
+        size: '1lb' as const,
+        quantity: 1,
+        unitPriceCents: 1089,
+        lineTotalCents: 1089,
+      };
       // 1 lb = 453.59237 g (NIST SP 811); the bag is filled to 454 g, never 453.
       await expectRefused(tx, CHECK_VIOLATION, 'order_items_fill_grams_matches_size', (sp) => sp.insert(schema.orderItems).values({ ...line, fillGrams: 453 }));
       await tx.insert(schema.orderItems).values({ ...line, fillGrams: 454 });
@@ -263,10 +271,26 @@ describe('demo scenario seed', () => {
   it('seedDemo — when run from scratch twice with the same `now`, then it writes the same rows', async () => {
     // One after another: a transaction is one connection, which runs one query at a time.
     const snapshot = async (db: Db) => [
-      await db.select().from(schema.users).where(sql`${schema.users.email} like '%@wrenfield.test' or ${schema.users.email} like '%.%@example.test'`).orderBy(asc(schema.users.id)),
-      await db.select().from(schema.lots).where(sql`${schema.lots.code} like 'WR-%'`).orderBy(asc(schema.lots.id)),
-      await db.select().from(schema.subscriptions).where(sql`${schema.subscriptions.stripeCustomerId} like 'cus_demo_%'`).orderBy(asc(schema.subscriptions.id)),
-      await db.select().from(schema.orders).where(sql`${schema.orders.stripeCheckoutSessionId} like 'cs_test_demo_%' or ${schema.orders.stripeInvoiceId} like 'in_demo_%'`).orderBy(asc(schema.orders.id)),
+      await db
+        .select()
+        .from(schema.users)
+        .where(sql`${schema.users.email} like '%@wrenfield.test' or ${schema.users.email} like '%.%@example.test'`)
+        .orderBy(asc(schema.users.id)),
+      await db
+        .select()
+        .from(schema.lots)
+        .where(sql`${schema.lots.code} like 'WR-%'`)
+        .orderBy(asc(schema.lots.id)),
+      await db
+        .select()
+        .from(schema.subscriptions)
+        .where(sql`${schema.subscriptions.stripeCustomerId} like 'cus_demo_%'`)
+        .orderBy(asc(schema.subscriptions.id)),
+      await db
+        .select()
+        .from(schema.orders)
+        .where(sql`${schema.orders.stripeCheckoutSessionId} like 'cs_test_demo_%' or ${schema.orders.stripeInvoiceId} like 'in_demo_%'`)
+        .orderBy(asc(schema.orders.id)),
       await db.select().from(schema.batches).orderBy(asc(schema.batches.id)),
       await db.select().from(schema.emailOutbox).orderBy(asc(schema.emailOutbox.dedupeKey)),
     ];

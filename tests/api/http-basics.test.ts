@@ -26,11 +26,7 @@ describe('HTTP basics', () => {
   });
 
   it('malformed JSON is a 400 with the error shape, not a 500', async () => {
-    const response = await request(app)
-      .post('/api/nothing-here')
-      .set('X-Restday-Client', 'web')
-      .set('Content-Type', 'application/json')
-      .send('{"broken":');
+    const response = await request(app).post('/api/nothing-here').set('X-Restday-Client', 'web').set('Content-Type', 'application/json').send('{"broken":');
     expect(response.status).toBe(400);
     expect(apiErrorSchema.parse(response.body).error.code).toBe('invalid_json');
   });

@@ -73,7 +73,8 @@ describe('GET /api/roastery/days/:date/labels.pdf', () => {
     expect(greenPages.filter((page) => page.includes('Net Wt 16 oz (1 lb) 454 g'))).toHaveLength(1);
     expect(greenPages.filter((page) => page.includes('Net Wt 8 oz (227 g)'))).toHaveLength(2);
 
-    const dayText = (date: string) => new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${date}T00:00:00Z`));
+    const dayText = (date: string) =>
+      new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${date}T00:00:00Z`));
     for (const page of roastedPages) {
       expect(page).toContain(shopName.toUpperCase());
       expect(page).toContain(lot.name);

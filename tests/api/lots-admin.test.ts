@@ -243,7 +243,12 @@ describe('GET /api/roastery/green-stock', () => {
       averageDailyUseGrams: 500,
       daysOfCover: 12,
     });
-    expect(body.items.find((item) => item.code === `${tag}-IDLE`)).toMatchObject({ stockGrams: 0, usedGramsInWindow: 0, daysOfCover: null, reorderAlert: true });
+    expect(body.items.find((item) => item.code === `${tag}-IDLE`)).toMatchObject({
+      stockGrams: 0,
+      usedGramsInWindow: 0,
+      daysOfCover: null,
+      reorderAlert: true,
+    });
   });
 });
 

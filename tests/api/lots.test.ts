@@ -43,11 +43,13 @@ beforeAll(async () => {
       lotRow({ code: `${tag}-D`, origin: `Tagland ${tag}`, isListed: false }),
     ])
     .returning({ id: lots.id, code: lots.code });
-  await db.insert(lots).values([
-    lotRow({ code: `${tag}-P1`, name: 'Cedar', origin: `Priceland ${tag}`, pricePerKgCents: 1800, altitudeM: 1400, cropYear: 2025 }),
-    lotRow({ code: `${tag}-P2`, name: 'Alder', origin: `Priceland ${tag}`, pricePerKgCents: 2205, altitudeM: 2100, cropYear: 2026 }),
-    lotRow({ code: `${tag}-P3`, name: 'Birch', origin: `Priceland ${tag}`, pricePerKgCents: 3100, altitudeM: 1750, cropYear: 2024 }),
-  ]);
+  await db
+    .insert(lots)
+    .values([
+      lotRow({ code: `${tag}-P1`, name: 'Cedar', origin: `Priceland ${tag}`, pricePerKgCents: 1800, altitudeM: 1400, cropYear: 2025 }),
+      lotRow({ code: `${tag}-P2`, name: 'Alder', origin: `Priceland ${tag}`, pricePerKgCents: 2205, altitudeM: 2100, cropYear: 2026 }),
+      lotRow({ code: `${tag}-P3`, name: 'Birch', origin: `Priceland ${tag}`, pricePerKgCents: 3100, altitudeM: 1750, cropYear: 2024 }),
+    ]);
   const lotA = inserted.find((lot) => lot.code === `${tag}-A`)!;
   await db.insert(lotPriceBreaks).values([
     { lotId: lotA.id, minGrams: 9072, pricePerKgCents: 2000 },
@@ -61,9 +63,14 @@ beforeAll(async () => {
 });
 
 async function listCodes(query: Record<string, string>) {
-  const response = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}`, ...query });
+  const response = await request(app)
+    .get('/api/lots')
+    .query({ origin: `Tagland ${tag}`, ...query });
   expect(response.status).toBe(200);
-  return lotListResponseSchema.parse(response.body).items.map((item) => item.code).sort();
+  return lotListResponseSchema
+    .parse(response.body)
+    .items.map((item) => item.code)
+    .sort();
 }
 
 describe('GET /api/lots', () => {
@@ -87,15 +94,22 @@ describe('GET /api/lots', () => {
   });
 
   it('lets browsers and shared caches keep the list for 10 s, and answers a revalidation with 304', async () => {
-    const first = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}` });
+    const first = await request(app)
+      .get('/api/lots')
+      .query({ origin: `Tagland ${tag}` });
     expect(first.headers['cache-control']).toBe('public, max-age=10');
     expect(first.headers.etag).toBeTruthy();
-    const again = await request(app).get('/api/lots').query({ origin: `Tagland ${tag}` }).set('If-None-Match', first.headers.etag!);
+    const again = await request(app)
+      .get('/api/lots')
+      .query({ origin: `Tagland ${tag}` })
+      .set('If-None-Match', first.headers.etag!);
     expect(again.status).toBe(304);
   });
 
   it('gives each card its first photo by position', async () => {
-    const response = await request(app).get('/api/lots').query({ q: `${tag}-A` });
+    const response = await request(app)
+      .get('/api/lots')
+      .query({ q: `${tag}-A` });
     const [lot] = lotListResponseSchema.parse(response.body).items;
     expect(lot?.photoUrl).toMatch(/^\/api\/uploads\/[0-9a-f-]{36}$/);
   });
@@ -111,7 +125,9 @@ describe('GET /api/lots', () => {
 
 describe('GET /api/lots — price range and sort', () => {
   async function listInOrder(query: Record<string, string>) {
-    const response = await request(app).get('/api/lots').query({ origin: `Priceland ${tag}`, ...query });
+    const response = await request(app)
+      .get('/api/lots')
+      .query({ origin: `Priceland ${tag}`, ...query });
     expect(response.status).toBe(200);
     return lotListResponseSchema.parse(response.body).items.map((item) => item.code.slice(-2));
   }

@@ -9,7 +9,14 @@ const app = createTestApp();
 
 /** An order written directly, as checkout or a subscription would leave it; each test places its orders on its own day. */
 async function inventOrder(userId: string, lotId: string, { status, roastDate, placedAt }: { status: OrderStatus; roastDate: string | null; placedAt: Date }) {
-  const order = await createOrder({ userId, status, shippingCents: 1000, roastDate, createdAt: placedAt, lines: [{ lotId, size: '1lb', quantity: 2, unitPriceCents: 2000 }] });
+  const order = await createOrder({
+    userId,
+    status,
+    shippingCents: 1000,
+    roastDate,
+    createdAt: placedAt,
+    lines: [{ lotId, size: '1lb', quantity: 2, unitPriceCents: 2000 }],
+  });
   return order.id;
 }
 

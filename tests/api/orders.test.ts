@@ -146,7 +146,10 @@ describe('the staff orders table', () => {
     expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(response.headers['content-disposition']).toBe('attachment; filename=restday-orders.csv');
     // No cell here holds a comma, quote or line break, so the lines split plainly.
-    const [header, ...rows] = response.text.trimEnd().split('\n').map((line) => line.split(','));
+    const [header, ...rows] = response.text
+      .trimEnd()
+      .split('\n')
+      .map((line) => line.split(','));
     expect(header).toEqual([...orderCsvColumns]);
     expect(rows).toHaveLength(1);
     const record = Object.fromEntries(header!.map((column, index) => [column, rows[0]![index]]));

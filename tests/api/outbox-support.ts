@@ -63,4 +63,10 @@ export async function outboxRow(dedupeKey: string) {
   return row;
 }
 
-export const restDayPayload = (orderId: string) => ({ name: 'Test Customer', orderId, readyFrom: '2026-12-10', brewMethod: 'filter' as const, coffee: 'Keraba Ridge' });
+export const restDayPayload = (orderId: string) => ({
+  name: 'Test Customer',
+  orderId,
+  readyFrom: '2026-12-10',
+  brewMethod: 'filter' as const,
+  coffee: 'Keraba Ridge',
+});

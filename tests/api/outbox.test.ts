@@ -60,7 +60,12 @@ describe('queueEmail', () => {
     await queueEmail(getTestDb(), { template: 'order-confirmed', to, payload, dedupeKey: key });
 
     expect(await outboxRows([key])).toHaveLength(1);
-    expect(await outboxRow(key)).toMatchObject({ template: 'order-confirmed', toAddress: to, status: 'pending', subject: 'Your green coffee order is confirmed' });
+    expect(await outboxRow(key)).toMatchObject({
+      template: 'order-confirmed',
+      toAddress: to,
+      status: 'pending',
+      subject: 'Your green coffee order is confirmed',
+    });
   });
 
   it("refuses a payload that does not fit its template, so the caller's transaction fails instead of the e-mail", async () => {
@@ -108,8 +113,12 @@ describe('the outbox relay', () => {
     await queueEmail(getTestDb(), { template: 'rest-day', to: deadTo, payload: restDayPayload(randomUUID()), dedupeKey: deadKey });
     await queueEmail(getTestDb(), { template: 'rest-day', to: liveTo, payload: restDayPayload(randomUUID()), dedupeKey: liveKey });
     // As a relay leaves them when it claimed them and then crashed: 'sending', with the lease in send_after.
-    await getTestDb().execute(sql`update ${emailOutbox} set status = 'sending', attempts = 1, send_after = now() - interval '1 second' where dedupe_key = ${deadKey}`);
-    await getTestDb().execute(sql`update ${emailOutbox} set status = 'sending', attempts = 1, send_after = now() + interval '1 minute' where dedupe_key = ${liveKey}`);
+    await getTestDb().execute(
+      sql`update ${emailOutbox} set status = 'sending', attempts = 1, send_after = now() - interval '1 second' where dedupe_key = ${deadKey}`,
+    );
+    await getTestDb().execute(
+      sql`update ${emailOutbox} set status = 'sending', attempts = 1, send_after = now() + interval '1 minute' where dedupe_key = ${liveKey}`,
+    );
 
     await relayForTest().relay.relayOnce();
 
@@ -163,7 +172,13 @@ describe('the outbox relay', () => {
     const key = `rest-day:${randomUUID()}`;
     await getTestDb()
       .insert(emailOutbox)
-      .values({ template: 'rest-day', toAddress: testAddress('unrenderable'), subject: 'Your coffee is ready to brew', payload: { orderId: 'x' }, dedupeKey: key });
+      .values({
+        template: 'rest-day',
+        toAddress: testAddress('unrenderable'),
+        subject: 'Your coffee is ready to brew',
+        payload: { orderId: 'x' },
+        dedupeKey: key,
+      });
     await relayForTest().relay.relayOnce();
     const row = await outboxRow(key);
     expect(row).toMatchObject({ status: 'failed', attempts: 1 });
@@ -174,7 +189,13 @@ describe('the outbox relay', () => {
     const clock = createAdjustableClock();
     const to = testAddress('scheduled');
     const key = `rest-day:${randomUUID()}`;
-    await queueEmail(getTestDb(), { template: 'rest-day', to, payload: restDayPayload(randomUUID()), dedupeKey: key, sendAfter: new Date(Date.now() + 3 * DAY_MS) });
+    await queueEmail(getTestDb(), {
+      template: 'rest-day',
+      to,
+      payload: restDayPayload(randomUUID()),
+      dedupeKey: key,
+      sendAfter: new Date(Date.now() + 3 * DAY_MS),
+    });
     const { relay } = relayForTest({ smtpUrl, clock });
 
     await relay.relayOnce();
@@ -252,7 +273,11 @@ describe('GET /api/roastery/outbox', () => {
 });
 
 describe('POST /api/dev/clock', () => {
-  const post = (app: ReturnType<typeof createApp>, body: unknown) => request(app).post('/api/dev/clock').set('X-Restday-Client', 'web').send(body as object);
+  const post = (app: ReturnType<typeof createApp>, body: unknown) =>
+    request(app)
+      .post('/api/dev/clock')
+      .set('X-Restday-Client', 'web')
+      .send(body as object);
 
   it('does not exist unless the server runs with RESTDAY_TEST_CLOCK on', async () => {
     expect((await post(createTestApp(), { now: new Date().toISOString() })).status).toBe(404);
@@ -260,7 +285,9 @@ describe('POST /api/dev/clock', () => {
 
   it('refuses to build an app with the test clock on but a clock that cannot move', () => {
     const config = testConfig({ RESTDAY_TEST_CLOCK: 'true' });
-    expect(() => createApp({ config, database: getTestDatabase(), logger: createLogger(config), clock: { now: () => new Date() } })).toThrow(/adjustable clock/);
+    expect(() => createApp({ config, database: getTestDatabase(), logger: createLogger(config), clock: { now: () => new Date() } })).toThrow(
+      /adjustable clock/,
+    );
   });
 
   it('moves the clock the workers read: a rest-day e-mail due in five days arrives at once', async () => {
@@ -292,7 +319,12 @@ describe('POST /api/dev/clock', () => {
     expect(new Date(devClockResponseSchema.parse(moved.body).now).getTime()).toBeGreaterThanOrEqual(readyAt.getTime());
     expect(clock.now().getTime()).toBeGreaterThanOrEqual(readyAt.getTime());
 
-    const inbox = await waitFor(() => inboxOf(mailCatcherUrl, to), (emails) => emails.length > 0, 5000, 'the rest-day e-mail');
+    const inbox = await waitFor(
+      () => inboxOf(mailCatcherUrl, to),
+      (emails) => emails.length > 0,
+      5000,
+      'the rest-day e-mail',
+    );
     expect(inbox).toHaveLength(1);
     expect((await request(app).get('/api/health')).body).toMatchObject({ ok: true, queue: 'up' });
   });
@@ -315,9 +347,19 @@ describe('a committed e-mail through the workers', () => {
     const to = testAddress('notify');
     const started = Date.now();
     await getTestDb().transaction((tx) =>
-      queueEmail(tx, { template: 'password-reset', to, payload: { name: 'Test Customer', resetUrl: 'http://127.0.0.1:3000/reset-password?token=t', expiresAt: new Date(Date.now() + 3_600_000) }, dedupeKey: `password-reset:${randomUUID()}` }),
+      queueEmail(tx, {
+        template: 'password-reset',
+        to,
+        payload: { name: 'Test Customer', resetUrl: 'http://127.0.0.1:3000/reset-password?token=t', expiresAt: new Date(Date.now() + 3_600_000) },
+        dedupeKey: `password-reset:${randomUUID()}`,
+      }),
     );
-    const [email] = await waitFor(() => inboxOf(mailCatcherUrl, to), (emails) => emails.length > 0, 5000, 'the password-reset e-mail');
+    const [email] = await waitFor(
+      () => inboxOf(mailCatcherUrl, to),
+      (emails) => emails.length > 0,
+      5000,
+      'the password-reset e-mail',
+    );
     expect(Date.now() - started).toBeLessThan(5000);
     expect(email?.subject).toBe('Reset your password');
   });

@@ -8,7 +8,18 @@ import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
 import { outboxRows } from './outbox-support';
 import { allocationsOf, orderStatusOf } from './packing-support';
-import { createDelivery, createGreenOrder, createLotForSale, createRoastedOrder, createSubscription, createTestUser, pickRotationLot, recordBatch, type TestUser, uniqueDay } from '../factories/index';
+import {
+  createDelivery,
+  createGreenOrder,
+  createLotForSale,
+  createRoastedOrder,
+  createSubscription,
+  createTestUser,
+  pickRotationLot,
+  recordBatch,
+  type TestUser,
+  uniqueDay,
+} from '../factories/index';
 
 const app = createTestApp();
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -79,7 +90,8 @@ describe('GET /api/roastery/days/:date/pack-list', () => {
       { size: '8oz', ...eightOunce },
       { size: '8oz', ...eightOunce },
     ]);
-    for (const bag of greenEntry.bags) expect(bag).toMatchObject({ lotCode: lot.code, roastLevel: null, grind: null, roastDate: null, readyFrom: null, bestBefore: null });
+    for (const bag of greenEntry.bags)
+      expect(bag).toMatchObject({ lotCode: lot.code, roastLevel: null, grind: null, roastDate: null, readyFrom: null, bestBefore: null });
   });
 
   it('says which bags go in which parcel: whole bags, the cheapest packing within the shop’s bands', async () => {
@@ -267,6 +279,13 @@ describe('POST /api/orders/:id/pack', () => {
 /** A subscription delivery whose order is `orderId` (as the subscription step links them). */
 async function deliveryFor(orderId: string, roastDate: string, lotId: string) {
   const subscription = await createSubscription({ userId: customer.id, lotId, bagSize: '1lb', priceCents: 1500 });
-  const delivery = await createDelivery({ subscriptionId: subscription.id, orderId, roastDate, shipDate: roastDate, readyFrom: roastDate, bestBefore: roastDate });
+  const delivery = await createDelivery({
+    subscriptionId: subscription.id,
+    orderId,
+    roastDate,
+    shipDate: roastDate,
+    readyFrom: roastDate,
+    bestBefore: roastDate,
+  });
   return delivery.id;
 }

@@ -46,7 +46,10 @@ describe('password reset by e-mail', () => {
     expect(stored!.tokenHash).not.toBe(token);
     expect(stored!.expiresAt.getTime() - stored!.createdAt.getTime()).toBe(30 * MINUTE);
     // Once sent, the outbox keeps no copy of the link: the token lives only in the customer's inbox.
-    const [sentRow] = await getTestDb().select().from(emailOutbox).where(and(eq(emailOutbox.toAddress, user.email), eq(emailOutbox.status, 'sent')));
+    const [sentRow] = await getTestDb()
+      .select()
+      .from(emailOutbox)
+      .where(and(eq(emailOutbox.toAddress, user.email), eq(emailOutbox.status, 'sent')));
     expect(JSON.stringify(sentRow!.payload)).not.toContain(token);
 
     const confirmed = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'new kettle morning light' });
@@ -71,7 +74,11 @@ describe('password reset by e-mail', () => {
 
   async function queuedToken(email: string): Promise<string> {
     const [row] = await waitFor(
-      () => getTestDb().select({ payload: emailOutbox.payload }).from(emailOutbox).where(and(eq(emailOutbox.toAddress, email), like(emailOutbox.template, 'password-reset'))),
+      () =>
+        getTestDb()
+          .select({ payload: emailOutbox.payload })
+          .from(emailOutbox)
+          .where(and(eq(emailOutbox.toAddress, email), like(emailOutbox.template, 'password-reset'))),
       (rows) => rows.length > 0,
       5000,
       'a queued reset e-mail',
@@ -97,7 +104,10 @@ describe('password reset by e-mail', () => {
     const weak = await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'password123' });
     expect(weak.status).toBe(400);
     expect(apiErrorSchema.parse(weak.body).error.fields).toHaveProperty('password');
-    const unused = await getTestDb().select().from(passwordResetTokens).where(and(eq(passwordResetTokens.userId, user.id), isNull(passwordResetTokens.usedAt)));
+    const unused = await getTestDb()
+      .select()
+      .from(passwordResetTokens)
+      .where(and(eq(passwordResetTokens.userId, user.id), isNull(passwordResetTokens.usedAt)));
     expect(unused).toHaveLength(1);
     await client().post('/api/auth/password-reset/confirm').set(web).send({ token, password: 'a much better passphrase' }).expect(204);
   });

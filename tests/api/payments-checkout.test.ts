@@ -4,7 +4,19 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { decliningTestCard, succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { inboxOf, waitFor } from './outbox-support';
-import { eventsAbout, ledgerCount, orderRow, outboxCount, settle, startPaymentsServer, stripeFake, subscriptionRow, testPaymentsService, testStripe, type PaymentsServer } from './payments-support';
+import {
+  eventsAbout,
+  ledgerCount,
+  orderRow,
+  outboxCount,
+  settle,
+  startPaymentsServer,
+  stripeFake,
+  subscriptionRow,
+  testPaymentsService,
+  testStripe,
+  type PaymentsServer,
+} from './payments-support';
 import { createCustomer, createGreenOrder, createLotForSale, createPendingSubscription } from '../factories/index';
 
 let running: PaymentsServer;
@@ -43,14 +55,24 @@ describe('paying a green order on the test-payment page', () => {
     expect(paid.status).toBe(303);
     expect(paid.location).toBe(`${running.server.url}/orders/${order.id}?checkout=complete`);
 
-    const row = await waitFor(() => orderRow(order.id), (current) => current.status === 'paid', 10_000, 'the order to be paid');
+    const row = await waitFor(
+      () => orderRow(order.id),
+      (current) => current.status === 'paid',
+      10_000,
+      'the order to be paid',
+    );
     expect(row.paidAt).toBeInstanceOf(Date);
     expect(row.stripePaymentIntentId).toMatch(/^pi_/);
     const [completed] = await eventsAbout(checkoutSessionId, 'checkout.session.completed');
     expect(completed?.status).toBe('delivered');
     expect(await ledgerCount([completed!.eventId])).toBe(1);
 
-    const inbox = await waitFor(() => inboxOf(mailCatcherUrl, customer.email), (mails) => mails.length > 0, 15_000, 'the order-confirmed e-mail');
+    const inbox = await waitFor(
+      () => inboxOf(mailCatcherUrl, customer.email),
+      (mails) => mails.length > 0,
+      15_000,
+      'the order-confirmed e-mail',
+    );
     expect(inbox).toHaveLength(1);
     expect(inbox[0]!.subject).toBe('Your green coffee order is confirmed');
     expect(inbox[0]!.text).toContain('$48.49');
@@ -89,7 +111,12 @@ describe('paying a green order on the test-payment page', () => {
     } finally {
       await stripeFake().resumeWebhooks();
     }
-    await waitFor(() => orderRow(order.id), (row) => row.status === 'paid', 10_000, 'the held webhook to pay the order');
+    await waitFor(
+      () => orderRow(order.id),
+      (row) => row.status === 'paid',
+      10_000,
+      'the held webhook to pay the order',
+    );
   });
 });
 
@@ -120,7 +147,12 @@ describe('createCheckoutForOrder', () => {
     expect(second.checkoutSessionId).not.toBe(first.checkoutSessionId);
     expect((await stripe.checkout.sessions.retrieve(second.checkoutSessionId)).status).toBe('open');
     expect((await orderRow(order.id)).stripeCheckoutSessionId).toBe(second.checkoutSessionId);
-    await waitFor(() => eventsAbout(first.checkoutSessionId, 'checkout.session.expired'), (events) => events[0]?.status === 'delivered', 10_000, 'the held expiry webhook');
+    await waitFor(
+      () => eventsAbout(first.checkoutSessionId, 'checkout.session.expired'),
+      (events) => events[0]?.status === 'delivered',
+      10_000,
+      'the held expiry webhook',
+    );
     expect((await orderRow(order.id)).status).toBe('pending_payment');
   });
 
@@ -129,7 +161,12 @@ describe('createCheckoutForOrder', () => {
     const order = await createGreenOrder(customer.id, lot.id);
     const { checkoutUrl } = await payments.createCheckoutForOrder(order.id);
     await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard });
-    await waitFor(() => orderRow(order.id), (row) => row.status === 'paid', 10_000, 'the order to be paid');
+    await waitFor(
+      () => orderRow(order.id),
+      (row) => row.status === 'paid',
+      10_000,
+      'the order to be paid',
+    );
 
     await expect(payments.createCheckoutForOrder(order.id)).rejects.toMatchObject({ status: 409, code: 'order_not_payable' });
     await expect(payments.createCheckoutForOrder('00000000-0000-4000-8000-000000000000')).rejects.toMatchObject({ status: 404, code: 'not_found' });
@@ -147,14 +184,24 @@ describe('subscription checkout', () => {
 
     const paid = await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard });
     expect(paid.status).toBe(303);
-    const row = await waitFor(() => subscriptionRow(subscription.id), (current) => current.status === 'active', 10_000, 'the subscription to start');
+    const row = await waitFor(
+      () => subscriptionRow(subscription.id),
+      (current) => current.status === 'active',
+      10_000,
+      'the subscription to start',
+    );
     expect(row.stripeSubscriptionId).toMatch(/^sub_/);
     expect(row.stripeCustomerId).toMatch(/^cus_/);
     expect(row.stripeCheckoutSessionId).toBe(checkoutSessionId);
     const stripeSubscription = await stripe.subscriptions.retrieve(row.stripeSubscriptionId!);
     expect(row.currentPeriodEnd?.getTime()).toBe(stripeSubscription.items.data[0]!.current_period_end * 1000);
 
-    const inbox = await waitFor(() => inboxOf(mailCatcherUrl, customer.email), (mails) => mails.length > 0, 15_000, 'the subscription-started e-mail');
+    const inbox = await waitFor(
+      () => inboxOf(mailCatcherUrl, customer.email),
+      (mails) => mails.length > 0,
+      15_000,
+      'the subscription-started e-mail',
+    );
     expect(inbox.map((mail) => mail.subject)).toEqual(['Your Roasted to Order subscription has started']);
     await expect(payments.createCheckoutForSubscription(subscription.id)).rejects.toMatchObject({ status: 409, code: 'subscription_not_payable' });
   });

@@ -42,7 +42,6 @@ export async function eventApplied(eventId: string, timeoutMs = 20_000): Promise
   );
 }
 
-
 /** The settings a test server runs with: test database, test mail catcher, the tests' payment fake. */
 export function paymentsTestConfig(overrides: Record<string, string> = {}): Config {
   return loadConfig({

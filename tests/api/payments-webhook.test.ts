@@ -9,7 +9,22 @@ import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { loadCalendarOverrides, loadShopSettings } from '../../server/modules/settings/settings.repo';
 import { getTestDb } from '../setup/test-db';
 import { inboxOf, waitFor } from './outbox-support';
-import { deliveryRows, eventsAbout, ledgerCount, orderCount, eventApplied, orderRow, outboxCount, settle, startPaymentsServer, stripeFake, subscriptionRow, testPaymentsService, testStripe, type PaymentsServer } from './payments-support';
+import {
+  deliveryRows,
+  eventsAbout,
+  ledgerCount,
+  orderCount,
+  eventApplied,
+  orderRow,
+  outboxCount,
+  settle,
+  startPaymentsServer,
+  stripeFake,
+  subscriptionRow,
+  testPaymentsService,
+  testStripe,
+  type PaymentsServer,
+} from './payments-support';
 import { createCustomer, createGreenOrder, createLotForSale, createPendingSubscription } from '../factories/index';
 
 // Stripe's published test card that saves to a customer and then fails every charge (Stripe docs, Testing).
@@ -116,7 +131,11 @@ describe('duplicates and order', () => {
   it('the same event delivered three times at once: one paid order, one ledger row, one e-mail', async () => {
     const { customer, order, completedEventId } = await withWebhooksHeld(async () => {
       const held = await paidOrderWithHeldEvent('thrice');
-      const answers = await Promise.all([fake.deliverEvent(held.completedEventId), fake.deliverEvent(held.completedEventId), fake.deliverEvent(held.completedEventId)]);
+      const answers = await Promise.all([
+        fake.deliverEvent(held.completedEventId),
+        fake.deliverEvent(held.completedEventId),
+        fake.deliverEvent(held.completedEventId),
+      ]);
       expect(answers.map((answer) => answer.statusCode)).toEqual([200, 200, 200]);
       return held;
     });
@@ -128,7 +147,12 @@ describe('duplicates and order', () => {
     expect(paid.shipDate).toBe(greenOrderDates(paid.paidAt!, settings, { overrides: await loadCalendarOverrides(getTestDb(), '2000-01-01') }).shipDate);
     expect(await ledgerCount([completedEventId])).toBe(1);
     expect(await outboxCount(`order-confirmed:${order.id}`)).toBe(1);
-    await waitFor(() => inboxOf(mailCatcherUrl, customer.email), (mails) => mails.length > 0, 15_000, 'the order-confirmed e-mail');
+    await waitFor(
+      () => inboxOf(mailCatcherUrl, customer.email),
+      (mails) => mails.length > 0,
+      15_000,
+      'the order-confirmed e-mail',
+    );
     await settle();
     expect(await inboxOf(mailCatcherUrl, customer.email)).toHaveLength(1);
   });
@@ -153,7 +177,12 @@ describe('duplicates and order', () => {
     expect(await orderRow(order.id)).toMatchObject({ status: 'paid', refundedCents: 1050, stripeCheckoutSessionId: checkoutSessionId });
     expect(await orderCount(customer.id)).toBe(1);
     expect(await outboxCount(`order-confirmed:${order.id}`)).toBe(1);
-    await waitFor(() => inboxOf(mailCatcherUrl, customer.email), (mails) => mails.length > 0, 15_000, 'the order-confirmed e-mail');
+    await waitFor(
+      () => inboxOf(mailCatcherUrl, customer.email),
+      (mails) => mails.length > 0,
+      15_000,
+      'the order-confirmed e-mail',
+    );
     await settle();
     expect(await inboxOf(mailCatcherUrl, customer.email)).toHaveLength(1);
   });
@@ -180,7 +209,12 @@ describe('subscriptions renewing on the fake clock', () => {
     const subscription = await createPendingSubscription(customer.id, lot.id);
     const { checkoutUrl } = await payments.createCheckoutForSubscription(subscription.id);
     await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard });
-    const row = await waitFor(() => subscriptionRow(subscription.id), (current) => current.status === 'active', 10_000, 'the subscription to start');
+    const row = await waitFor(
+      () => subscriptionRow(subscription.id),
+      (current) => current.status === 'active',
+      10_000,
+      'the subscription to start',
+    );
     return { customer, subscription, stripeSubscriptionId: row.stripeSubscriptionId!, stripeCustomerId: row.stripeCustomerId! };
   }
 
@@ -190,7 +224,12 @@ describe('subscriptions renewing on the fake clock', () => {
 
     const renewal = await fake.advanceClock({ days: 14 });
     expect(renewal.renewals).toContainEqual(expect.objectContaining({ subscription: stripeSubscriptionId, outcome: 'failed' }));
-    await waitFor(() => subscriptionRow(subscription.id), (row) => row.status === 'past_due', 10_000, 'past_due');
+    await waitFor(
+      () => subscriptionRow(subscription.id),
+      (row) => row.status === 'past_due',
+      10_000,
+      'past_due',
+    );
     const [held] = await waitFor(
       () => deliveryRows(subscription.id),
       (rows) => rows.some((row) => row.status === 'held'),
@@ -208,13 +247,21 @@ describe('subscriptions renewing on the fake clock', () => {
 
     // Stripe retries three days later, and fails again: still one e-mail for the invoice.
     await fake.advanceClock({ days: 3 });
-    await waitFor(() => eventsAbout(failedInvoice, 'invoice.payment_failed'), (events) => events.every((event) => event.status === 'delivered') && events.length === 2);
+    await waitFor(
+      () => eventsAbout(failedInvoice, 'invoice.payment_failed'),
+      (events) => events.every((event) => event.status === 'delivered') && events.length === 2,
+    );
     await settle();
     expect(await outboxCount(`payment-failed:${failedInvoice}`)).toBe(1);
 
     await fake.setCustomerCard(stripeCustomerId, succeedingTestCard);
     await stripe.invoices.pay(failedInvoice);
-    await waitFor(() => subscriptionRow(subscription.id), (row) => row.status === 'active', 10_000, 'active again');
+    await waitFor(
+      () => subscriptionRow(subscription.id),
+      (row) => row.status === 'active',
+      10_000,
+      'active again',
+    );
     const released = await waitFor(
       () => deliveryRows(subscription.id),
       (rows) => rows.some((row) => row.id === held!.id && row.status === 'scheduled' && row.orderId !== null),
@@ -306,7 +353,12 @@ describe('subscriptions renewing on the fake clock', () => {
     expect((await subscriptionRow(subscription.id)).status).toBe('active');
 
     await stripe.subscriptions.cancel(stripeSubscriptionId);
-    const row = await waitFor(() => subscriptionRow(subscription.id), (current) => current.status === 'cancelled', 10_000, 'cancelled');
+    const row = await waitFor(
+      () => subscriptionRow(subscription.id),
+      (current) => current.status === 'cancelled',
+      10_000,
+      'cancelled',
+    );
     expect(row.cancelledAt).toBeInstanceOf(Date);
     await expect(stripe.subscriptions.cancel(stripeSubscriptionId)).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
   });

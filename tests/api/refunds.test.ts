@@ -36,7 +36,12 @@ async function paidGreenOrder() {
   expect(checkout.status, JSON.stringify(checkout.body)).toBe(201);
   const { orderId, checkoutUrl } = greenCheckoutResponseSchema.parse(checkout.body);
   expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
-  const order = await waitFor(() => orderRow(orderId), (row) => row.status === 'paid', 10_000, 'the payment webhook');
+  const order = await waitFor(
+    () => orderRow(orderId),
+    (row) => row.status === 'paid',
+    10_000,
+    'the payment webhook',
+  );
   return { lot, order };
 }
 
@@ -50,7 +55,12 @@ describe('POST /api/orders/:id/refund', () => {
 
     expect(response.status, JSON.stringify(response.body)).toBe(202);
     expect(refundResponseSchema.parse(response.body).requestedCents).toBe(order.totalCents);
-    const refunded = await waitFor(() => orderRow(order.id), (row) => row.status === 'refunded', 10_000, 'the charge.refunded webhook');
+    const refunded = await waitFor(
+      () => orderRow(order.id),
+      (row) => row.status === 'refunded',
+      10_000,
+      'the charge.refunded webhook',
+    );
     expect(refunded.refundedCents).toBe(order.totalCents);
     expect(await stockOf(lot.id)).toBe(20_000);
     expect(await movementsOf(lot.id, order.id)).toEqual({ sum: 0, count: 2 });
@@ -74,7 +84,12 @@ describe('POST /api/orders/:id/refund', () => {
 
     expect([first.status, second.status]).toEqual([202, 202]);
     expect(refundResponseSchema.parse(second.body).requestedCents).toBe(500);
-    const partly = await waitFor(() => orderRow(order.id), (row) => row.refundedCents === 500, 10_000, 'the charge.refunded webhook');
+    const partly = await waitFor(
+      () => orderRow(order.id),
+      (row) => row.refundedCents === 500,
+      10_000,
+      'the charge.refunded webhook',
+    );
     expect(partly.status).toBe('paid');
     expect((await stripe.refunds.list({ payment_intent: partly.stripePaymentIntentId! })).data.map((refund) => refund.amount)).toEqual([500]);
     expect(await stockOf(lot.id)).toBe(20_000 - 908);
@@ -110,7 +125,12 @@ describe('POST /api/orders/:id/refund', () => {
 
     expect((await owner.post(`/api/orders/${order.id}/refund`).send({})).status).toBe(202);
 
-    await waitFor(() => orderRow(order.id), (row) => row.status === 'refunded', 10_000, 'the charge.refunded webhook');
+    await waitFor(
+      () => orderRow(order.id),
+      (row) => row.status === 'refunded',
+      10_000,
+      'the charge.refunded webhook',
+    );
     expect(await stockOf(lot.id)).toBe(20_000 - 908);
     expect((await movementsOf(lot.id, order.id)).count).toBe(1);
   });

@@ -62,7 +62,10 @@ describe('the renewal-reminders job', () => {
     ]);
 
     // The charge went through; the next one is two weeks on, Thu 19 Jun.
-    await getTestDb().update(subscriptions).set({ currentPeriodEnd: new Date('2031-06-19T15:00:00Z') }).where(eq(subscriptions.id, subscriptionId));
+    await getTestDb()
+      .update(subscriptions)
+      .set({ currentPeriodEnd: new Date('2031-06-19T15:00:00Z') })
+      .where(eq(subscriptions.id, subscriptionId));
     await runAt('2031-06-10T14:00:00Z');
     expect(await remindersOf(subscriptionId)).toHaveLength(1);
     await runAt('2031-06-16T14:00:00Z');

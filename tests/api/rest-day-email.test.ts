@@ -47,14 +47,22 @@ afterAll(async () => {
  */
 async function moveClockTo(date: string, time: string) {
   const { settings } = await loadShopSettings(getTestDb());
-  const response = await request(app).post('/api/dev/clock').set('X-Restday-Client', 'web').send({ now: instantAt(date, time, settings.timeZone).toISOString() });
+  const response = await request(app)
+    .post('/api/dev/clock')
+    .set('X-Restday-Client', 'web')
+    .send({ now: instantAt(date, time, settings.timeZone).toISOString() });
   expect(response.status).toBe(200);
 }
 
 /** Queues one run of the job on pg-boss and waits until a worker has finished it. */
 async function runRestDayJob() {
   const id = await sendJob(queue, restDayEmailsJob, {});
-  await waitFor(() => queue.boss.getJobById(restDayEmailsJob.name, id!), (job) => job?.state === 'completed', 20_000, 'the rest-day job to run');
+  await waitFor(
+    () => queue.boss.getJobById(restDayEmailsJob.name, id!),
+    (job) => job?.state === 'completed',
+    20_000,
+    'the rest-day job to run',
+  );
 }
 
 const readySubject = 'Your coffee is ready to brew';
@@ -69,7 +77,9 @@ describe('the rest-day e-mail job', () => {
     const [kept, cancelled, refunded] = [await createTestUser('customer'), await createTestUser('customer'), await createTestUser('customer')];
     const placed = [];
     for (const customer of [kept, cancelled, refunded]) {
-      placed.push(await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 1, roastLevel: 'medium', brewMethod: 'filter' }] }));
+      placed.push(
+        await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 1, roastLevel: 'medium', brewMethod: 'filter' }] }),
+      );
     }
     expect(placed.map((order) => order.readyFrom)).toEqual([readyFrom, readyFrom, readyFrom]);
 
@@ -94,7 +104,12 @@ describe('the rest-day e-mail job', () => {
     // The ready-from morning: one e-mail, for the order still shipped.
     await moveClockTo(readyFrom, '09:00');
     await runRestDayJob();
-    const arrived = await waitFor(() => readyMail(kept), (mail) => mail.length > 0, 10_000, 'the rest-day e-mail');
+    const arrived = await waitFor(
+      () => readyMail(kept),
+      (mail) => mail.length > 0,
+      10_000,
+      'the rest-day e-mail',
+    );
     expect(arrived).toHaveLength(1);
     expect(arrived[0]!.text).toContain(lot.name);
     expect((await outboxRows(keys)).map((row) => row.dedupeKey)).toEqual([keys[0]]);
@@ -115,7 +130,10 @@ describe('the rest-day e-mail job', () => {
     const appWithQueue = createTestApp({ env: { RESTDAY_TEST_CLOCK: 'true' }, clock, queue });
     const { settings } = await loadShopSettings(getTestDb());
     const move = async (date: string, time: string) => {
-      const response = await request(appWithQueue).post('/api/dev/clock').set('X-Restday-Client', 'web').send({ now: instantAt(date, time, settings.timeZone).toISOString() });
+      const response = await request(appWithQueue)
+        .post('/api/dev/clock')
+        .set('X-Restday-Client', 'web')
+        .send({ now: instantAt(date, time, settings.timeZone).toISOString() });
       expect(response.status).toBe(200);
       return devClockResponseSchema.parse(response.body);
     };
@@ -124,7 +142,10 @@ describe('the rest-day e-mail job', () => {
     const readyFrom = dayAfter(roastDate, 4);
     await recordBatch({ lotId: lot.id, roastDate, roastLevel: 'medium', roastedGramsOut: 5000 });
     const customer = await createTestUser('customer');
-    const order = await createRoastedOrder(customer.id, { roastDate, lines: [{ lotId: lot.id, size: '12oz', quantity: 1, roastLevel: 'medium', brewMethod: 'filter' }] });
+    const order = await createRoastedOrder(customer.id, {
+      roastDate,
+      lines: [{ lotId: lot.id, size: '12oz', quantity: 1, roastLevel: 'medium', brewMethod: 'filter' }],
+    });
     expect(order.readyFrom).toBe(readyFrom);
 
     await move(dayAfter(roastDate, 1), '10:00');
@@ -135,14 +156,29 @@ describe('the rest-day e-mail job', () => {
     // The job runs every ten minutes (its cron), so a move across the ready-from morning makes it due.
     const moved = await move(readyFrom, '09:00');
     expect(moved.dueJobs).toContain(restDayEmailsJob.name);
-    const arrived = await waitFor(() => readyMail(customer), (mail) => mail.length > 0, 10_000, 'the rest-day e-mail after the clock move');
+    const arrived = await waitFor(
+      () => readyMail(customer),
+      (mail) => mail.length > 0,
+      10_000,
+      'the rest-day e-mail after the clock move',
+    );
     expect(arrived).toHaveLength(1);
 
     // Moving on again runs the job again (its queue drains), and it sends nothing twice.
     const again = await move(readyFrom, '11:00');
     expect(again.dueJobs).toContain(restDayEmailsJob.name);
-    await waitFor(() => pendingRestDayJobs(), (count) => count === 0, 20_000, 'the rest-day jobs to finish');
-    await waitFor(() => outboxRows([`rest-day:${order.id}`]), (rows) => rows.every((row) => row.status === 'sent'), 10_000, 'the outbox to settle');
+    await waitFor(
+      () => pendingRestDayJobs(),
+      (count) => count === 0,
+      20_000,
+      'the rest-day jobs to finish',
+    );
+    await waitFor(
+      () => outboxRows([`rest-day:${order.id}`]),
+      (rows) => rows.every((row) => row.status === 'sent'),
+      10_000,
+      'the outbox to settle',
+    );
     expect(await readyMail(customer)).toHaveLength(1);
     expect(await outboxRows([`rest-day:${order.id}`])).toHaveLength(1);
   });

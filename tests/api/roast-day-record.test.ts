@@ -5,7 +5,15 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { batchCreatedSchema, calendarResponseSchema, roastListResponseSchema } from '@shared/schemas/roastery';
 import { createTestApp } from '../setup/test-app';
 import { signedInAgent } from '../setup/test-users';
-import { createPaidRoastedOrder, createStockedLot, createTestUser, roastListTestSettings, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
+import {
+  createPaidRoastedOrder,
+  createStockedLot,
+  createTestUser,
+  roastListTestSettings,
+  runTag,
+  saveTestShopSettings,
+  type TestUser,
+} from '../factories/index';
 
 const standardFontDataUrl = `${path.join(path.dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
 
@@ -27,11 +35,14 @@ async function roastList(date: string) {
 }
 
 async function pdfText(url: string): Promise<string> {
-  const response = await staff.get(url).buffer(true).parse((res, done) => {
-    const chunks: Buffer[] = [];
-    res.on('data', (chunk: Buffer) => chunks.push(chunk));
-    res.on('end', () => done(null, Buffer.concat(chunks)));
-  });
+  const response = await staff
+    .get(url)
+    .buffer(true)
+    .parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (chunk: Buffer) => chunks.push(chunk));
+      res.on('end', () => done(null, Buffer.concat(chunks)));
+    });
   expect(response.status).toBe(200);
   const pdf = await getDocument({ data: new Uint8Array(response.body as Buffer), standardFontDataUrl }).promise;
   let text = '';
@@ -49,28 +60,49 @@ describe('a roast day’s Roast List is its production record', () => {
     const lotId = await createStockedLot(code, { name: 'Invented Record Washed', stockGrams: 20_000 });
     const dates = { shipDate: '2031-06-03', readyFrom: '2031-06-04', bestBefore: '2031-06-30' };
     // 6 × 12 oz + 4 × 1 lb at medium: 6 × 341 + 4 × 454 = 3,862 g roasted (fill weights: each bag size rounded up to a whole gram).
-    const first = await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates, lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }] });
-    const second = await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates, lines: [{ lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
+    const first = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      dates,
+      lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }],
+    });
+    const second = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      dates,
+      lines: [{ lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }],
+    });
 
     const before = await roastList(date);
     // Green: ceil(3,862 × 1.02 ÷ 0.85) = ceil(4,634.4) = 4,635 g, one batch (under the 9,600 g maximum load).
-    expect(before.lines).toMatchObject([{ lotCode: code, bags: 10, roastedGrams: 3_862, greenGrams: 4_635, toRoast: { roastedGrams: 3_862, greenGrams: 4_635 } }]);
+    expect(before.lines).toMatchObject([
+      { lotCode: code, bags: 10, roastedGrams: 3_862, greenGrams: 4_635, toRoast: { roastedGrams: 3_862, greenGrams: 4_635 } },
+    ]);
     expect(before.pull).toEqual([{ lotCode: code, lotName: 'Invented Record Washed', greenGrams: 4_635, stockGrams: 20_000, shortfallGrams: 0 }]);
 
     // The roaster records one batch: 4,635 g in, 3,940 g out (15.0 % loss, inside medium's 14–16 %).
-    const batch = await staff.post('/api/roastery/batches').set('X-Restday-Client', 'web').send({ roastDate: date, lotCode: code, roastLevel: 'medium', greenGramsIn: 4_635, roastedGramsOut: 3_940 });
+    const batch = await staff
+      .post('/api/roastery/batches')
+      .set('X-Restday-Client', 'web')
+      .send({ roastDate: date, lotCode: code, roastLevel: 'medium', greenGramsIn: 4_635, roastedGramsOut: 3_940 });
     expect(batch.status, JSON.stringify(batch.body)).toBe(201);
     batchCreatedSchema.parse(batch.body);
 
     // Roasted, not yet packed: the line is covered by the batch (3,940 g out ≥ 3,862 g needed).
     const roasted = await roastList(date);
-    expect(roasted.lines[0]).toMatchObject({ recorded: { batches: 1, greenGrams: 4_635, roastedGrams: 3_940 }, toRoast: { roastedGrams: 0, greenGrams: 0, batches: [] } });
+    expect(roasted.lines[0]).toMatchObject({
+      recorded: { batches: 1, greenGrams: 4_635, roastedGrams: 3_940 },
+      toRoast: { roastedGrams: 0, greenGrams: 0, batches: [] },
+    });
     expect(roasted.pull).toEqual([]);
 
     for (const orderId of [first, second]) {
       const packed = await staff.post(`/api/orders/${orderId}/pack`).set('X-Restday-Client', 'web').send({});
       expect(packed.status, JSON.stringify(packed.body)).toBe(200);
-      const shipped = await staff.post(`/api/orders/${orderId}/ship`).set('X-Restday-Client', 'web').send({ carrier: 'USPS', trackingNumber: `9400${tag}` });
+      const shipped = await staff
+        .post(`/api/orders/${orderId}/ship`)
+        .set('X-Restday-Client', 'web')
+        .send({ carrier: 'USPS', trackingNumber: `9400${tag}` });
       expect(shipped.status, JSON.stringify(shipped.body)).toBe(200);
     }
 
@@ -100,7 +132,16 @@ describe('a roast day’s Roast List is its production record', () => {
     const [header, row, ...rest] = csv.text.trim().split('\n');
     expect(header!.split(',')).toEqual(expect.arrayContaining(['recorded_batches', 'recorded_green_grams', 'recorded_roasted_grams', 'to_roast_green_grams']));
     const cells = Object.fromEntries(header!.split(',').map((column, index) => [column, row!.split(',')[index]]));
-    expect(cells).toMatchObject({ lot_code: code, bags: '10', green_grams: '4635', recorded_batches: '1', recorded_green_grams: '4635', recorded_roasted_grams: '3940', to_roast_green_grams: '0', lot_pull_green_grams: '0' });
+    expect(cells).toMatchObject({
+      lot_code: code,
+      bags: '10',
+      green_grams: '4635',
+      recorded_batches: '1',
+      recorded_green_grams: '4635',
+      recorded_roasted_grams: '3940',
+      to_roast_green_grams: '0',
+      lot_pull_green_grams: '0',
+    });
     expect(rest).toEqual([]);
 
     const text = await pdfText(`/api/roastery/days/${date}/roast-list.pdf?paper=letter`);
@@ -126,7 +167,10 @@ describe('a roast day’s Roast List is its production record', () => {
 
     // One batch recorded: 5,448 g in, 4,630 g out. Still to roast: 9,080 − 4,630 = 4,450 g roasted;
     // green ceil(4,450 × 1.02 ÷ 0.85) = ceil(5,340) = 5,340 g, one batch.
-    const batch = await staff.post('/api/roastery/batches').set('X-Restday-Client', 'web').send({ roastDate: date, lotCode: code, roastLevel: 'medium', greenGramsIn: 5_448, roastedGramsOut: 4_630 });
+    const batch = await staff
+      .post('/api/roastery/batches')
+      .set('X-Restday-Client', 'web')
+      .send({ roastDate: date, lotCode: code, roastLevel: 'medium', greenGramsIn: 5_448, roastedGramsOut: 4_630 });
     expect(batch.status, JSON.stringify(batch.body)).toBe(201);
     const list = await roastList(date);
     expect(list.lines[0]).toMatchObject({

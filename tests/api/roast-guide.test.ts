@@ -11,22 +11,24 @@ const code = `GUIDE-${randomUUID().slice(0, 8)}`;
 
 beforeAll(async () => {
   // An invented lot whose suggested level is medium.
-  await getTestDb().insert(lots).values({
-    code,
-    name: 'Invented guide lot',
-    origin: 'Testland',
-    region: 'East Slope',
-    producer: 'Invented Smallholders',
-    variety: 'Typica',
-    process: 'washed',
-    altitudeM: 1600,
-    cropYear: 2026,
-    moisturePct: 10.5,
-    suggestedLevel: 'medium',
-    allowedLevels: ['light', 'medium'],
-    stockGrams: 5000,
-    pricePerKgCents: 2200,
-  });
+  await getTestDb()
+    .insert(lots)
+    .values({
+      code,
+      name: 'Invented guide lot',
+      origin: 'Testland',
+      region: 'East Slope',
+      producer: 'Invented Smallholders',
+      variety: 'Typica',
+      process: 'washed',
+      altitudeM: 1600,
+      cropYear: 2026,
+      moisturePct: 10.5,
+      suggestedLevel: 'medium',
+      allowedLevels: ['light', 'medium'],
+      stockGrams: 5000,
+      pricePerKgCents: 2200,
+    });
 });
 
 describe('GET /api/lots/:code/roast-guide', () => {

@@ -7,7 +7,16 @@ import { roastListResponseSchema } from '@shared/schemas/roastery';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { createTestApp } from '../setup/test-app';
 import { signedInAgent } from '../setup/test-users';
-import { createPaidRoastedOrder, createStockedLot, createTestUser, pickRotationLot, roastListTestSettings, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
+import {
+  createPaidRoastedOrder,
+  createStockedLot,
+  createTestUser,
+  pickRotationLot,
+  roastListTestSettings,
+  runTag,
+  saveTestShopSettings,
+  type TestUser,
+} from '../factories/index';
 
 // pdf.js reads the standard fonts' metrics from its own package.
 const standardFontDataUrl = `${path.join(path.dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
@@ -40,10 +49,24 @@ describe('GET /api/roastery/days/:date/roast-list', () => {
         { lotId, size: '1lb', quantity: 1, roastLevel: 'medium' },
       ],
     });
-    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '1lb', quantity: 3, roastLevel: 'medium', brewMethod: 'espresso' }] });
+    await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      lines: [{ lotId, size: '1lb', quantity: 3, roastLevel: 'medium', brewMethod: 'espresso' }],
+    });
     // Not on the list: unpaid, cancelled, another day.
-    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, status: 'pending_payment', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
-    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, status: 'cancelled', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      status: 'pending_payment',
+      lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }],
+    });
+    await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      status: 'cancelled',
+      lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }],
+    });
     await createPaidRoastedOrder({ userId: customer.id, roastDate: '2031-03-07', lines: [{ lotId, size: '2lb', quantity: 5, roastLevel: 'medium' }] });
 
     const response = await staff.get(`/api/roastery/days/${date}/roast-list`);
@@ -147,7 +170,14 @@ describe('GET /api/roastery/days/:date/roast-list.csv and .pdf', () => {
   beforeAll(async () => {
     code = `${tag}-DOC`;
     const lotId = await createStockedLot(code, { name: '=HYPERLINK("http://invalid.example")', stockGrams: 20_000 });
-    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }, { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
+    await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      lines: [
+        { lotId, size: '12oz', quantity: 6, roastLevel: 'medium' },
+        { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' },
+      ],
+    });
   });
 
   it('downloads the list as CSV, one row per lot and level, with text that could run as a formula kept as text', async () => {
@@ -165,11 +195,14 @@ describe('GET /api/roastery/days/:date/roast-list.csv and .pdf', () => {
   });
 
   it('prints the list as a PDF with the shop, the date, the lines, the pull list and the roasting cautions', async () => {
-    const response = await staff.get(`/api/roastery/days/${date}/roast-list.pdf?paper=a4`).buffer(true).parse((res, done) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (chunk: Buffer) => chunks.push(chunk));
-      res.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const response = await staff
+      .get(`/api/roastery/days/${date}/roast-list.pdf?paper=a4`)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toBe('application/pdf');
     const pdf = await getDocument({ data: new Uint8Array(response.body as Buffer), standardFontDataUrl }).promise;

@@ -10,7 +10,15 @@ import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
 import { inboxOf, testRelay } from './outbox-support';
-import { createPaidRoastedOrder, createStockedLot, createSubscriptionDelivery, createTestUser, runTag, saveTestShopSettings, type TestUser } from '../factories/index';
+import {
+  createPaidRoastedOrder,
+  createStockedLot,
+  createSubscriptionDelivery,
+  createTestUser,
+  runTag,
+  saveTestShopSettings,
+  type TestUser,
+} from '../factories/index';
 
 // Invented customers, lots and orders in May 2031, a month no other test file uses.
 const tag = runTag();
@@ -70,7 +78,12 @@ describe('PUT /api/roastery/calendar/:date', () => {
 
   beforeAll(async () => {
     [customerA, customerB, customerC] = await Promise.all([createTestUser('customer'), createTestUser('customer'), createTestUser('customer')]);
-    ids.a1 = await createPaidRoastedOrder({ userId: customerA.id, roastDate: closed, dates: oldDates, lines: [{ lotId, size: '12oz', quantity: 2, roastLevel: 'medium' }] });
+    ids.a1 = await createPaidRoastedOrder({
+      userId: customerA.id,
+      roastDate: closed,
+      dates: oldDates,
+      lines: [{ lotId, size: '12oz', quantity: 2, roastLevel: 'medium' }],
+    });
     ids.a2 = await createPaidRoastedOrder({
       userId: customerA.id,
       roastDate: closed,
@@ -79,7 +92,14 @@ describe('PUT /api/roastery/calendar/:date', () => {
       lines: [{ lotId, size: '1lb', quantity: 1, roastLevel: 'dark', brewMethod: 'espresso', grind: 'espresso' }],
     });
     // Customer B: a paid subscription delivery (an order carrying its delivery) and another subscription's delivery not paid yet.
-    const paidDelivery = await createSubscriptionDelivery({ userId: customerB.id, lotId, roastLevel: 'light', brewMethod: 'filter', roastDate: closed, dates: oldDates });
+    const paidDelivery = await createSubscriptionDelivery({
+      userId: customerB.id,
+      lotId,
+      roastLevel: 'light',
+      brewMethod: 'filter',
+      roastDate: closed,
+      dates: oldDates,
+    });
     ids.b1 = await createPaidRoastedOrder({
       userId: customerB.id,
       roastDate: closed,
@@ -89,9 +109,17 @@ describe('PUT /api/roastery/calendar/:date', () => {
       lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'light' }],
     });
     ids.b1Delivery = paidDelivery.deliveryId;
-    ids.b2Delivery = (await createSubscriptionDelivery({ userId: customerB.id, lotId: null, roastLevel: 'medium', brewMethod: 'espresso', roastDate: closed, dates: oldDates })).deliveryId;
+    ids.b2Delivery = (
+      await createSubscriptionDelivery({ userId: customerB.id, lotId: null, roastLevel: 'medium', brewMethod: 'espresso', roastDate: closed, dates: oldDates })
+    ).deliveryId;
     // Customer C: an order still waiting for payment, which the roastery does not plan.
-    ids.c1 = await createPaidRoastedOrder({ userId: customerC.id, roastDate: closed, status: 'pending_payment', dates: oldDates, lines: [{ lotId, size: '1lb', quantity: 1, roastLevel: 'medium' }] });
+    ids.c1 = await createPaidRoastedOrder({
+      userId: customerC.id,
+      roastDate: closed,
+      status: 'pending_payment',
+      dates: oldDates,
+      lines: [{ lotId, size: '1lb', quantity: 1, roastLevel: 'medium' }],
+    });
   });
 
   it('closing a roast day moves its orders and deliveries to the next open roast day and sends one e-mail per affected customer', async () => {
@@ -117,7 +145,13 @@ describe('PUT /api/roastery/calendar/:date', () => {
       [ids.c1!]: { roastDate: closed, ...oldDates },
     });
     const deliveryRows = await getTestDb()
-      .select({ id: deliveries.id, roastDate: deliveries.roastDate, shipDate: deliveries.shipDate, readyFrom: deliveries.readyFrom, bestBefore: deliveries.bestBefore })
+      .select({
+        id: deliveries.id,
+        roastDate: deliveries.roastDate,
+        shipDate: deliveries.shipDate,
+        readyFrom: deliveries.readyFrom,
+        bestBefore: deliveries.bestBefore,
+      })
       .from(deliveries)
       .where(inArray(deliveries.id, [ids.b1Delivery!, ids.b2Delivery!]));
     expect(Object.fromEntries(deliveryRows.map(({ id, ...dates }) => [id, dates]))).toEqual({
@@ -171,9 +205,21 @@ describe('PUT /api/roastery/calendar/:date', () => {
     const customer = await createTestUser('customer');
     expect((await staff.put('/api/roastery/calendar/2031-05-23').send({ open: true, capacityGrams: 1_000 })).status).toBe(200);
     // Paid first: 1 × 341 g at medium 15 % → ceil(341 × 1.02 ÷ 0.85) = ceil(409.2) = 410 g, fits in 1,000 g.
-    const small = await createPaidRoastedOrder({ userId: customer.id, roastDate: closedDay, paidAt: new Date('2031-05-01T15:00:00Z'), dates: datesAfter(closedDay), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const small = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: closedDay,
+      paidAt: new Date('2031-05-01T15:00:00Z'),
+      dates: datesAfter(closedDay),
+      lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }],
+    });
     // Paid second: 2 × 454 g = 908 g → ceil(908 × 1.02 ÷ 0.85) = ceil(1,089.6) = 1,090 g: 410 + 1,090 > 1,000, so Monday.
-    const large = await createPaidRoastedOrder({ userId: customer.id, roastDate: closedDay, paidAt: new Date('2031-05-02T15:00:00Z'), dates: datesAfter(closedDay), lines: [{ lotId, size: '1lb', quantity: 2, roastLevel: 'medium' }] });
+    const large = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: closedDay,
+      paidAt: new Date('2031-05-02T15:00:00Z'),
+      dates: datesAfter(closedDay),
+      lines: [{ lotId, size: '1lb', quantity: 2, roastLevel: 'medium' }],
+    });
     const day = calendarDayUpdateResponseSchema.parse((await staff.put(`/api/roastery/calendar/${closedDay}`).send({ open: false })).body);
     expect(Object.fromEntries(day.moved.map((move) => [move.orderId, move.to]))).toEqual({ [small]: '2031-05-23', [large]: '2031-05-26' });
     // One customer, one e-mail listing both orders.
@@ -185,7 +231,12 @@ describe('PUT /api/roastery/calendar/:date', () => {
   it('answers 409 when no later roast day has room for an order, and leaves the day open and the order where it was', async () => {
     const day = '2031-05-19'; // a Monday
     const customer = await createTestUser('customer');
-    const order = await createPaidRoastedOrder({ userId: customer.id, roastDate: day, dates: datesAfter(day), lines: [{ lotId, size: '2lb', quantity: 3, roastLevel: 'medium' }] });
+    const order = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: day,
+      dates: datesAfter(day),
+      lines: [{ lotId, size: '2lb', quantity: 3, roastLevel: 'medium' }],
+    });
     // 3 × 908 g = 2,724 g roasted needs more than a 2,000 g day can roast, on any day.
     await saveTestShopSettings({ ...shopSettingsForDates, dayCapacityGrams: 2_000 });
     try {
@@ -205,8 +256,18 @@ describe('PUT /api/roastery/calendar/:date', () => {
     // one order of 1 × 341 g at medium: ceil(341 × 1.02 ÷ 0.85) = 410 g of green, so Friday has room for one.
     const customer = await createTestUser('customer');
     expect((await staff.put('/api/roastery/calendar/2031-06-20').send({ open: true, capacityGrams: 600 })).status).toBe(200);
-    const monday = await createPaidRoastedOrder({ userId: customer.id, roastDate: '2031-06-16', dates: datesAfter('2031-06-16'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
-    const wednesday = await createPaidRoastedOrder({ userId: customer.id, roastDate: '2031-06-18', dates: datesAfter('2031-06-18'), lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }] });
+    const monday = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: '2031-06-16',
+      dates: datesAfter('2031-06-16'),
+      lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }],
+    });
+    const wednesday = await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: '2031-06-18',
+      dates: datesAfter('2031-06-18'),
+      lines: [{ lotId, size: '12oz', quantity: 1, roastLevel: 'medium' }],
+    });
     const responses = await Promise.all(['2031-06-16', '2031-06-18'].map((date) => staff.put(`/api/roastery/calendar/${date}`).send({ open: false })));
     expect(responses.map((response) => response.status)).toEqual([200, 200]);
     const dates = await orderDates([monday, wednesday]);
@@ -263,7 +324,17 @@ describe('PUT /api/roastery/calendar/:date with shipOpen', () => {
     const response = await staff.put(`/api/roastery/calendar/${shipDay}`).send({ open: true, shipOpen: false, note: 'Carrier depot closed (invented)' });
     expect(response.status, JSON.stringify(response.body)).toBe(200);
     const day = calendarDayUpdateResponseSchema.parse(response.body);
-    expect(day).toMatchObject({ date: shipDay, open: true, capacityGrams: 60_000, shipOpen: false, shipOverride: false, holiday: null, overridden: true, moved: [], movedDeliveries: [] });
+    expect(day).toMatchObject({
+      date: shipDay,
+      open: true,
+      capacityGrams: 60_000,
+      shipOpen: false,
+      shipOverride: false,
+      holiday: null,
+      overridden: true,
+      moved: [],
+      movedDeliveries: [],
+    });
     // Next ship day: Tue 15 Jul → Wed 16, Thu 17, Fri 18: ready, and no weekend in transit.
     expect(day.shipMoved.map((move) => [move.orderId ?? move.deliveryId, move.from, move.to]).sort()).toEqual(
       [
@@ -286,7 +357,9 @@ describe('PUT /api/roastery/calendar/:date with shipOpen', () => {
   });
 
   it('shipping as usual again brings the parcels back to the day, and a day like the weekly settings keeps no row', async () => {
-    const day = calendarDayUpdateResponseSchema.parse((await staff.put(`/api/roastery/calendar/${shipDay}`).send({ open: true, shipOpen: null, note: '' })).body);
+    const day = calendarDayUpdateResponseSchema.parse(
+      (await staff.put(`/api/roastery/calendar/${shipDay}`).send({ open: true, shipOpen: null, note: '' })).body,
+    );
     expect(day).toMatchObject({ shipOpen: true, shipOverride: null, overridden: false });
     expect(day.shipMoved.every((move) => move.from === '2031-07-15' && move.to === shipDay)).toBe(true);
     expect(await shipDates()).toEqual([shipDay, shipDay]);
@@ -308,8 +381,21 @@ describe('GET /api/roastery/calendar', () => {
   it('lists each day open or closed with its capacity, its orders and the green its Roast List plans', async () => {
     const customer = await createTestUser('customer');
     const date = '2031-06-04'; // a Wednesday
-    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates: datesAfter(date), lines: [{ lotId, size: '12oz', quantity: 6, roastLevel: 'medium' }, { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' }] });
-    await createPaidRoastedOrder({ userId: customer.id, roastDate: date, dates: datesAfter(date), lines: [{ lotId: null, size: '2lb', quantity: 1, roastLevel: 'dark' }] });
+    await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      dates: datesAfter(date),
+      lines: [
+        { lotId, size: '12oz', quantity: 6, roastLevel: 'medium' },
+        { lotId, size: '1lb', quantity: 4, roastLevel: 'medium' },
+      ],
+    });
+    await createPaidRoastedOrder({
+      userId: customer.id,
+      roastDate: date,
+      dates: datesAfter(date),
+      lines: [{ lotId: null, size: '2lb', quantity: 1, roastLevel: 'dark' }],
+    });
     await staff.put('/api/roastery/calendar/2031-06-06').send({ open: false, note: 'Invented holiday' });
     await staff.put('/api/roastery/calendar/2031-06-07').send({ open: true, capacityGrams: 20_000 });
 

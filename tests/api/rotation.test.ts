@@ -56,7 +56,10 @@ describe("the Roaster's Rotation", () => {
     await inventDelivery(skipping, 1, '2032-03-03', 'skipped');
     // Its cutoff passed when it brought three bags: the frozen delivery counts, not today's choice.
     const frozen = await inventDelivery(plain, 2, '2032-03-06');
-    await getTestDb().update(deliveries).set({ bagsPerDelivery: 3, bagSize: '12oz', roastLevel: 'medium', grind: 'whole-bean', brewMethod: 'filter' }).where(eq(deliveries.id, frozen));
+    await getTestDb()
+      .update(deliveries)
+      .set({ bagsPerDelivery: 3, bagSize: '12oz', roastLevel: 'medium', grind: 'whole-bean', brewMethod: 'filter' })
+      .where(eq(deliveries.id, frozen));
 
     const after = await week();
     const added = after.map((day, index) => ({
@@ -78,7 +81,13 @@ describe("the Roaster's Rotation", () => {
     const lot = await createLotForSale(50_000);
     const saved = await staff.put('/api/roastery/rotation/2032-03-03').send({ lotCode: lot.code, note: 'Bright and sweet this week' });
     expect(saved.status).toBe(200);
-    expect(rotationPickResponseSchema.parse(saved.body)).toEqual({ roastDate: '2032-03-03', lotCode: lot.code, coffee: lot.name, note: 'Bright and sweet this week', warnings: [] });
+    expect(rotationPickResponseSchema.parse(saved.body)).toEqual({
+      roastDate: '2032-03-03',
+      lotCode: lot.code,
+      coffee: lot.name,
+      note: 'Bright and sweet this week',
+      warnings: [],
+    });
     const days = rotationResponseSchema.parse((await staff.get('/api/roastery/rotation').query({ from: '2032-03-03', to: '2032-03-03' })).body).days;
     expect(days).toEqual([expect.objectContaining({ lotCode: lot.code, coffee: lot.name, note: 'Bright and sweet this week' })]);
     expect(await pickOn('2032-03-03')).toMatchObject({ lotId: lot.id });

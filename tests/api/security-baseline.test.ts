@@ -49,7 +49,11 @@ describe('cross-site request forgery', () => {
       .send({ email: user.email, password: user.password });
     expect(sameHost.status).toBe(200);
     const withPublicUrl = createTestApp({ env: { PUBLIC_URL: 'https://shop.example.test' } });
-    const fromPublicUrl = await request(withPublicUrl).post('/api/auth/sign-in').set(web).set('Origin', 'https://shop.example.test').send({ email: user.email, password: user.password });
+    const fromPublicUrl = await request(withPublicUrl)
+      .post('/api/auth/sign-in')
+      .set(web)
+      .set('Origin', 'https://shop.example.test')
+      .send({ email: user.email, password: user.password });
     expect(fromPublicUrl.status).toBe(200);
   });
 
@@ -149,7 +153,12 @@ describe('throttling (limits at their defaults: 10 per account from one address,
     expect((await request(throttled).post('/api/auth/password-reset').set(web).set('X-Forwarded-For', freshIp()).send({ email })).status).toBe(429);
 
     const ip = freshIp();
-    const signUp = () => request(throttled).post('/api/auth/sign-up').set(web).set('X-Forwarded-For', ip).send({ email: testAddress('bulk'), password: 'seven mossy stones', name: 'Bulk Invented' });
+    const signUp = () =>
+      request(throttled)
+        .post('/api/auth/sign-up')
+        .set(web)
+        .set('X-Forwarded-For', ip)
+        .send({ email: testAddress('bulk'), password: 'seven mossy stones', name: 'Bulk Invented' });
     for (let attempt = 0; attempt < 30; attempt++) expect((await signUp()).status).toBe(201);
     expect((await signUp()).status).toBe(429);
   });
@@ -168,7 +177,8 @@ describe('audit trail', () => {
   it('every sign-in attempt is recorded with the account id and address, in UTC; passwords never', async () => {
     const user = await createTestUser('customer');
     const ip = freshIp();
-    const at = (agentIp: string, password: string) => request(app).post('/api/auth/sign-in').set(web).set('X-Forwarded-For', agentIp).send({ email: user.email, password });
+    const at = (agentIp: string, password: string) =>
+      request(app).post('/api/auth/sign-in').set(web).set('X-Forwarded-For', agentIp).send({ email: user.email, password });
     await at(ip, 'not my password');
     await at(ip, TEST_PASSWORD);
     const rows = await getTestDb().select().from(auditLog).where(eq(auditLog.actorId, user.id)).orderBy(auditLog.at);
@@ -219,7 +229,10 @@ describe('log scan', () => {
     const cookieValue = (c: string) => c.split(';')[0]!.split('=')[1]!;
     secrets.push(cookieValue(String(signedUp.headers['set-cookie'])));
     await agent.post('/api/auth/sign-in').send({ email, password: 'wrong horse battery' }).expect(401);
-    await agent.post('/api/auth/sign-up').send({ email: testAddress('weak'), password: 'password123', name: 'Weak' }).expect(400);
+    await agent
+      .post('/api/auth/sign-up')
+      .send({ email: testAddress('weak'), password: 'password123', name: 'Weak' })
+      .expect(400);
     const changed = await agent.put('/api/account/password').send({ currentPassword: firstPassword, newPassword: secondPassword });
     expect(changed.status).toBe(204);
     secrets.push(cookieValue(String(changed.headers['set-cookie'])));
@@ -253,7 +266,11 @@ describe('log scan', () => {
     const joinerPassword = `fresh roast ${randomUUID().slice(0, 6)}`;
     secrets.push(joinerPassword);
     await request(logged).post('/api/auth/invitations/preview').set(web).send({ token: invitationToken }).expect(200);
-    await request(logged).post('/api/auth/invitations/accept').set(web).send({ token: invitationToken, name: 'New Roaster', password: joinerPassword }).expect(201);
+    await request(logged)
+      .post('/api/auth/invitations/accept')
+      .set(web)
+      .send({ token: invitationToken, name: 'New Roaster', password: joinerPassword })
+      .expect(201);
     await agent.post('/api/auth/sign-out').expect(204);
 
     const log = lines.join('');

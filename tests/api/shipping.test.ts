@@ -125,14 +125,22 @@ describe('the cart’s quote and the green checkout’s charge', () => {
     await putShipping({ bands: [{ maxGrams: 1000, cents: 895 }], bagTareGrams: 20, boxTareGrams: 180 });
     const query = { roastLevel: 'medium', bagsPerDelivery: '1', brewMethod: 'filter', cadenceWeeks: '2' };
 
-    const response = await request(app).get('/api/subscriptions/preview').query({ ...query, bagSize: '2lb' });
+    const response = await request(app)
+      .get('/api/subscriptions/preview')
+      .query({ ...query, bagSize: '2lb' });
 
     expect(response.status).toBe(422);
     const { error } = apiErrorSchema.parse(response.body);
     expect(error.code).toBe('too_heavy_to_ship');
     expect(Object.keys(error.fields ?? {})).toEqual(['bagSize']);
     // 12 oz: 341 + 20 + 180 = 541 g still ships in the 1 kg band.
-    expect((await request(app).get('/api/subscriptions/preview').query({ ...query, bagSize: '12oz' })).status).toBe(200);
+    expect(
+      (
+        await request(app)
+          .get('/api/subscriptions/preview')
+          .query({ ...query, bagSize: '12oz' })
+      ).status,
+    ).toBe(200);
     await saveTestShopSettings();
   });
 });

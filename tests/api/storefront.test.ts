@@ -100,7 +100,13 @@ describe('pages found and shared', () => {
       expect.objectContaining({ '@type': 'Offer', sku: `${lot.code}-1lb`, price: '18.14', priceCurrency: 'USD', availability: 'https://schema.org/InStock' }),
       expect.objectContaining({ '@type': 'Offer', sku: `${lot.code}-2lb`, price: '36.29', priceCurrency: 'USD', availability: 'https://schema.org/InStock' }),
       // 1,000 g in stock cannot fill a 5 lb bag (2,268 g).
-      expect.objectContaining({ '@type': 'Offer', sku: `${lot.code}-5lb`, price: '90.72', priceCurrency: 'USD', availability: 'https://schema.org/OutOfStock' }),
+      expect.objectContaining({
+        '@type': 'Offer',
+        sku: `${lot.code}-5lb`,
+        price: '90.72',
+        priceCurrency: 'USD',
+        availability: 'https://schema.org/OutOfStock',
+      }),
     ]);
   });
 

@@ -31,7 +31,12 @@ describe('GET /api/roastery/subscribers', () => {
     const [avery, blake, casey, drew] = people as [(typeof people)[0], (typeof people)[0], (typeof people)[0], (typeof people)[0]];
     const onLot = await inventSubscription(avery, { lotId: lot.id, roastLevel: 'light', cadenceWeeks: 1, createdAt: new Date('2031-01-02T12:00:00Z') });
     const rotation = await inventSubscription(blake, { roastLevel: 'dark', cadenceWeeks: 2, bagSize: '2lb', createdAt: new Date('2031-01-03T12:00:00Z') });
-    const paused = await inventSubscription(casey, { status: 'paused', pausedUntil: '2031-04-01', cadenceWeeks: 4, createdAt: new Date('2031-01-04T12:00:00Z') });
+    const paused = await inventSubscription(casey, {
+      status: 'paused',
+      pausedUntil: '2031-04-01',
+      cadenceWeeks: 4,
+      createdAt: new Date('2031-01-04T12:00:00Z'),
+    });
     await inventSubscription(drew, { status: 'incomplete', createdAt: new Date('2031-01-05T12:00:00Z') });
     // Avery: yesterday's delivery is past; the 5th is skipped; the next to roast is Fri 7 Mar.
     await inventDelivery(onLot, 1, '2031-03-03', 'roasted');
@@ -123,7 +128,10 @@ describe('GET /api/roastery/subscribers.csv', () => {
     expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(response.headers['content-disposition']).toBe('attachment; filename=restday-subscribers.csv');
     // No cell here holds a comma, quote or line break, so the lines split plainly.
-    const [header, ...rows] = response.text.trimEnd().split('\n').map((line) => line.split(','));
+    const [header, ...rows] = response.text
+      .trimEnd()
+      .split('\n')
+      .map((line) => line.split(','));
     expect(header).toEqual([...subscriberCsvColumns]);
     expect(rows).toHaveLength(1);
     expect(Object.fromEntries(header!.map((column, index) => [column, rows[0]![index]]))).toMatchObject({
@@ -146,7 +154,13 @@ describe('GET /api/roastery/subscribers/:id', () => {
     const frankie = people[0]!;
     const subscriptionId = await inventSubscription(frankie, { cadenceWeeks: 1, currentPeriodEnd: new Date('2031-03-09T17:00:00Z') });
     const roasted = await inventDelivery(subscriptionId, 1, '2031-02-26', 'roasted');
-    const orderId = await inventDeliveryOrder(frankie, subscriptionId, roasted, { roastDate: '2031-02-26', size: '12oz', quantity: 1, status: 'roasted', lotId: picked.id });
+    const orderId = await inventDeliveryOrder(frankie, subscriptionId, roasted, {
+      roastDate: '2031-02-26',
+      size: '12oz',
+      quantity: 1,
+      status: 'roasted',
+      lotId: picked.id,
+    });
     await inventDelivery(subscriptionId, 2, '2031-03-05');
     await pickRotationLot('2031-02-26', picked.id);
 
@@ -163,10 +177,12 @@ describe('GET /api/roastery/subscribers/:id', () => {
       shippingAddress: { line1: '4 Larkspur Lane', city: 'Wrenfield', line2: null },
       nextRoastDate: '2031-03-05',
     });
-    expect(detail.deliveries.map((delivery) => [delivery.sequence, delivery.roastDate, delivery.status, delivery.lotCode, delivery.order?.id ?? null])).toEqual([
-      [1, '2031-02-26', 'roasted', picked.code, orderId],
-      [2, '2031-03-05', 'scheduled', null, null],
-    ]);
+    expect(detail.deliveries.map((delivery) => [delivery.sequence, delivery.roastDate, delivery.status, delivery.lotCode, delivery.order?.id ?? null])).toEqual(
+      [
+        [1, '2031-02-26', 'roasted', picked.code, orderId],
+        [2, '2031-03-05', 'scheduled', null, null],
+      ],
+    );
     expect(detail.orders).toEqual([expect.objectContaining({ id: orderId, status: 'roasted', bags: 1, totalCents: 1620 + 895, roastDate: '2031-02-26' })]);
   });
 

@@ -86,7 +86,13 @@ describe('GET /api/subscriptions/preview', () => {
     const at = async (instant: string) => {
       const atClock = createAdjustableClock();
       atClock.set(new Date(instant));
-      const body = subscriptionPreviewSchema.parse((await request(createTestApp({ clock: atClock })).get('/api/subscriptions/preview').query(choice)).body);
+      const body = subscriptionPreviewSchema.parse(
+        (
+          await request(createTestApp({ clock: atClock }))
+            .get('/api/subscriptions/preview')
+            .query(choice)
+        ).body,
+      );
       return body.deliveries[0]?.roastDate;
     };
     expect(await at('2031-03-11T15:59:00Z')).toBe('2031-03-12');

@@ -37,12 +37,16 @@ async function signedIn() {
   return { user, agent: await signedInAgent(app, user) };
 }
 
-
 /** The same, with the delivery roasting Monday 13 January already paid (its cutoff, Sunday 12:00, is ahead). */
 async function withPaidDelivery(owner: TestUser) {
   const subscription = await createWeeklySubscription(owner);
   const deliveryId = await inventDelivery(subscription.id, 1, '2031-01-13');
-  const orderId = await inventDeliveryOrder(owner, subscription.id, deliveryId, { roastDate: '2031-01-13', size: '12oz', quantity: 2, lotId: subscription.lot.id });
+  const orderId = await inventDeliveryOrder(owner, subscription.id, deliveryId, {
+    roastDate: '2031-01-13',
+    size: '12oz',
+    quantity: 2,
+    lotId: subscription.lot.id,
+  });
   return { ...subscription, orderId };
 }
 
@@ -61,7 +65,11 @@ async function lastChangeEmail(subscriptionId: string) {
     .from(emailOutbox)
     .where(and(eq(emailOutbox.template, 'subscription-changed'), like(emailOutbox.dedupeKey, `subscription-changed:${subscriptionId}:%`)))
     .orderBy(desc(emailOutbox.createdAt));
-  const context = { shop: { name: 'Invented Test Roastery', postalAddress: '1 Invented Lane, Sampleville, CO 80000' }, baseUrl: 'http://127.0.0.1', timeZone: 'America/New_York' };
+  const context = {
+    shop: { name: 'Invented Test Roastery', postalAddress: '1 Invented Lane, Sampleville, CO 80000' },
+    baseUrl: 'http://127.0.0.1',
+    timeZone: 'America/New_York',
+  };
   return renderEmail('subscription-changed', row!.payload, context);
 }
 
@@ -111,7 +119,9 @@ describe('skipping a paid delivery, and undoing a skip', () => {
     const { id } = await createWeeklySubscription(user);
     const later = await agent.post(`/api/subscriptions/${id}/deliveries/2031-01-27/skip`);
     expect(later.status).toBe(200);
-    expect(subscriptionChangeResponseSchema.parse(later.body).notice).toBe('Skipped the delivery roasting Monday, January 27, 2031. It will not be roasted, shipped or charged.');
+    expect(subscriptionChangeResponseSchema.parse(later.body).notice).toBe(
+      'Skipped the delivery roasting Monday, January 27, 2031. It will not be roasted, shipped or charged.',
+    );
     expect(brief(await deliveriesOf(agent, id, 4))).toEqual(['2031-01-06 scheduled', '2031-01-13 scheduled', '2031-01-20 scheduled', '2031-01-27 skipped']);
     expect((await lastChangeEmail(id)).text).toContain('Monday, January 27, 2031');
 

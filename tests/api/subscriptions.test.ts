@@ -32,14 +32,14 @@ beforeAll(async () => {
   await saveShopSettings(getTestDb(), defaultShopSettings);
 });
 
-
 async function deliveriesOf(agent: Awaited<ReturnType<typeof signedInAgent>>, id: string, count = 4): Promise<SubscriptionDelivery[]> {
   const response = await agent.get(`/api/subscriptions/${id}/deliveries?count=${count}`);
   expect(response.status).toBe(200);
   return subscriptionDeliveriesResponseSchema.parse(response.body).items;
 }
 
-const brief = (items: SubscriptionDelivery[]) => items.map((item) => `${item.roastDate} ${item.status}${item.locked ? ' locked' : ''} ${item.roastLevel} ${item.grind}`);
+const brief = (items: SubscriptionDelivery[]) =>
+  items.map((item) => `${item.roastDate} ${item.status}${item.locked ? ' locked' : ''} ${item.roastLevel} ${item.grind}`);
 
 async function changeEmails(subscriptionId: string) {
   const [row] = await getTestDb()
@@ -124,7 +124,9 @@ describe('GET /api/subscriptions and /api/subscriptions/:id/deliveries', () => {
     // Monday 6 Jan roasts today; its cutoff was Sunday 5 Jan 12:00, so it is locked. Monday 13 Jan's cutoff
     // (Sunday 12 Jan 12:00) is ahead. Ship: the first weekday on or after roast + 1 day's hold (Tuesday);
     // ready-from: roast + 2 days' filter rest; best-before: roast + 28 days.
-    expect(items.map(({ roastDate, shipDate, readyFrom, bestBefore, locked, status }) => ({ roastDate, shipDate, readyFrom, bestBefore, locked, status }))).toEqual([
+    expect(
+      items.map(({ roastDate, shipDate, readyFrom, bestBefore, locked, status }) => ({ roastDate, shipDate, readyFrom, bestBefore, locked, status })),
+    ).toEqual([
       { roastDate: '2031-01-06', shipDate: '2031-01-07', readyFrom: '2031-01-08', bestBefore: '2031-02-03', locked: true, status: 'scheduled' },
       { roastDate: '2031-01-13', shipDate: '2031-01-14', readyFrom: '2031-01-15', bestBefore: '2031-02-10', locked: false, status: 'scheduled' },
       { roastDate: '2031-01-20', shipDate: '2031-01-21', readyFrom: '2031-01-22', bestBefore: '2031-02-17', locked: false, status: 'scheduled' },
@@ -135,7 +137,13 @@ describe('GET /api/subscriptions and /api/subscriptions/:id/deliveries', () => {
     const list = await agent.get('/api/subscriptions');
     expect(list.status).toBe(200);
     const [only] = list.body.items as unknown[];
-    expect(subscriptionSchema.parse(only)).toMatchObject({ id, coffee: lot.name, lotCode: lot.code, nextDelivery: { roastDate: '2031-01-06' }, cancelAtPeriodEnd: false });
+    expect(subscriptionSchema.parse(only)).toMatchObject({
+      id,
+      coffee: lot.name,
+      lotCode: lot.code,
+      nextDelivery: { roastDate: '2031-01-06' },
+      cancelAtPeriodEnd: false,
+    });
   });
 
   it('only the owner can read or change a subscription: anyone else gets 404 and nothing changes', async () => {
@@ -278,7 +286,8 @@ describe('changing a subscription', () => {
       ['skip', { roastDate: '13/01/2031' }, 'roastDate'],
     ];
     for (const [action, body, field] of cases) {
-      const response = action === 'patch' ? await agent.patch(`/api/subscriptions/${id}`).send(body) : await agent.post(`/api/subscriptions/${id}/${action}`).send(body);
+      const response =
+        action === 'patch' ? await agent.patch(`/api/subscriptions/${id}`).send(body) : await agent.post(`/api/subscriptions/${id}/${action}`).send(body);
       expect(response.status, `${action} ${JSON.stringify(body)}`).toBe(400);
       expect(apiErrorSchema.parse(response.body).error.fields, `${action} ${JSON.stringify(body)}`).toHaveProperty(field);
     }

@@ -189,4 +189,3 @@ describe('role changes and disabling take effect on the next request', () => {
     expect((await agent.get('/api/owner/team')).status).toBe(200);
   });
 });
-

@@ -44,7 +44,13 @@ try {
   createDatabaseIfMissing(cluster, 'restday_bench', { recreate: true });
   const databaseUrl = cluster.urlFor('restday_bench');
   await runMigrations(databaseUrl);
-  const config = loadConfig({ NODE_ENV: 'production', PUBLIC_URL: 'http://127.0.0.1', SESSION_SECRET: 'bench-only-secret-0123456789abcdef0123', LOG_LEVEL: 'silent', DATABASE_URL: databaseUrl });
+  const config = loadConfig({
+    NODE_ENV: 'production',
+    PUBLIC_URL: 'http://127.0.0.1',
+    SESSION_SECRET: 'bench-only-secret-0123456789abcdef0123',
+    LOG_LEVEL: 'silent',
+    DATABASE_URL: databaseUrl,
+  });
   const database = createDatabase({ url: databaseUrl, poolMax: config.DATABASE_POOL_MAX, connectTimeoutMs: 2000 });
   await seedDemo(database.db, { now: new Date() });
 

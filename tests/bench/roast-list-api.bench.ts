@@ -69,13 +69,24 @@ async function seedRoastDay(db: Db): Promise<string> {
   const history = [];
   for (const lotId of lotIds.slice(0, 10)) {
     for (let batch = 0; batch < 4; batch += 1) {
-      history.push({ roastDate: '2026-11-30', lotId, roastLevel: 'medium' as const, greenGramsIn: 9_000, roastedGramsOut: 7_650 - next(90), lossPct: 15, withinExpected: true });
+      history.push({
+        roastDate: '2026-11-30',
+        lotId,
+        roastLevel: 'medium' as const,
+        greenGramsIn: 9_000,
+        roastedGramsOut: 7_650 - next(90),
+        lossPct: 15,
+        withinExpected: true,
+      });
     }
   }
   await db.insert(batches).values(history);
 
   const passwordHash = await hashPassword(password);
-  const [staff] = await db.insert(users).values({ email: 'bench-staff@example.test', name: 'Invented Bench Roaster', role: 'staff', passwordHash }).returning({ email: users.email });
+  const [staff] = await db
+    .insert(users)
+    .values({ email: 'bench-staff@example.test', name: 'Invented Bench Roaster', role: 'staff', passwordHash })
+    .returning({ email: users.email });
   const customers = await db
     .insert(users)
     .values(Array.from({ length: 300 }, (_, index) => ({ email: `bench-customer-${index}@example.test`, name: `Invented Customer ${index}`, passwordHash })))
@@ -83,7 +94,7 @@ async function seedRoastDay(db: Db): Promise<string> {
 
   const address = { name: 'Invented Customer', line1: '1 Bench Road', city: 'Larch Bend', region: 'MT', postalCode: '59701', country: 'US' };
   const linesPerOrder: number[] = [];
-  for (let remaining = lineCount; remaining > 0; ) {
+  for (let remaining = lineCount; remaining > 0;) {
     const count = Math.min(remaining, 1 + next(4));
     linesPerOrder.push(count);
     remaining -= count;
@@ -179,7 +190,10 @@ try {
     body: JSON.stringify({ email: staffEmail, password }),
   });
   if (!signIn.ok) throw new Error(`sign-in answered ${signIn.status}`);
-  const cookie = signIn.headers.getSetCookie().map((value) => value.split(';')[0]).join('; ');
+  const cookie = signIn.headers
+    .getSetCookie()
+    .map((value) => value.split(';')[0])
+    .join('; ');
 
   let listedBags = 0;
   const endpoint = async () => {

@@ -88,7 +88,10 @@ const median = (values: number[]) => {
 
 async function waitForHealth(base: string, deadline: number) {
   while (Date.now() < deadline) {
-    const healthy = await fetch(`${base}/api/health`).then((response) => response.ok, () => false);
+    const healthy = await fetch(`${base}/api/health`).then(
+      (response) => response.ok,
+      () => false,
+    );
     if (healthy) return;
     await new Promise((resolve) => setTimeout(resolve, 500));
   }

@@ -65,7 +65,9 @@ async function resetLinkFor(address: string): Promise<string> {
 const header = () => page.getByRole('banner');
 
 async function signOut() {
-  await header().getByRole('button', { name: /Account menu/ }).click();
+  await header()
+    .getByRole('button', { name: /Account menu/ })
+    .click();
   await header().getByRole('button', { name: 'Sign out', exact: true }).click();
   await header().getByRole('link', { name: 'Sign in', exact: true }).waitFor();
 }
@@ -99,7 +101,11 @@ describe('accounts in a real browser', () => {
 
     await page.getByRole('heading', { level: 1, name: `Hello, ${customer.name}` }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/account');
-    expect(await header().getByRole('button', { name: /Account menu/ }).textContent()).toContain(customer.name);
+    expect(
+      await header()
+        .getByRole('button', { name: /Account menu/ })
+        .textContent(),
+    ).toContain(customer.name);
     // A customer is not offered the Roastery.
     expect(await page.getByRole('link', { name: 'Roastery' }).count()).toBe(0);
   });

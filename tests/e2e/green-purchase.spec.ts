@@ -81,7 +81,10 @@ describe('a home roaster buys green coffee in Chromium', () => {
     await page.getByRole('button', { name: 'Apply price' }).click();
     // $10/lb = 2204.62 cents/kg (1 lb = 453.59237 g, NIST SP 811 App. B), rounded down for a ceiling.
     await page.waitForURL(/maxPricePerKgCents=2204/);
-    await page.getByRole('status').filter({ hasText: /^1 lot$/ }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: /^1 lot$/ })
+      .waitFor();
     const cards = page.getByTestId('lot-card');
     expect(await cards.count()).toBe(1);
 
@@ -175,63 +178,87 @@ describe('a home roaster buys green coffee in Chromium', () => {
       await auditContext?.close();
     });
 
-    it('finds no violations on the filtered catalog', async () => {
-      await auditPage.goto(`${baseUrl}/lots?process=natural&priceUnit=lb`);
-      await auditPage.getByTestId('lot-card').first().waitFor();
-      expect(await accessibilityViolations(auditPage)).toEqual([]);
-      expect(auditProblems).toEqual([]);
-    }, auditTimeout);
+    it(
+      'finds no violations on the filtered catalog',
+      async () => {
+        await auditPage.goto(`${baseUrl}/lots?process=natural&priceUnit=lb`);
+        await auditPage.getByTestId('lot-card').first().waitFor();
+        expect(await accessibilityViolations(auditPage)).toEqual([]);
+        expect(auditProblems).toEqual([]);
+      },
+      auditTimeout,
+    );
 
-    it('finds no violations on a lot page with its roast guide', async () => {
-      await auditPage.goto(`${baseUrl}/lots/${lot.code}`);
-      await auditPage.getByRole('region', { name: 'Home Roast Guide' }).getByText('Expected roasted yield').waitFor();
-      expect(await accessibilityViolations(auditPage)).toEqual([]);
-      await auditPage.getByRole('button', { name: 'Add to cart' }).click();
-      await auditPage.getByText('Added 1 × 1 lb to your cart.').waitFor();
-      expect(auditProblems).toEqual([]);
-    }, auditTimeout);
+    it(
+      'finds no violations on a lot page with its roast guide',
+      async () => {
+        await auditPage.goto(`${baseUrl}/lots/${lot.code}`);
+        await auditPage.getByRole('region', { name: 'Home Roast Guide' }).getByText('Expected roasted yield').waitFor();
+        expect(await accessibilityViolations(auditPage)).toEqual([]);
+        await auditPage.getByRole('button', { name: 'Add to cart' }).click();
+        await auditPage.getByText('Added 1 × 1 lb to your cart.').waitFor();
+        expect(auditProblems).toEqual([]);
+      },
+      auditTimeout,
+    );
 
-    it('finds no violations on the cart', async () => {
-      await auditPage.goto(`${baseUrl}/cart`);
-      await auditPage.getByRole('link', { name: 'Check out' }).waitFor();
-      expect(await accessibilityViolations(auditPage)).toEqual([]);
-      expect(auditProblems).toEqual([]);
-    }, auditTimeout);
+    it(
+      'finds no violations on the cart',
+      async () => {
+        await auditPage.goto(`${baseUrl}/cart`);
+        await auditPage.getByRole('link', { name: 'Check out' }).waitFor();
+        expect(await accessibilityViolations(auditPage)).toEqual([]);
+        expect(auditProblems).toEqual([]);
+      },
+      auditTimeout,
+    );
 
-    it('finds no violations on checkout', async () => {
-      await auditPage.goto(`${baseUrl}/checkout`);
-      await auditPage.getByRole('button', { name: 'Continue to payment' }).waitFor();
-      expect(await accessibilityViolations(auditPage)).toEqual([]);
-      expect(auditProblems).toEqual([]);
-    }, auditTimeout);
+    it(
+      'finds no violations on checkout',
+      async () => {
+        await auditPage.goto(`${baseUrl}/checkout`);
+        await auditPage.getByRole('button', { name: 'Continue to payment' }).waitFor();
+        expect(await accessibilityViolations(auditPage)).toEqual([]);
+        expect(auditProblems).toEqual([]);
+      },
+      auditTimeout,
+    );
 
-    it('finds no violations on the paid order', async () => {
-      await auditPage.goto(orderUrl);
-      await auditPage.getByRole('heading', { level: 1, name: 'Your order' }).waitFor();
-      expect(await accessibilityViolations(auditPage)).toEqual([]);
-      expect(auditProblems).toEqual([]);
-    }, auditTimeout);
+    it(
+      'finds no violations on the paid order',
+      async () => {
+        await auditPage.goto(orderUrl);
+        await auditPage.getByRole('heading', { level: 1, name: 'Your order' }).waitFor();
+        expect(await accessibilityViolations(auditPage)).toEqual([]);
+        expect(auditProblems).toEqual([]);
+      },
+      auditTimeout,
+    );
 
-    it('finds no violations on Green Stock, signed in as staff', async () => {
-      const staffContext = await browser.newContext({ bypassCSP: true });
-      const staffPage = await staffContext.newPage();
-      staffPage.setDefaultTimeout(10_000);
-      const staffProblems: string[] = [];
-      watchConsole(staffPage, staffProblems);
-      try {
-        await staffPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/green-stock')}`);
-        await staffPage.getByLabel('E-mail').fill(staff.email);
-        await staffPage.getByLabel('Password', { exact: true }).fill(staff.password);
-        await staffPage.getByRole('button', { name: 'Sign in', exact: true }).click();
-        await staffPage.waitForURL(`${baseUrl}/roastery/green-stock`);
-        await staffPage.getByRole('heading', { level: 1, name: 'Green Stock' }).waitFor();
-        await staffPage.getByText(lot.code).first().waitFor();
+    it(
+      'finds no violations on Green Stock, signed in as staff',
+      async () => {
+        const staffContext = await browser.newContext({ bypassCSP: true });
+        const staffPage = await staffContext.newPage();
+        staffPage.setDefaultTimeout(10_000);
+        const staffProblems: string[] = [];
+        watchConsole(staffPage, staffProblems);
+        try {
+          await staffPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/green-stock')}`);
+          await staffPage.getByLabel('E-mail').fill(staff.email);
+          await staffPage.getByLabel('Password', { exact: true }).fill(staff.password);
+          await staffPage.getByRole('button', { name: 'Sign in', exact: true }).click();
+          await staffPage.waitForURL(`${baseUrl}/roastery/green-stock`);
+          await staffPage.getByRole('heading', { level: 1, name: 'Green Stock' }).waitFor();
+          await staffPage.getByText(lot.code).first().waitFor();
 
-        expect(await accessibilityViolations(staffPage)).toEqual([]);
-        expect(staffProblems).toEqual([]);
-      } finally {
-        await staffContext.close();
-      }
-    }, auditTimeout);
+          expect(await accessibilityViolations(staffPage)).toEqual([]);
+          expect(staffProblems).toEqual([]);
+        } finally {
+          await staffContext.close();
+        }
+      },
+      auditTimeout,
+    );
   });
 });

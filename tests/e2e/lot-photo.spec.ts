@@ -41,7 +41,12 @@ function smallPng(): Buffer {
   header.writeUInt32BE(3, 4);
   header.set([8, 2, 0, 0, 0], 8); // 8-bit RGB
   const rows = Buffer.concat(Array.from({ length: 3 }, () => Buffer.from([0, ...Array.from({ length: 4 }, () => [0x6b, 0x4a, 0x2f]).flat()])));
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', header), chunk('IDAT', deflateSync(rows)), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', header),
+    chunk('IDAT', deflateSync(rows)),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 describe('a lot photo under the default uploads folder (.data/uploads)', () => {

@@ -139,8 +139,18 @@ describe('a roast day in a real browser', () => {
     recordedBatchId = traceHref?.split('/').pop();
     const after = await getJson<BatchListResponse>(page, `/api/roastery/days/${date}/batches`);
     expect(after.items).toHaveLength(before.items.length + 1);
-    expect(after.items.at(-1)).toMatchObject({ id: recordedBatchId, greenGramsIn: greenIn, roastedGramsOut: roastedOut, totalSeconds: 705, firstCrackSeconds: 555 });
-    await page.getByRole('table', { name: 'Batches recorded for the day' }).getByRole('row', { name: new RegExp(line.lotName) }).first().waitFor();
+    expect(after.items.at(-1)).toMatchObject({
+      id: recordedBatchId,
+      greenGramsIn: greenIn,
+      roastedGramsOut: roastedOut,
+      totalSeconds: 705,
+      firstCrackSeconds: 555,
+    });
+    await page
+      .getByRole('table', { name: 'Batches recorded for the day' })
+      .getByRole('row', { name: new RegExp(line.lotName) })
+      .first()
+      .waitFor();
     expect(problems).toEqual([]);
   });
 
@@ -164,7 +174,10 @@ describe('a roast day in a real browser', () => {
     // The printable width of A4 (210 mm) and Letter (8.5 in) inside the stylesheet's 12 mm margins, at 96 px an inch:
     // nothing may run off the side of either sheet.
     const screenViewport = page.viewportSize();
-    for (const [paper, widthMm] of [['A4', 210], ['Letter', 215.9]] as const) {
+    for (const [paper, widthMm] of [
+      ['A4', 210],
+      ['Letter', 215.9],
+    ] as const) {
       await page.setViewportSize({ width: Math.floor(((widthMm - 24) / 25.4) * 96), height: 1000 });
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow, `${paper} overflows by ${overflow}px`).toBeLessThanOrEqual(0);
@@ -220,34 +233,49 @@ describe('a roast day in a real browser', () => {
       return results.violations.map((violation) => `${path}: ${violation.id} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`);
     }
 
-    it('finds no violations on the staff’s Roastery pages', async () => {
-      const audit = await signedIn(roaster, { bypassCSP: true });
-      const { page } = audit;
-      const heading = (level: number, name: string | RegExp) => () => page.getByRole('heading', { level, name }).waitFor();
-      const violations = [
-        ...(await violationsOn(page, '/roastery', heading(1, 'Roastery'))),
-        ...(await violationsOn(page, '/roastery/calendar', () => page.getByRole('table', { name: 'Roast days in the month, Monday first' }).waitFor())),
-        ...(await violationsOn(page, `/roastery/days/${roastDate}`, heading(2, 'By lot and roast level'))),
-        ...(await violationsOn(page, `/roastery/days/${roastDate}?tab=pack`, () => page.getByRole('link', { name: 'Labels (PDF)' }).waitFor())),
-      ];
-      if (recordedBatchId) violations.push(...(await violationsOn(page, `/roastery/batches/${recordedBatchId}`, heading(2, 'Orders from this batch'))));
-      const traced = await tracedOrder(page);
-      violations.push(
-        ...(await violationsOn(page, `/roastery/batches/${traced.batchId}`, () => page.getByRole('link', { name: traced.orderId.slice(0, 8).toUpperCase() }).waitFor())),
-        ...(await violationsOn(page, `/roastery/orders/${traced.orderId}/trace`, () => page.getByRole('link', { name: /^Open batch/ }).first().waitFor())),
-      );
-      expect(recordedBatchId).toBeTruthy();
-      expect(violations).toEqual([]);
-      expect(audit.problems).toEqual([]);
-      await audit.context.close();
-    }, auditTimeout);
+    it(
+      'finds no violations on the staff’s Roastery pages',
+      async () => {
+        const audit = await signedIn(roaster, { bypassCSP: true });
+        const { page } = audit;
+        const heading = (level: number, name: string | RegExp) => () => page.getByRole('heading', { level, name }).waitFor();
+        const violations = [
+          ...(await violationsOn(page, '/roastery', heading(1, 'Roastery'))),
+          ...(await violationsOn(page, '/roastery/calendar', () => page.getByRole('table', { name: 'Roast days in the month, Monday first' }).waitFor())),
+          ...(await violationsOn(page, `/roastery/days/${roastDate}`, heading(2, 'By lot and roast level'))),
+          ...(await violationsOn(page, `/roastery/days/${roastDate}?tab=pack`, () => page.getByRole('link', { name: 'Labels (PDF)' }).waitFor())),
+        ];
+        if (recordedBatchId) violations.push(...(await violationsOn(page, `/roastery/batches/${recordedBatchId}`, heading(2, 'Orders from this batch'))));
+        const traced = await tracedOrder(page);
+        violations.push(
+          ...(await violationsOn(page, `/roastery/batches/${traced.batchId}`, () =>
+            page.getByRole('link', { name: traced.orderId.slice(0, 8).toUpperCase() }).waitFor(),
+          )),
+          ...(await violationsOn(page, `/roastery/orders/${traced.orderId}/trace`, () =>
+            page
+              .getByRole('link', { name: /^Open batch/ })
+              .first()
+              .waitFor(),
+          )),
+        );
+        expect(recordedBatchId).toBeTruthy();
+        expect(violations).toEqual([]);
+        expect(audit.problems).toEqual([]);
+        await audit.context.close();
+      },
+      auditTimeout,
+    );
 
-    it('finds no violations on the owner’s shop settings', async () => {
-      const audit = await signedIn(owner, { bypassCSP: true });
-      const violations = await violationsOn(audit.page, '/roastery/settings', () => audit.page.getByLabel('Time zone').waitFor());
-      expect(violations).toEqual([]);
-      expect(audit.problems).toEqual([]);
-      await audit.context.close();
-    }, auditTimeout);
+    it(
+      'finds no violations on the owner’s shop settings',
+      async () => {
+        const audit = await signedIn(owner, { bypassCSP: true });
+        const violations = await violationsOn(audit.page, '/roastery/settings', () => audit.page.getByLabel('Time zone').waitFor());
+        expect(violations).toEqual([]);
+        expect(audit.problems).toEqual([]);
+        await audit.context.close();
+      },
+      auditTimeout,
+    );
   });
 });

@@ -72,7 +72,10 @@ describe('Roasted to Order in a real browser', () => {
     expect(await coffee.getByRole('radio', { checked: true }).getAttribute('value')).not.toBe('rotation');
 
     await page.getByRole('group', { name: 'Bag size' }).getByRole('radio', { name: /^1 lb/ }).check();
-    await page.getByRole('group', { name: /^Brew method/ }).getByRole('radio', { name: /^Espresso/ }).check();
+    await page
+      .getByRole('group', { name: /^Brew method/ })
+      .getByRole('radio', { name: /^Espresso/ })
+      .check();
     await page.getByRole('group', { name: 'How often' }).getByRole('radio', { name: 'Every 2 weeks' }).check();
     await page.waitForURL((url) => url.searchParams.get('size') === '1lb' && url.searchParams.get('brew') === 'espresso');
     await page.getByText(/subscription discount on the coffee/).waitFor();
@@ -135,7 +138,9 @@ describe('Roasted to Order in a real browser', () => {
     const skippedRow = () => schedule().getByRole('row', { name: new RegExp(skippedDay) });
     expect(await skippedRow().getByText('Paid', { exact: true }).count()).toBe(1);
     await skipButton.click();
-    const moved = page.getByRole('status').filter({ hasText: /It is already paid, so your payment moves to the delivery of [A-Z][a-z]+day, [A-Z][a-z]+ \d{1,2}, \d{4}\./ });
+    const moved = page
+      .getByRole('status')
+      .filter({ hasText: /It is already paid, so your payment moves to the delivery of [A-Z][a-z]+day, [A-Z][a-z]+ \d{1,2}, \d{4}\./ });
     await moved.waitFor();
     expect(await moved.textContent()).not.toMatch(/\d{4}-\d{2}-\d{2}/);
     await skippedRow().filter({ hasText: 'Skipped' }).waitFor();
@@ -143,7 +148,10 @@ describe('Roasted to Order in a real browser', () => {
     expect(await paidBadges.count()).toBe(1);
 
     await page.getByRole('button', { name: `Undo skip of the delivery of ${skippedDay}` }).click();
-    await page.getByRole('status').filter({ hasText: /is back on\. Your payment moves back to it from the delivery of / }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: /is back on\. Your payment moves back to it from the delivery of / })
+      .waitFor();
     await skippedRow().getByText('Paid', { exact: true }).waitFor();
     expect(await accessibilityViolations()).toEqual([]);
 
@@ -152,12 +160,19 @@ describe('Roasted to Order in a real browser', () => {
 
     await page.getByRole('button', { name: 'Change level, size, grind or cadence' }).click();
     const form = page.getByRole('form', { name: 'Change what each delivery brings' });
-    const newLevel = form.getByRole('group', { name: /^Roast level/ }).getByRole('radio', { checked: false }).first();
+    const newLevel = form
+      .getByRole('group', { name: /^Roast level/ })
+      .getByRole('radio', { checked: false })
+      .first();
     const levelName = (await newLevel.evaluate((radio) => radio.closest('label')?.textContent ?? '')).trim();
     await newLevel.check();
     await form.getByRole('button', { name: 'Save the changes' }).click();
     await page.getByRole('status').filter({ hasText: 'Your subscription is changed.' }).waitFor();
-    await schedule().getByRole('row').filter({ hasText: `, ${levelName}, ` }).first().waitFor();
+    await schedule()
+      .getByRole('row')
+      .filter({ hasText: `, ${levelName}, ` })
+      .first()
+      .waitFor();
     expect(await accessibilityViolations()).toEqual([]);
 
     const subjects = await emailSubjectsFor(customer.email, [
@@ -187,11 +202,19 @@ describe('Roasted to Order in a real browser', () => {
 
       await staffPage.getByLabel('Name or e-mail').fill(customer.email);
       await staffPage.waitForURL((url) => url.searchParams.get('q') === customer.email);
-      await staffPage.getByRole('table', { name: /^Subscribers, page 1 of 1/ }).getByRole('link', { name: customer.name }).waitFor();
+      await staffPage
+        .getByRole('table', { name: /^Subscribers, page 1 of 1/ })
+        .getByRole('link', { name: customer.name })
+        .waitFor();
       expect(await staffPage.getByRole('link', { name: 'Download these as CSV' }).getAttribute('href')).toBe(
         `/api/roastery/subscribers.csv?q=${encodeURIComponent(customer.email).replaceAll('%20', '+')}`,
       );
-      expect(await new AxeBuilder({ page: staffPage }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze().then((r) => r.violations.map((v) => v.id))).toEqual([]);
+      expect(
+        await new AxeBuilder({ page: staffPage })
+          .withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'])
+          .analyze()
+          .then((r) => r.violations.map((v) => v.id)),
+      ).toEqual([]);
 
       await staffPage.getByRole('link', { name: customer.name }).click();
       await staffPage.getByRole('heading', { level: 1, name: customer.name }).waitFor();
@@ -207,7 +230,12 @@ describe('Roasted to Order in a real browser', () => {
       await lot.selectOption(firstLot ?? '');
       await day.getByRole('button', { name: 'Save the pick' }).click();
       await day.getByText(/is the Roaster’s Rotation on /).waitFor();
-      expect(await new AxeBuilder({ page: staffPage }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze().then((r) => r.violations.map((v) => v.id))).toEqual([]);
+      expect(
+        await new AxeBuilder({ page: staffPage })
+          .withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'])
+          .analyze()
+          .then((r) => r.violations.map((v) => v.id)),
+      ).toEqual([]);
       expect(staffProblems).toEqual([]);
     } finally {
       await staffContext.close();

@@ -35,7 +35,14 @@ export async function createOrder({ lines = [], ...fields }: OrderFields) {
   const shippingCents = fields.shippingCents ?? 0;
   const [order] = await db
     .insert(orders)
-    .values({ kind: roasted ? 'roasted' : 'green', shippingAddress, ...fields, subtotalCents, shippingCents, totalCents: fields.totalCents ?? subtotalCents + shippingCents })
+    .values({
+      kind: roasted ? 'roasted' : 'green',
+      shippingAddress,
+      ...fields,
+      subtotalCents,
+      shippingCents,
+      totalCents: fields.totalCents ?? subtotalCents + shippingCents,
+    })
     .returning();
   if (lines.length > 0) {
     await db.insert(orderItems).values(

@@ -93,7 +93,16 @@ export async function createSubscriptionDelivery(options: {
   dates: { shipDate: string; readyFrom: string; bestBefore: string };
 }): Promise<{ subscriptionId: string; deliveryId: string }> {
   const { userId, lotId, roastLevel, brewMethod, roastDate, dates } = options;
-  const subscription = await createSubscription({ userId, status: 'active', lotId, roastLevel, bagSize: '12oz', brewMethod, cadenceWeeks: 2, priceCents: 1620 });
+  const subscription = await createSubscription({
+    userId,
+    status: 'active',
+    lotId,
+    roastLevel,
+    bagSize: '12oz',
+    brewMethod,
+    cadenceWeeks: 2,
+    priceCents: 1620,
+  });
   const delivery = await createDelivery({ subscriptionId: subscription.id, sequence: 1, roastDate, ...dates });
   return { subscriptionId: subscription.id, deliveryId: delivery.id };
 }

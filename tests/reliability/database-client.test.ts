@@ -45,17 +45,29 @@ describe('what counts as "database unavailable" (503, not 500)', () => {
     await killer.db.execute(sql`select pg_terminate_backend(${rows[0]!.pid})`);
     await killer.close();
     const ended = new Promise((resolve) => client.once('end', resolve));
-    const killed = await client.query('select 1').then(() => undefined, (error: unknown) => error);
+    const killed = await client.query('select 1').then(
+      () => undefined,
+      (error: unknown) => error,
+    );
     await ended;
-    const notQueryable = await client.query('select 1').then(() => undefined, (error: unknown) => error);
+    const notQueryable = await client.query('select 1').then(
+      () => undefined,
+      (error: unknown) => error,
+    );
     client.release(true);
     expect(isDatabaseUnavailable(killed), String(killed)).toBe(true);
     expect(String(notQueryable)).toMatch(/not queryable/);
     expect(isDatabaseUnavailable(notQueryable)).toBe(true);
-    const badQuery = await database.pool.query('select 1 / 0').then(() => undefined, (error: unknown) => error);
+    const badQuery = await database.pool.query('select 1 / 0').then(
+      () => undefined,
+      (error: unknown) => error,
+    );
     expect(isDatabaseUnavailable(badQuery)).toBe(false);
     await database.close();
-    const afterEnd = await database.pool.query('select 1').then(() => undefined, (error: unknown) => error);
+    const afterEnd = await database.pool.query('select 1').then(
+      () => undefined,
+      (error: unknown) => error,
+    );
     expect(isDatabaseUnavailable(afterEnd), String(afterEnd)).toBe(true);
   });
 });
@@ -68,7 +80,12 @@ describe('the database client when connections break', () => {
     try {
       await client.query('begin');
       restartCluster().stop();
-      await waitFor(async () => dropped, (messages) => messages.length > 0, 5000, 'the dropped connection to be reported');
+      await waitFor(
+        async () => dropped,
+        (messages) => messages.length > 0,
+        5000,
+        'the dropped connection to be reported',
+      );
       await expect(client.query('select 1')).rejects.toThrow();
     } finally {
       client.release(true);

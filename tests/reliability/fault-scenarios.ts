@@ -19,7 +19,6 @@ const webhookSecret = 'whsec_restday_local_development';
 const customer = { email: 'homeroaster@example.test', password: 'restday-demo' };
 const address = { name: 'Reliability Run', line1: '4 Larkspur Lane', city: 'Wrenfield', region: 'CO', postalCode: '81640', country: 'US' };
 
-
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 async function until(what: string, check: () => Promise<boolean>, timeoutMs: number): Promise<void> {
@@ -89,7 +88,10 @@ async function signIn(tally: Tally): Promise<string | undefined> {
     body: JSON.stringify(customer),
   });
   if (response?.status !== 200) return undefined;
-  return response.headers.getSetCookie().map((cookie) => cookie.split(';')[0]).join('; ');
+  return response.headers
+    .getSetCookie()
+    .map((cookie) => cookie.split(';')[0])
+    .join('; ');
 }
 
 let lotCode = '';
@@ -159,8 +161,13 @@ async function outcome(tally: Tally): Promise<Pick<Row, 'ordersHeld' | 'emailsLo
   await until(
     'the paid orders’ confirmations',
     async () => {
-      const mail = (await (await fetch(`${mailWeb}/api/email?${new URLSearchParams({ 'to.address': customer.email })}`)).json()) as { subject?: string; text?: string }[];
-      confirmations = new Map(paid.map((id) => [id, mail.filter((message) => message.subject?.includes('confirmed') && message.text?.includes(orderReference(id))).length]));
+      const mail = (await (await fetch(`${mailWeb}/api/email?${new URLSearchParams({ 'to.address': customer.email })}`)).json()) as {
+        subject?: string;
+        text?: string;
+      }[];
+      confirmations = new Map(
+        paid.map((id) => [id, mail.filter((message) => message.subject?.includes('confirmed') && message.text?.includes(orderReference(id))).length]),
+      );
       return [...confirmations.values()].every((n) => n >= 1);
     },
     60_000,
@@ -198,7 +205,14 @@ async function scenario(name: string, fault: { begin(): Promise<void> | void; en
   await sleep(3_000);
   stop();
   await load;
-  return { scenario: name, requests: tally.requests, ...(await outcome(tally)), unexpected5xx: tally.unexpected5xx, recoverySeconds: recovery / 1000, note: statusSummary(tally) };
+  return {
+    scenario: name,
+    requests: tally.requests,
+    ...(await outcome(tally)),
+    unexpected5xx: tally.unexpected5xx,
+    recoverySeconds: recovery / 1000,
+    note: statusSummary(tally),
+  };
 }
 
 async function webhookBurst(count: number): Promise<Row> {
@@ -242,14 +256,18 @@ async function webhookBurst(count: number): Promise<Row> {
   );
   await until(
     'every expiry to be applied',
-    async () => (await db.query('select count(*)::int as n from orders where id = any($1::uuid[]) and status = $2', [setup.orderIds, 'cancelled'])).rows[0].n === setup.orderIds.length,
+    async () =>
+      (await db.query('select count(*)::int as n from orders where id = any($1::uuid[]) and status = $2', [setup.orderIds, 'cancelled'])).rows[0].n ===
+      setup.orderIds.length,
     180_000,
   ).catch(() => undefined);
   const appliedMs = performance.now() - started;
   done = true;
   await visitors;
   const { rows: after } = await db.query<{ stock_grams: number }>('select stock_grams from lots where code = $1', [lotCode]);
-  const { rows: held } = await db.query<{ n: number }>("select count(*)::int as n from orders where id = any($1::uuid[]) and status = 'pending_payment'", [setup.orderIds]);
+  const { rows: held } = await db.query<{ n: number }>("select count(*)::int as n from orders where id = any($1::uuid[]) and status = 'pending_payment'", [
+    setup.orderIds,
+  ]);
   const visitor503 = tally.statuses.get(503) ?? 0;
   return {
     scenario: name,
@@ -269,7 +287,11 @@ try {
   const { rows } = await db.query<{ code: string }>('select code from lots where is_listed order by stock_grams desc limit 1');
   lotCode = rows[0]!.code;
   await db.query('update lots set stock_grams = stock_grams + 1000000 where code = $1', [lotCode]);
-  const maildevPid = () => execFileSync('pgrep', ['-f', '--', `--smtp ${ports.smtp}`]).toString().trim().split('\n')[0]!;
+  const maildevPid = () =>
+    execFileSync('pgrep', ['-f', '--', `--smtp ${ports.smtp}`])
+      .toString()
+      .trim()
+      .split('\n')[0]!;
 
   const results: Row[] = [];
   results.push(

@@ -43,14 +43,68 @@ const nestedArrays = (depth: number) => `${'['.repeat(depth)}${']'.repeat(depth)
 
 /** Values that are wrong almost everywhere, and a few that are nearly right, so checks past the first get reached. */
 const nastyValues: unknown[] = [
-  null, [], {}, '', ' ', 'x'.repeat(5_000), '\u0000', 'a\u0000b', '\ud800', 'a\udfffb', '\ufeff', '<b>', "'; drop table lots; --",
-  -1, 0, 0.5, -0.0001, 1e308, -1e308, 2 ** 31, 2 ** 53 + 1, 1e21, Number.MAX_SAFE_INTEGER, true, false,
-  [null], [[]], [{}], { a: null }, ['1lb'], { '': 1 }, { constructor: { prototype: {} } },
-  '2026-02-30', '2026-12-08', '0000-01-01', '9999-12-31', '2026-13-01', '2026-12-08T25:00', '1lb', '12oz', '8oz', '5lb', 'medium',
-  'light', 'arrival', 'loss', 'count', 'washed', 'green', 'paid', '00000000-0000-0000-0000-000000000000', unknownId, 'not-a-uuid',
-  'someone@example.test', 'RD-001', '1e999', 'NaN', '-1', '٣', nested(10), nested(600),
+  null,
+  [],
+  {},
+  '',
+  ' ',
+  'x'.repeat(5_000),
+  '\u0000',
+  'a\u0000b',
+  '\ud800',
+  'a\udfffb',
+  '\ufeff',
+  '<b>',
+  "'; drop table lots; --",
+  -1,
+  0,
+  0.5,
+  -0.0001,
+  1e308,
+  -1e308,
+  2 ** 31,
+  2 ** 53 + 1,
+  1e21,
+  Number.MAX_SAFE_INTEGER,
+  true,
+  false,
+  [null],
+  [[]],
+  [{}],
+  { a: null },
+  ['1lb'],
+  { '': 1 },
+  { constructor: { prototype: {} } },
+  '2026-02-30',
+  '2026-12-08',
+  '0000-01-01',
+  '9999-12-31',
+  '2026-13-01',
+  '2026-12-08T25:00',
+  '1lb',
+  '12oz',
+  '8oz',
+  '5lb',
+  'medium',
+  'light',
+  'arrival',
+  'loss',
+  'count',
+  'washed',
+  'green',
+  'paid',
+  '00000000-0000-0000-0000-000000000000',
+  unknownId,
+  'not-a-uuid',
+  'someone@example.test',
+  'RD-001',
+  '1e999',
+  'NaN',
+  '-1',
+  '٣',
+  nested(10),
+  nested(600),
 ];
-
 
 const nasty = fc.constantFrom(...nastyValues);
 const value: fc.Arbitrary<unknown> = fc.oneof(
@@ -81,18 +135,84 @@ function bodyArbitrary(example: Record<string, unknown> | undefined): fc.Arbitra
 }
 
 /** Raw bodies JSON cannot build: truncated, deeply nested, a bare NUL escape. */
-const rawBodies = ['{', '[]', 'null', '"\\u0000"', nestedArrays(5_000), `{"a":${'['.repeat(2_000)}${']'.repeat(2_000)}}`, '{"items":"\\ud800"}', '{"__proto__":{"role":"owner"}}'];
+const rawBodies = [
+  '{',
+  '[]',
+  'null',
+  '"\\u0000"',
+  nestedArrays(5_000),
+  `{"a":${'['.repeat(2_000)}${']'.repeat(2_000)}}`,
+  '{"items":"\\ud800"}',
+  '{"__proto__":{"role":"owner"}}',
+];
 
-const queryNames = ['page', 'pageSize', 'status', 'kind', 'from', 'to', 'sort', 'dir', 'order', 'q', 'count', 'level', 'lot', 'date', 'reason', 'limit', 'cursor', 'roastDate', 'tab'];
-const queryValues = ['-1', '0', '1e309', '99999999999999999999', '1.5', '', ' ', 'null', '[]', '2026-02-30', '9999-12-31', 'x'.repeat(3_000), 'a\u0000b', 'zzz'];
+const queryNames = [
+  'page',
+  'pageSize',
+  'status',
+  'kind',
+  'from',
+  'to',
+  'sort',
+  'dir',
+  'order',
+  'q',
+  'count',
+  'level',
+  'lot',
+  'date',
+  'reason',
+  'limit',
+  'cursor',
+  'roastDate',
+  'tab',
+];
+const queryValues = [
+  '-1',
+  '0',
+  '1e309',
+  '99999999999999999999',
+  '1.5',
+  '',
+  ' ',
+  'null',
+  '[]',
+  '2026-02-30',
+  '9999-12-31',
+  'x'.repeat(3_000),
+  'a\u0000b',
+  'zzz',
+];
 const query = fc
-  .array(fc.tuple(fc.constantFrom(...queryNames), fc.oneof(fc.constantFrom(...queryValues), fc.string({ unit: 'grapheme', maxLength: 12 }))), { minLength: 1, maxLength: 5 })
+  .array(fc.tuple(fc.constantFrom(...queryNames), fc.oneof(fc.constantFrom(...queryValues), fc.string({ unit: 'grapheme', maxLength: 12 }))), {
+    minLength: 1,
+    maxLength: 5,
+  })
   .map((pairs) => pairs.map(([name, text]) => `${name}=${encodeURIComponent(text)}`).join('&'));
 /** Percent-escapes no UTF-8 decoder accepts, and repeated keys (an array where a string is expected). */
 const rawQueries = ['q=%ED%A0%80', 'q=%00', 'page=%FF', 'q=%', 'q=%zz', 'page=1&page=2', 'status=paid&status=bogus', 'from[x]=1', '%ED%A0%80=1'];
 
 /** Already percent-encoded path parameters: wrong shapes, bad escapes, NUL, a lone surrogate, huge. */
-const badParams = ['-1', '0', 'null', '%00', 'a%00b', '%ED%A0%80', '%FF', '%', '%zz', '%2e%2e', 'x'.repeat(2_000), '2026-02-30', '99999-12-31', '1e309', 'not-a-uuid', '00000000-0000-0000-0000-000000000000', '%20', encodeURIComponent("'; drop table lots; --")];
+const badParams = [
+  '-1',
+  '0',
+  'null',
+  '%00',
+  'a%00b',
+  '%ED%A0%80',
+  '%FF',
+  '%',
+  '%zz',
+  '%2e%2e',
+  'x'.repeat(2_000),
+  '2026-02-30',
+  '99999-12-31',
+  '1e309',
+  'not-a-uuid',
+  '00000000-0000-0000-0000-000000000000',
+  '%20',
+  encodeURIComponent("'; drop table lots; --"),
+];
 
 type Caller = 'visitor' | 'customer' | 'staff' | 'owner';
 const callerFor = (access: Access): Caller =>
@@ -153,7 +273,7 @@ async function send(rule: AccessRule, path: string, what: string, attach: (call:
 }
 
 const describeValue = (body: unknown) => {
-  const text = typeof body === 'string' ? body : JSON.stringify(body) ?? String(body);
+  const text = typeof body === 'string' ? body : (JSON.stringify(body) ?? String(body));
   return text.length > 120 ? `${text.slice(0, 120)}… (${text.length} chars)` : text;
 };
 
@@ -180,7 +300,9 @@ describe('bad input on every API route', () => {
 
       if (rule.method !== 'GET') {
         for (const body of fc.sample(bodyArbitrary(rule.body), { seed: seed + index, numRuns: bodiesPerRoute })) {
-          await send(rule, goodPath, `body ${describeValue(body)}`, (call) => call.set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null'));
+          await send(rule, goodPath, `body ${describeValue(body)}`, (call) =>
+            call.set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null'),
+          );
         }
         for (const raw of rawBodies) {
           await send(rule, goodPath, `raw body ${describeValue(raw)}`, (call) => call.set('Content-Type', 'application/json').send(raw));

@@ -17,7 +17,16 @@ import { startQueue, type Queue } from '../../server/jobs/queue';
 import { workJobs } from '../../server/jobs/registry';
 import { systemClock } from '../../server/lib/clock';
 import { waitFor } from '../api/outbox-support';
-import { eventsAbout, ledgerCount, paymentsTestConfig, stripeFake, subscriptionOrders, subscriptionRow, testPaymentsService, testStripe } from '../api/payments-support';
+import {
+  eventsAbout,
+  ledgerCount,
+  paymentsTestConfig,
+  stripeFake,
+  subscriptionOrders,
+  subscriptionRow,
+  testPaymentsService,
+  testStripe,
+} from '../api/payments-support';
 import { freePort } from '../setup/free-port';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
@@ -61,8 +70,18 @@ async function paidSubscription() {
   const { id } = await createSubscription({ userId: customer.id, lotId, bagsPerDelivery: 2, priceCents: 4135 });
   const { checkoutUrl } = await payments.createCheckoutForSubscription(id);
   expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
-  await waitFor(() => subscriptionOrders(id), (orders) => orders.length === 1, 10_000, 'the first delivery order');
-  const active = await waitFor(() => subscriptionRow(id), (current) => current.status === 'active' && current.anchorDate !== null, 10_000, 'active');
+  await waitFor(
+    () => subscriptionOrders(id),
+    (orders) => orders.length === 1,
+    10_000,
+    'the first delivery order',
+  );
+  const active = await waitFor(
+    () => subscriptionRow(id),
+    (current) => current.status === 'active' && current.anchorDate !== null,
+    10_000,
+    'active',
+  );
   return { id, stripeSubscriptionId: active.stripeSubscriptionId!, agent: await signedInAgent(app, customer) };
 }
 

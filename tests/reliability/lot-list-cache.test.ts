@@ -17,7 +17,7 @@ afterAll(async () => {
 
 /** A loader that counts its calls, as the database query behind the list would be. */
 function countingLoader() {
-  const loader = { calls: 0, load: async (): Promise<LotSummary[]> => (loader.calls += 1, []) };
+  const loader = { calls: 0, load: async (): Promise<LotSummary[]> => ((loader.calls += 1), []) };
   return loader;
 }
 
@@ -47,7 +47,10 @@ describe('the lot list kept in memory', () => {
     expect(filtered.calls).toBe(1);
 
     // Stock moves in another connection (as a checkout in another process would).
-    await getTestDb().update(lots).set({ stockGrams: sql`${lots.stockGrams} - 454` }).where(eq(lots.id, lot.id));
+    await getTestDb()
+      .update(lots)
+      .set({ stockGrams: sql`${lots.stockGrams} - 454` })
+      .where(eq(lots.id, lot.id));
 
     for (const [index, cache] of caches.entries()) {
       const loader = loaders[index]!;
@@ -70,10 +73,20 @@ describe('the lot list kept in memory', () => {
     let releaseLoad!: () => void;
     const slow = { calls: 0, load: () => new Promise<LotSummary[]>((resolve) => ((slow.calls += 1), (releaseLoad = () => resolve([])))) };
     const reading = cache.read({ q: 'race' }, slow.load);
-    await waitFor(async () => slow.calls, (calls) => calls === 1, 5000, 'the slow read to start');
+    await waitFor(
+      async () => slow.calls,
+      (calls) => calls === 1,
+      5000,
+      'the slow read to start',
+    );
     await getTestDb().update(lots).set({ stockGrams: 1 }).where(eq(lots.id, lot.id));
     // The change's notice arrives while the slow read is still loading: the warm entry is dropped.
-    await waitFor(async () => (await cache.read({ q: 'warm-up' }, warm.load), warm.calls), (calls) => calls >= 2, 10_000, 'the notice');
+    await waitFor(
+      async () => (await cache.read({ q: 'warm-up' }, warm.load), warm.calls),
+      (calls) => calls >= 2,
+      10_000,
+      'the notice',
+    );
     releaseLoad();
     await reading;
 

@@ -33,7 +33,9 @@ afterAll(async () => {
 async function payOrder(to: string) {
   const orderId = randomUUID();
   const dedupeKey = `order-confirmed:${orderId}`;
-  await getTestDb().transaction((tx) => queueEmail(tx, { template: 'order-confirmed', to, payload: { ...demoEmailPayloads['order-confirmed'], orderId }, dedupeKey }));
+  await getTestDb().transaction((tx) =>
+    queueEmail(tx, { template: 'order-confirmed', to, payload: { ...demoEmailPayloads['order-confirmed'], orderId }, dedupeKey }),
+  );
   return dedupeKey;
 }
 
@@ -59,7 +61,12 @@ describe('when the mail catcher stops while orders are paid and starts again', (
     // Before the outage, mail flows.
     const before = testAddress('before-outage');
     await payOrder(before);
-    await waitFor(() => inboxOf(catcher!.webUrl, before), (emails) => emails.length === 1, 10_000, 'the first e-mail');
+    await waitFor(
+      () => inboxOf(catcher!.webUrl, before),
+      (emails) => emails.length === 1,
+      10_000,
+      'the first e-mail',
+    );
 
     await catcher.stop();
     catcher = undefined;
@@ -79,7 +86,12 @@ describe('when the mail catcher stops while orders are paid and starts again', (
 
     catcher = await startMailCatcher({ smtpPort, webPort, mailDir });
     const webUrl = catcher.webUrl;
-    const sent = await waitFor(() => outboxRows(keys), (rows) => rows.every((row) => row.status === 'sent'), 20_000, 'every row sent');
+    const sent = await waitFor(
+      () => outboxRows(keys),
+      (rows) => rows.every((row) => row.status === 'sent'),
+      20_000,
+      'every row sent',
+    );
     expect(sent.every((row) => row.sentAt !== null)).toBe(true);
 
     await new Promise((resolve) => setTimeout(resolve, 1000)); // time for any duplicate to arrive

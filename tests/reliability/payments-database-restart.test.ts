@@ -3,7 +3,17 @@ import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-cli
 import { startCluster, testClusterOptions } from '../../dev-services/postgres';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
 import { inboxOf, waitFor } from '../api/outbox-support';
-import { eventsAbout, ledgerCount, orderRow, outboxCount, settle, startPaymentsServer, stripeFake, testPaymentsService, type PaymentsServer } from '../api/payments-support';
+import {
+  eventsAbout,
+  ledgerCount,
+  orderRow,
+  outboxCount,
+  settle,
+  startPaymentsServer,
+  stripeFake,
+  testPaymentsService,
+  type PaymentsServer,
+} from '../api/payments-support';
 import { createCustomer, createGreenOrder, createLotForSale } from '../factories/index';
 
 // Stops the real test cluster mid-run, so this file restarts it (on the same port) whatever happens.
@@ -59,7 +69,12 @@ describe('when PostgreSQL restarts while payment webhooks arrive', () => {
     restartCluster();
 
     for (const { order } of orders) {
-      await waitFor(() => orderRow(order.id), (row) => row.status === 'paid', 20_000, `order ${order.id} to be paid`);
+      await waitFor(
+        () => orderRow(order.id),
+        (row) => row.status === 'paid',
+        20_000,
+        `order ${order.id} to be paid`,
+      );
     }
     const completed = await Promise.all(orders.map(({ checkoutSessionId }) => eventsAbout(checkoutSessionId, 'checkout.session.completed')));
     expect(completed.map((events) => events.map((event) => event.status))).toEqual(orders.map(() => ['delivered']));
@@ -71,7 +86,12 @@ describe('when PostgreSQL restarts while payment webhooks arrive', () => {
     expect(await ledgerCount(eventIds)).toBe(orders.length);
     for (const { order, customer } of orders) {
       expect(await outboxCount(`order-confirmed:${order.id}`)).toBe(1);
-      await waitFor(() => inboxOf(inject('mailCatcherUrl'), customer.email), (mails) => mails.length > 0, 20_000, `the e-mail to ${customer.email}`);
+      await waitFor(
+        () => inboxOf(inject('mailCatcherUrl'), customer.email),
+        (mails) => mails.length > 0,
+        20_000,
+        `the e-mail to ${customer.email}`,
+      );
     }
     await settle();
     for (const { customer } of orders) expect(await inboxOf(inject('mailCatcherUrl'), customer.email)).toHaveLength(1);

@@ -51,16 +51,20 @@ describe('checkout while the payment service is out', () => {
     ['refuses connections (a closed port)', () => 'http://127.0.0.1:9'],
     ['accepts connections and never answers', () => silentUrl],
   ] as const) {
-    it(`answers 503 payments_unavailable within ${deadlineMs / 1000} s when it ${outage}, the order cancelled and its stock back`, { timeout: 30_000 }, async () => {
-      const { lot, response, elapsedMs, order } = await checkoutWithStripeAt(url());
-      expect(response.status).toBe(503);
-      expect(apiErrorSchema.parse(response.body).error.code).toBe('payments_unavailable');
-      expect(response.headers['retry-after']).toBeDefined();
-      expect(elapsedMs).toBeLessThan(deadlineMs);
-      expect(order).toMatchObject({ status: 'cancelled', stripeCheckoutSessionId: null });
-      // 3 × 454 g reserved and put back: the lot holds its 4,540 g again, in two movements.
-      expect(await stockOf(lot.id)).toBe(10 * oneLbFillGrams);
-      expect(await movementsOf(lot.id, order.id)).toEqual({ sum: 0, count: 2 });
-    });
+    it(
+      `answers 503 payments_unavailable within ${deadlineMs / 1000} s when it ${outage}, the order cancelled and its stock back`,
+      { timeout: 30_000 },
+      async () => {
+        const { lot, response, elapsedMs, order } = await checkoutWithStripeAt(url());
+        expect(response.status).toBe(503);
+        expect(apiErrorSchema.parse(response.body).error.code).toBe('payments_unavailable');
+        expect(response.headers['retry-after']).toBeDefined();
+        expect(elapsedMs).toBeLessThan(deadlineMs);
+        expect(order).toMatchObject({ status: 'cancelled', stripeCheckoutSessionId: null });
+        // 3 × 454 g reserved and put back: the lot holds its 4,540 g again, in two movements.
+        expect(await stockOf(lot.id)).toBe(10 * oneLbFillGrams);
+        expect(await movementsOf(lot.id, order.id)).toEqual({ sum: 0, count: 2 });
+      },
+    );
   }
 });

@@ -34,7 +34,12 @@ describe('the job queue when PostgreSQL stops under a running job', () => {
         });
         await queue.boss.send(name, {});
       }
-      await waitFor(async () => started, (names) => names.length === 2, 10_000, 'both jobs to start');
+      await waitFor(
+        async () => started,
+        (names) => names.length === 2,
+        10_000,
+        'both jobs to start',
+      );
 
       restartCluster().stop();
       // Completing one job and failing the other both need the database that is gone now.

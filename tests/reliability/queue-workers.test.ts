@@ -57,7 +57,12 @@ describe('two queue workers on the same jobs', () => {
 
     const count = 30;
     for (let n = 0; n < count; n++) await sendJob(a.queue, onA, { n });
-    await waitFor(async () => runs.length, (length) => length >= count, 20_000, 'every job to run');
+    await waitFor(
+      async () => runs.length,
+      (length) => length >= count,
+      20_000,
+      'every job to run',
+    );
     await sleep(1500); // time for any duplicate run to show up
 
     const ns = runs.map((run) => run.n).sort((x, y) => x - y);
@@ -103,7 +108,12 @@ describe('two queue workers on the same jobs', () => {
     const keys = recipients.map(() => `order-confirmed:${randomUUID()}`);
     await getTestDb().transaction(async (tx) => {
       for (const [n, to] of recipients.entries()) {
-        await queueEmail(tx, { template: 'order-confirmed', to, payload: { ...demoEmailPayloads['order-confirmed'], orderId: randomUUID() }, dedupeKey: keys[n] as string });
+        await queueEmail(tx, {
+          template: 'order-confirmed',
+          to,
+          payload: { ...demoEmailPayloads['order-confirmed'], orderId: randomUUID() },
+          dedupeKey: keys[n] as string,
+        });
       }
     });
     // Each relay's mailer counts what it sent, then hands the message to the real SMTP server.
@@ -128,7 +138,12 @@ describe('two queue workers on the same jobs', () => {
       () => workersB.stop(),
     );
 
-    const rows = await waitFor(() => outboxRows(keys), (all) => all.every((row) => row.status === 'sent'), 20_000, 'every row sent');
+    const rows = await waitFor(
+      () => outboxRows(keys),
+      (all) => all.every((row) => row.status === 'sent'),
+      20_000,
+      'every row sent',
+    );
     expect(rows.map((row) => row.attempts)).toEqual(recipients.map(() => 1));
     await sleep(500);
     for (const to of recipients) expect(await inboxOf(mailCatcherUrl, to)).toHaveLength(1);

@@ -21,7 +21,6 @@ import { createLotForSale } from '../factories/index';
 const fake = stripeFake();
 const children = new Set<ChildProcess>();
 
-
 const processEnv = (port: number) => ({
   ...process.env,
   NODE_ENV: 'test',
@@ -46,7 +45,11 @@ function startProcess(entry: 'server/index.ts' | 'server/worker.ts', port: numbe
 async function startServerProcess(port: number): Promise<ChildProcess> {
   const child = startProcess('server/index.ts', port);
   await waitFor(
-    () => fetch(`http://127.0.0.1:${port}/api/health`).then((response) => response.status, () => 0),
+    () =>
+      fetch(`http://127.0.0.1:${port}/api/health`).then(
+        (response) => response.status,
+        () => 0,
+      ),
     (status) => status === 200,
     30_000,
     `the server on ${port} to answer`,
@@ -118,7 +121,10 @@ async function customerSession(index: number) {
     body: JSON.stringify({ email, password: 'an invented long passphrase', name: `Scaled Customer ${index}` }),
   });
   expect(response.status).toBe(201);
-  const cookie = response.headers.getSetCookie().map((value) => value.split(';')[0]).join('; ');
+  const cookie = response.headers
+    .getSetCookie()
+    .map((value) => value.split(';')[0])
+    .join('; ');
   return { email, cookie };
 }
 
@@ -171,7 +177,12 @@ describe('two stateless servers and a worker on one PostgreSQL', () => {
     const [queued] = await getTestDb().select({ n: count() }).from(emailOutbox).where(inArray(emailOutbox.dedupeKey, keys));
     expect(queued!.n).toBe(12);
     for (const { email } of placed) {
-      const mail = await waitFor(() => inboxOf(inject('mailCatcherUrl'), email), (found) => found.length >= 1, 20_000, `the confirmation to ${email}`);
+      const mail = await waitFor(
+        () => inboxOf(inject('mailCatcherUrl'), email),
+        (found) => found.length >= 1,
+        20_000,
+        `the confirmation to ${email}`,
+      );
       expect(mail.filter((message) => /order/i.test(message.subject))).toHaveLength(1);
     }
     // Every payment event recorded once.

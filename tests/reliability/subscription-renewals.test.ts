@@ -13,7 +13,18 @@ import { systemClock } from '../../server/lib/clock';
 import { startServer, type RunningServer } from '../../server/index';
 import { createStripeSync } from '../../server/modules/subscriptions/stripe-sync.service';
 import { inboxOf, waitFor } from '../api/outbox-support';
-import { deliveryRows, eventsAbout, outboxCount, paymentsTestConfig, settle, stripeFake, subscriptionOrders, subscriptionRow, testPaymentsService, testStripe } from '../api/payments-support';
+import {
+  deliveryRows,
+  eventsAbout,
+  outboxCount,
+  paymentsTestConfig,
+  settle,
+  stripeFake,
+  subscriptionOrders,
+  subscriptionRow,
+  testPaymentsService,
+  testStripe,
+} from '../api/payments-support';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
@@ -64,9 +75,25 @@ async function paidSubscription() {
   const { id } = await createSubscription({ userId: customer.id, lotId: lot.id, bagsPerDelivery: 2, priceCents: 4135 });
   const { checkoutUrl } = await payments.createCheckoutForSubscription(id);
   expect((await payOnTestPaymentPage(checkoutUrl, { number: succeedingTestCard })).status).toBe(303);
-  await waitFor(() => subscriptionOrders(id), (orders) => orders.length === 1, 10_000, 'the first delivery order');
-  const subscription = await waitFor(() => subscriptionRow(id), (current) => current.status === 'active' && current.anchorDate !== null, 10_000, 'active');
-  return { customer, id, anchorDate: subscription.anchorDate!, stripeSubscriptionId: subscription.stripeSubscriptionId!, stripeCustomerId: subscription.stripeCustomerId! };
+  await waitFor(
+    () => subscriptionOrders(id),
+    (orders) => orders.length === 1,
+    10_000,
+    'the first delivery order',
+  );
+  const subscription = await waitFor(
+    () => subscriptionRow(id),
+    (current) => current.status === 'active' && current.anchorDate !== null,
+    10_000,
+    'active',
+  );
+  return {
+    customer,
+    id,
+    anchorDate: subscription.anchorDate!,
+    stripeSubscriptionId: subscription.stripeSubscriptionId!,
+    stripeCustomerId: subscription.stripeCustomerId!,
+  };
 }
 
 describe('subscription renewals on the payment fake’s clock', () => {
@@ -79,7 +106,12 @@ describe('subscription renewals on the payment fake’s clock', () => {
     const renewal = await fake.advanceClock({ days: 14 });
     const renewed = renewal.renewals.find((entry) => entry.subscription === stripeSubscriptionId);
     expect(renewed).toMatchObject({ outcome: 'paid' });
-    const orders = await waitFor(() => subscriptionOrders(id), (rows) => rows.length === 2, 10_000, 'the renewal order');
+    const orders = await waitFor(
+      () => subscriptionOrders(id),
+      (rows) => rows.length === 2,
+      10_000,
+      'the renewal order',
+    );
     // The fortnightly grid: the second delivery's place is the anchor + 14 days.
     expect(orders[1]).toMatchObject({ stripeInvoiceId: renewed!.invoice, roastDate: addDays(anchorDate, 14), status: 'paid', totalCents: 4135 });
 
@@ -98,13 +130,25 @@ describe('subscription renewals on the payment fake’s clock', () => {
     const renewal = await fake.advanceClock({ days: 14 });
     const failedInvoice = renewal.renewals.find((entry) => entry.subscription === stripeSubscriptionId)!.invoice!;
     const heldNominal = addDays(anchorDate, 14);
-    await waitFor(() => deliveryRows(id), (rows) => rows.some((row) => row.nominalDate === heldNominal && row.status === 'held'), 10_000, 'the held delivery');
+    await waitFor(
+      () => deliveryRows(id),
+      (rows) => rows.some((row) => row.nominalDate === heldNominal && row.status === 'held'),
+      10_000,
+      'the held delivery',
+    );
     expect((await subscriptionRow(id)).status).toBe('past_due');
     await fake.advanceClock({ days: 3 });
-    await waitFor(() => eventsAbout(failedInvoice, 'invoice.payment_failed'), (events) => events.length === 2 && events.every((event) => event.status === 'delivered'));
+    await waitFor(
+      () => eventsAbout(failedInvoice, 'invoice.payment_failed'),
+      (events) => events.length === 2 && events.every((event) => event.status === 'delivered'),
+    );
     await settle();
     expect(await outboxCount(`payment-failed:${failedInvoice}`)).toBe(1);
-    const inbox = await waitFor(() => inboxOf(mailCatcherUrl, customer.email), (mails) => mails.some((mail) => mail.subject === 'We could not take your payment'), 15_000);
+    const inbox = await waitFor(
+      () => inboxOf(mailCatcherUrl, customer.email),
+      (mails) => mails.some((mail) => mail.subject === 'We could not take your payment'),
+      15_000,
+    );
     expect(inbox.filter((mail) => mail.subject === 'We could not take your payment')).toHaveLength(1);
     expect(await subscriptionOrders(id)).toHaveLength(1);
 
@@ -114,7 +158,12 @@ describe('subscription renewals on the payment fake’s clock', () => {
     try {
       await fake.setCustomerCard(stripeCustomerId, succeedingTestCard);
       await stripe.invoices.pay(failedInvoice);
-      const orders = await waitFor(() => subscriptionOrders(id), (rows) => rows.length === 2, 10_000, 'the released delivery order');
+      const orders = await waitFor(
+        () => subscriptionOrders(id),
+        (rows) => rows.length === 2,
+        10_000,
+        'the released delivery order',
+      );
       const released = orders[1]!;
       const row = (await deliveryRows(id)).find((delivery) => delivery.nominalDate === heldNominal)!;
       expect(row).toMatchObject({ status: 'scheduled', orderId: released.id, roastDate: released.roastDate });
@@ -133,7 +182,12 @@ describe('subscription renewals on the payment fake’s clock', () => {
     const { customer, id, stripeSubscriptionId } = await paidSubscription();
     const app = createTestApp();
     const agent = await signedInAgent(app, customer);
-    const sync = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig()), clock: systemClock, logger: createLogger(paymentsTestConfig()) });
+    const sync = createStripeSync({
+      db: getTestDb(),
+      gateway: createPaymentsGateway(paymentsTestConfig()),
+      clock: systemClock,
+      logger: createLogger(paymentsTestConfig()),
+    });
     const before = await stripe.subscriptions.retrieve(stripeSubscriptionId);
     const periodEnd = before.items.data[0]!.current_period_end;
 
@@ -178,7 +232,12 @@ describe('subscription renewals on the payment fake’s clock', () => {
     relay.cut();
     try {
       expect((await agent.patch(`/api/subscriptions/${id}`).send({ bagSize: '1lb' })).status).toBe(200);
-      const unreachable = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig({ STRIPE_API_URL: relay.url })), clock: systemClock, logger });
+      const unreachable = createStripeSync({
+        db: getTestDb(),
+        gateway: createPaymentsGateway(paymentsTestConfig({ STRIPE_API_URL: relay.url })),
+        clock: systemClock,
+        logger,
+      });
       await expect(unreachable.push(id)).rejects.toThrow();
       // Nobody could push it: not this push, not the server's scheduled sync.
       const row = await subscriptionRow(id);
@@ -198,8 +257,20 @@ describe('subscription renewals on the payment fake’s clock', () => {
 
   it('a subscription Stripe does not know (the demo seed’s invented ids) is recorded as pushed instead of retried forever', async () => {
     const customer = await createTestUser('customer');
-    const row = await createSubscription({ userId: customer.id, status: 'active', cadenceWeeks: 1, anchorDate: '2031-01-06', changeVersion: 2, stripeSubscriptionId: 'sub_demo_invented01' });
-    const sync = createStripeSync({ db: getTestDb(), gateway: createPaymentsGateway(paymentsTestConfig()), clock: systemClock, logger: createLogger(paymentsTestConfig()) });
+    const row = await createSubscription({
+      userId: customer.id,
+      status: 'active',
+      cadenceWeeks: 1,
+      anchorDate: '2031-01-06',
+      changeVersion: 2,
+      stripeSubscriptionId: 'sub_demo_invented01',
+    });
+    const sync = createStripeSync({
+      db: getTestDb(),
+      gateway: createPaymentsGateway(paymentsTestConfig()),
+      clock: systemClock,
+      logger: createLogger(paymentsTestConfig()),
+    });
     expect(await sync.push(row.id)).toBe('nothing');
     expect(await subscriptionRow(row.id)).toMatchObject({ stripeSyncedVersion: 2 });
   });

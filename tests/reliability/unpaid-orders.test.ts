@@ -132,7 +132,10 @@ describe('an order whose payment page was lost between commit and save', () => {
   it('past the page’s lifetime, an order whose page Stripe does not know is cancelled; one whose page Stripe still has open is left alone', async () => {
     const lot = await createLotForSale(50_000);
     const unknown = await createGreenOrder((await createCustomer('unknown-page')).id, lot.id);
-    await getTestDb().update(orders).set({ stripeCheckoutSessionId: `cs_test_never_made_${randomUUID().slice(0, 8)}` }).where(eq(orders.id, unknown.id));
+    await getTestDb()
+      .update(orders)
+      .set({ stripeCheckoutSessionId: `cs_test_never_made_${randomUUID().slice(0, 8)}` })
+      .where(eq(orders.id, unknown.id));
     const open = await createGreenOrder((await createCustomer('open-page')).id, lot.id);
     await testPaymentsService(running.config).createCheckoutForOrder(open.id);
 

@@ -22,7 +22,6 @@ declare module 'vitest' {
   }
 }
 
-
 /** The whole product as a browser meets it: built client, seeded database, real server. */
 export default async function setup(project: TestProject) {
   ensureChromium();
@@ -51,7 +50,12 @@ export default async function setup(project: TestProject) {
     });
     const port = await freePort();
     const webhookSecret = 'whsec_restday_e2e_webhooks';
-    stripeFake = await startStripeFake({ port: 0, webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook`, webhookSecret, retry: { initialDelayMs: 200, maxDelayMs: 2000 } });
+    stripeFake = await startStripeFake({
+      port: 0,
+      webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook`,
+      webhookSecret,
+      retry: { initialDelayMs: 200, maxDelayMs: 2000 },
+    });
     const config = loadConfig({
       NODE_ENV: 'test',
       LOG_LEVEL: 'warn',

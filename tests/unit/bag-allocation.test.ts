@@ -3,7 +3,14 @@ import { describe, expect, it } from 'vitest';
 import { roastLevels } from '@shared/domain/vocabulary';
 import { allocateBags, type BatchRoom, type LineToFill } from '../../server/modules/packing/bag-allocation';
 
-const line = (overrides: Partial<LineToFill> = {}): LineToFill => ({ orderItemId: 'line-1', lotId: 'lot-a', roastLevel: 'medium', bags: 1, fillGrams: 341, ...overrides });
+const line = (overrides: Partial<LineToFill> = {}): LineToFill => ({
+  orderItemId: 'line-1',
+  lotId: 'lot-a',
+  roastLevel: 'medium',
+  bags: 1,
+  fillGrams: 341,
+  ...overrides,
+});
 const batch = (overrides: Partial<BatchRoom> = {}): BatchRoom => ({ batchId: 'batch-1', lotId: 'lot-a', roastLevel: 'medium', freeGrams: 1000, ...overrides });
 
 describe('allocateBags', () => {
@@ -20,7 +27,10 @@ describe('allocateBags', () => {
   });
 
   it('never fills from a batch of another lot or level', () => {
-    const plan = allocateBags([line({ bags: 1 })], [batch({ lotId: 'lot-b', freeGrams: 9000 }), batch({ batchId: 'dark', roastLevel: 'dark', freeGrams: 9000 })]);
+    const plan = allocateBags(
+      [line({ bags: 1 })],
+      [batch({ lotId: 'lot-b', freeGrams: 9000 }), batch({ batchId: 'dark', roastLevel: 'dark', freeGrams: 9000 })],
+    );
     expect(plan).toEqual({ ok: false, shortfalls: [{ lotId: 'lot-a', roastLevel: 'medium', neededGrams: 341, freeGrams: 0 }] });
   });
 
@@ -53,7 +63,11 @@ describe('allocateBags', () => {
       bags: fc.integer({ min: 1, max: 6 }),
       fillGrams: fc.constantFrom(341, 454, 908),
     });
-    const batchArb = fc.record({ lotId: fc.constantFrom(...lots), roastLevel: fc.constantFrom(...roastLevels.slice(0, 2)), freeGrams: fc.integer({ min: 0, max: 6000 }) });
+    const batchArb = fc.record({
+      lotId: fc.constantFrom(...lots),
+      roastLevel: fc.constantFrom(...roastLevels.slice(0, 2)),
+      freeGrams: fc.integer({ min: 0, max: 6000 }),
+    });
     fc.assert(
       fc.property(fc.array(lineArb, { minLength: 1, maxLength: 5 }), fc.array(batchArb, { maxLength: 6 }), (rawLines, rawBatches) => {
         const lines = rawLines.map((entry, n) => ({ ...entry, orderItemId: `line-${n}` }));

@@ -73,7 +73,9 @@ describe('the shipped e-mail and the ready-from date', () => {
 
 describe('payload checks', () => {
   it('refuses a link that is not http(s), so no javascript: URL reaches an href', () => {
-    expect(() => renderEmail('password-reset', { ...demoEmailPayloads['password-reset'], resetUrl: 'javascript:alert(1)' }, demoEmailContext)).toThrow(ZodError);
+    expect(() => renderEmail('password-reset', { ...demoEmailPayloads['password-reset'], resetUrl: 'javascript:alert(1)' }, demoEmailContext)).toThrow(
+      ZodError,
+    );
   });
 
   it('refuses a payload that misses what the template needs (the seed-style {orderId} alone)', () => {

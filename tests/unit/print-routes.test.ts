@@ -9,7 +9,9 @@ let routes: RouteRow[];
 describe('npm run routes', () => {
   beforeAll(async () => {
     // The script itself, as a developer runs it: it builds the app without a database or a listener.
-    const { stdout } = await run(process.execPath, ['--import', 'tsx', 'server/scripts/print-routes.ts', '--json'], { env: { ...process.env, NODE_ENV: 'test' } });
+    const { stdout } = await run(process.execPath, ['--import', 'tsx', 'server/scripts/print-routes.ts', '--json'], {
+      env: { ...process.env, NODE_ENV: 'test' },
+    });
     routes = JSON.parse(stdout) as RouteRow[];
   }, 60_000);
 

@@ -29,7 +29,14 @@ export function savePaymentMethod({ state, now }: AccountContext, card: CardDeta
 }
 
 /** Charges a saved card: a payment intent and a charge, succeeded or failed. */
-export function charge({ state, now }: AccountContext, amount: number, currency: string, paymentMethod: PaymentMethod, customer: string | null, metadata: Metadata) {
+export function charge(
+  { state, now }: AccountContext,
+  amount: number,
+  currency: string,
+  paymentMethod: PaymentMethod,
+  customer: string | null,
+  metadata: Metadata,
+) {
   const decline = chargeOutcome(state.cardNumbers[paymentMethod.id] ?? '');
   const intent: PaymentIntent = {
     id: newId('pi'),
@@ -39,7 +46,9 @@ export function charge({ state, now }: AccountContext, amount: number, currency:
     currency,
     customer,
     latest_charge: null,
-    last_payment_error: decline ? { type: 'card_error', code: decline.code, message: decline.message, ...(decline.declineCode ? { decline_code: decline.declineCode } : {}) } : null,
+    last_payment_error: decline
+      ? { type: 'card_error', code: decline.code, message: decline.message, ...(decline.declineCode ? { decline_code: decline.declineCode } : {}) }
+      : null,
     metadata,
     payment_method: paymentMethod.id,
     status: decline ? 'requires_payment_method' : 'succeeded',

@@ -120,7 +120,8 @@ export function invoiceApi(ctx: AccountContext) {
   return {
     payInvoice(id: string): Invoice {
       const invoice = find(state.invoices, id, 'invoice', 'invoice');
-      if (invoice.status !== 'open') throw StripeApiError.invalid(`Invoice is ${invoice.status}; only an open invoice can be paid.`, undefined, `invoice_not_open`);
+      if (invoice.status !== 'open')
+        throw StripeApiError.invalid(`Invoice is ${invoice.status}; only an open invoice can be paid.`, undefined, `invoice_not_open`);
       const decline = attemptInvoice(ctx, invoice);
       store.changed();
       if (decline) throw StripeApiError.card(decline.code, decline.message, decline.declineCode);

@@ -3,7 +3,10 @@ import { newId } from '../store';
 import type { Price, Recurring } from '../stripe-objects';
 import { day, type AccountContext } from './context';
 
-export function createPrice({ state, now }: AccountContext, data: { currency: string; unit_amount: number; product: string; recurring: Recurring | null }): Price {
+export function createPrice(
+  { state, now }: AccountContext,
+  data: { currency: string; unit_amount: number; product: string; recurring: Recurring | null },
+): Price {
   const price: Price = {
     id: newId('price'),
     object: 'price',

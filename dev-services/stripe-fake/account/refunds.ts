@@ -20,7 +20,11 @@ export function refundApi({ store, state, now, emit, find }: AccountContext) {
       if (remaining === 0) throw StripeApiError.invalid(`Charge ${refunded.id} has already been refunded.`, undefined, 'charge_already_refunded');
       const amount = params.amount ?? remaining;
       if (amount > remaining) {
-        throw StripeApiError.invalid(`Refund amount (${amount}) is greater than the unrefunded amount on the charge (${remaining}).`, 'amount', 'amount_too_large');
+        throw StripeApiError.invalid(
+          `Refund amount (${amount}) is greater than the unrefunded amount on the charge (${remaining}).`,
+          'amount',
+          'amount_too_large',
+        );
       }
       const refund = {
         id: newId('re'),

@@ -98,7 +98,9 @@ export const addresses = pgTable(
   },
   (t) => [
     index('addresses_user_id_idx').on(t.userId),
-    uniqueIndex('addresses_one_default_per_user').on(t.userId).where(sql`${t.isDefault}`),
+    uniqueIndex('addresses_one_default_per_user')
+      .on(t.userId)
+      .where(sql`${t.isDefault}`),
     check('addresses_country_code', sql`${t.country} ~ '^[A-Z]{2}$'`),
   ],
 );

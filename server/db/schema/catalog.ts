@@ -27,7 +27,10 @@ export const lots = pgTable(
     /** Screen size as the importer writes it, e.g. "16/18" (n/64 in). */
     screenSize: text('screen_size'),
     cuppingScore: numeric('cupping_score', { precision: 5, scale: 2, mode: 'number' }),
-    tastingNotes: text('tasting_notes').array().notNull().default(sql`'{}'::text[]`),
+    tastingNotes: text('tasting_notes')
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     description: text('description').notNull().default(''),
     suggestedLevel: roastLevelEnum('suggested_level').notNull(),
     allowedLevels: roastLevelEnum('allowed_levels').array().notNull(),

@@ -8,7 +8,6 @@ import { instant, timestamps } from './common';
 import { roastLevelEnum } from './enums';
 import { orderItems, orders } from './orders';
 
-
 /**
  * The shop's settings: exactly one row (id = 1). Weekdays are ISO numbers (1 = Monday … 7 = Sunday)
  * in the shop's time zone. Column defaults are the shop's starting settings (defaultShopSettings)
@@ -21,11 +20,17 @@ export const shopSettings = pgTable(
     shopName: text('shop_name').notNull(),
     /** IANA zone, e.g. America/Denver. */
     timeZone: text('time_zone').notNull(),
-    roastWeekdays: integer('roast_weekdays').array().notNull().default(sql`'{2,4}'::integer[]`),
+    roastWeekdays: integer('roast_weekdays')
+      .array()
+      .notNull()
+      .default(sql`'{2,4}'::integer[]`),
     /** Order cutoff, shop-local 'HH:MM', cutoffDaysBefore days before the roast day. */
     cutoffTime: text('cutoff_time').notNull().default('12:00'),
     cutoffDaysBefore: integer('cutoff_days_before').notNull().default(1),
-    shipWeekdays: integer('ship_weekdays').array().notNull().default(sql`'{1,2,3,4,5}'::integer[]`),
+    shipWeekdays: integer('ship_weekdays')
+      .array()
+      .notNull()
+      .default(sql`'{1,2,3,4,5}'::integer[]`),
     transitDays: integer('transit_days').notNull().default(3),
     /** Days after roasting before a bag may ship (degassing in the bag). */
     degasHoldDays: integer('degas_hold_days').notNull().default(1),

@@ -108,7 +108,20 @@ export function demoCalendar(
     return new Date(new TZDate(y, m - 1, d, hh, mm, 0, settings.timeZone).getTime());
   };
 
-  return { today, clock, addDays, isoWeekday, isRoastWeekday, isOpenRoastDay, openRoastDayFrom, weekdayOnOrAfter, roastWeekdaysFromToday, datesFor, nextShipDay, at };
+  return {
+    today,
+    clock,
+    addDays,
+    isoWeekday,
+    isRoastWeekday,
+    isOpenRoastDay,
+    openRoastDayFrom,
+    weekdayOnOrAfter,
+    roastWeekdaysFromToday,
+    datesFor,
+    nextShipDay,
+    at,
+  };
 }
 
 export type DemoCalendar = ReturnType<typeof demoCalendar>;

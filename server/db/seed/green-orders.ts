@@ -17,10 +17,32 @@ function greenOrderPlans({ rng, accounts }: ScenarioContext): GreenPlan[] {
   const sellable = demoLots.filter((l) => l.stockGrams > 5_000).map((l) => l.code);
   const plans: GreenPlan[] = [
     // Order history: the demo customer's first order (the lots of their Roast Journal) and an old sell-out.
-    { userId: demoCustomerId, hoursAgo: 35 * 24 + 5, basket: [['WR-24-ETH-01', '1lb', 1], ['WR-24-BRA-01', '2lb', 1], ['WR-24-GTM-01', '1lb', 1]] },
+    {
+      userId: demoCustomerId,
+      hoursAgo: 35 * 24 + 5,
+      basket: [
+        ['WR-24-ETH-01', '1lb', 1],
+        ['WR-24-BRA-01', '2lb', 1],
+        ['WR-24-GTM-01', '1lb', 1],
+      ],
+    },
     { userId: customerIds[3] as string, hoursAgo: 20 * 24 + 3, basket: [['WR-24-KEN-01', '5lb', 2]] },
-    { userId: customerIds[8] as string, hoursAgo: 26 * 24 + 7, basket: [['WR-24-KEN-01', '5lb', 1], ['WR-24-CRI-01', '2lb', 1]] },
-    { userId: demoCustomerId, hoursAgo: 60, basket: [['WR-25-RWA-01', '1lb', 1], ['WR-24-CRI-01', '8oz', 1]] },
+    {
+      userId: customerIds[8] as string,
+      hoursAgo: 26 * 24 + 7,
+      basket: [
+        ['WR-24-KEN-01', '5lb', 1],
+        ['WR-24-CRI-01', '2lb', 1],
+      ],
+    },
+    {
+      userId: demoCustomerId,
+      hoursAgo: 60,
+      basket: [
+        ['WR-25-RWA-01', '1lb', 1],
+        ['WR-24-CRI-01', '8oz', 1],
+      ],
+    },
   ];
   // Placed over the past week: the newest are awaiting payment or ship next, the oldest have shipped.
   const recentHours = [2, 3, 5, 7, 9, 13, 17, 22, 30, 41, 52, 64, 75, 88, 99, 112, 124, 137, 150, 163];
@@ -70,10 +92,30 @@ export function demoGreenOrders(ctx: ScenarioContext) {
       const unitPriceCents = Math.round((fillGrams * priceFor(lot, fillGrams * quantity)) / 1000);
       subtotalCents += unitPriceCents * quantity;
       emailLines.push({ description: lot.name, size, quantity, lineTotalCents: unitPriceCents * quantity });
-      orderItems.push({ id: rng.uuid(), orderId: id, lotId: lotId(code), kind: 'green', size, quantity, fillGrams, unitPriceCents, lineTotalCents: unitPriceCents * quantity });
+      orderItems.push({
+        id: rng.uuid(),
+        orderId: id,
+        lotId: lotId(code),
+        kind: 'green',
+        size,
+        quantity,
+        fillGrams,
+        unitPriceCents,
+        lineTotalCents: unitPriceCents * quantity,
+      });
       // Stock is taken when checkout reserves it (pending included) and returned on a refund.
       stockMovements.push({ id: rng.uuid(), lotId: lotId(code), deltaGrams: -fillGrams * quantity, reason: 'sale', note: '', orderId: id, createdAt });
-      if (refundedAt) stockMovements.push({ id: rng.uuid(), lotId: lotId(code), deltaGrams: fillGrams * quantity, reason: 'refund', note: 'Refunded before packing (invented)', orderId: id, actorId: accounts.ownerId, createdAt: refundedAt });
+      if (refundedAt)
+        stockMovements.push({
+          id: rng.uuid(),
+          lotId: lotId(code),
+          deltaGrams: fillGrams * quantity,
+          reason: 'refund',
+          note: 'Refunded before packing (invented)',
+          orderId: id,
+          actorId: accounts.ownerId,
+          createdAt: refundedAt,
+        });
     }
     const shippingCents = subtotalCents >= FREE_SHIPPING_FROM_CENTS ? 0 : GREEN_SHIPPING_CENTS;
     const totalCents = subtotalCents + shippingCents;
@@ -108,7 +150,18 @@ export function demoGreenOrders(ctx: ScenarioContext) {
         'order-confirmed',
         plan.userId,
         id,
-        { name, orderId: id, kind: 'green', lines: emailLines, subtotalCents, shippingCents, totalCents, currency: CURRENCY, shipTo: shippingAddress, ...(orderShipDate ? { shipDate: orderShipDate } : {}) },
+        {
+          name,
+          orderId: id,
+          kind: 'green',
+          lines: emailLines,
+          subtotalCents,
+          shippingCents,
+          totalCents,
+          currency: CURRENCY,
+          shipTo: shippingAddress,
+          ...(orderShipDate ? { shipDate: orderShipDate } : {}),
+        },
         paidAt,
       );
     }

@@ -82,9 +82,7 @@ async function insertScenario(tx: Tx, sc: DemoScenario): Promise<void> {
   await insertMany(tx, schema.orders, sc.orders);
   await insertMany(tx, schema.orderItems, sc.orderItems);
   await insertMany(tx, schema.deliveries, sc.deliveries);
-  await tx.execute(
-    sql`update ${schema.orders} set delivery_id = d.id from ${schema.deliveries} d where d.order_id = ${schema.orders.id}`,
-  );
+  await tx.execute(sql`update ${schema.orders} set delivery_id = d.id from ${schema.deliveries} d where d.order_id = ${schema.orders.id}`);
   await insertMany(tx, schema.rotationPicks, sc.rotationPicks);
   await insertMany(tx, schema.batches, sc.batches);
   await insertMany(tx, schema.bagAllocations, sc.bagAllocations);
@@ -112,4 +110,3 @@ export const seededTables = {
   roastDays: schema.roastDays,
   shopSettings: schema.shopSettings,
 } as const;
-

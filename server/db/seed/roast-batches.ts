@@ -68,7 +68,16 @@ export function demoBatches({ rng, settings, cal, accounts }: ScenarioContext, r
         createdAt,
       });
       groupBatchIds.push(id);
-      stockMovements.push({ id: rng.uuid(), lotId: batchLotId, deltaGrams: -greenGramsIn, reason: 'roast', note: '', batchId: id, actorId: roasterId, createdAt });
+      stockMovements.push({
+        id: rng.uuid(),
+        lotId: batchLotId,
+        deltaGrams: -greenGramsIn,
+        reason: 'roast',
+        note: '',
+        batchId: id,
+        actorId: roasterId,
+        createdAt,
+      });
     }
     lines.forEach((line, n) => {
       bagAllocations.push({

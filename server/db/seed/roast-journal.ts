@@ -62,7 +62,13 @@ export function demoJournalEntries(
       estimatedLevel: estimateLevelFromLoss(lossPct, model).level,
       lossPct,
       developmentSeconds: endSeconds - firstCrackSeconds,
-      notes: rng.pick(['', 'Windy on the porch; took longer to yellow.', 'Stirred constantly, even colour.', 'First crack was quiet, went by smell.', 'Cooled in a colander by the fan.']),
+      notes: rng.pick([
+        '',
+        'Windy on the porch; took longer to yellow.',
+        'Stirred constantly, even colour.',
+        'First crack was quiet, went by smell.',
+        'Cooled in a colander by the fan.',
+      ]),
       createdAt,
       updatedAt: createdAt,
     });

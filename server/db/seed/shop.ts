@@ -43,9 +43,23 @@ export function demoRoastDays(clock: SeedClock, settings: DemoShopSettings): { r
   const ahead = demoCalendar(clock.now, settings).roastWeekdaysFromToday(12);
   const [founderDay, maintenanceDay, shortDay] = [ahead[3] as string, ahead[11] as string, ahead[1] as string];
   const roastDays: Insert<typeof schema.roastDays>[] = [
-    { date: founderDay, open: false, shipOpen: false, note: "Wrenfield Founders' Day (invented town holiday): roastery and shipping closed", createdAt: daysAgo(40), updatedAt: daysAgo(40) },
+    {
+      date: founderDay,
+      open: false,
+      shipOpen: false,
+      note: "Wrenfield Founders' Day (invented town holiday): roastery and shipping closed",
+      createdAt: daysAgo(40),
+      updatedAt: daysAgo(40),
+    },
     { date: maintenanceDay, open: false, note: 'Roaster maintenance: afterburner service (invented)', createdAt: daysAgo(12), updatedAt: daysAgo(12) },
-    { date: shortDay, open: true, capacityGrams: 30_000, note: 'Short day: cupping training in the afternoon (invented)', createdAt: daysAgo(9), updatedAt: daysAgo(9) },
+    {
+      date: shortDay,
+      open: true,
+      capacityGrams: 30_000,
+      note: 'Short day: cupping training in the afternoon (invented)',
+      createdAt: daysAgo(9),
+      updatedAt: daysAgo(9),
+    },
   ];
   // The maintenance day closes roasting only: parcels still go out.
   const cal = demoCalendar(clock.now, settings, new Set([founderDay, maintenanceDay]), new Set([founderDay]));

@@ -13,9 +13,33 @@ export function demoStockHistory(
   const { lotId } = catalogue;
   const { roasterId, packerId } = accounts;
   const history: Insert<typeof schema.stockMovements>[] = [
-    { id: rng.uuid(), lotId: lotId('WR-24-ETH-01'), deltaGrams: -227, reason: 'sample', note: 'Cupping samples for the (invented) Wrenfield coffee club', actorId: roasterId, createdAt: daysAgo(50) },
-    { id: rng.uuid(), lotId: lotId('WR-24-GTM-01'), deltaGrams: -140, reason: 'count', note: 'Stock count: spilled sack corner (invented)', actorId: packerId, createdAt: daysAgo(21) },
-    { id: rng.uuid(), lotId: lotId('WR-24-BRA-01'), deltaGrams: -310, reason: 'loss', note: 'Torn sack, swept beans discarded (invented)', actorId: packerId, createdAt: daysAgo(44) },
+    {
+      id: rng.uuid(),
+      lotId: lotId('WR-24-ETH-01'),
+      deltaGrams: -227,
+      reason: 'sample',
+      note: 'Cupping samples for the (invented) Wrenfield coffee club',
+      actorId: roasterId,
+      createdAt: daysAgo(50),
+    },
+    {
+      id: rng.uuid(),
+      lotId: lotId('WR-24-GTM-01'),
+      deltaGrams: -140,
+      reason: 'count',
+      note: 'Stock count: spilled sack corner (invented)',
+      actorId: packerId,
+      createdAt: daysAgo(21),
+    },
+    {
+      id: rng.uuid(),
+      lotId: lotId('WR-24-BRA-01'),
+      deltaGrams: -310,
+      reason: 'loss',
+      note: 'Torn sack, swept beans discarded (invented)',
+      actorId: packerId,
+      createdAt: daysAgo(44),
+    },
   ];
   const before = [...movementsSoFar, ...history];
   for (const lot of demoLots) {

@@ -53,7 +53,20 @@ type SubscriptionOrderPlan = {
 // Mostly active; a few paused, one past due, one cancelled, one whose checkout never finished.
 const statusPlan: Record<number, SubscriptionStatus> = { 5: 'paused', 17: 'paused', 26: 'paused', 11: 'past_due', 23: 'cancelled', 31: 'incomplete' };
 const rotationPlan = new Set([3, 9, 14, 20, 29]);
-const subscriptionLots = ['WR-24-ETH-01', 'WR-24-ETH-02', 'WR-24-COL-01', 'WR-24-COL-01', 'WR-24-GTM-01', 'WR-24-GTM-01', 'WR-24-BRA-01', 'WR-24-BRA-01', 'WR-24-BRA-01', 'WR-24-SUM-01', 'WR-25-PER-01', 'WR-25-RWA-01'];
+const subscriptionLots = [
+  'WR-24-ETH-01',
+  'WR-24-ETH-02',
+  'WR-24-COL-01',
+  'WR-24-COL-01',
+  'WR-24-GTM-01',
+  'WR-24-GTM-01',
+  'WR-24-BRA-01',
+  'WR-24-BRA-01',
+  'WR-24-BRA-01',
+  'WR-24-SUM-01',
+  'WR-25-PER-01',
+  'WR-25-RWA-01',
+];
 const SUBSCRIPTIONS = 36;
 
 export function demoSubscriptions(ctx: ScenarioContext, pickedLotOn: (roastDate: string) => string): SubscriptionRows {
@@ -74,7 +87,11 @@ export function demoSubscriptions(ctx: ScenarioContext, pickedLotOn: (roastDate:
     // One subscriber on the low-stock lot, so a roast list shows a shortfall.
     const code = rotation ? null : i === 7 ? 'WR-24-CRI-01' : rng.pick(subscriptionLots);
     const lot: DemoLot | null = code ? catalogue.lotByCode(code) : null;
-    const roastLevel: RoastLevel = lot ? (rng.chance(0.5) ? lot.suggestedLevel : rng.pick(lot.allowedLevels)) : rng.pick(['light', 'medium', 'medium', 'medium-dark'] as const);
+    const roastLevel: RoastLevel = lot
+      ? rng.chance(0.5)
+        ? lot.suggestedLevel
+        : rng.pick(lot.allowedLevels)
+      : rng.pick(['light', 'medium', 'medium', 'medium-dark'] as const);
     const dark = roastLevel === 'medium-dark' || roastLevel === 'dark' || roastLevel === 'french';
     const brewMethod: BrewMethod = rng.chance(dark ? 0.6 : 0.25) ? 'espresso' : 'filter';
     const grind: Grind =
@@ -91,7 +108,20 @@ export function demoSubscriptions(ctx: ScenarioContext, pickedLotOn: (roastDate:
     const subscriptionId = rng.uuid();
     const name = accounts.nameOf(userId);
     const coffee = lot?.name ?? roastersRotationName;
-    const plan: SubscriptionOrderPlan = { subscriptionId, userId, name, code, coffee, roastLevel, brewMethod, grind, bagSize, bagsPerDelivery, priceCents, address };
+    const plan: SubscriptionOrderPlan = {
+      subscriptionId,
+      userId,
+      name,
+      code,
+      coffee,
+      roastLevel,
+      brewMethod,
+      grind,
+      bagSize,
+      bagsPerDelivery,
+      priceCents,
+      address,
+    };
 
     // Dates: the subscriber's roast weekday, every `cadenceWeeks` weeks; a closure moves a delivery on.
     const firstBase = cal.addDays(cal.weekdayOnOrAfter(today, weekday), 7 * phase);
@@ -140,7 +170,16 @@ export function demoSubscriptions(ctx: ScenarioContext, pickedLotOn: (roastDate:
       const orderStatus: OrderStatus = dates.shipDate < today ? 'shipped' : packedToday ? 'packed' : 'roasted';
       const orderId = makeOrder(dates, orderStatus);
       const at = cal.at(pastRoast, '12:00');
-      rows.deliveries.push({ id: rng.uuid(), subscriptionId, orderId, sequence, ...dates, status: orderStatus === 'shipped' ? 'shipped' : 'roasted', createdAt: createdAt, updatedAt: at });
+      rows.deliveries.push({
+        id: rng.uuid(),
+        subscriptionId,
+        orderId,
+        sequence,
+        ...dates,
+        status: orderStatus === 'shipped' ? 'shipped' : 'roasted',
+        createdAt: createdAt,
+        updatedAt: at,
+      });
       sequence += 1;
     }
     // The next deliveries: paid orders on the roast days of the next two weeks.
@@ -242,8 +281,21 @@ function billDelivery(
   }
   if (shipment) {
     const { carrier, trackingNumber } = shipment;
-    outbox.queue('shipped', userId, id, { name, orderId: id, kind: 'roasted', carrier, trackingNumber, readyFrom: dates.readyFrom, bestBefore: dates.bestBefore }, shipment.shippedAt);
-    outbox.queue('rest-day', userId, id, { name, orderId: id, readyFrom: dates.readyFrom, brewMethod, coffee, bestBefore: dates.bestBefore }, shipment.shippedAt, cal.at(dates.readyFrom, '08:00'));
+    outbox.queue(
+      'shipped',
+      userId,
+      id,
+      { name, orderId: id, kind: 'roasted', carrier, trackingNumber, readyFrom: dates.readyFrom, bestBefore: dates.bestBefore },
+      shipment.shippedAt,
+    );
+    outbox.queue(
+      'rest-day',
+      userId,
+      id,
+      { name, orderId: id, readyFrom: dates.readyFrom, brewMethod, coffee, bestBefore: dates.bestBefore },
+      shipment.shippedAt,
+      cal.at(dates.readyFrom, '08:00'),
+    );
   }
   if (!paid) {
     // Keyed by the invoice that failed, as the payment webhook keys it.

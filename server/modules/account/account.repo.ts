@@ -27,7 +27,11 @@ export function createAccountRepo(db: DbOrTx) {
       return db.transaction(async (tx) => {
         const [existing] = await tx.select({ id: addresses.id }).from(addresses).where(eq(addresses.userId, userId)).limit(1);
         const isDefault = input.isDefault || !existing;
-        if (isDefault) await tx.update(addresses).set({ isDefault: false }).where(and(eq(addresses.userId, userId), eq(addresses.isDefault, true)));
+        if (isDefault)
+          await tx
+            .update(addresses)
+            .set({ isDefault: false })
+            .where(and(eq(addresses.userId, userId), eq(addresses.isDefault, true)));
         const [row] = await tx
           .insert(addresses)
           .values({ ...input, userId, isDefault })

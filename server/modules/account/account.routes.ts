@@ -1,6 +1,13 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { addressInputSchema, emailChangeSchema, passwordChangeSchema, profileUpdateSchema, type Address, type AddressListResponse } from '@shared/schemas/account';
+import {
+  addressInputSchema,
+  emailChangeSchema,
+  passwordChangeSchema,
+  profileUpdateSchema,
+  type Address,
+  type AddressListResponse,
+} from '@shared/schemas/account';
 import type { UserResponse } from '@shared/schemas/auth';
 import type { Config } from '../../config';
 import { requireUser } from '../../middleware/require-role';

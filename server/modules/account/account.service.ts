@@ -4,7 +4,15 @@ import { AppError } from '../../lib/app-error';
 import { hashPassword, verifyPassword } from '../../lib/password-hashing';
 import type { SessionUser } from '../../middleware/require-role';
 import type { AuditTrail } from '../audit';
-import { assertAcceptablePassword, createUserAccounts, type RequestContext, type SessionsService, type StartedSession, toUser, type UserAccounts } from '../auth';
+import {
+  assertAcceptablePassword,
+  createUserAccounts,
+  type RequestContext,
+  type SessionsService,
+  type StartedSession,
+  toUser,
+  type UserAccounts,
+} from '../auth';
 import type { AccountRepo } from './account.repo';
 
 export interface AccountServiceDeps {
@@ -36,7 +44,9 @@ export function createAccountService({ repo, authRepo, sessions, audit }: Accoun
       await assertCurrentPassword(user, change.currentPassword);
       if (change.email === user.email) return toUser(user);
       if (await authRepo.isEmailTaken(change.email, user.id)) {
-        throw new AppError(409, 'email_taken', 'Another account already uses that e-mail address.', { email: 'Another account already uses that e-mail address.' });
+        throw new AppError(409, 'email_taken', 'Another account already uses that e-mail address.', {
+          email: 'Another account already uses that e-mail address.',
+        });
       }
       const updated = await authRepo.updateUser(user.id, { email: change.email });
       await sessions.endOthers(user);

@@ -55,7 +55,12 @@ export function createAuthService({ repo, sessions, audit, clock, logger, baseUr
       const account = await repo.findUserByEmail(input.email);
       const passwordMatches = await verifyPassword(account?.passwordHash ?? (await decoy()), input.password);
       if (!account || !passwordMatches) {
-        await audit.record({ action: 'sign_in.failed', actorId: account?.id ?? null, ip: context.ip, detail: { reason: account ? 'wrong_password' : 'unknown_account' } });
+        await audit.record({
+          action: 'sign_in.failed',
+          actorId: account?.id ?? null,
+          ip: context.ip,
+          detail: { reason: account ? 'wrong_password' : 'unknown_account' },
+        });
         throw invalidCredentials();
       }
       if (account.disabledAt) {

@@ -49,7 +49,10 @@ async function releaseOrderStock(db: DbOrTx, orderId: string, note: string) {
     .orderBy(asc(stockMovements.lotId));
   for (const { lotId, grams } of held) {
     if (grams <= 0) continue;
-    await db.update(lots).set({ stockGrams: sql`${lots.stockGrams} + ${grams}` }).where(eq(lots.id, lotId));
+    await db
+      .update(lots)
+      .set({ stockGrams: sql`${lots.stockGrams} + ${grams}` })
+      .where(eq(lots.id, lotId));
     await db.insert(stockMovements).values({ lotId, orderId, deltaGrams: grams, reason: 'sale', note });
   }
 }
@@ -100,7 +103,12 @@ export function createCheckoutRepo(db: Db) {
           : await db
               .select({ lotId: lotPriceBreaks.lotId, minGrams: lotPriceBreaks.minGrams, pricePerKgCents: lotPriceBreaks.pricePerKgCents })
               .from(lotPriceBreaks)
-              .where(inArray(lotPriceBreaks.lotId, rows.map((row) => row.id)));
+              .where(
+                inArray(
+                  lotPriceBreaks.lotId,
+                  rows.map((row) => row.id),
+                ),
+              );
       return rows.map((row) => ({
         ...row,
         priceBreaks: breaks.filter((priceBreak) => priceBreak.lotId === row.id).map(({ minGrams, pricePerKgCents }) => ({ minGrams, pricePerKgCents })),

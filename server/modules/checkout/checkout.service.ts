@@ -39,54 +39,57 @@ function shortOfStock(items: GreenCheckoutRequest['items'], shortLots: ShortLot[
 export function createCheckoutService({ repo, payments, clock }: CheckoutServiceDeps) {
   /** Prices the cart and places its order with the stock reserved; the id of the order (an existing one under the same key). */
   async function placeOrder(user: SessionUser, request: GreenCheckoutRequest, checkoutKey: string | undefined): Promise<string> {
-      const codes = [...new Set(request.items.map((item) => item.lotCode))];
-      const lotsForSale = await repo.lotsForSale(codes);
-      const byCode = new Map(lotsForSale.map((lot) => [lot.code, lot]));
-      const fields: Record<string, string> = {};
-      request.items.forEach((item, index) => {
-        if (!byCode.has(item.lotCode)) fields[`items.${index}.lotCode`] = `There is no lot ${item.lotCode} for sale.`;
-      });
-      if (Object.keys(fields).length > 0) throw AppError.badRequest('Some lots in the cart are not for sale.', fields);
+    const codes = [...new Set(request.items.map((item) => item.lotCode))];
+    const lotsForSale = await repo.lotsForSale(codes);
+    const byCode = new Map(lotsForSale.map((lot) => [lot.code, lot]));
+    const fields: Record<string, string> = {};
+    request.items.forEach((item, index) => {
+      if (!byCode.has(item.lotCode)) fields[`items.${index}.lotCode`] = `There is no lot ${item.lotCode} for sale.`;
+    });
+    if (Object.keys(fields).length > 0) throw AppError.badRequest('Some lots in the cart are not for sale.', fields);
 
-      const prices: Record<string, GreenLotPrice> = Object.fromEntries(
-        lotsForSale.map((lot) => [lot.code, { pricePerKgCents: lot.pricePerKgCents, priceBreaks: lot.priceBreaks }]),
-      );
-      const shipping = await repo.shippingSettings();
-      assertBagsShip(request.items.map((item, index) => ({ field: `items.${index}.size`, size: item.size })), shipping);
-      const quote = quoteGreenOrder(request.items, prices, { shipping });
-      const itemLines = quote.lines.filter((line) => line.kind === 'item');
-      const items = request.items.map((item, index) => {
-        const line = itemLines[index]!;
-        return {
-          lotId: byCode.get(item.lotCode)!.id,
-          size: item.size,
-          quantity: item.quantity,
-          fillGrams: bagFillGrams(item.size),
-          unitPriceCents: line.unitCents,
-          lineTotalCents: line.amountCents,
-        };
-      });
-      const gramsPerLot = new Map<string, number>();
-      for (const item of request.items) {
-        gramsPerLot.set(item.lotCode, (gramsPerLot.get(item.lotCode) ?? 0) + bagFillGrams(item.size) * item.quantity);
-      }
+    const prices: Record<string, GreenLotPrice> = Object.fromEntries(
+      lotsForSale.map((lot) => [lot.code, { pricePerKgCents: lot.pricePerKgCents, priceBreaks: lot.priceBreaks }]),
+    );
+    const shipping = await repo.shippingSettings();
+    assertBagsShip(
+      request.items.map((item, index) => ({ field: `items.${index}.size`, size: item.size })),
+      shipping,
+    );
+    const quote = quoteGreenOrder(request.items, prices, { shipping });
+    const itemLines = quote.lines.filter((line) => line.kind === 'item');
+    const items = request.items.map((item, index) => {
+      const line = itemLines[index]!;
+      return {
+        lotId: byCode.get(item.lotCode)!.id,
+        size: item.size,
+        quantity: item.quantity,
+        fillGrams: bagFillGrams(item.size),
+        unitPriceCents: line.unitCents,
+        lineTotalCents: line.amountCents,
+      };
+    });
+    const gramsPerLot = new Map<string, number>();
+    for (const item of request.items) {
+      gramsPerLot.set(item.lotCode, (gramsPerLot.get(item.lotCode) ?? 0) + bagFillGrams(item.size) * item.quantity);
+    }
 
-      try {
-        const { orderId } = await repo.placeGreenOrder({
-          userId: user.id,
-          subtotalCents: quote.subtotalCents,
-          shippingCents: quote.shippingCents,
-          totalCents: quote.subtotalCents + quote.shippingCents,
-          shippingAddress: request.shippingAddress,
-          ...(checkoutKey ? { checkoutKey } : {}),
-          items,
-          reservations: [...gramsPerLot].map(([lotCode, grams]) => ({ lotId: byCode.get(lotCode)!.id, lotCode, grams })),
-        });
-        return orderId;
-      } catch (error) {
-        if (error instanceof StockShortfall) throw shortOfStock(request.items, error.shortLots);
-        throw error;
-      }
+    try {
+      const { orderId } = await repo.placeGreenOrder({
+        userId: user.id,
+        subtotalCents: quote.subtotalCents,
+        shippingCents: quote.shippingCents,
+        totalCents: quote.subtotalCents + quote.shippingCents,
+        shippingAddress: request.shippingAddress,
+        ...(checkoutKey ? { checkoutKey } : {}),
+        items,
+        reservations: [...gramsPerLot].map(([lotCode, grams]) => ({ lotId: byCode.get(lotCode)!.id, lotCode, grams })),
+      });
+      return orderId;
+    } catch (error) {
+      if (error instanceof StockShortfall) throw shortOfStock(request.items, error.shortLots);
+      throw error;
+    }
   }
 
   return {

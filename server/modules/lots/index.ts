@@ -11,7 +11,17 @@ import { greenStockRoutes, lotsAdminRoutes } from './lots-admin.routes';
 import { createLotsAdminService } from './lots-admin.service';
 
 /** Lots: the shop's public catalogue, the staff's lot editing, and Green Stock in the Roastery. */
-export function createLotsModule({ db, storage, clock, listCache }: { db: Db; storage: FileStorage; clock: Clock; listCache?: LotListCache | undefined }): ApiModule & { catalogue: LotsService } {
+export function createLotsModule({
+  db,
+  storage,
+  clock,
+  listCache,
+}: {
+  db: Db;
+  storage: FileStorage;
+  clock: Clock;
+  listCache?: LotListCache | undefined;
+}): ApiModule & { catalogue: LotsService } {
   const admin = createLotsAdminService(createLotsAdminRepo(db), storage, clock);
   const catalogue = createLotsService(createLotsRepo(db), listCache);
   return {

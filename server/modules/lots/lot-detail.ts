@@ -6,11 +6,7 @@ import type { UploadKind } from '../../db/schema/enums';
 export const uploadUrl = (id: string) => `/api/uploads/${id}`;
 
 /** A lot row, its price breaks and its files (in display order) in the contract's detail shape. */
-export function lotDetailOf(
-  lot: typeof lots.$inferSelect,
-  priceBreaks: LotDetail['priceBreaks'],
-  files: { id: string; kind: UploadKind }[],
-): LotDetail {
+export function lotDetailOf(lot: typeof lots.$inferSelect, priceBreaks: LotDetail['priceBreaks'], files: { id: string; kind: UploadKind }[]): LotDetail {
   const specSheet = files.find((file) => file.kind === 'spec_sheet');
   return {
     code: lot.code,

@@ -34,11 +34,7 @@ export function createLotsAdminRepo(db: Db) {
       if (!lot) return undefined;
       const [priceBreaks, files] = await Promise.all([
         priceBreaksOf(lot.id),
-        db
-          .select({ id: uploads.id, kind: uploads.kind })
-          .from(uploads)
-          .where(eq(uploads.lotId, lot.id))
-          .orderBy(asc(uploads.position), asc(uploads.createdAt)),
+        db.select({ id: uploads.id, kind: uploads.kind }).from(uploads).where(eq(uploads.lotId, lot.id)).orderBy(asc(uploads.position), asc(uploads.createdAt)),
       ]);
       return { lot, priceBreaks, files };
     },
@@ -61,7 +57,10 @@ export function createLotsAdminRepo(db: Db) {
     /** Changes the given columns and, when given, replaces the price breaks, in one transaction. */
     async update(lotId: string, columns: Partial<LotColumns>, priceBreaks: PriceBreak[] | undefined): Promise<void> {
       await db.transaction(async (tx) => {
-        await tx.update(lots).set({ ...columns }).where(eq(lots.id, lotId));
+        await tx
+          .update(lots)
+          .set({ ...columns })
+          .where(eq(lots.id, lotId));
         if (priceBreaks) {
           await tx.delete(lotPriceBreaks).where(eq(lotPriceBreaks.lotId, lotId));
           if (priceBreaks.length > 0) await tx.insert(lotPriceBreaks).values(priceBreaks.map((priceBreak) => ({ ...priceBreak, lotId })));
@@ -93,7 +92,10 @@ export function createLotsAdminRepo(db: Db) {
           .delete(uploads)
           .where(and(eq(uploads.lotId, lotId), eq(uploads.kind, 'spec_sheet')))
           .returning({ storageKey: uploads.storageKey });
-        const [row] = await tx.insert(uploads).values({ ...upload, lotId, uploadedBy }).returning({ id: uploads.id });
+        const [row] = await tx
+          .insert(uploads)
+          .values({ ...upload, lotId, uploadedBy })
+          .returning({ id: uploads.id });
         return { id: row!.id, replacedKeys: replaced.map((file) => file.storageKey) };
       });
     },
@@ -165,12 +167,7 @@ export function createLotsAdminRepo(db: Db) {
           usedGrams: sql<number>`greatest(sum(-${stockMovements.deltaGrams}), 0)`.mapWith(Number).as('used_grams'),
         })
         .from(stockMovements)
-        .where(
-          and(
-            inArray(stockMovements.reason, [...useReasons]),
-            gte(stockMovements.createdAt, since),
-          ),
-        )
+        .where(and(inArray(stockMovements.reason, [...useReasons]), gte(stockMovements.createdAt, since)))
         .groupBy(stockMovements.lotId)
         .as('used');
       return db

@@ -37,7 +37,10 @@ function singleFile(maxBytes: number, described: string): RequestHandler {
         return next(new AppError(400, 'invalid_upload', `Send ${described} as the one multipart field "file".`, { file: error.message }));
       }
       // Anything else the multipart parser throws (no or wrong boundary, a broken part header, a cut-off body) is the request's fault.
-      if (error) return next(new AppError(400, 'invalid_upload', `Send ${described} as a multipart/form-data body with the field "file".`, { file: 'could not be read' }));
+      if (error)
+        return next(
+          new AppError(400, 'invalid_upload', `Send ${described} as a multipart/form-data body with the field "file".`, { file: 'could not be read' }),
+        );
       next();
     });
   };

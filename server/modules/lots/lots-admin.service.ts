@@ -38,7 +38,10 @@ const lotNotFound = (code: string) => new AppError(404, 'lot_not_found', `No lot
 
 /** The client's file name, kept for display and download names only: printable, short, no path. */
 function displayName(originalName: string, extension: string): string {
-  const base = (originalName.split(/[\\/]/).pop() ?? '').replace(/[^\w .()-]/g, '').trim().slice(0, 100);
+  const base = (originalName.split(/[\\/]/).pop() ?? '')
+    .replace(/[^\w .()-]/g, '')
+    .trim()
+    .slice(0, 100);
   return base || `file.${extension}`;
 }
 
@@ -60,7 +63,9 @@ export function createLotsAdminService(repo: LotsAdminRepo, storage: FileStorage
     const type = detectFileType(file.buffer);
     const accepted = acceptedTypes[kind];
     if (!type || !accepted.types.includes(type)) {
-      throw new AppError(415, 'unsupported_file_type', `The file must be ${accepted.described}; its content is not.`, { file: `must be ${accepted.described}` });
+      throw new AppError(415, 'unsupported_file_type', `The file must be ${accepted.described}; its content is not.`, {
+        file: `must be ${accepted.described}`,
+      });
     }
     const { contentType, extension } = fileSignatures[type];
     const storageKey = await storage.save(file.buffer, extension);

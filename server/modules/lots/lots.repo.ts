@@ -132,11 +132,7 @@ export function createLotsRepo(db: Db) {
           .from(lotPriceBreaks)
           .where(eq(lotPriceBreaks.lotId, lot.id))
           .orderBy(asc(lotPriceBreaks.minGrams)),
-        db
-          .select({ id: uploads.id, kind: uploads.kind })
-          .from(uploads)
-          .where(eq(uploads.lotId, lot.id))
-          .orderBy(asc(uploads.position), asc(uploads.createdAt)),
+        db.select({ id: uploads.id, kind: uploads.kind }).from(uploads).where(eq(uploads.lotId, lot.id)).orderBy(asc(uploads.position), asc(uploads.createdAt)),
       ]);
       return { lot, priceBreaks, files };
     },

@@ -44,7 +44,10 @@ export function createRefundsRepo(db: Db) {
         let total = 0;
         for (const { lotId, grams } of held) {
           if (grams <= 0) continue;
-          await tx.update(lots).set({ stockGrams: sql`${lots.stockGrams} + ${grams}` }).where(eq(lots.id, lotId));
+          await tx
+            .update(lots)
+            .set({ stockGrams: sql`${lots.stockGrams} + ${grams}` })
+            .where(eq(lots.id, lotId));
           await tx.insert(stockMovements).values({ lotId, orderId, actorId, deltaGrams: grams, reason: 'refund', note: 'refunded before shipping' });
           total += grams;
         }

@@ -47,9 +47,19 @@ function factsOf(bag: PackBag): [string, string][] {
 
 function drawLabel(doc: PDFKit.PDFDocument, shopName: string, order: PackOrder, bag: PackBag) {
   doc.addPage({ size: [LABEL_WIDTH, LABEL_HEIGHT], margin: MARGIN });
-  doc.font('Helvetica-Bold').fontSize(8).fillColor('black').text(printable(shopName.toUpperCase()), MARGIN, MARGIN, { width: CONTENT_WIDTH, characterSpacing: 0.8, lineBreak: false, ellipsis: true });
-  doc.font('Helvetica-Bold').fontSize(15).text(printable(bag.coffee), MARGIN, MARGIN + 14, { width: CONTENT_WIDTH, height: 19, ellipsis: true });
-  doc.font('Helvetica').fontSize(9).text(bag.lotCode ? `Lot ${printable(bag.lotCode)}` : 'Lot to be picked', MARGIN, MARGIN + 34, { width: CONTENT_WIDTH, lineBreak: false });
+  doc
+    .font('Helvetica-Bold')
+    .fontSize(8)
+    .fillColor('black')
+    .text(printable(shopName.toUpperCase()), MARGIN, MARGIN, { width: CONTENT_WIDTH, characterSpacing: 0.8, lineBreak: false, ellipsis: true });
+  doc
+    .font('Helvetica-Bold')
+    .fontSize(15)
+    .text(printable(bag.coffee), MARGIN, MARGIN + 14, { width: CONTENT_WIDTH, height: 19, ellipsis: true });
+  doc
+    .font('Helvetica')
+    .fontSize(9)
+    .text(bag.lotCode ? `Lot ${printable(bag.lotCode)}` : 'Lot to be picked', MARGIN, MARGIN + 34, { width: CONTENT_WIDTH, lineBreak: false });
 
   let y = MARGIN + 52;
   for (const [label, value] of factsOf(bag)) {
@@ -62,17 +72,25 @@ function drawLabel(doc: PDFKit.PDFDocument, shopName: string, order: PackOrder, 
     y += 13;
   }
 
-  doc.font('Helvetica-Bold').fontSize(13).text(bag.netLabel, MARGIN, LABEL_HEIGHT - MARGIN - 30, { width: CONTENT_WIDTH, lineBreak: false });
+  doc
+    .font('Helvetica-Bold')
+    .fontSize(13)
+    .text(bag.netLabel, MARGIN, LABEL_HEIGHT - MARGIN - 30, { width: CONTENT_WIDTH, lineBreak: false });
   const bagCount = order.bags.length;
   doc
     .font('Helvetica')
     .fontSize(7)
     .fillColor('#444444')
-    .text(`Order ${orderReference(order.orderId)} · bag ${bag.bagNumber} of ${bagCount} · ${printable(order.customerName)}`, MARGIN, LABEL_HEIGHT - MARGIN - 9, {
-      width: CONTENT_WIDTH,
-      lineBreak: false,
-      ellipsis: true,
-    });
+    .text(
+      `Order ${orderReference(order.orderId)} · bag ${bag.bagNumber} of ${bagCount} · ${printable(order.customerName)}`,
+      MARGIN,
+      LABEL_HEIGHT - MARGIN - 9,
+      {
+        width: CONTENT_WIDTH,
+        lineBreak: false,
+        ellipsis: true,
+      },
+    );
 }
 
 /**
@@ -80,7 +98,10 @@ function drawLabel(doc: PDFKit.PDFDocument, shopName: string, order: PackOrder, 
  * printer reproduces it. Fonts are the PDF standard fonts that ship inside pdfkit.
  */
 export function renderLabelsPdf(input: { shopName: string; date: string; orders: readonly PackOrder[] }): Promise<Buffer> {
-  const doc = new PDFDocument({ autoFirstPage: false, info: { Title: `${printable(input.shopName)} bag labels for ${input.date}`, Author: printable(input.shopName) } });
+  const doc = new PDFDocument({
+    autoFirstPage: false,
+    info: { Title: `${printable(input.shopName)} bag labels for ${input.date}`, Author: printable(input.shopName) },
+  });
   const chunks: Buffer[] = [];
   const done = new Promise<Buffer>((resolve, reject) => {
     doc.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -90,7 +111,10 @@ export function renderLabelsPdf(input: { shopName: string; date: string; orders:
   for (const order of input.orders) for (const bag of order.bags) drawLabel(doc, input.shopName, order, bag);
   if (input.orders.every((order) => order.bags.length === 0)) {
     doc.addPage({ size: [LABEL_WIDTH, LABEL_HEIGHT], margin: MARGIN });
-    doc.font('Helvetica').fontSize(10).text(`No bags ship on ${formatDay(input.date)}.`, MARGIN, MARGIN, { width: CONTENT_WIDTH });
+    doc
+      .font('Helvetica')
+      .fontSize(10)
+      .text(`No bags ship on ${formatDay(input.date)}.`, MARGIN, MARGIN, { width: CONTENT_WIDTH });
   }
   doc.end();
   return done;

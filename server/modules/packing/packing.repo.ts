@@ -139,7 +139,12 @@ function queries(db: DbOrTx) {
         })
         .from(batches)
         .leftJoin(bagAllocations, eq(bagAllocations.batchId, batches.id))
-        .where(inArray(batches.id, locked.map((batch) => batch.id)))
+        .where(
+          inArray(
+            batches.id,
+            locked.map((batch) => batch.id),
+          ),
+        )
         .groupBy(batches.id)
         .orderBy(asc(batches.createdAt), asc(batches.id));
     },

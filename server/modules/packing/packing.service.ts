@@ -68,7 +68,10 @@ function parcelsOf(bags: readonly PackBag[], shipping: ShippingSettings): Pick<P
     return { parcels, parcelNote: null };
   } catch (error) {
     if (!(error instanceof BagTooHeavyForShipping)) throw error;
-    return { parcels: [], parcelNote: `A bag weighs ${error.parcelGrams.toLocaleString('en-US')} g in its box, over the heaviest shipping band (${error.heaviestBandGrams.toLocaleString('en-US')} g): pack it by hand.` };
+    return {
+      parcels: [],
+      parcelNote: `A bag weighs ${error.parcelGrams.toLocaleString('en-US')} g in its box, over the heaviest shipping band (${error.heaviestBandGrams.toLocaleString('en-US')} g): pack it by hand.`,
+    };
   }
 }
 
@@ -123,7 +126,13 @@ export function createPackingService({ repo, clock }: PackingDeps) {
         throw AppError.conflict('rotation_not_picked', `No lot is picked for Roaster's Rotation on ${order.roastDate}. Pick it, roast it, then pack.`);
       }
       if (!line.roastLevel) throw new Error(`roasted order line ${line.id} has no roast level`);
-      return { orderItemId: line.id, lotId: line.lotId, roastLevel: line.roastLevel, bags: line.quantity - (filled.get(line.id) ?? 0), fillGrams: line.fillGrams };
+      return {
+        orderItemId: line.id,
+        lotId: line.lotId,
+        roastLevel: line.roastLevel,
+        bags: line.quantity - (filled.get(line.id) ?? 0),
+        fillGrams: line.fillGrams,
+      };
     });
     const lotLevels = [...new Map(toFill.map((line) => [`${line.lotId}|${line.roastLevel}`, { lotId: line.lotId, roastLevel: line.roastLevel }])).values()];
     const plan = allocateBags(toFill, await tx.lockBatchRoom(order.roastDate, lotLevels));

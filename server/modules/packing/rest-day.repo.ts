@@ -49,7 +49,12 @@ export function createRestDayRepo(db: Db) {
         .from(orderItems)
         .innerJoin(orders, eq(orders.id, orderItems.orderId))
         .leftJoin(lots, eq(lots.id, orderLineLotId))
-        .where(inArray(orderItems.orderId, due.map((order) => order.id)))
+        .where(
+          inArray(
+            orderItems.orderId,
+            due.map((order) => order.id),
+          ),
+        )
         .orderBy(asc(orderItems.id));
       return due.map((order) => ({ ...order, lines: lines.filter((line) => line.orderId === order.id) }));
     },

@@ -198,7 +198,10 @@ export function createPaymentEventsService({ repo, ports, gateway, clock, logger
     return async (tx) => {
       const subscription = await tx.lockSubscription(subscriptionId);
       if (!subscription) return void logger.warn({ subscriptionId }, 'a paid Checkout Session names an unknown subscription');
-      await tx.updateSubscriptionBilling(subscription.id, { ...billingOf(stripeSubscription, subscription, await shopToday()), stripeCheckoutSessionId: session.id });
+      await tx.updateSubscriptionBilling(subscription.id, {
+        ...billingOf(stripeSubscription, subscription, await shopToday()),
+        stripeCheckoutSessionId: session.id,
+      });
       // The first delivery's order, whichever of this event and the first invoice.paid arrives first.
       if (firstInvoice?.status === 'paid') await recordPaidCycle(tx.tx, subscription.id, paidInvoiceOf(firstInvoice), clock.now(), logger);
       const firstRoastDate = await tx.firstDeliveryRoastDate(subscription.id);
@@ -283,8 +286,7 @@ export function createPaymentEventsService({ repo, ports, gateway, clock, logger
     const charge = await gateway.retrieveCharge(idOf(event.data.object as Stripe.Charge) ?? '');
     const paymentIntentId = idOf(charge.payment_intent);
     if (!paymentIntentId) return undefined;
-    const orderId =
-      (await repo.findOrderIdByPaymentIntent(paymentIntentId)) ?? (await gateway.retrievePaymentIntent(paymentIntentId)).metadata?.[orderIdKey];
+    const orderId = (await repo.findOrderIdByPaymentIntent(paymentIntentId)) ?? (await gateway.retrievePaymentIntent(paymentIntentId)).metadata?.[orderIdKey];
     if (!orderId || !uuidPattern.test(orderId)) {
       logger.warn({ chargeId: charge.id }, 'a refunded charge names no Restday order');
       return undefined;

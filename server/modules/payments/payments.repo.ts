@@ -3,7 +3,6 @@ import type { Db, DbOrTx, Tx } from '../../db/client';
 import { deliveries, lots, orderItems, orders, paymentEvents, shopSettings, subscriptions, users } from '../../db/schema/index';
 import { roastersRotationName, type OrderStatus, type SubscriptionStatus } from '@shared/domain/vocabulary';
 
-
 export interface ReceivedEvent {
   id: string;
   type: string;
@@ -77,21 +76,23 @@ function queries(db: DbOrTx) {
     },
 
     async orderLines(orderId: string) {
-      return db
-        .select({
-          description: sql<string>`coalesce(${lots.name}, ${roastersRotationName})`,
-          size: orderItems.size,
-          quantity: orderItems.quantity,
-          unitPriceCents: orderItems.unitPriceCents,
-          lineTotalCents: orderItems.lineTotalCents,
-          roastLevel: orderItems.roastLevel,
-          grind: orderItems.grind,
-        })
-        .from(orderItems)
-        .leftJoin(lots, eq(lots.id, orderItems.lotId))
-        .where(eq(orderItems.orderId, orderId))
-        // Items have no position of their own: by coffee, then the larger bag first.
-        .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id));
+      return (
+        db
+          .select({
+            description: sql<string>`coalesce(${lots.name}, ${roastersRotationName})`,
+            size: orderItems.size,
+            quantity: orderItems.quantity,
+            unitPriceCents: orderItems.unitPriceCents,
+            lineTotalCents: orderItems.lineTotalCents,
+            roastLevel: orderItems.roastLevel,
+            grind: orderItems.grind,
+          })
+          .from(orderItems)
+          .leftJoin(lots, eq(lots.id, orderItems.lotId))
+          .where(eq(orderItems.orderId, orderId))
+          // Items have no position of their own: by coffee, then the larger bag first.
+          .orderBy(asc(lots.name), desc(orderItems.fillGrams), asc(orderItems.id))
+      );
     },
 
     /**
@@ -141,10 +142,7 @@ function queries(db: DbOrTx) {
     },
 
     async findSubscriptionIdByStripeId(stripeSubscriptionId: string) {
-      const [subscription] = await db
-        .select({ id: subscriptions.id })
-        .from(subscriptions)
-        .where(eq(subscriptions.stripeSubscriptionId, stripeSubscriptionId));
+      const [subscription] = await db.select({ id: subscriptions.id }).from(subscriptions).where(eq(subscriptions.stripeSubscriptionId, stripeSubscriptionId));
       return subscription?.id;
     },
 
@@ -204,7 +202,11 @@ function queries(db: DbOrTx) {
      * commits, so a second worker with the same event waits and then finds it applied.
      */
     async claimEvent(eventId: string) {
-      const [row] = await db.select({ id: paymentEvents.id }).from(paymentEvents).where(and(eq(paymentEvents.id, eventId), isNull(paymentEvents.processedAt))).for('update');
+      const [row] = await db
+        .select({ id: paymentEvents.id })
+        .from(paymentEvents)
+        .where(and(eq(paymentEvents.id, eventId), isNull(paymentEvents.processedAt)))
+        .for('update');
       return row !== undefined;
     },
 

@@ -97,7 +97,6 @@ export function createBatchesRepo(db: Db) {
       return { batch: row, lotCode: lot!.code, stockGrams: lot!.stockGrams, history: await historyOf(db, row.lotId, row.roastLevel) };
     },
 
-
     /** A roast day's batches in the order they were recorded, with lot and operator. */
     async onDay(roastDate: string) {
       return db

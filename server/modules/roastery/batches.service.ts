@@ -79,9 +79,14 @@ export function createBatchesService(repo: BatchesRepo) {
         if (recorded === 'duplicate') throw new Error(`batch ${input.id} was a duplicate and then could not be found`);
       }
       if (recorded === 'short') {
-        throw new AppError(409, 'stock_below_zero', `Lot ${input.lotCode} does not hold ${input.greenGramsIn.toLocaleString('en-US')} g of green; record an arrival or a count first.`, {
-          greenGramsIn: 'is more than the lot has in stock',
-        });
+        throw new AppError(
+          409,
+          'stock_below_zero',
+          `Lot ${input.lotCode} does not hold ${input.greenGramsIn.toLocaleString('en-US')} g of green; record an arrival or a count first.`,
+          {
+            greenGramsIn: 'is more than the lot has in stock',
+          },
+        );
       }
       return createdReply(input, metrics.value, recorded, settings);
     },

@@ -132,9 +132,7 @@ export function planClosureMoves(input: ClosureInput): ClosurePlan {
     else itemsByCustomer.set(customer.email, { name: customer.name, firstId: id, items: [item] });
   };
 
-  const byPayment = [...input.orders].sort(
-    (a, b) => (a.paidAt?.getTime() ?? Infinity) - (b.paidAt?.getTime() ?? Infinity) || (a.id < b.id ? -1 : 1),
-  );
+  const byPayment = [...input.orders].sort((a, b) => (a.paidAt?.getTime() ?? Infinity) - (b.paidAt?.getTime() ?? Infinity) || (a.id < b.id ? -1 : 1));
   for (const order of byPayment) {
     const green = orderGreenGrams(order, settings);
     const roastDate = firstRoastDayAfter(
@@ -184,12 +182,7 @@ export interface ShipMove {
  * schedule gives it with the new calendar. Only parcels that shipped on the day (a closure moves
  * them) or now ship on it (an opening brings them forward) move; others keep their dates.
  */
-export function planShipMoves(
-  date: IsoDate,
-  parcels: readonly ParcelToRedate[],
-  settings: ShopSettings,
-  overrides: ClosureInput['overrides'],
-): ShipMove[] {
+export function planShipMoves(date: IsoDate, parcels: readonly ParcelToRedate[], settings: ShopSettings, overrides: ClosureInput['overrides']): ShipMove[] {
   const calendar = { overrides };
   const moves: ShipMove[] = [];
   for (const parcel of parcels) {

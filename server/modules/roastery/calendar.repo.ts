@@ -249,12 +249,7 @@ export function createCalendarRepo(db: Db) {
       .from(deliveries)
       .innerJoin(subscriptions, eq(subscriptions.id, deliveries.subscriptionId))
       .where(
-        and(
-          lte(deliveries.roastDate, date),
-          gte(deliveries.shipDate, date),
-          isNull(deliveries.orderId),
-          inArray(deliveries.status, ['scheduled', 'held']),
-        ),
+        and(lte(deliveries.roastDate, date), gte(deliveries.shipDate, date), isNull(deliveries.orderId), inArray(deliveries.status, ['scheduled', 'held'])),
       )
       .orderBy(asc(deliveries.id))
       .for('update', { of: deliveries });
@@ -366,7 +361,10 @@ export function createCalendarRepo(db: Db) {
         for (const move of moves.orders) {
           await tx.update(orders).set(move.dates).where(eq(orders.id, move.id));
           if (move.deliveryId) {
-            await tx.update(deliveries).set(move.dates).where(and(eq(deliveries.id, move.deliveryId), eq(deliveries.roastDate, date)));
+            await tx
+              .update(deliveries)
+              .set(move.dates)
+              .where(and(eq(deliveries.id, move.deliveryId), eq(deliveries.roastDate, date)));
           }
         }
         for (const move of moves.deliveries) await tx.update(deliveries).set(move.dates).where(eq(deliveries.id, move.id));

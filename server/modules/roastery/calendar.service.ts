@@ -95,7 +95,12 @@ export function createCalendarService(repo: CalendarRepo) {
       return {
         ...day,
         moved: result.plan.orders.map((move) => ({ orderId: move.id, from: date, to: move.dates.roastDate })),
-        movedDeliveries: result.plan.deliveries.map((move) => ({ deliveryId: move.id, subscriptionId: move.subscriptionId, from: date, to: move.dates.roastDate })),
+        movedDeliveries: result.plan.deliveries.map((move) => ({
+          deliveryId: move.id,
+          subscriptionId: move.subscriptionId,
+          from: date,
+          to: move.dates.roastDate,
+        })),
         shipMoved: result.shipMoves.map((move) => ({ orderId: move.orderId, deliveryId: move.deliveryId, from: move.from, to: move.shipDate })),
       };
     },

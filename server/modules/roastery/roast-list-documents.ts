@@ -129,7 +129,12 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
     if (doc.y + height > bottom()) {
       doc.addPage();
       // A table that runs onto a new page repeats its column titles there.
-      if (!bold) row(columns, columns.map((column) => column.title), true);
+      if (!bold)
+        row(
+          columns,
+          columns.map((column) => column.title),
+          true,
+        );
       doc.font('Helvetica').fontSize(9);
     }
     const top = doc.y;
@@ -139,16 +144,27 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
       x += column.width * width;
     });
     doc.y = top + height;
-    doc.moveTo(left, doc.y).lineTo(left + width, doc.y).lineWidth(bold ? 0.8 : 0.3).stroke();
+    doc
+      .moveTo(left, doc.y)
+      .lineTo(left + width, doc.y)
+      .lineWidth(bold ? 0.8 : 0.3)
+      .stroke();
   }
 
   function table(columns: Column[], rows: string[][]) {
-    row(columns, columns.map((column) => column.title), true);
+    row(
+      columns,
+      columns.map((column) => column.title),
+      true,
+    );
     for (const cells of rows) row(columns, cells);
   }
 
   doc.font('Helvetica').fontSize(10).text(shopName, left, doc.y, { width });
-  doc.font('Helvetica-Bold').fontSize(18).text(`Roast List: ${longDate(list.date)}`, { width });
+  doc
+    .font('Helvetica-Bold')
+    .fontSize(18)
+    .text(`Roast List: ${longDate(list.date)}`, { width });
   doc
     .font('Helvetica')
     .fontSize(10)

@@ -74,7 +74,9 @@ export function createRotationRepo(db: Db) {
         .select({ id: orders.id })
         .from(orders)
         .innerJoin(orderItems, eq(orderItems.orderId, orders.id))
-        .where(and(eq(orders.roastDate, roastDate), inArray(orders.status, [...roastedOrderStatuses]), eq(orderItems.kind, 'roasted'), isNull(orderItems.lotId)))
+        .where(
+          and(eq(orders.roastDate, roastDate), inArray(orders.status, [...roastedOrderStatuses]), eq(orderItems.kind, 'roasted'), isNull(orderItems.lotId)),
+        )
         .limit(1);
       return row !== undefined;
     },

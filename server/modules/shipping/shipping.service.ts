@@ -15,7 +15,8 @@ export function assertBagsShip(bags: readonly { field: string; size: BagSize }[]
   for (const { field, size } of bags) {
     const alone = loneBagParcelGrams(bagFillGrams(size), shipping);
     if (alone > heaviest) {
-      fields[field] = `One bag of this size weighs ${grams.format(alone)} g in its box, over the ${grams.format(heaviest)} g the shop ships in one parcel. Choose a smaller size.`;
+      fields[field] =
+        `One bag of this size weighs ${grams.format(alone)} g in its box, over the ${grams.format(heaviest)} g the shop ships in one parcel. Choose a smaller size.`;
     }
   }
   if (Object.keys(fields).length > 0) {

@@ -25,7 +25,10 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (character) => esc
  * U+2028/U+2029 are escaped for older parsers.
  */
 export function scriptJson(value: unknown): string {
-  return JSON.stringify(value).replace(/</g, '\\u003c').replace(/\u2028/g, '\\u2028').replace(/\u2029/g, '\\u2029');
+  return JSON.stringify(value)
+    .replace(/</g, '\\u003c')
+    .replace(/\u2028/g, '\\u2028')
+    .replace(/\u2029/g, '\\u2029');
 }
 
 export function headTags(head: PageHead): string {

@@ -34,12 +34,17 @@ export function storefrontRoutes(service: StorefrontService, options: { staticDi
   const indexHtml = builtIndexHtml(path.join(staticDir, 'index.html'));
   const precompressed = { enableBrotli: true, orderPreference: ['br', 'gz'] };
 
-  router.use('/assets', expressStaticGzip(path.join(staticDir, 'assets'), { ...precompressed, serveStatic: { immutable: true, maxAge: '1y', fallthrough: false } }));
+  router.use(
+    '/assets',
+    expressStaticGzip(path.join(staticDir, 'assets'), { ...precompressed, serveStatic: { immutable: true, maxAge: '1y', fallthrough: false } }),
+  );
   router.use(expressStaticGzip(staticDir, { ...precompressed, index: false, serveStatic: { index: false, maxAge: '1h' } }));
 
   router.get('/robots.txt', (_req, res) => {
     res.type('text/plain').setHeader('Cache-Control', 'public, max-age=3600');
-    res.send(['User-agent: *', ...disallowedPaths.map((disallowed) => `Disallow: ${disallowed}`), '', `Sitemap: ${options.baseUrl}/sitemap.xml`, ''].join('\n'));
+    res.send(
+      ['User-agent: *', ...disallowedPaths.map((disallowed) => `Disallow: ${disallowed}`), '', `Sitemap: ${options.baseUrl}/sitemap.xml`, ''].join('\n'),
+    );
   });
 
   router.get('/sitemap.xml', async (_req, res) => {
@@ -57,7 +62,8 @@ export function storefrontRoutes(service: StorefrontService, options: { staticDi
     // Without a build (API-only runs), answer through the error handler so every header still applies.
     if (!html) return next(new AppError(404, 'client_not_built', 'The shop client is not built yet: run npm run build.'));
     const page = await service.pageFor(req.path);
-    const preloaded = Object.keys(page.preloaded).length > 0 ? `<script type="application/json" id="${preloadedScriptId}">${scriptJson(page.preloaded)}</script>\n    ` : '';
+    const preloaded =
+      Object.keys(page.preloaded).length > 0 ? `<script type="application/json" id="${preloadedScriptId}">${scriptJson(page.preloaded)}</script>\n    ` : '';
     const rendered = html
       .replace(/<title>[^<]*<\/title>/, '')
       .replace(/<meta name="description"[^>]*>/, '')

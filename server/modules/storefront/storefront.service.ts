@@ -24,12 +24,18 @@ const shopDescription = 'Green coffee lots for home roasters, coffee roasted to 
 /** Public pages a search engine may list, with their titles; every other path is kept out of the index. */
 const publicPages: Record<string, { title: string; description: string }> = {
   '/': { title: 'Restday: green coffee for home roasters, roasted coffee by subscription', description: shopDescription },
-  '/lots': { title: 'Green coffee lots | Restday', description: 'Every green coffee lot in stock: origin, process, variety, altitude, tasting notes and price per kilogram.' },
+  '/lots': {
+    title: 'Green coffee lots | Restday',
+    description: 'Every green coffee lot in stock: origin, process, variety, altitude, tasting notes and price per kilogram.',
+  },
   '/subscribe': {
     title: 'Roasted coffee by subscription | Restday',
     description: 'Coffee roasted to order on a set roast day, rested, and shipped to arrive ready to brew. Pick a lot, a roast level and how often.',
   },
-  '/roasting-basics': { title: 'Roasting basics | Restday', description: 'How to roast green coffee at home: equipment, stages, first crack, resting and safety.' },
+  '/roasting-basics': {
+    title: 'Roasting basics | Restday',
+    description: 'How to roast green coffee at home: equipment, stages, first crack, resting and safety.',
+  },
 };
 
 const lotPathPattern = /^\/lots\/([^/]+)$/;
@@ -43,7 +49,11 @@ export function createStorefrontService({ lots, baseUrl, shippingRules }: Storef
       lot = await lots.get(code);
     } catch (error) {
       if (error instanceof AppError && error.status === 404) {
-        return { status: 404, head: { title: 'Lot not found | Restday', description: shopDescription, canonicalUrl: urlOf('/lots'), indexable: false, openGraphType: 'website' }, preloaded: {} };
+        return {
+          status: 404,
+          head: { title: 'Lot not found | Restday', description: shopDescription, canonicalUrl: urlOf('/lots'), indexable: false, openGraphType: 'website' },
+          preloaded: {},
+        };
       }
       throw error;
     }

@@ -93,11 +93,7 @@ export function createSubscribersRepo(db: Db) {
     /** The kept delivery rows of these subscriptions, by roast date, as the delivery plan reads them. */
     async keptDeliveries(subscriptionIds: string[]) {
       if (subscriptionIds.length === 0) return [];
-      return db
-        .select(keptDeliveryColumns)
-        .from(deliveries)
-        .where(inArray(deliveries.subscriptionId, subscriptionIds))
-        .orderBy(asc(deliveries.roastDate));
+      return db.select(keptDeliveryColumns).from(deliveries).where(inArray(deliveries.subscriptionId, subscriptionIds)).orderBy(asc(deliveries.roastDate));
     },
 
     /** Roast Calendar overrides from `from` on. */

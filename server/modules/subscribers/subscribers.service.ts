@@ -61,7 +61,14 @@ export function createSubscribersService({ repo, clock }: { repo: SubscribersRep
     return new Map(
       rows.map((row) => {
         const kept = keptBySubscription.get(row.id) ?? [];
-        const plan = planDeliveries({ ...row, anchorDate: row.anchorDate ?? kept[0]?.nominalDate ?? null, choice: choiceOf(row) }, kept, settings, { overrides }, now, kept.length + 3);
+        const plan = planDeliveries(
+          { ...row, anchorDate: row.anchorDate ?? kept[0]?.nominalDate ?? null, choice: choiceOf(row) },
+          kept,
+          settings,
+          { overrides },
+          now,
+          kept.length + 3,
+        );
         return [row.id, nextDelivery(plan)?.roastDate ?? null];
       }),
     );

@@ -37,7 +37,9 @@ export function createSubscriptionPreviewRepo(db: Db) {
         .innerJoin(orders, eq(orders.id, orderItems.orderId))
         .where(and(gte(orders.roastDate, from), eq(orderItems.kind, 'roasted'), inArray(orders.status, [...plannedStatuses])))
         .groupBy(orders.roastDate, orderItems.roastLevel);
-      return rows.flatMap((row) => (row.roastDate && row.roastLevel ? [{ roastDate: row.roastDate, roastLevel: row.roastLevel, roastedGrams: row.roastedGrams }] : []));
+      return rows.flatMap((row) =>
+        row.roastDate && row.roastLevel ? [{ roastDate: row.roastDate, roastLevel: row.roastLevel, roastedGrams: row.roastedGrams }] : [],
+      );
     },
   };
 }

@@ -64,7 +64,14 @@ export async function unskipsAwaitingStripe(db: DbOrTx, subscriptionId: string, 
   return db
     .select({ id: deliveries.id })
     .from(deliveries)
-    .where(and(eq(deliveries.subscriptionId, subscriptionId), sql`${deliveries.status} <> 'skipped'`, eq(deliveries.chargeDeferred, true), gte(deliveries.roastDate, today)));
+    .where(
+      and(
+        eq(deliveries.subscriptionId, subscriptionId),
+        sql`${deliveries.status} <> 'skipped'`,
+        eq(deliveries.chargeDeferred, true),
+        gte(deliveries.roastDate, today),
+      ),
+    );
 }
 
 /** Skipped rows whose charge Stripe has not moved yet, by roast date. */
@@ -72,7 +79,14 @@ export async function skipsAwaitingStripe(db: DbOrTx, subscriptionId: string, to
   return db
     .select({ id: deliveries.id, nominalDate: deliveries.nominalDate, roastDate: deliveries.roastDate })
     .from(deliveries)
-    .where(and(eq(deliveries.subscriptionId, subscriptionId), eq(deliveries.status, 'skipped'), eq(deliveries.chargeDeferred, false), gte(deliveries.roastDate, today)))
+    .where(
+      and(
+        eq(deliveries.subscriptionId, subscriptionId),
+        eq(deliveries.status, 'skipped'),
+        eq(deliveries.chargeDeferred, false),
+        gte(deliveries.roastDate, today),
+      ),
+    )
     .orderBy(asc(deliveries.roastDate));
 }
 

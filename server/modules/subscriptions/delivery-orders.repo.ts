@@ -23,8 +23,16 @@ export async function reshapePaidOrder(
 }
 
 /** Moves a paid order to another delivery (a skipped one's payment covers the next). */
-export async function moveOrderToDelivery(db: DbOrTx, orderId: string, deliveryId: string, dates: Pick<RoastDates, 'roastDate' | 'shipDate' | 'readyFrom' | 'bestBefore'>) {
-  await db.update(orders).set({ deliveryId, ...dayColumns(dates) }).where(eq(orders.id, orderId));
+export async function moveOrderToDelivery(
+  db: DbOrTx,
+  orderId: string,
+  deliveryId: string,
+  dates: Pick<RoastDates, 'roastDate' | 'shipDate' | 'readyFrom' | 'bestBefore'>,
+) {
+  await db
+    .update(orders)
+    .set({ deliveryId, ...dayColumns(dates) })
+    .where(eq(orders.id, orderId));
 }
 
 export async function findOrderIdByInvoice(db: DbOrTx, stripeInvoiceId: string) {

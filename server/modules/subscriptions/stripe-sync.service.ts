@@ -61,8 +61,16 @@ export function createStripeSync({ db, gateway, clock, logger }: StripeSyncDeps)
     } catch (error) {
       // Stripe has no such subscription (the demo seed's invented ids): nothing to push to, so stop asking.
       if (error instanceof Stripe.errors.StripeInvalidRequestError && error.statusCode === 404) {
-        logger.warn({ subscriptionId, stripeSubscriptionId: subscription.stripeSubscriptionId }, 'Stripe does not know this subscription; its changes stay in Restday');
-        await markSynced(db, subscriptionId, subscription.changeVersion, (await skipsAwaitingStripe(db, subscriptionId, today)).map((skip) => skip.id));
+        logger.warn(
+          { subscriptionId, stripeSubscriptionId: subscription.stripeSubscriptionId },
+          'Stripe does not know this subscription; its changes stay in Restday',
+        );
+        await markSynced(
+          db,
+          subscriptionId,
+          subscription.changeVersion,
+          (await skipsAwaitingStripe(db, subscriptionId, today)).map((skip) => skip.id),
+        );
         return 'nothing';
       }
       throw error;

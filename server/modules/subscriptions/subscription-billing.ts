@@ -56,7 +56,8 @@ function deliveryShippingCents(
   logger: Logger,
 ): number {
   try {
-    return quoteSubscriptionDelivery({ lotCode: subscription.lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings).shippingCents;
+    return quoteSubscriptionDelivery({ lotCode: subscription.lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings)
+      .shippingCents;
   } catch (error) {
     if (!(error instanceof BagTooHeavyForShipping)) throw error;
     logger.warn({ subscriptionId: subscription.id, bagSize: choice.bagSize }, 'a paid delivery has a bag over the heaviest shipping band');

@@ -19,7 +19,13 @@ export const planLength = 26;
 export const maxPauseDays = 366;
 
 export const sameAddress = (a: AddressSnapshot, b: AddressSnapshot) =>
-  a.name === b.name && a.line1 === b.line1 && (a.line2 ?? null) === (b.line2 ?? null) && a.city === b.city && a.region === b.region && a.postalCode === b.postalCode && a.country === b.country;
+  a.name === b.name &&
+  a.line1 === b.line1 &&
+  (a.line2 ?? null) === (b.line2 ?? null) &&
+  a.city === b.city &&
+  a.region === b.region &&
+  a.postalCode === b.postalCode &&
+  a.country === b.country;
 
 export function levelOffered(level: RoastLevel, allowed: readonly RoastLevel[] | null) {
   return allowed === null || allowed.includes(level);
@@ -36,7 +42,14 @@ export function deliveryPrice(lotCode: string | null, choice: Pick<DeliveryChoic
   return quoteSubscriptionDelivery({ lotCode, bagSize: choice.bagSize, bagsPerDelivery: choice.bagsPerDelivery }, settings).totalCents;
 }
 
-export function planOf(subscription: SubscriptionRecord, kept: Awaited<ReturnType<typeof keptDeliveries>>, settings: ScheduleSettings, calendar: RoastCalendar, now: Date, count: number) {
+export function planOf(
+  subscription: SubscriptionRecord,
+  kept: Awaited<ReturnType<typeof keptDeliveries>>,
+  settings: ScheduleSettings,
+  calendar: RoastCalendar,
+  now: Date,
+  count: number,
+) {
   return planDeliveries(
     {
       status: subscription.status,
@@ -54,7 +67,11 @@ export function planOf(subscription: SubscriptionRecord, kept: Awaited<ReturnTyp
   );
 }
 
-export function toApiDelivery(delivery: PlannedDelivery, subscription: SubscriptionRecord, picks: ReadonlyMap<IsoDate, { code: string; name: string }>): SubscriptionDelivery {
+export function toApiDelivery(
+  delivery: PlannedDelivery,
+  subscription: SubscriptionRecord,
+  picks: ReadonlyMap<IsoDate, { code: string; name: string }>,
+): SubscriptionDelivery {
   const pick = subscription.lotCode ? { code: subscription.lotCode, name: subscription.coffee } : picks.get(delivery.roastDate);
   return {
     roastDate: delivery.roastDate,

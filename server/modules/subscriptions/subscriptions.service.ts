@@ -105,8 +105,10 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
     const { changed, notice } = await repo.transaction(async (tx) => {
       const subscription = await lockSubscription(tx, subscriptionId);
       if (!subscription || subscription.userId !== user.id) throw AppError.notFound('Subscription');
-      if (subscription.status === 'cancelled') throw AppError.conflict('subscription_ended', 'This subscription has ended; start a new one to receive coffee again.');
-      if (subscription.status === 'incomplete') throw AppError.conflict('subscription_not_started', 'This subscription starts once its first payment goes through.');
+      if (subscription.status === 'cancelled')
+        throw AppError.conflict('subscription_ended', 'This subscription has ended; start a new one to receive coffee again.');
+      if (subscription.status === 'incomplete')
+        throw AppError.conflict('subscription_not_started', 'This subscription starts once its first payment goes through.');
       const { settings, calendar, today } = await loadScheduleContext(tx, now);
       const plan = planOf(subscription, await keptDeliveries(tx, subscriptionId), settings, calendar, now, planLength);
       const context: ChangeContext = { tx, subscription, plan, settings, calendar, today, now };
@@ -144,7 +146,10 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
   /** The delivery on a roast date, or the next one a skip can take. */
   function deliveryOn(plan: readonly PlannedDelivery[], roastDate: IsoDate) {
     const found = plan.find((delivery) => delivery.roastDate === roastDate);
-    if (!found) throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', { roastDate: 'Choose the roast date of an upcoming delivery.' });
+    if (!found)
+      throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', {
+        roastDate: 'Choose the roast date of an upcoming delivery.',
+      });
     return found;
   }
 
@@ -253,17 +258,29 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
           ? deliveryOn(plan, roastDate)
           : plan.find((delivery) => !delivery.locked && (delivery.status === 'scheduled' || delivery.status === 'skipped'));
         if (!target) {
-          throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', { roastDate: 'Choose the roast date of an upcoming delivery.' });
+          throw new AppError(422, 'no_such_delivery', 'There is no upcoming delivery on that day.', {
+            roastDate: 'Choose the roast date of an upcoming delivery.',
+          });
         }
         if (target.locked) {
-          throw AppError.conflict('delivery_locked', `The delivery roasting on ${writtenDay(target.roastDate)} is past its cutoff and can no longer be skipped.`);
+          throw AppError.conflict(
+            'delivery_locked',
+            `The delivery roasting on ${writtenDay(target.roastDate)} is past its cutoff and can no longer be skipped.`,
+          );
         }
         if (target.status === 'skipped') return unchanged(`The delivery roasting ${writtenDay(target.roastDate)} is already skipped.`);
-        if (target.status === 'held') throw AppError.conflict('delivery_held', 'This delivery is waiting for its payment; update your card instead of skipping it.');
+        if (target.status === 'held')
+          throw AppError.conflict('delivery_held', 'This delivery is waiting for its payment; update your card instead of skipping it.');
         if (target.status !== 'scheduled') throw AppError.conflict('delivery_locked', 'This delivery is already roasted.');
 
         // A row Stripe has already moved a charge for (a skip undone, not yet pushed) keeps that mark, so the charge is not moved twice.
-        await keepDelivery(tx, subscription.id, target, { status: 'skipped', dates: target, choice: null, orderId: null, ...(target.keptId ? {} : { chargeDeferred: false }) });
+        await keepDelivery(tx, subscription.id, target, {
+          status: 'skipped',
+          dates: target,
+          choice: null,
+          orderId: null,
+          ...(target.keptId ? {} : { chargeDeferred: false }),
+        });
         // Already paid: the payment carries over to the next delivery, and Stripe's next charge moves one cadence on.
         let paymentMovesTo: IsoDate | undefined;
         if (target.orderId) {
@@ -288,14 +305,22 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
         const target = deliveryOn(plan, roastDate);
         if (target.status !== 'skipped') return unchanged(`The delivery roasting ${writtenDay(target.roastDate)} is not skipped.`);
         if (target.locked) {
-          throw AppError.conflict('delivery_locked', `The delivery roasting ${writtenDay(target.roastDate)} is past its cutoff, so its skip can no longer be undone.`, {
-            roastDate: 'Its cutoff has passed.',
-          });
+          throw AppError.conflict(
+            'delivery_locked',
+            `The delivery roasting ${writtenDay(target.roastDate)} is past its cutoff, so its skip can no longer be undone.`,
+            {
+              roastDate: 'Its cutoff has passed.',
+            },
+          );
         }
         if (subscription.pausedUntil && target.roastDate < subscription.pausedUntil) {
-          throw AppError.conflict('delivery_in_pause', `The delivery roasting ${writtenDay(target.roastDate)} falls inside your pause; resume first.`, { roastDate: 'It falls inside the pause.' });
+          throw AppError.conflict('delivery_in_pause', `The delivery roasting ${writtenDay(target.roastDate)} falls inside your pause; resume first.`, {
+            roastDate: 'It falls inside the pause.',
+          });
         }
-        const carrier = plan.find((delivery) => delivery.roastDate > target.roastDate && delivery.status === 'scheduled' && delivery.orderId && !delivery.locked);
+        const carrier = plan.find(
+          (delivery) => delivery.roastDate > target.roastDate && delivery.status === 'scheduled' && delivery.orderId && !delivery.locked,
+        );
         const choice = carrier ? carrier.choice : choiceOf(subscription);
         const dates = datesForRoastDate(target.roastDate, choice, settings, calendar);
         if (carrier?.orderId) {
@@ -313,7 +338,8 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
     pause(user: SessionUser, subscriptionId: string, until: IsoDate, paidDelivery: PaidDeliveryChoice | undefined) {
       return change(user, subscriptionId, 'paused', async ({ tx, subscription, plan, settings, calendar, today, now }) => {
         if (until <= today) throw AppError.badRequest('Choose a day after today.', { until: 'Choose a day after today.' });
-        if (until > addDays(today, maxPauseDays)) throw AppError.badRequest('Pause for at most a year.', { until: `Choose a day within ${maxPauseDays} days.` });
+        if (until > addDays(today, maxPauseDays))
+          throw AppError.badRequest('Pause for at most a year.', { until: `Choose a day within ${maxPauseDays} days.` });
         if (subscription.pausedUntil === until) return unchanged(pauseNotice({ until, shipping: [], held: [] }));
         // Paid deliveries the pause would cover whose cutoff is ahead: the subscriber says whether they ship or wait.
         const paidInside = plan.filter((delivery) => delivery.orderId && delivery.status === 'scheduled' && !delivery.locked && delivery.roastDate < until);
@@ -332,7 +358,10 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
           );
           for (const [index, held] of paidInside.entries()) {
             const to = afterPause[index];
-            if (!to) throw AppError.conflict('paid_delivery_in_pause', 'There is no delivery after the pause to hold this payment for.', { paidDelivery: 'Choose ship.' });
+            if (!to)
+              throw AppError.conflict('paid_delivery_in_pause', 'There is no delivery after the pause to hold this payment for.', {
+                paidDelivery: 'Choose ship.',
+              });
             const dates = datesForRoastDate(to.roastDate, held.choice, settings, calendar);
             await dropDelivery(tx, held.keptId!);
             const deliveryId = await keepDelivery(tx, subscription.id, to, { status: 'scheduled', dates, choice: held.choice, orderId: held.orderId });

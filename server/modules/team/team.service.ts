@@ -16,14 +16,24 @@ import type { Clock } from '../../lib/clock';
 import { hashPassword } from '../../lib/password-hashing';
 import type { SessionUser } from '../../middleware/require-role';
 import type { AuditTrail } from '../audit';
-import { assertAcceptablePassword, createUserAccounts, randomToken, type RequestContext, type SessionsService, type StartedSession, tokenDigest, toUser, type UserAccounts } from '../auth';
+import {
+  assertAcceptablePassword,
+  createUserAccounts,
+  randomToken,
+  type RequestContext,
+  type SessionsService,
+  type StartedSession,
+  tokenDigest,
+  toUser,
+  type UserAccounts,
+} from '../auth';
 import { queueEmail } from '../outbox';
 import { createTeamRepo, type TeamRepo } from './team.repo';
 
 /** An invitation link works once, for 7 days: long enough to reach someone on their days off. */
 const INVITATION_TTL_MS = 7 * 24 * 60 * 60_000;
 
-const asTeamRole = (role: string): TeamRole => (teamRoles as readonly string[]).includes(role) ? (role as TeamRole) : 'staff';
+const asTeamRole = (role: string): TeamRole => ((teamRoles as readonly string[]).includes(role) ? (role as TeamRole) : 'staff');
 
 const toMember = (row: { id: string; email: string; name: string; role: TeamMember['role']; disabledAt: Date | null; createdAt: Date }): TeamMember => ({
   id: row.id,

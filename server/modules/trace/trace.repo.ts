@@ -45,23 +45,25 @@ export function createTraceRepo(db: Db) {
 
     /** The order's bag allocations with the batch and the lot the batch roasted. */
     async orderAllocations(orderId: string) {
-      return db
-        .select({
-          orderItemId: bagAllocations.orderItemId,
-          batchId: batches.id,
-          lotCode: lots.code,
-          lotName: lots.name,
-          roastLevel: batches.roastLevel,
-          roastDate: batches.roastDate,
-          bags: bagAllocations.bags,
-          grams: bagAllocations.grams,
-        })
-        .from(bagAllocations)
-        .innerJoin(batches, eq(batches.id, bagAllocations.batchId))
-        .innerJoin(lots, eq(lots.id, batches.lotId))
-        .where(eq(bagAllocations.orderId, orderId))
-        // Bags are filled from the oldest batch first, so this is also the order they were filled in.
-        .orderBy(asc(batches.createdAt), asc(batches.id));
+      return (
+        db
+          .select({
+            orderItemId: bagAllocations.orderItemId,
+            batchId: batches.id,
+            lotCode: lots.code,
+            lotName: lots.name,
+            roastLevel: batches.roastLevel,
+            roastDate: batches.roastDate,
+            bags: bagAllocations.bags,
+            grams: bagAllocations.grams,
+          })
+          .from(bagAllocations)
+          .innerJoin(batches, eq(batches.id, bagAllocations.batchId))
+          .innerJoin(lots, eq(lots.id, batches.lotId))
+          .where(eq(bagAllocations.orderId, orderId))
+          // Bags are filled from the oldest batch first, so this is also the order they were filled in.
+          .orderBy(asc(batches.createdAt), asc(batches.id))
+      );
     },
 
     async batch(batchId: string) {

@@ -11,7 +11,11 @@ export interface ServedUpload {
 
 /** A download name of ASCII letters, digits, dot, dash, underscore and space: nothing a header or a file system reads specially. */
 function safeFileName(name: string, extension: string): string {
-  const cleaned = name.replace(/[^\w .-]/g, '_').replace(/^[.\s]+/, '').slice(0, 100).trim();
+  const cleaned = name
+    .replace(/[^\w .-]/g, '_')
+    .replace(/^[.\s]+/, '')
+    .slice(0, 100)
+    .trim();
   return cleaned.toLowerCase().endsWith(`.${extension}`) ? cleaned : `${cleaned || 'file'}.${extension}`;
 }
 

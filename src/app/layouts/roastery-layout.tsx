@@ -47,7 +47,10 @@ export default function RoasteryLayout() {
       <NavigationProgress />
       <header className="bg-ink text-paper print:hidden [&_:focus-visible]:outline-crema">
         <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 sm:px-6">
-          <Link to={paths.roastery.overview.getHref()} className="mr-2 inline-flex min-h-11 items-center gap-2 font-heading font-semibold text-h3 text-paper no-underline">
+          <Link
+            to={paths.roastery.overview.getHref()}
+            className="mr-2 inline-flex min-h-11 items-center gap-2 font-heading font-semibold text-h3 text-paper no-underline"
+          >
             <RestdayMark className="size-8" />
             Restday <span className="text-crema">Roastery</span>
           </Link>

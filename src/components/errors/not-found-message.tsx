@@ -10,9 +10,7 @@ export function NotFoundMessage({ title = 'Page not found', children }: { title?
         404
       </p>
       <h1 className="mt-2 text-h1">{title}</h1>
-      <p className="mt-3 text-lead text-ink-muted">
-        {children ?? 'There is nothing at this address. It may have moved, or the link may be mistyped.'}
-      </p>
+      <p className="mt-3 text-lead text-ink-muted">{children ?? 'There is nothing at this address. It may have moved, or the link may be mistyped.'}</p>
       <div className="mt-8 flex flex-wrap justify-center gap-3">
         <Link to={paths.home.getHref()} className={buttonStyles('primary')}>
           Go to the home page

@@ -29,9 +29,7 @@ export function RouteErrorBoundary({ standalone = false }: { standalone?: boolea
     <div className="mx-auto max-w-prose py-12 text-center">
       <PageTitle title="Something went wrong" />
       <h1 className="text-h1">Something went wrong</h1>
-      <p className="mt-3 text-lead text-ink-muted">
-        This page stopped working. Reloading usually fixes it; if it keeps happening, try again a little later.
-      </p>
+      <p className="mt-3 text-lead text-ink-muted">This page stopped working. Reloading usually fixes it; if it keeps happening, try again a little later.</p>
       <div className="mt-8 flex flex-wrap justify-center gap-3">
         <Button onClick={() => window.location.reload()}>Reload the page</Button>
         <Link to={paths.home.getHref()} className="inline-flex min-h-11 items-center px-2 font-semibold text-leaf underline">

@@ -6,8 +6,8 @@ export function HomeRoastingCautions() {
     <CautionPanel title="Roast safely">
       <ul className="list-disc space-y-2 pl-5">
         <li>
-          <strong>Never leave a roast unattended.</strong> Cooking equipment is involved in 47% of US home fires, and equipment left
-          unattended is the leading cause. <cite className="text-small not-italic text-ink-muted">(NFPA, Home Fires Involving Cooking Equipment, 2017)</cite>
+          <strong>Never leave a roast unattended.</strong> Cooking equipment is involved in 47% of US home fires, and equipment left unattended is the leading
+          cause. <cite className="text-small not-italic text-ink-muted">(NFPA, Home Fires Involving Cooking Equipment, 2017)</cite>
         </li>
         <li>
           <strong>Ventilate.</strong> Roasting makes smoke that can set off alarms: open a window or run the range hood.{' '}
@@ -26,8 +26,8 @@ export function HomeRoastingCautions() {
           <cite className="text-small not-italic text-ink-muted">(common practice)</cite>
         </li>
         <li>
-          <strong>A popcorn popper roasting coffee is used outside its maker&rsquo;s intended purpose.</strong> Follow the maker&rsquo;s
-          instructions for everything else, and stay with it.
+          <strong>A popcorn popper roasting coffee is used outside its maker&rsquo;s intended purpose.</strong> Follow the maker&rsquo;s instructions for
+          everything else, and stay with it.
         </li>
       </ul>
       <p className="mt-4 text-small text-ink-muted">

@@ -11,8 +11,6 @@ const tones: Record<BadgeTone, string> = {
 
 export function Badge({ tone = 'neutral', children, className }: { tone?: BadgeTone; children: ReactNode; className?: string }) {
   return (
-    <span className={clsx('inline-flex items-center gap-1 rounded-pill px-2.5 py-0.5 text-caption font-semibold', tones[tone], className)}>
-      {children}
-    </span>
+    <span className={clsx('inline-flex items-center gap-1 rounded-pill px-2.5 py-0.5 text-caption font-semibold', tones[tone], className)}>{children}</span>
   );
 }

@@ -31,7 +31,12 @@ export function Table({ variant = 'panel', className, ...props }: ComponentProps
 
 export function TableHead({ className, ...props }: ComponentProps<'thead'>) {
   const variant = useContext(VariantContext);
-  return <thead className={clsx(variant === 'panel' && 'bg-paper-shade', variant === 'prose' && '[&>tr]:border-b [&>tr]:border-rule-strong', className)} {...props} />;
+  return (
+    <thead
+      className={clsx(variant === 'panel' && 'bg-paper-shade', variant === 'prose' && '[&>tr]:border-b [&>tr]:border-rule-strong', className)}
+      {...props}
+    />
+  );
 }
 
 export function TableBody({ className, ...props }: ComponentProps<'tbody'>) {

@@ -19,10 +19,7 @@ export default function AddressesRoute() {
   return (
     <>
       <PageTitle title="Addresses" />
-      <PageHeader
-        title="Addresses"
-        lead="Where your green coffee and Roasted to Order bags ship. Checkout fills in the one marked “Used first at checkout”."
-      />
+      <PageHeader title="Addresses" lead="Where your green coffee and Roasted to Order bags ship. Checkout fills in the one marked “Used first at checkout”." />
       <AddressBook />
     </>
   );

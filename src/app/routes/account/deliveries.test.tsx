@@ -36,7 +36,14 @@ function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): Subscripti
   };
 }
 
-const lockedDelivery = makeDelivery({ roastDate: '2026-12-02', shipDate: '2026-12-03', readyFrom: '2026-12-07', bestBefore: '2026-12-30', locked: true, cutoffAt: '2026-12-01T19:00:00Z' });
+const lockedDelivery = makeDelivery({
+  roastDate: '2026-12-02',
+  shipDate: '2026-12-03',
+  readyFrom: '2026-12-07',
+  bestBefore: '2026-12-30',
+  locked: true,
+  cutoffAt: '2026-12-01T19:00:00Z',
+});
 const nextDelivery = makeDelivery();
 const laterDelivery = makeDelivery({
   roastDate: '2026-12-16',
@@ -152,15 +159,23 @@ describe('Deliveries page', () => {
     const skipped = await screen.findByRole('row', { name: /Dec 9, 2026.*Skipped|Skipped/ });
     expect(skipped.textContent).toContain('Wed, Dec 9, 2026');
     // The schedule is read twice: on load and after the change (the skip itself is a POST under /deliveries/:date).
-    expect(requestedUrls(fetchMock).filter((url) => url.startsWith(`/api/subscriptions/${subscriptionId}/deliveries`) && !url.endsWith('/skip'))).toHaveLength(2);
+    expect(requestedUrls(fetchMock).filter((url) => url.startsWith(`/api/subscriptions/${subscriptionId}/deliveries`) && !url.endsWith('/skip'))).toHaveLength(
+      2,
+    );
   });
 
   it('marks paid deliveries, skips a later one from its own row and undoes it', async () => {
     const paidNext = makeDelivery({ orderId: '0b1c2d3e-4f5a-4b6c-8d7e-9f0a1b2c3d4e', paid: true });
     const { fetchMock } = deliveriesServer(
       {
-        skip: () => ({ ...makeSubscription(), notice: 'Skipped the delivery roasting Wednesday, December 16, 2026. It will not be roasted, shipped or charged.' }),
-        unskip: () => ({ ...makeSubscription(), notice: 'The delivery roasting Wednesday, December 16, 2026 is back on. It is charged like any other delivery.' }),
+        skip: () => ({
+          ...makeSubscription(),
+          notice: 'Skipped the delivery roasting Wednesday, December 16, 2026. It will not be roasted, shipped or charged.',
+        }),
+        unskip: () => ({
+          ...makeSubscription(),
+          notice: 'The delivery roasting Wednesday, December 16, 2026 is back on. It is charged like any other delivery.',
+        }),
       },
       [lockedDelivery, paidNext, laterDelivery],
     );
@@ -201,7 +216,11 @@ describe('Deliveries page', () => {
     const form = await screen.findByRole('form', { name: 'Change what each delivery brings' });
     expect(document.activeElement?.textContent).toBe('Change what each delivery brings');
     const levels = within(form).getByRole('group', { name: 'Roast level' });
-    expect(within(levels).getAllByRole('radio').map((radio) => radio.getAttribute('value'))).toEqual(['light', 'medium']);
+    expect(
+      within(levels)
+        .getAllByRole('radio')
+        .map((radio) => radio.getAttribute('value')),
+    ).toEqual(['light', 'medium']);
     fireEvent.click(within(levels).getByRole('radio', { name: 'Medium' }));
     fireEvent.click(within(form).getByRole('button', { name: 'Save the changes' }));
 
@@ -257,11 +276,15 @@ describe('Deliveries page', () => {
   });
 
   it('asks ship or hold when a paid delivery lies inside the pause, and sends the choice', async () => {
-    const question = 'The delivery roasting Wednesday, December 9, 2026 is already paid. Ship it as planned, or hold it for the first delivery after the pause?';
+    const question =
+      'The delivery roasting Wednesday, December 9, 2026 is already paid. Ship it as planned, or hold it for the first delivery after the pause?';
     const { fetchMock } = deliveriesServer({
       pause: (body) =>
         body.paidDelivery
-          ? { ...makeSubscription({ status: 'paused', pausedUntil: String(body.until) }), notice: 'Paused until Monday, January 11, 2027. The paid delivery roasting Wednesday, December 9, 2026 is held.' }
+          ? {
+              ...makeSubscription({ status: 'paused', pausedUntil: String(body.until) }),
+              notice: 'Paused until Monday, January 11, 2027. The paid delivery roasting Wednesday, December 9, 2026 is held.',
+            }
           : apiErrorResponse(409, 'paid_delivery_in_pause', question, { paidDelivery: 'Choose ship or hold.' }),
     });
     renderApp('/account/deliveries', { session: makeUser() });
@@ -273,7 +296,11 @@ describe('Deliveries page', () => {
 
     const group = await within(form).findByRole('group', { name: 'A paid delivery falls inside the pause' });
     expect(group.textContent).toContain(question);
-    expect(within(group).getAllByRole('radio').map((radio) => radio.getAttribute('value'))).toEqual(['ship', 'hold']);
+    expect(
+      within(group)
+        .getAllByRole('radio')
+        .map((radio) => radio.getAttribute('value')),
+    ).toEqual(['ship', 'hold']);
     fireEvent.click(within(group).getByRole('radio', { name: /Hold it for after the pause/ }));
     fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
 

@@ -22,7 +22,14 @@ const shipped: OrderSummary = {
   roastDate: null,
   shipDate: '2026-11-21',
 };
-const waiting: OrderSummary = { ...shipped, id: '5e1c9a4d-3f6b-4c0d-9e8a-7b9c0d1e2f3a', status: 'pending_payment', bagCount: 1, totalCents: 1556, shipDate: null };
+const waiting: OrderSummary = {
+  ...shipped,
+  id: '5e1c9a4d-3f6b-4c0d-9e8a-7b9c0d1e2f3a',
+  status: 'pending_payment',
+  bagCount: 1,
+  totalCents: 1556,
+  shipDate: null,
+};
 
 describe('account orders page', () => {
   it('lists the customer’s orders with status and total, each linking to its page', async () => {
@@ -37,7 +44,11 @@ describe('account orders page', () => {
     expect(rows[1]?.textContent).toContain('3 bags');
     expect(rows[1]?.textContent).toContain('ships Nov 21, 2026');
     expect(rows[1]?.textContent).toContain('$42.11');
-    expect(within(rows[1] as HTMLElement).getByRole('link').getAttribute('href')).toBe(`/orders/${shipped.id}`);
+    expect(
+      within(rows[1] as HTMLElement)
+        .getByRole('link')
+        .getAttribute('href'),
+    ).toBe(`/orders/${shipped.id}`);
     expect(requestedUrls(fetchMock)).toEqual(['/api/orders?page=1&sort=newest']);
   });
 

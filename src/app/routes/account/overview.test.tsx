@@ -20,7 +20,11 @@ describe('account area', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Hello, Ines Marlow' })).toBeTruthy();
     expect(within(screen.getByRole('main')).getByText('ines.marlow@example.test')).toBeTruthy();
     const nav = screen.getByRole('navigation', { name: 'Account' });
-    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Profile', 'Orders', 'Deliveries', 'Addresses']);
+    expect(
+      within(nav)
+        .getAllByRole('link')
+        .map((link) => link.textContent),
+    ).toEqual(['Overview', 'Profile', 'Orders', 'Deliveries', 'Addresses']);
     expect(within(nav).getByRole('link', { name: 'Overview' }).getAttribute('aria-current')).toBe('page');
     await waitFor(() => expect(document.title).toBe('Your account · Restday'));
   });

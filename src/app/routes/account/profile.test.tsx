@@ -15,7 +15,10 @@ async function section(name: string): Promise<HTMLElement> {
 }
 
 function errorOf(field: HTMLElement): string | undefined {
-  const id = field.getAttribute('aria-describedby')?.split(' ').find((part) => part.endsWith('-error'));
+  const id = field
+    .getAttribute('aria-describedby')
+    ?.split(' ')
+    .find((part) => part.endsWith('-error'));
   return id ? (document.getElementById(id)?.textContent ?? undefined) : undefined;
 }
 

@@ -16,7 +16,10 @@ function fillForm({ name, email, password }: { name: string; email: string; pass
 }
 
 function errorOf(field: HTMLElement): string | undefined {
-  const id = field.getAttribute('aria-describedby')?.split(' ').find((part) => part.endsWith('-error'));
+  const id = field
+    .getAttribute('aria-describedby')
+    ?.split(' ')
+    .find((part) => part.endsWith('-error'));
   return id ? (document.getElementById(id)?.textContent ?? undefined) : undefined;
 }
 

@@ -30,10 +30,7 @@ function Invitation({ token }: { token: string }) {
   if (invitationQuery.data) {
     const invitation = invitationQuery.data;
     return (
-      <AuthPanel
-        title="Join the Roastery team"
-        lead={`You are invited as ${roleWords[invitation.role]}. Choose your name and a password to accept.`}
-      >
+      <AuthPanel title="Join the Roastery team" lead={`You are invited as ${roleWords[invitation.role]}. Choose your name and a password to accept.`}>
         <AcceptInvitationForm token={token} invitation={invitation} onJoined={() => void navigate(paths.roastery.overview.getHref(), { replace: true })} />
       </AuthPanel>
     );

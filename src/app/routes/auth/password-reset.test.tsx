@@ -46,9 +46,7 @@ describe('reset-password page', () => {
 
   it('sets the new password with the token from the link and sends the person to sign in', async () => {
     // The reset ends every session of the account, so the page asks again who is signed in.
-    const fetchMock = stubFetch((url) =>
-      url.pathname === '/api/auth/me' ? jsonResponse({ user: null }) : new Response(null, { status: 204 }),
-    );
+    const fetchMock = stubFetch((url) => (url.pathname === '/api/auth/me' ? jsonResponse({ user: null }) : new Response(null, { status: 204 })));
     const { router } = renderApp(`/reset-password#token=${token}`);
     await screen.findByRole('heading', { level: 1, name: 'Choose a new password' });
 

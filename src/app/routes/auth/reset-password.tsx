@@ -13,10 +13,7 @@ export default function ResetPasswordRoute() {
   if (!token || !linkTokenSchema.safeParse(token).success) {
     return (
       <AuthPanel title="This link is not complete">
-        <p>
-          The link to choose a new password is missing part of its address. Open it straight from the e-mail, or copy the whole link
-          into the address bar.
-        </p>
+        <p>The link to choose a new password is missing part of its address. Open it straight from the e-mail, or copy the whole link into the address bar.</p>
         <p className="mt-4">
           <Link to={paths.forgotPassword.getHref()} className="font-semibold text-leaf underline">
             Ask for a new link

@@ -74,9 +74,7 @@ describe('sign-in page', () => {
   });
 
   it('signs in with the API, marked as the web client, and returns to the page that asked for it', async () => {
-    const fetchMock = stubFetch((url) =>
-      url.pathname === '/api/auth/sign-in' ? jsonResponse({ user: customer }) : jsonResponse({ items: [] }),
-    );
+    const fetchMock = stubFetch((url) => (url.pathname === '/api/auth/sign-in' ? jsonResponse({ user: customer }) : jsonResponse({ items: [] })));
     const { router } = renderApp('/sign-in?redirectTo=%2Faccount%2Faddresses');
     await screen.findByRole('heading', { level: 1, name: 'Sign in' });
 

@@ -26,7 +26,16 @@ const batchTrace: BatchTrace = {
     allocatedGrams: 1_136,
   },
   orders: [
-    { orderId, customerName: 'Juno Reed', customerEmail: 'juno.reed@example.test', status: 'shipped', shipDate: '2026-12-04', shippedAt: '2026-12-04T22:00:00.000Z', bags: 2, grams: 682 },
+    {
+      orderId,
+      customerName: 'Juno Reed',
+      customerEmail: 'juno.reed@example.test',
+      status: 'shipped',
+      shipDate: '2026-12-04',
+      shippedAt: '2026-12-04T22:00:00.000Z',
+      bags: 2,
+      grams: 682,
+    },
     {
       orderId: '7c3d4e5f-6a7b-4c8d-8e9f-1a2b3c4d5e6f',
       customerName: 'Tamsin Okerlund',
@@ -59,7 +68,9 @@ const orderTrace: OrderTrace = {
 
 describe('Trace', () => {
   it('follows a batch to every order it went into', async () => {
-    stubFetch((url) => (url.pathname === `/api/roastery/batches/${batchId}/trace` ? jsonResponse(batchTrace) : apiErrorResponse(404, 'not_found', 'Not found.')));
+    stubFetch((url) =>
+      url.pathname === `/api/roastery/batches/${batchId}/trace` ? jsonResponse(batchTrace) : apiErrorResponse(404, 'not_found', 'Not found.'),
+    );
     renderApp(`/roastery/batches/${batchId}`, { session: staff });
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Batch of Test Ridge Washed, Medium' }, { timeout: 15_000 })).toBeTruthy();

@@ -155,7 +155,12 @@ describe('Roast Calendar', () => {
     fireEvent.click(within(editor).getByRole('button', { name: 'Save day' }));
 
     expect(await within(editor).findByText(/Nothing needed to move/)).toBeTruthy();
-    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({ open: true, shipOpen: null, capacityGrams: 30_000, note: '' });
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({
+      open: true,
+      shipOpen: null,
+      capacityGrams: 30_000,
+      note: '',
+    });
   });
 
   it('shows carrier holidays and closes shipping on a day without closing roasting', async () => {
@@ -176,6 +181,11 @@ describe('Roast Calendar', () => {
 
     // Roasting stays open, so nothing asks first and no roast day moves.
     expect(await within(editor).findByText(/Nothing needed to move/)).toBeTruthy();
-    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({ open: true, shipOpen: false, capacityGrams: null, note: '' });
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/calendar/2026-12-08')[0]?.body).toEqual({
+      open: true,
+      shipOpen: false,
+      capacityGrams: null,
+      note: '',
+    });
   });
 });

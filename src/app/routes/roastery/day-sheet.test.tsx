@@ -55,7 +55,12 @@ const roastList: RoastListResponse = {
   ],
   totals: { roastedGrams: 5_678, greenGrams: 6_761, batches: 2, toRoast: { roastedGrams: 5_678, greenGrams: 6_761, batches: 2 } },
   warnings: [
-    { code: 'below_preferred_load', message: 'Test Ridge Washed, medium: 4,635 g is below the preferred 6,000 g load.', lotCode: 'RD-T01', roastLevel: 'medium' },
+    {
+      code: 'below_preferred_load',
+      message: 'Test Ridge Washed, medium: 4,635 g is below the preferred 6,000 g load.',
+      lotCode: 'RD-T01',
+      roastLevel: 'medium',
+    },
     { code: 'green_shortfall', message: 'Invented Valley Natural is 626 g short.', lotCode: 'RD-T02' },
   ],
 };
@@ -298,7 +303,11 @@ describe('Day Sheet tabs and Pack List', () => {
 
     fireEvent.click(within(order).getByRole('button', { name: 'Mark packed' }));
     await waitFor(() => expect(within(order).getByText('Packed', { selector: 'span' })).toBeTruthy());
-    expect(within(order).getByRole('link', { name: /Trace the batch of bag 1/ }).getAttribute('href')).toBe(`/roastery/batches/${recordedBatch.id}`);
+    expect(
+      within(order)
+        .getByRole('link', { name: /Trace the batch of bag 1/ })
+        .getAttribute('href'),
+    ).toBe(`/roastery/batches/${recordedBatch.id}`);
 
     fireEvent.click(within(order).getByRole('button', { name: 'Mark shipped' }));
     const dialog = await screen.findByRole('dialog', { name: 'Mark Juno Reed’s order shipped' });

@@ -89,7 +89,11 @@ export default function DaySheetRoute() {
   return (
     <>
       <PageTitle title={`Day Sheet ${date} · Roastery`} />
-      <PageHeader eyebrow="Roastery · Day Sheet" title={dayName} lead="What to roast and pull, the batches as they come off the roaster, and the bags to pack and ship." />
+      <PageHeader
+        eyebrow="Roastery · Day Sheet"
+        title={dayName}
+        lead="What to roast and pull, the batches as they come off the roaster, and the bags to pack and ship."
+      />
       <RoastDayCautions />
       <div className="mb-6">
         <DateSwitcher key={date} date={date} tab={tab} />

@@ -26,7 +26,9 @@ async function violations(): Promise<string[]> {
 }
 
 // Invented lots, customers and orders.
-const lot = { ...makeLotDetail({ photos: ['/api/uploads/5a7c9e1b-3d5f-4a7b-9c1d-3e5f7a9b1c3d'], specSheetUrl: '/api/uploads/6b8d0f2c-4e6a-4b8c-8d2e-4f6a8b0c2d4e' }) };
+const lot = {
+  ...makeLotDetail({ photos: ['/api/uploads/5a7c9e1b-3d5f-4a7b-9c1d-3e5f7a9b1c3d'], specSheetUrl: '/api/uploads/6b8d0f2c-4e6a-4b8c-8d2e-4f6a8b0c2d4e' }),
+};
 const stockItem = {
   code: lot.code,
   name: lot.name,
@@ -38,7 +40,16 @@ const stockItem = {
   averageDailyUseGrams: 1000,
   daysOfCover: 4,
 };
-const movement = { id: 'm1', deltaGrams: 9072, reason: 'arrival', note: 'Two sacks', orderId: null, batchId: null, actorName: 'Oren Vale', createdAt: '2026-11-20T10:00:00.000Z' };
+const movement = {
+  id: 'm1',
+  deltaGrams: 9072,
+  reason: 'arrival',
+  note: 'Two sacks',
+  orderId: null,
+  batchId: null,
+  actorName: 'Oren Vale',
+  createdAt: '2026-11-20T10:00:00.000Z',
+};
 const summary: OrderSummary = {
   id: '6a1f3c5e-7b9d-4e2f-8a4c-6e8f0a2c4e6a',
   kind: 'green',
@@ -52,7 +63,21 @@ const summary: OrderSummary = {
 };
 const order: OrderDetail = {
   ...(({ bagCount: _bags, ...rest }) => rest)(summary),
-  items: [{ id: '8c3b5e7a-9d1f-4a4b-8c6e-8a0b2c4e6f8c', lotCode: lot.code, lotName: lot.name, size: '1lb', quantity: 2, fillGrams: 454, roastLevel: null, grind: null, brewMethod: null, unitPriceCents: 1990, lineTotalCents: 3980 }],
+  items: [
+    {
+      id: '8c3b5e7a-9d1f-4a4b-8c6e-8a0b2c4e6f8c',
+      lotCode: lot.code,
+      lotName: lot.name,
+      size: '1lb',
+      quantity: 2,
+      fillGrams: 454,
+      roastLevel: null,
+      grind: null,
+      brewMethod: null,
+      unitPriceCents: 1990,
+      lineTotalCents: 3980,
+    },
+  ],
   subtotalCents: 3980,
   discountCents: 0,
   discountLabel: null,
@@ -73,7 +98,11 @@ const order: OrderDetail = {
 
 function roasteryServer() {
   return stubFetch((url) => {
-    if (url.pathname === '/api/roastery/green-stock') return jsonResponse({ windowDays: 28, items: [stockItem, { ...stockItem, code: 'RD-B', name: 'Hidden', isListed: false, reorderAlert: false, daysOfCover: null }] });
+    if (url.pathname === '/api/roastery/green-stock')
+      return jsonResponse({
+        windowDays: 28,
+        items: [stockItem, { ...stockItem, code: 'RD-B', name: 'Hidden', isListed: false, reorderAlert: false, daysOfCover: null }],
+      });
     if (url.pathname.endsWith('/stock-movements')) return jsonResponse({ items: [movement] });
     if (url.pathname === `/api/roastery/green-stock/${lot.code}`) return jsonResponse({ ...lot, isListed: true, reorderPointGrams: 9072 });
     if (url.pathname === '/api/orders') return jsonResponse({ items: [summary], total: 120, page: 2, pageSize: 50 });

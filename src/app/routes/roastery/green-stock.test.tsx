@@ -41,7 +41,11 @@ describe('Roastery', () => {
     renderApp('/roastery', { session: staff });
 
     const nav = await screen.findByRole('navigation', { name: 'Roastery' });
-    expect(within(nav).getAllByRole('link').map((link) => link.textContent)).toEqual(['Overview', 'Day Sheet', 'Roast Calendar', 'Orders', 'Green Stock', 'Subscribers', 'Rotation']);
+    expect(
+      within(nav)
+        .getAllByRole('link')
+        .map((link) => link.textContent),
+    ).toEqual(['Overview', 'Day Sheet', 'Roast Calendar', 'Orders', 'Green Stock', 'Subscribers', 'Rotation']);
 
     const figure = async (label: string) => (await screen.findByText(label)).nextElementSibling?.textContent;
     expect(await figure('Lots listed')).toBe('3');
@@ -62,7 +66,16 @@ describe('Green Stock', () => {
         greenStock([
           stockItem({ code: 'RD-A', name: 'Plenty Left', stockGrams: 40_000, usedGramsInWindow: 14_000, averageDailyUseGrams: 500, daysOfCover: 80 }),
           stockItem({ code: 'RD-B', name: 'Hidden Lot', isListed: false, stockGrams: 0 }),
-          stockItem({ code: 'RD-C', name: 'Running Low', stockGrams: 4536, reorderPointGrams: 9072, reorderAlert: true, usedGramsInWindow: 28_000, averageDailyUseGrams: 1000, daysOfCover: 4 }),
+          stockItem({
+            code: 'RD-C',
+            name: 'Running Low',
+            stockGrams: 4536,
+            reorderPointGrams: 9072,
+            reorderAlert: true,
+            usedGramsInWindow: 28_000,
+            averageDailyUseGrams: 1000,
+            daysOfCover: 4,
+          }),
         ]),
       ),
     );

@@ -70,7 +70,11 @@ export default function GreenStockRoute() {
     <>
       <PageTitle title="Green Stock · Roastery" />
       <div className="flex flex-wrap items-start justify-between gap-4">
-        <PageHeader eyebrow="Roastery" title="Green Stock" lead="Every lot, listed or not: what is on hand, how long it lasts, and what to reorder. Open a lot to record stock, edit it or add photos." />
+        <PageHeader
+          eyebrow="Roastery"
+          title="Green Stock"
+          lead="Every lot, listed or not: what is on hand, how long it lasts, and what to reorder. Open a lot to record stock, edit it or add photos."
+        />
         <NewLotLink />
       </div>
       <GreenStock />

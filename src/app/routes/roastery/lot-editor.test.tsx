@@ -13,13 +13,31 @@ afterEach(() => {
 const staff = makeUser({ role: 'staff', name: 'Oren Vale' });
 const photoId = '5a7c9e1b-3d5f-4a7b-9c1d-3e5f7a9b1c3d';
 
-type Movement = { id: string; deltaGrams: number; reason: string; note: string; orderId: string | null; batchId: string | null; actorName: string | null; createdAt: string };
+type Movement = {
+  id: string;
+  deltaGrams: number;
+  reason: string;
+  note: string;
+  orderId: string | null;
+  batchId: string | null;
+  actorName: string | null;
+  createdAt: string;
+};
 
 /** A tiny in-memory server for the Roastery's lot routes, starting with one invented lot. */
 function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (method: string, path: string) => Response | undefined } = {}) {
   const lot: LotStaffDetail = { ...makeLotDetail({ stockGrams: 2000, photos: [`/api/uploads/${photoId}`] }), reorderPointGrams: 0, isListed };
   const movements: Movement[] = [
-    { id: 'm1', deltaGrams: 2000, reason: 'arrival', note: 'First sacks', orderId: null, batchId: null, actorName: 'Oren Vale', createdAt: '2026-11-20T10:00:00.000Z' },
+    {
+      id: 'm1',
+      deltaGrams: 2000,
+      reason: 'arrival',
+      note: 'First sacks',
+      orderId: null,
+      batchId: null,
+      actorName: 'Oren Vale',
+      createdAt: '2026-11-20T10:00:00.000Z',
+    },
   ];
   const item = (): GreenStockItem => ({
     code: lot.code,
@@ -42,7 +60,16 @@ function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (
     if (path === `/api/lots/${lot.code}/stock-movements`) return jsonResponse({ items: movements });
     if (path === `/api/lots/${lot.code}/stock-adjustments`) {
       lot.stockGrams += Number(body.deltaGrams);
-      movements.unshift({ id: `m${movements.length + 1}`, deltaGrams: Number(body.deltaGrams), reason: String(body.reason), note: String(body.note ?? ''), orderId: null, batchId: null, actorName: 'Oren Vale', createdAt: '2026-12-01T16:00:00.000Z' });
+      movements.unshift({
+        id: `m${movements.length + 1}`,
+        deltaGrams: Number(body.deltaGrams),
+        reason: String(body.reason),
+        note: String(body.note ?? ''),
+        orderId: null,
+        batchId: null,
+        actorName: 'Oren Vale',
+        createdAt: '2026-12-01T16:00:00.000Z',
+      });
       return jsonResponse({ stockGrams: lot.stockGrams });
     }
     if (path === `/api/lots/${lot.code}/photos` && method === 'POST') {
@@ -118,7 +145,9 @@ describe('Lot page in Green Stock: stock', () => {
     await openEditor({
       answer: (method, path) =>
         method === 'POST' && path.endsWith('/stock-adjustments')
-          ? apiErrorResponse(409, 'stock_below_zero', 'Lot RD-T01 does not hold that many grams; stock cannot go below zero.', { deltaGrams: 'would take stock below zero' })
+          ? apiErrorResponse(409, 'stock_below_zero', 'Lot RD-T01 does not hold that many grams; stock cannot go below zero.', {
+              deltaGrams: 'would take stock below zero',
+            })
           : undefined,
     });
     const form = screen.getByRole('form', { name: 'Adjust stock' });

@@ -57,7 +57,10 @@ export default function RoasteryOrderRoute() {
               <ul className="mt-3 flex flex-wrap gap-x-6 gap-y-2">
                 {order.shipDate ? (
                   <li>
-                    <Link to={paths.roastery.daySheet.getHref(order.shipDate, 'pack')} className="inline-flex min-h-11 items-center font-semibold text-leaf underline">
+                    <Link
+                      to={paths.roastery.daySheet.getHref(order.shipDate, 'pack')}
+                      className="inline-flex min-h-11 items-center font-semibold text-leaf underline"
+                    >
                       Open the Pack List for {order.shipDate}
                     </Link>
                   </li>

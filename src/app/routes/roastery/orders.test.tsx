@@ -27,7 +27,13 @@ function makeSummary(overrides: Partial<OrderSummary> = {}): OrderSummary {
   };
 }
 
-const listOf = (items: OrderSummary[], overrides: Partial<OrderListResponse> = {}): OrderListResponse => ({ items, total: items.length, page: 1, pageSize: 50, ...overrides });
+const listOf = (items: OrderSummary[], overrides: Partial<OrderListResponse> = {}): OrderListResponse => ({
+  items,
+  total: items.length,
+  page: 1,
+  pageSize: 50,
+  ...overrides,
+});
 
 function detail(overrides: Partial<OrderDetail> = {}): OrderDetail {
   const { bagCount: _bags, ...summary } = makeSummary();
@@ -73,14 +79,23 @@ const apiListRequests = (fetchMock: ReturnType<typeof stubFetch>) => requestedUr
 
 describe('Roastery orders table', () => {
   it('lists every customer’s orders in a captioned table and opens the Orders item in the navigation', async () => {
-    const held = makeSummary({ id: '9d4c6f8b-0e2a-4b5c-9d7f-9b1c3d5f7a9d', status: 'held', customer: { id: '0e5d7a9c-1f3b-4c6d-8e8a-0c2d4e6a8b0e', name: 'Ada Quill', email: 'ada.quill@example.test' }, roastDate: '2026-12-03' });
+    const held = makeSummary({
+      id: '9d4c6f8b-0e2a-4b5c-9d7f-9b1c3d5f7a9d',
+      status: 'held',
+      customer: { id: '0e5d7a9c-1f3b-4c6d-8e8a-0c2d4e6a8b0e', name: 'Ada Quill', email: 'ada.quill@example.test' },
+      roastDate: '2026-12-03',
+    });
     const fetchMock = stubFetch(() => jsonResponse(listOf([makeSummary(), held])));
     renderApp('/roastery/orders', { session: staff });
 
     const table = await screen.findByRole('table', { name: 'Orders, newest first' });
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows).toHaveLength(2);
-    expect(within(rows[0] as HTMLElement).getByRole('link', { name: 'Order 6A1F3C5E' }).getAttribute('href')).toBe('/roastery/orders/6a1f3c5e-7b9d-4e2f-8a4c-6e8f0a2c4e6a');
+    expect(
+      within(rows[0] as HTMLElement)
+        .getByRole('link', { name: 'Order 6A1F3C5E' })
+        .getAttribute('href'),
+    ).toBe('/roastery/orders/6a1f3c5e-7b9d-4e2f-8a4c-6e8f0a2c4e6a');
     expect(within(rows[0] as HTMLElement).getByText('$59.80')).toBeTruthy();
     expect(within(rows[1] as HTMLElement).getByText('On hold')).toBeTruthy();
     expect(within(rows[1] as HTMLElement).getByText('Dec 3, 2026')).toBeTruthy();
@@ -158,7 +173,9 @@ describe('Roastery orders table', () => {
   it('shows the server’s reason when the orders cannot load, and tries again', async () => {
     let databaseDown = true;
     stubFetch(() =>
-      databaseDown ? apiErrorResponse(503, 'database_unavailable', 'The database is restarting. Try again in a moment.') : jsonResponse(listOf([makeSummary()])),
+      databaseDown
+        ? apiErrorResponse(503, 'database_unavailable', 'The database is restarting. Try again in a moment.')
+        : jsonResponse(listOf([makeSummary()])),
     );
     renderApp('/roastery/orders', { session: staff });
 
@@ -208,7 +225,11 @@ describe('Roastery order detail', () => {
     expect(within(tracking).getByText('Tracking number').nextElementSibling?.textContent).toBe('IP-0042-7781');
     const shipping = screen.getByRole('region', { name: 'Shipping and tracing' });
     expect(within(shipping).getByRole('link', { name: 'Trace this order' }).getAttribute('href')).toMatch(/^\/roastery\/orders\/[^/]+\/trace$/);
-    expect(within(shipping).getByRole('link', { name: /^Open the Pack List for / }).getAttribute('href')).toMatch(/^\/roastery\/days\/\d{4}-\d{2}-\d{2}\?tab=pack$/);
+    expect(
+      within(shipping)
+        .getByRole('link', { name: /^Open the Pack List for / })
+        .getAttribute('href'),
+    ).toMatch(/^\/roastery\/days\/\d{4}-\d{2}-\d{2}\?tab=pack$/);
     // An instant, shown in the reader's own time zone.
     expect(within(tracking).getByText('Shipped').nextElementSibling?.textContent).toMatch(/^Dec [23], 2026, \d/);
   });

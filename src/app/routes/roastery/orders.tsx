@@ -27,7 +27,11 @@ export default function RoasteryOrdersRoute() {
   return (
     <>
       <PageTitle title="Orders · Roastery" />
-      <PageHeader eyebrow="Roastery" title="Orders" lead="Every customer’s orders, green and roasted. Filter, sort, open one, or take the list away as a spreadsheet." />
+      <PageHeader
+        eyebrow="Roastery"
+        title="Orders"
+        lead="Every customer’s orders, green and roasted. Filter, sort, open one, or take the list away as a spreadsheet."
+      />
       <div className="grid gap-6">
         <OrderFiltersForm filters={filters} onChange={updateFilters} />
         <RoasteryOrderList filters={filters} />

@@ -43,11 +43,7 @@ export default function RoasteryOverviewRoute() {
   return (
     <>
       <PageTitle title="Roastery" />
-      <PageHeader
-        eyebrow="Staff"
-        title="Roastery"
-        lead="Where the shop plans its roast days, keeps its green coffee and gets bags out of the door."
-      />
+      <PageHeader eyebrow="Staff" title="Roastery" lead="Where the shop plans its roast days, keeps its green coffee and gets bags out of the door." />
 
       <p className="mb-10">
         <Link to={paths.roastery.daySheetToday.getHref()} className={buttonStyles('primary')}>
@@ -73,28 +69,26 @@ export default function RoasteryOverviewRoute() {
         <CautionPanel title="Before a roast day">
           <ul className="list-disc space-y-2 pl-5">
             <li>
-              <strong>Chaff fires.</strong> Chaff collects in the roaster&rsquo;s chaff collector and ducting and can catch fire: empty and
-              clean them on the schedule your roaster&rsquo;s maker and installer set.
+              <strong>Chaff fires.</strong> Chaff collects in the roaster&rsquo;s chaff collector and ducting and can catch fire: empty and clean them on the
+              schedule your roaster&rsquo;s maker and installer set.
             </li>
             <li>
-              <strong>Carbon monoxide and smoke.</strong> The roaster gives off smoke and carbon monoxide, and so does roasted coffee in
-              storage: 35–150+ ppm has been measured near large totes of roasted beans.{' '}
+              <strong>Carbon monoxide and smoke.</strong> The roaster gives off smoke and carbon monoxide, and so does roasted coffee in storage: 35–150+ ppm
+              has been measured near large totes of roasted beans.{' '}
               <Source>Fire Engineering, Determining the Source of Carbon Monoxide Levels at a Roasted Coffee Facility</Source>
             </li>
             <li>
-              <strong>Grinding and packing.</strong> Diacetyl and 2,3-pentanedione rise as coffee is ground and packed; recommended limits
-              are 5 ppb diacetyl and 9.3 ppb 2,3-pentanedione over an 8-hour shift.{' '}
-              <Source>NIOSH, flavorings-related lung disease, exposure limits</Source>
+              <strong>Grinding and packing.</strong> Diacetyl and 2,3-pentanedione rise as coffee is ground and packed; recommended limits are 5 ppb diacetyl
+              and 9.3 ppb 2,3-pentanedione over an 8-hour shift. <Source>NIOSH, flavorings-related lung disease, exposure limits</Source>
             </li>
             <li>
-              <strong>Air and gas rules are local.</strong> Roaster exhaust, afterburners and gas appliances fall under local air-quality and
-              building codes; one air district, for example, requires a permit for a drum roaster over 18 lb per batch.{' '}
+              <strong>Air and gas rules are local.</strong> Roaster exhaust, afterburners and gas appliances fall under local air-quality and building codes;
+              one air district, for example, requires a permit for a drum roaster over 18 lb per batch.{' '}
               <Source>Sacramento Metropolitan AQMD, Coffee Bean Roasting Operations</Source>
             </li>
           </ul>
           <p className="mt-4 text-small text-ink-muted">
-            This is a reminder, not legal or engineering advice: installation, venting and gas work are for your local codes and licensed
-            installers to decide.
+            This is a reminder, not legal or engineering advice: installation, venting and gas work are for your local codes and licensed installers to decide.
           </p>
         </CautionPanel>
       </div>

@@ -64,7 +64,10 @@ describe('Roaster’s Rotation (Roastery)', () => {
 
     expect(await within(day).findByText(/this day’s rotation needs about 4.2 kg/)).toBeTruthy();
     expect(within(day).getByText('Test Basin Natural is the Roaster’s Rotation on Wed, Dec 9, 2026.')).toBeTruthy();
-    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/rotation/2026-12-09')[0]?.body).toEqual({ lotCode: 'RD-T02', note: 'Sweet and heavy for the holidays' });
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/rotation/2026-12-09')[0]?.body).toEqual({
+      lotCode: 'RD-T02',
+      note: 'Sweet and heavy for the holidays',
+    });
     await waitFor(() => expect(within(day).getByText(/Picked:/).textContent).toContain('Test Basin Natural'));
   });
 });

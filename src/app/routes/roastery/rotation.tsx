@@ -26,12 +26,14 @@ function rangeOf(search: URLSearchParams) {
   return { from, to: addDays(from, SPAN_DAYS - 1), weeksAhead };
 }
 
-export const clientLoader = (queryClient: QueryClient) => ({ request }: { request: Request }) => {
-  const { from, to } = rangeOf(new URL(request.url).searchParams);
-  void queryClient.prefetchQuery(getRotationQueryOptions({ from, to }));
-  void queryClient.prefetchQuery(getLotsQueryOptions());
-  return null;
-};
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ request }: { request: Request }) => {
+    const { from, to } = rangeOf(new URL(request.url).searchParams);
+    void queryClient.prefetchQuery(getRotationQueryOptions({ from, to }));
+    void queryClient.prefetchQuery(getLotsQueryOptions());
+    return null;
+  };
 
 export default function RotationRoute() {
   const [search, setSearch] = useSearchParams();

@@ -85,7 +85,9 @@ describe('Shop settings', () => {
   });
 
   it('puts the server’s reasons on their fields', async () => {
-    settingsServer(() => apiErrorResponse(400, 'validation_failed', 'Check the highlighted fields.', { 'roaster.capacityGrams': 'Too small for a shop roaster.' }));
+    settingsServer(() =>
+      apiErrorResponse(400, 'validation_failed', 'Check the highlighted fields.', { 'roaster.capacityGrams': 'Too small for a shop roaster.' }),
+    );
     renderApp('/roastery/settings', { session: owner });
 
     const capacity = await screen.findByLabelText('Roaster capacity (g of green a batch)', {}, { timeout: 15_000 });

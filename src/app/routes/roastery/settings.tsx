@@ -42,11 +42,7 @@ export default function ShopSettingsRoute() {
       notAllowed={{ title: 'Settings are for the owner', reason: 'Only the shop’s owner changes roast days, rest, prices and shipping.' }}
     >
       <PageTitle title="Settings · Roastery" />
-      <PageHeader
-        eyebrow="Roastery"
-        title="Shop settings"
-        lead="Roast and ship days, rest, the roaster, the loss model, prices and shipping."
-      />
+      <PageHeader eyebrow="Roastery" title="Shop settings" lead="Roast and ship days, rest, the roaster, the loss model, prices and shipping." />
       <OwnersSettings />
     </RequireRole>
   );

@@ -98,7 +98,9 @@ describe('Subscribers (Roastery)', () => {
 
     fireEvent.click(await screen.findByRole('button', { name: 'Next page' }));
     await waitFor(() => expect(router.state.location.search).toBe('?status=active&level=dark&cadence=2&lot=rotation&page=2'));
-    await waitFor(() => expect(requestedUrls(fetchMock)).toContain('/api/roastery/subscribers?status=active&level=dark&cadence=2&lot=rotation&page=2&pageSize=25'));
+    await waitFor(() =>
+      expect(requestedUrls(fetchMock)).toContain('/api/roastery/subscribers?status=active&level=dark&cadence=2&lot=rotation&page=2&pageSize=25'),
+    );
   });
 
   it('opens a subscriber with their deliveries and the orders they became', async () => {

@@ -24,7 +24,9 @@ function storedLines(): CartLine[] {
 beforeEach(() => {
   window.localStorage.setItem('restday.cart', JSON.stringify({ version: 1, lines: [ridge, plateau] }));
   // GET /api/shipping as the server answers it with Restday's default bands.
-  stubFetch((url) => (url.pathname === '/api/shipping' ? jsonResponse({ currency: 'usd', ...defaultShopSettings.shipping }) : new Response(null, { status: 404 })));
+  stubFetch((url) =>
+    url.pathname === '/api/shipping' ? jsonResponse({ currency: 'usd', ...defaultShopSettings.shipping }) : new Response(null, { status: 404 }),
+  );
 });
 
 afterEach(() => {

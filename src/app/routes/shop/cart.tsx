@@ -47,9 +47,7 @@ export default function CartRoute() {
             </Link>
           </div>
           {user === null ? (
-            <p className="mt-3 text-right text-small text-ink-muted">
-              You sign in or create an account at checkout; these bags stay in your cart.
-            </p>
+            <p className="mt-3 text-right text-small text-ink-muted">You sign in or create an account at checkout; these bags stay in your cart.</p>
           ) : null}
         </div>
       )}

@@ -24,11 +24,7 @@ describe('home page', () => {
 
     const featured = await screen.findByRole('region', { name: 'On the green shelf' });
     const cards = await within(featured).findAllByTestId('lot-card');
-    expect(cards.map((card) => within(card).getByRole('heading').textContent)).toEqual([
-      'Second In Stock',
-      'Third In Stock',
-      'Fourth In Stock',
-    ]);
+    expect(cards.map((card) => within(card).getByRole('heading').textContent)).toEqual(['Second In Stock', 'Third In Stock', 'Fourth In Stock']);
     const basics = screen.getByRole('region', { name: 'New to roasting at home?' });
     expect(within(basics).getByRole('link', { name: 'Read the roasting basics' }).getAttribute('href')).toBe('/roasting-basics');
   });

@@ -37,8 +37,8 @@ export default function HomeRoute() {
           <p className="text-small font-semibold tracking-wide text-ember uppercase">Green coffee · Roasted to order</p>
           <h1 className="mt-2 text-display">Roast it yourself, or let it rest until it&rsquo;s ready.</h1>
           <p className="mt-4 max-w-prose text-lead text-ink-muted">
-            Green lots for people who roast at home, and coffee roasted to order for people who would rather brew. Either way you know
-            where it grew, how it was processed and when it is at its best.
+            Green lots for people who roast at home, and coffee roasted to order for people who would rather brew. Either way you know where it grew, how it was
+            processed and when it is at its best.
           </p>
           <div className="mt-6 flex flex-wrap gap-3">
             <Link to={paths.lots.getHref()} className={buttonStyles('primary')}>
@@ -83,8 +83,8 @@ export default function HomeRoute() {
           New to roasting at home?
         </h2>
         <p className="mt-2 max-w-prose text-ink">
-          A hot-air popper, a colander and a window you can open are enough to start. Read what happens in the beans, how long to go
-          after first crack, and how to roast safely.
+          A hot-air popper, a colander and a window you can open are enough to start. Read what happens in the beans, how long to go after first crack, and how
+          to roast safely.
         </p>
         <Link to={paths.roastingBasics.getHref()} className={buttonStyles('primary', 'mt-5')}>
           Read the roasting basics

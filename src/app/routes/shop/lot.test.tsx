@@ -72,7 +72,10 @@ describe('lot page', () => {
     renderApp('/lots/RD-T01');
 
     const sizes = await screen.findByRole('group', { name: 'Bag size' });
-    const option = (label: string) => within(sizes).getByLabelText(new RegExp(`^${label}`)).closest('label')?.textContent;
+    const option = (label: string) =>
+      within(sizes)
+        .getByLabelText(new RegExp(`^${label}`))
+        .closest('label')?.textContent;
     // $24.50/kg × exact declared weight (1 lb = 453.59237 g, NIST SP 811), rounded once; 5 lb fills
     // 2,268 g, which reaches the 2,268 g break at $22.00/kg.
     expect(option('8 oz')).toBe('8 ozfills 227 g$5.56');
@@ -123,7 +126,14 @@ describe('lot page', () => {
     expect(screen.getByRole('link', { name: 'Cart, 2 bags' })).toBeTruthy();
     const stored = JSON.parse(window.localStorage.getItem('restday.cart') ?? '{}') as { lines: unknown[] };
     expect(stored.lines).toEqual([
-      { lotCode: 'RD-T01', lotName: 'Test Ridge Washed', size: '2lb', quantity: 2, pricePerKgCents: 2450, priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2200 }] },
+      {
+        lotCode: 'RD-T01',
+        lotName: 'Test Ridge Washed',
+        size: '2lb',
+        quantity: 2,
+        pricePerKgCents: 2450,
+        priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2200 }],
+      },
     ]);
   });
 

@@ -76,15 +76,7 @@ function LotPage({ lot }: { lot: LotDetail }) {
           </>
         }
       />
-      <HomeRoastGuide
-        lotCode={lot.code}
-        size={size}
-        unit={unit}
-        device={device}
-        onDeviceChange={setDevice}
-        level={level}
-        onLevelChange={setLevel}
-      />
+      <HomeRoastGuide lotCode={lot.code} size={size} unit={unit} device={device} onDeviceChange={setDevice} level={level} onLevelChange={setLevel} />
     </>
   );
 }
@@ -143,9 +135,7 @@ export default function LotRoute() {
       return (
         <>
           <PageTitle title="Lot not found" />
-          <NotFoundMessage title="Lot not found">
-            No green lot has the code {code}. It may have sold out and been taken off the list.
-          </NotFoundMessage>
+          <NotFoundMessage title="Lot not found">No green lot has the code {code}. It may have sold out and been taken off the list.</NotFoundMessage>
         </>
       );
     }

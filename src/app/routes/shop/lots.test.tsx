@@ -94,9 +94,7 @@ describe('Green Lots page', () => {
 
   it('shows the error from the API and loads the lots when the visitor tries again', async () => {
     let failing = true;
-    stubFetch(() =>
-      failing ? apiErrorResponse(503, 'database_unavailable', 'The catalog is resting for a moment.') : jsonResponse({ items: [ethiopia] }),
-    );
+    stubFetch(() => (failing ? apiErrorResponse(503, 'database_unavailable', 'The catalog is resting for a moment.') : jsonResponse({ items: [ethiopia] })));
     renderApp('/lots');
 
     const alert = await screen.findByRole('alert');

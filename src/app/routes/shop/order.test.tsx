@@ -60,7 +60,14 @@ function makeOrder(overrides: Partial<OrderDetail> = {}): OrderDetail {
 
 describe('order page', () => {
   it('gives a roasted order its expected arrival and says whether it lands ready to brew', async () => {
-    const roasted = { kind: 'roasted', status: 'paid', roastDate: '2026-02-09', shipDate: '2026-02-10', readyFrom: '2026-02-16', bestBefore: '2026-03-09' } as const;
+    const roasted = {
+      kind: 'roasted',
+      status: 'paid',
+      roastDate: '2026-02-09',
+      shipDate: '2026-02-10',
+      readyFrom: '2026-02-16',
+      bestBefore: '2026-03-09',
+    } as const;
     stubFetch(() => jsonResponse(makeOrder({ ...roasted, expectedArrival: '2026-02-13', readyOnArrival: false })));
     renderApp(`/orders/${orderId}`, { session: makeUser() });
 
@@ -122,9 +129,7 @@ describe('order page', () => {
 
   it('shows an order’s bags, totals, dates and tracking without asking again', async () => {
     const fetchMock = stubFetch(() =>
-      jsonResponse(
-        makeOrder({ status: 'shipped', paidAt: '2026-12-01T16:06:00Z', shipDate: '2026-12-03', carrier: 'USPS', trackingNumber: '9400TEST0001' }),
-      ),
+      jsonResponse(makeOrder({ status: 'shipped', paidAt: '2026-12-01T16:06:00Z', shipDate: '2026-12-03', carrier: 'USPS', trackingNumber: '9400TEST0001' })),
     );
     renderApp(`/orders/${orderId}`, { session: makeUser() });
 

@@ -63,19 +63,18 @@ export default function RoastingBasicsRoute() {
           First and second crack
         </h2>
         <p className="mt-4">
-          First crack is the popping, like quiet popcorn, as steam and gas burst out of the beans; it comes at a bean temperature of
-          roughly 196–205 °C. Second crack is faster and sharper, like crackling twigs, at roughly 224–230 °C; oil starts to show on the
-          beans and the smoke thickens, so a dark roast stops soon after it begins. What a probe reads varies from machine to
-          machine. <Source>ChartsBin, Degree of Coffee Roasting; the 196 °C and 224 °C figures from memory</Source>
+          First crack is the popping, like quiet popcorn, as steam and gas burst out of the beans; it comes at a bean temperature of roughly 196–205 °C. Second
+          crack is faster and sharper, like crackling twigs, at roughly 224–230 °C; oil starts to show on the beans and the smoke thickens, so a dark roast
+          stops soon after it begins. What a probe reads varies from machine to machine.{' '}
+          <Source>ChartsBin, Degree of Coffee Roasting; the 196 °C and 224 °C figures from memory</Source>
         </p>
         <p className="mt-3">
-          Development time is the time from first crack to the end of the roast, and the development time ratio is that time divided
-          by the whole roast; drum roasters often aim for 20–25%. <Source>S. Rao, Development Time Ratio, 2016</Source>
+          Development time is the time from first crack to the end of the roast, and the development time ratio is that time divided by the whole roast; drum
+          roasters often aim for 20–25%. <Source>S. Rao, Development Time Ratio, 2016</Source>
         </p>
         <p className="mt-3">
           Beans lose weight as they roast, mostly water: typically 14–20% in all, more the darker the roast.{' '}
-          <Source>Barista Hustle, RS 3.05 Mass Loss, citing Schenker 2000 and Clarke 1987</Source> So 80 g of green beans come out
-          at roughly 64–69 g roasted.
+          <Source>Barista Hustle, RS 3.05 Mass Loss, citing Schenker 2000 and Clarke 1987</Source> So 80 g of green beans come out at roughly 64–69 g roasted.
         </p>
       </section>
 
@@ -85,13 +84,12 @@ export default function RoastingBasicsRoute() {
         </h2>
         <ul className="mt-4 list-disc space-y-2 pl-5">
           <li>
-            Load about 75–80 g of green beans, roughly half a kitchen cup. The beans must keep moving; if they sit still, there are too
-            many and they will scorch. <Source>common practice</Source>
+            Load about 75–80 g of green beans, roughly half a kitchen cup. The beans must keep moving; if they sit still, there are too many and they will
+            scorch. <Source>common practice</Source>
           </li>
           <li>
-            First crack tends to arrive around three minutes in, but every popper and every mains supply is different.{' '}
-            <Source>common practice</Source> One 1,000 W popper has been reported to roast 80 g in 7.5–8 minutes.{' '}
-            <Source>Everything2 write-up on popper roasting</Source>
+            First crack tends to arrive around three minutes in, but every popper and every mains supply is different. <Source>common practice</Source> One
+            1,000 W popper has been reported to roast 80 g in 7.5–8 minutes. <Source>Everything2 write-up on popper roasting</Source>
           </li>
         </ul>
 
@@ -100,20 +98,14 @@ export default function RoastingBasicsRoute() {
         <Table variant="prose" className="mt-3">
           <TableHead>
             <tr>
-              <TableHeader>
-                Roast level
-              </TableHeader>
-              <TableHeader>
-                Keep going after first crack for
-              </TableHeader>
+              <TableHeader>Roast level</TableHeader>
+              <TableHeader>Keep going after first crack for</TableHeader>
             </tr>
           </TableHead>
           <TableBody>
             {afterFirstCrack.map((row) => (
               <tr key={row.level}>
-                <TableRowHeader>
-                  {row.level}
-                </TableRowHeader>
+                <TableRowHeader>{row.level}</TableRowHeader>
                 <TableCell>{row.time}</TableCell>
               </tr>
             ))}
@@ -142,21 +134,21 @@ export default function RoastingBasicsRoute() {
         </h2>
         <ul className="mt-4 list-disc space-y-2 pl-5">
           <li>
-            Fresh beans give off CO₂ for about the first 24–48 hours; taste them from about a day after roasting, and keep them in a
-            bag with a one-way valve or one that is loosely closed. <Source>common practice</Source>
+            Fresh beans give off CO₂ for about the first 24–48 hours; taste them from about a day after roasting, and keep them in a bag with a one-way valve or
+            one that is loosely closed. <Source>common practice</Source>
           </li>
           <li>
             Degassing goes on for days to weeks, faster for darker roasts and for ground coffee.{' '}
             <Source>Smrke et al., J. Agric. Food Chem. 2017; X. Wang, PhD thesis, University of Guelph, 2014</Source>
           </li>
           <li>
-            For brewing, filter coffee is usually rested 2–7 days and espresso 7–14 days, and is at its best roughly from day 4 to
-            day 21, within about four weeks in a valve bag. <Source>from memory</Source>
+            For brewing, filter coffee is usually rested 2–7 days and espresso 7–14 days, and is at its best roughly from day 4 to day 21, within about four
+            weeks in a valve bag. <Source>from memory</Source>
           </li>
           <li>
-            Keep green beans cool and dry, at about 20 °C and 60–65% relative humidity, where they keep well for up to about a
-            year. <Source>general food press; guidelines in ISO 8455</Source> Mould cannot grow below a water activity of about
-            0.68. <Source>ICO, Good Hygiene Practices</Source>
+            Keep green beans cool and dry, at about 20 °C and 60–65% relative humidity, where they keep well for up to about a year.{' '}
+            <Source>general food press; guidelines in ISO 8455</Source> Mould cannot grow below a water activity of about 0.68.{' '}
+            <Source>ICO, Good Hygiene Practices</Source>
           </li>
         </ul>
       </section>
@@ -166,12 +158,11 @@ export default function RoastingBasicsRoute() {
           Roasting beyond the kitchen
         </h2>
         <p className="mt-4">
-          Bigger roasters bring bigger hazards: chaff fires in the roaster and its ducts, smoke, and carbon monoxide, which roasted
-          coffee keeps giving off in storage (35–150+ ppm has been measured near large totes).{' '}
-          <Source>Fire Engineering, carbon monoxide at a roasted coffee facility</Source> Grinding and packing raise exposure to
-          diacetyl and 2,3-pentanedione, which have recommended limits of 5 ppb and 9.3 ppb over an 8-hour day.{' '}
-          <Source>NIOSH, flavorings-related lung disease exposure limits</Source> Air permits depend on the local air-quality district,
-          and gas appliances on local codes: these are matters for local rules and licensed installers, not for this page.{' '}
+          Bigger roasters bring bigger hazards: chaff fires in the roaster and its ducts, smoke, and carbon monoxide, which roasted coffee keeps giving off in
+          storage (35–150+ ppm has been measured near large totes). <Source>Fire Engineering, carbon monoxide at a roasted coffee facility</Source> Grinding and
+          packing raise exposure to diacetyl and 2,3-pentanedione, which have recommended limits of 5 ppb and 9.3 ppb over an 8-hour day.{' '}
+          <Source>NIOSH, flavorings-related lung disease exposure limits</Source> Air permits depend on the local air-quality district, and gas appliances on
+          local codes: these are matters for local rules and licensed installers, not for this page.{' '}
           <Source>Sacramento Metropolitan AQMD, Coffee Bean Roasting Operations, as one district&rsquo;s example</Source>
         </p>
       </section>

@@ -20,7 +20,15 @@ function shippingServer(onCheckout: () => Response) {
     if (url.pathname === '/api/account/addresses') return jsonResponse({ items: [] });
     if (url.pathname === '/api/lots/RD-T01') return jsonResponse(makeLotDetail());
     if (url.pathname === '/api/subscriptions/preview') {
-      return jsonResponse({ priceCents: 4835, regularPriceCents: 5295, discountPct: 10, shippingCents: 695, currency: 'usd', deliveries: [], shipPolicy: 'ready_on_arrival' });
+      return jsonResponse({
+        priceCents: 4835,
+        regularPriceCents: 5295,
+        discountPct: 10,
+        shippingCents: 695,
+        currency: 'usd',
+        deliveries: [],
+        shipPolicy: 'ready_on_arrival',
+      });
     }
     return onCheckout();
   });

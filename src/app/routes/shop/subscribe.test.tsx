@@ -23,9 +23,30 @@ function makePreview(priceCents: number): SubscriptionPreview {
     currency: 'usd',
     shipPolicy: 'ready_on_arrival',
     deliveries: [
-      { roastDate: '2026-12-09', shipDate: '2026-12-14', readyFrom: '2026-12-14', bestBefore: '2027-01-06', expectedArrival: '2026-12-17', cutoffAt: '2026-12-08T19:00:00Z' },
-      { roastDate: '2026-12-23', shipDate: '2026-12-28', readyFrom: '2026-12-28', bestBefore: '2027-01-20', expectedArrival: '2026-12-31', cutoffAt: '2026-12-22T19:00:00Z' },
-      { roastDate: '2027-01-06', shipDate: '2027-01-11', readyFrom: '2027-01-11', bestBefore: '2027-02-03', expectedArrival: '2027-01-14', cutoffAt: '2027-01-05T19:00:00Z' },
+      {
+        roastDate: '2026-12-09',
+        shipDate: '2026-12-14',
+        readyFrom: '2026-12-14',
+        bestBefore: '2027-01-06',
+        expectedArrival: '2026-12-17',
+        cutoffAt: '2026-12-08T19:00:00Z',
+      },
+      {
+        roastDate: '2026-12-23',
+        shipDate: '2026-12-28',
+        readyFrom: '2026-12-28',
+        bestBefore: '2027-01-20',
+        expectedArrival: '2026-12-31',
+        cutoffAt: '2026-12-22T19:00:00Z',
+      },
+      {
+        roastDate: '2027-01-06',
+        shipDate: '2027-01-11',
+        readyFrom: '2027-01-11',
+        bestBefore: '2027-02-03',
+        expectedArrival: '2027-01-14',
+        cutoffAt: '2027-01-05T19:00:00Z',
+      },
     ],
   };
 }
@@ -54,7 +75,13 @@ describe('Roasted to Order builder', () => {
     const coffee = await screen.findByRole('group', { name: /^Coffee/ }, { timeout: 15_000 });
     expect(within(coffee).getByRole('radio', { name: /Test Ridge Washed/ })).toHaveProperty('checked', true);
     const levels = screen.getByRole('group', { name: /^Roast level/ });
-    await waitFor(() => expect(within(levels).getAllByRole('radio').map((radio) => radio.getAttribute('value'))).toEqual(['light', 'medium']));
+    await waitFor(() =>
+      expect(
+        within(levels)
+          .getAllByRole('radio')
+          .map((radio) => radio.getAttribute('value')),
+      ).toEqual(['light', 'medium']),
+    );
     expect(within(levels).getByRole('radio', { name: 'Light' })).toHaveProperty('checked', true);
 
     const sizes = screen.getByRole('group', { name: 'Bag size' });
@@ -92,7 +119,15 @@ describe('Roasted to Order builder', () => {
     expect(asked?.get('lotCode')).toBeNull();
     await waitFor(() => {
       const search = new URLSearchParams(router.state.location.search);
-      expect(Object.fromEntries(search)).toEqual({ lot: 'rotation', level: 'medium', size: '1lb', bags: '1', grind: 'whole-bean', brew: 'espresso', every: '3' });
+      expect(Object.fromEntries(search)).toEqual({
+        lot: 'rotation',
+        level: 'medium',
+        size: '1lb',
+        bags: '1',
+        grind: 'whole-bean',
+        brew: 'espresso',
+        every: '3',
+      });
     });
   });
 

@@ -73,9 +73,9 @@ export default function SubscribeRoute() {
           Why the rest?
         </h2>
         <p className="mt-3">
-          Freshly roasted coffee is still giving off carbon dioxide, and brewed too soon it tastes sharp and uneven. Each bag carries
-          its roast date and a ready-from date; espresso needs a longer rest than filter, so your brew method sets the date. Each bag
-          also shows a best-before date, the end of its best window.
+          Freshly roasted coffee is still giving off carbon dioxide, and brewed too soon it tastes sharp and uneven. Each bag carries its roast date and a
+          ready-from date; espresso needs a longer rest than filter, so your brew method sets the date. Each bag also shows a best-before date, the end of its
+          best window.
         </p>
       </section>
     </>

@@ -40,16 +40,17 @@ export function AcceptInvitationForm({ token, invitation, onJoined }: AcceptInvi
 
   return (
     <form noValidate onSubmit={(event) => void submit(event)} className="grid gap-5">
-      {formError ?? errors.token?.message ? <FormAlert>{formError ?? errors.token?.message}</FormAlert> : null}
-      <TextField label="E-mail" type="email" autoComplete="username" value={invitation.email} readOnly hint="The invitation was sent here; you will sign in with it." />
-      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
-      <PasswordField
-        label="Password"
-        autoComplete="new-password"
-        hint={<NewPasswordHint />}
-        error={errors.password?.message}
-        {...form.register('password')}
+      {(formError ?? errors.token?.message) ? <FormAlert>{formError ?? errors.token?.message}</FormAlert> : null}
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        value={invitation.email}
+        readOnly
+        hint="The invitation was sent here; you will sign in with it."
       />
+      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
+      <PasswordField label="Password" autoComplete="new-password" hint={<NewPasswordHint />} error={errors.password?.message} {...form.register('password')} />
       <Button type="submit" disabled={form.formState.isSubmitting}>
         {form.formState.isSubmitting ? 'Joining…' : 'Join the team'}
       </Button>

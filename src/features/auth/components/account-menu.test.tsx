@@ -35,7 +35,11 @@ describe('the header’s signed-in state', () => {
     fireEvent.click(button);
     expect(button.getAttribute('aria-expanded')).toBe('true');
     expect(panel.hidden).toBe(false);
-    expect(within(panel).getAllByRole('link').map((link) => link.getAttribute('href'))).toEqual(['/account', '/account/profile', '/account/addresses']);
+    expect(
+      within(panel)
+        .getAllByRole('link')
+        .map((link) => link.getAttribute('href')),
+    ).toEqual(['/account', '/account/profile', '/account/addresses']);
     expect(within(panel).getByText('ines.marlow@example.test')).toBeTruthy();
 
     const firstLink = within(panel).getAllByRole('link')[0] as HTMLElement;

@@ -41,10 +41,7 @@ export function AccountMenu({ tone = 'shop' }: { tone?: HeaderTone }) {
   const comesBack = !noReturnPaths.includes(location.pathname);
   const href = comesBack ? paths.signIn.getHref(`${location.pathname}${location.search}`) : paths.signIn.getHref();
   return (
-    <NavLink
-      to={href}
-      className={({ isActive }) => clsx(triggerBase, isActive ? triggerTones[tone].active : triggerTones[tone].idle)}
-    >
+    <NavLink to={href} className={({ isActive }) => clsx(triggerBase, isActive ? triggerTones[tone].active : triggerTones[tone].idle)}>
       <LogIn aria-hidden="true" className="size-5" />
       Sign in
     </NavLink>

@@ -70,8 +70,7 @@ function LinkSentNotice({ email, onSendAnother }: { email: string; onSendAnother
         Check your e-mail
       </h2>
       <p className="mt-2">
-        If an account uses <strong className="break-all">{email}</strong>, a link to choose a new password is on its way. The link works
-        once, for 30 minutes.
+        If an account uses <strong className="break-all">{email}</strong>, a link to choose a new password is on its way. The link works once, for 30 minutes.
       </p>
       <p className="mt-2 text-small text-ink-muted">Nothing after a few minutes? Check the spam folder, or ask again.</p>
       <p className="mt-4 flex flex-wrap gap-x-5 gap-y-2">

@@ -4,8 +4,8 @@ import { PASSWORD_MIN_LENGTH, PASSWORD_SUGGESTED_LENGTH } from '@shared/schemas/
 export function NewPasswordHint() {
   return (
     <>
-      At least {PASSWORD_MIN_LENGTH} characters. {PASSWORD_SUGGESTED_LENGTH} or more is better: a few unrelated words make a strong
-      password you can remember. Pasting from a password manager works.
+      At least {PASSWORD_MIN_LENGTH} characters. {PASSWORD_SUGGESTED_LENGTH} or more is better: a few unrelated words make a strong password you can remember.
+      Pasting from a password manager works.
     </>
   );
 }

@@ -36,12 +36,7 @@ export function PasswordChangeForm() {
   return (
     <form noValidate onSubmit={(event) => void submit(event)} className="grid gap-4">
       {outcome ? <FormAlert tone={outcome.tone}>{outcome.message}</FormAlert> : null}
-      <PasswordField
-        label="Current password"
-        autoComplete="current-password"
-        error={errors.currentPassword?.message}
-        {...form.register('currentPassword')}
-      />
+      <PasswordField label="Current password" autoComplete="current-password" error={errors.currentPassword?.message} {...form.register('currentPassword')} />
       <PasswordField
         label="New password"
         autoComplete="new-password"

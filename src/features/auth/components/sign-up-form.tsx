@@ -45,13 +45,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
         error={errors.email?.message}
         {...form.register('email')}
       />
-      <PasswordField
-        label="Password"
-        autoComplete="new-password"
-        hint={<NewPasswordHint />}
-        error={errors.password?.message}
-        {...form.register('password')}
-      />
+      <PasswordField label="Password" autoComplete="new-password" hint={<NewPasswordHint />} error={errors.password?.message} {...form.register('password')} />
       <Button type="submit" disabled={form.formState.isSubmitting}>
         {form.formState.isSubmitting ? 'Creating your account…' : 'Create account'}
       </Button>

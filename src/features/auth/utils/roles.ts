@@ -6,4 +6,3 @@ export const roasteryRoles: readonly Role[] = ['staff', 'owner'];
 export const ownerRoles: readonly Role[] = ['owner'];
 /** Every signed-in person: customers, staff and the owner all have an account area. */
 export const everyRole: readonly Role[] = ['customer', 'staff', 'owner'];
-

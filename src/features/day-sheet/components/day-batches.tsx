@@ -7,7 +7,6 @@ import { formatTime } from '@/lib/dates';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { formatExactGrams, formatLossPct, formatMinutesSeconds } from '../utils/roast-day-format';
 
-
 /**
  * The batches recorded for the day, each with its loss, its flag and a way to trace it. Times read
  * in `timeZone`, the shop's, when known.
@@ -21,9 +20,7 @@ export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?:
         <TableHead>
           <tr>
             {['Recorded', 'Lot', 'Level', 'Green in', 'Roasted out', 'Loss', 'Times', 'Operator'].map((heading) => (
-              <TableHeader key={heading}>
-                {heading}
-              </TableHeader>
+              <TableHeader key={heading}>{heading}</TableHeader>
             ))}
             <TableHeader className="print:hidden">
               <span className="sr-only">Trace</span>
@@ -39,22 +36,22 @@ export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?:
                 <span className="block text-small font-normal text-ink-muted print:text-black">{batch.lotCode}</span>
               </TableRowHeader>
               <TableCell>{roastLevelLabels[batch.roastLevel]}</TableCell>
-              <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(batch.greenGramsIn)}</TableCell>
-              <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(batch.roastedGramsOut)}</TableCell>
+              <TableCell align="right" className="whitespace-nowrap">
+                {formatExactGrams(batch.greenGramsIn)}
+              </TableCell>
+              <TableCell align="right" className="whitespace-nowrap">
+                {formatExactGrams(batch.roastedGramsOut)}
+              </TableCell>
               <TableCell align="right" className="whitespace-nowrap">
                 {formatLossPct(batch.lossPct)}
-                <span className="block">
-                  {batch.withinExpected ? <Badge tone="ok">Within expected</Badge> : <Badge tone="alert">Outside expected</Badge>}
-                </span>
+                <span className="block">{batch.withinExpected ? <Badge tone="ok">Within expected</Badge> : <Badge tone="alert">Outside expected</Badge>}</span>
               </TableCell>
               <TableCell>
                 {batch.totalSeconds === null ? '—' : `${formatMinutesSeconds(batch.totalSeconds)} total`}
                 {batch.firstCrackSeconds === null ? null : (
                   <span className="block text-small">first crack {formatMinutesSeconds(batch.firstCrackSeconds)}</span>
                 )}
-                {batch.developmentTimeRatio === null ? null : (
-                  <span className="block text-small">DTR {formatLossPct(batch.developmentTimeRatio)}</span>
-                )}
+                {batch.developmentTimeRatio === null ? null : <span className="block text-small">DTR {formatLossPct(batch.developmentTimeRatio)}</span>}
               </TableCell>
               <TableCell>
                 {batch.operatorName ?? '—'}
@@ -62,7 +59,11 @@ export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?:
               </TableCell>
               <TableCell className="print:hidden">
                 <Link to={paths.roastery.batch.getHref(batch.id)} className="font-semibold text-leaf underline">
-                  Trace<span className="sr-only"> the {formatExactGrams(batch.greenGramsIn)} batch of {batch.lotName}</span>
+                  Trace
+                  <span className="sr-only">
+                    {' '}
+                    the {formatExactGrams(batch.greenGramsIn)} batch of {batch.lotName}
+                  </span>
                 </Link>
               </TableCell>
             </tr>

@@ -68,14 +68,7 @@ export function DaySheetTabs({ selected, onSelect, panels }: DaySheetTabsProps) 
         })}
       </div>
       {daySheetTabs.map((tab) => (
-        <div
-          key={tab}
-          role="tabpanel"
-          id={`day-sheet-panel-${tab}`}
-          aria-labelledby={`day-sheet-tab-${tab}`}
-          hidden={tab !== selected}
-          tabIndex={0}
-        >
+        <div key={tab} role="tabpanel" id={`day-sheet-panel-${tab}`} aria-labelledby={`day-sheet-tab-${tab}`} hidden={tab !== selected} tabIndex={0}>
           {tab === selected ? panels[tab] : null}
         </div>
       ))}

@@ -141,12 +141,23 @@ export function RecordBatchForm({ line, suggestedGreenGrams }: { line: BatchLine
   });
 
   return (
-    <form noValidate onSubmit={(event) => void submit(event)} aria-label={`Record a batch of ${line.lotName}, ${roastLevelLabels[line.roastLevel]}`} className="grid gap-4">
+    <form
+      noValidate
+      onSubmit={(event) => void submit(event)}
+      aria-label={`Record a batch of ${line.lotName}, ${roastLevelLabels[line.roastLevel]}`}
+      className="grid gap-4"
+    >
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       {answer ? <ServerAnswer batch={answer} level={line.roastLevel} /> : null}
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <TextField label="Green in (g)" inputMode="numeric" autoComplete="off" error={errors.greenGramsIn?.message} {...form.register('greenGramsIn')} />
-        <TextField label="Roasted out (g)" inputMode="numeric" autoComplete="off" error={errors.roastedGramsOut?.message} {...form.register('roastedGramsOut')} />
+        <TextField
+          label="Roasted out (g)"
+          inputMode="numeric"
+          autoComplete="off"
+          error={errors.roastedGramsOut?.message}
+          {...form.register('roastedGramsOut')}
+        />
         <TextField
           label="Total time (mm:ss)"
           hint="Optional"

@@ -42,16 +42,16 @@ export function RoastDayCautions() {
       <div className="px-5 pb-5 text-ink">
         <ul className="list-disc space-y-2 pl-5">
           <li>
-            <strong>Chaff fires.</strong> Chaff builds up in the chaff collector, cooling tray and ducting and burns easily. Empty and clean
-            them on the schedule your roaster&rsquo;s maker and installer set, and never leave a running roaster unattended.
+            <strong>Chaff fires.</strong> Chaff builds up in the chaff collector, cooling tray and ducting and burns easily. Empty and clean them on the
+            schedule your roaster&rsquo;s maker and installer set, and never leave a running roaster unattended.
           </li>
           <li>
-            <strong>Carbon monoxide and smoke.</strong> A roaster gives off smoke and carbon monoxide, and freshly roasted coffee keeps
-            giving off carbon monoxide as it rests. Keep the exhaust running as installed and the room ventilated.
+            <strong>Carbon monoxide and smoke.</strong> A roaster gives off smoke and carbon monoxide, and freshly roasted coffee keeps giving off carbon
+            monoxide as it rests. Keep the exhaust running as installed and the room ventilated.
           </li>
           <li>
-            <strong>Air quality and gas appliances.</strong> Exhaust, afterburners, gas lines and burners are governed by local
-            air-quality, fire and building codes; installing, venting and servicing them is work for licensed installers.
+            <strong>Air quality and gas appliances.</strong> Exhaust, afterburners, gas lines and burners are governed by local air-quality, fire and building
+            codes; installing, venting and servicing them is work for licensed installers.
           </li>
         </ul>
         <p className="mt-3 text-small text-ink-muted">

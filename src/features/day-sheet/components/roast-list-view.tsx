@@ -11,7 +11,6 @@ import { roastListPath, roastListPdfPath } from '../api/get-roast-list';
 import { formatExactGrams, formatLossPct } from '../utils/roast-day-format';
 import { RecordBatchForm } from './record-batch-form';
 
-
 /** "2 × 4,200 g" when the loads are equal, else each load. */
 function describeLoads(batches: RoastListLine['batches']): string {
   if (batches.length === 0) return '—';
@@ -35,13 +34,19 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
           <span className="block text-small font-normal text-ink-muted print:text-black">{line.lotCode}</span>
         </TableRowHeader>
         <TableCell>{roastLevelLabels[line.roastLevel]}</TableCell>
-        <TableCell align="right" className="whitespace-nowrap">{line.bags}</TableCell>
-        <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(line.roastedGrams)}</TableCell>
+        <TableCell align="right" className="whitespace-nowrap">
+          {line.bags}
+        </TableCell>
+        <TableCell align="right" className="whitespace-nowrap">
+          {formatExactGrams(line.roastedGrams)}
+        </TableCell>
         <TableCell align="right" className="whitespace-nowrap">
           {formatLossPct(line.lossPct)}
           <span className="block text-small text-ink-muted print:text-black">{lossSourceLabels[line.lossSource]}</span>
         </TableCell>
-        <TableCell align="right" className="whitespace-nowrap font-semibold">{formatExactGrams(line.greenGrams)}</TableCell>
+        <TableCell align="right" className="whitespace-nowrap font-semibold">
+          {formatExactGrams(line.greenGrams)}
+        </TableCell>
         <TableCell>
           {describeLoads(line.batches)}
           {line.floorProposal ? (
@@ -60,12 +65,16 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
         </TableCell>
         <TableCell>
           {done ? 'Done' : describeLoads(line.toRoast.batches)}
-          {done ? null : (
-            <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>
-          )}
+          {done ? null : <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>}
         </TableCell>
         <TableCell className="print:hidden">
-          <Button variant="secondary" className="whitespace-nowrap" aria-expanded={recording} aria-controls={formRowId} onClick={() => setRecording((open) => !open)}>
+          <Button
+            variant="secondary"
+            className="whitespace-nowrap"
+            aria-expanded={recording}
+            aria-controls={formRowId}
+            onClick={() => setRecording((open) => !open)}
+          >
             {recording ? 'Close' : 'Record batch'}
             <span className="sr-only">
               {' '}
@@ -77,7 +86,10 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
       <tr id={formRowId} hidden={!recording} className="print:hidden">
         <TableCell colSpan={10} className="bg-paper py-4">
           {recording ? (
-            <RecordBatchForm line={{ roastDate: date, lotCode: line.lotCode, lotName: line.lotName, roastLevel: line.roastLevel }} suggestedGreenGrams={nextLoad} />
+            <RecordBatchForm
+              line={{ roastDate: date, lotCode: line.lotCode, lotName: line.lotName, roastLevel: line.roastLevel }}
+              suggestedGreenGrams={nextLoad}
+            />
           ) : null}
         </TableCell>
       </tr>
@@ -200,8 +212,12 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
                         {pull.lotName}
                         <span className="block text-small font-normal text-ink-muted print:text-black">{pull.lotCode}</span>
                       </TableRowHeader>
-                      <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(pull.greenGrams)}</TableCell>
-                      <TableCell align="right" className="whitespace-nowrap">{formatExactGrams(pull.stockGrams)}</TableCell>
+                      <TableCell align="right" className="whitespace-nowrap">
+                        {formatExactGrams(pull.greenGrams)}
+                      </TableCell>
+                      <TableCell align="right" className="whitespace-nowrap">
+                        {formatExactGrams(pull.stockGrams)}
+                      </TableCell>
                       <TableCell align="right" className={clsx('whitespace-nowrap', pull.shortfallGrams > 0 && 'font-semibold text-alert print:text-black')}>
                         {pull.shortfallGrams > 0 ? formatExactGrams(pull.shortfallGrams) : 'None'}
                       </TableCell>

@@ -16,7 +16,6 @@ export function byUrgency(a: GreenStockItem, b: GreenStockItem): number {
   return a.stockGrams - b.stockGrams || a.code.localeCompare(b.code);
 }
 
-
 export function GreenStockTable({ items, windowDays }: { items: GreenStockItem[]; windowDays: number }) {
   const rows = [...items].sort(byUrgency);
   return (
@@ -25,21 +24,15 @@ export function GreenStockTable({ items, windowDays }: { items: GreenStockItem[]
         <caption className="sr-only">Green stock by lot: lots to reorder first, then the fewest days of cover</caption>
         <TableHead>
           <tr>
-            <TableHeader className="whitespace-nowrap">
-              Lot
-            </TableHeader>
+            <TableHeader className="whitespace-nowrap">Lot</TableHeader>
             <TableHeader align="right" className="whitespace-nowrap">
               On hand
             </TableHeader>
             <TableHeader align="right" className="whitespace-nowrap">
               Reorder point
             </TableHeader>
-            <TableHeader className="whitespace-nowrap">
-              Days of cover
-            </TableHeader>
-            <TableHeader className="whitespace-nowrap">
-              Green Lots
-            </TableHeader>
+            <TableHeader className="whitespace-nowrap">Days of cover</TableHeader>
+            <TableHeader className="whitespace-nowrap">Green Lots</TableHeader>
           </tr>
         </TableHead>
         <TableBody>

@@ -85,7 +85,12 @@ export function LotFields({ form, isNew }: { form: LotForm; isNew: boolean }) {
             </option>
           ))}
         </SelectField>
-        <TextField label="Crop year" inputMode="numeric" error={error('cropYear', 'Crop year', 'Enter a year, e.g. 2025.')} {...register('cropYear', { setValueAs: numberFromText })} />
+        <TextField
+          label="Crop year"
+          inputMode="numeric"
+          error={error('cropYear', 'Crop year', 'Enter a year, e.g. 2025.')}
+          {...register('cropYear', { setValueAs: numberFromText })}
+        />
       </Group>
 
       <Group legend="Green coffee measures" className="sm:grid-cols-2 lg:grid-cols-3">
@@ -109,7 +114,12 @@ export function LotFields({ form, isNew }: { form: LotForm; isNew: boolean }) {
           error={error('densityGPerL', 'Density')}
           {...register('densityGPerL', { setValueAs: numberOrNullFromText })}
         />
-        <TextField label="Screen size" hint="e.g. 17/18. Leave empty if not graded." error={error('screenSize', 'Screen size')} {...register('screenSize', { setValueAs: textOrNull })} />
+        <TextField
+          label="Screen size"
+          hint="e.g. 17/18. Leave empty if not graded."
+          error={error('screenSize', 'Screen size')}
+          {...register('screenSize', { setValueAs: textOrNull })}
+        />
         <TextField
           label="Cupping score"
           hint="0 to 100. Leave empty if not cupped."

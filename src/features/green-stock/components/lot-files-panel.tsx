@@ -110,7 +110,13 @@ export function LotFilesPanel({ lot }: { lot: LotDetail }) {
           <ul aria-label="Photos of this lot" className="grid grid-cols-2 gap-3">
             {lot.photos.map((url, index) => (
               <li key={url} className="grid gap-2">
-                <img src={url} alt={`Photo ${index + 1} of ${lot.name}`} width={320} height={240} className="aspect-[4/3] w-full rounded-control bg-paper-shade object-cover" />
+                <img
+                  src={url}
+                  alt={`Photo ${index + 1} of ${lot.name}`}
+                  width={320}
+                  height={240}
+                  className="aspect-[4/3] w-full rounded-control bg-paper-shade object-cover"
+                />
                 <Button variant="secondary" disabled={deletePhoto.isPending} onClick={() => void remove(url, index + 1)}>
                   <Trash2 aria-hidden="true" className="size-4" />
                   Delete photo {index + 1}

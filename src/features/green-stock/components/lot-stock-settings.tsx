@@ -64,16 +64,27 @@ function ReorderPointForm({ item }: { item: GreenStockItem }) {
     try {
       const saved = await updateLot.mutateAsync({ code: item.code, patch: { reorderPointGrams } });
       form.reset({ reorderPointGrams: saved.reorderPointGrams });
-      setMessage({ tone: 'status', text: saved.reorderPointGrams > 0 ? `Reorder point set to ${formatGramsAndPounds(saved.reorderPointGrams)}.` : 'Reorder point removed.' });
+      setMessage({
+        tone: 'status',
+        text: saved.reorderPointGrams > 0 ? `Reorder point set to ${formatGramsAndPounds(saved.reorderPointGrams)}.` : 'Reorder point removed.',
+      });
     } catch (error) {
       const left = applyServerErrors(error, form.setError, ['reorderPointGrams']);
       if (left) setMessage({ tone: 'alert', text: left });
     }
   });
 
-  const hint = typeof grams === 'number' && Number.isFinite(grams) && grams > 0 ? `Flag the lot at or below this. That is ${formatPounds(grams)}.` : 'Flag the lot at or below this; 0 for none.';
+  const hint =
+    typeof grams === 'number' && Number.isFinite(grams) && grams > 0
+      ? `Flag the lot at or below this. That is ${formatPounds(grams)}.`
+      : 'Flag the lot at or below this; 0 for none.';
   return (
-    <form noValidate aria-label="Reorder point" onSubmit={(event) => void submit(event)} className="grid content-start gap-3 rounded-card border border-rule bg-sheet p-4">
+    <form
+      noValidate
+      aria-label="Reorder point"
+      onSubmit={(event) => void submit(event)}
+      className="grid content-start gap-3 rounded-card border border-rule bg-sheet p-4"
+    >
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <TextField
         label="Reorder point (g)"
@@ -108,9 +119,7 @@ function ListingToggle({ item }: { item: GreenStockItem }) {
         <span className="text-small font-semibold">Green Lots</span>
         {item.isListed ? <Badge tone="ok">Listed</Badge> : <Badge>Not listed</Badge>}
       </p>
-      <p className="text-small text-ink-muted">
-        {item.isListed ? 'Customers can find and buy this lot.' : 'Hidden from customers; staff still see it here.'}
-      </p>
+      <p className="text-small text-ink-muted">{item.isListed ? 'Customers can find and buy this lot.' : 'Hidden from customers; staff still see it here.'}</p>
       {failure ? (
         <p role="alert" className="text-small font-semibold text-alert">
           {failure}

@@ -93,7 +93,10 @@ function ChangeField({
 
 /** Records an arrival, a sample, a loss or a count correction, with a note. */
 export function StockAdjustmentForm({ code }: { code: string }) {
-  const form = useForm<AdjustmentValues, unknown, z.output<typeof stockAdjustmentSchema>>({ resolver: zodResolver(stockAdjustmentSchema), defaultValues: blank });
+  const form = useForm<AdjustmentValues, unknown, z.output<typeof stockAdjustmentSchema>>({
+    resolver: zodResolver(stockAdjustmentSchema),
+    defaultValues: blank,
+  });
   const adjust = useAdjustStock();
   const [message, setMessage] = useState<{ tone: 'alert' | 'status'; text: string }>();
   const [resetCount, setResetCount] = useState(0);
@@ -149,7 +152,13 @@ export function StockAdjustmentForm({ code }: { code: string }) {
           )}
         />
       </div>
-      <TextField label="Note" hint="Optional: the delivery, who took the sample, what was found." maxLength={500} error={fieldErrorText(errors.note, 'The note')} {...form.register('note')} />
+      <TextField
+        label="Note"
+        hint="Optional: the delivery, who took the sample, what was found."
+        maxLength={500}
+        error={fieldErrorText(errors.note, 'The note')}
+        {...form.register('note')}
+      />
       <div>
         <Button type="submit" disabled={form.formState.isSubmitting}>
           {form.formState.isSubmitting ? 'Recording…' : 'Record the change'}

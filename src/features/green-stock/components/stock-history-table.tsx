@@ -10,7 +10,6 @@ import { useStockMovements } from '../api/stock';
 import { movementReasonLabels } from '../utils/stock-labels';
 import { formatGramsChange, formatPounds } from '../utils/weights';
 
-
 /** Every stock movement of the lot, newest first: by hand, sales, roasts and refunds. */
 export function StockHistoryTable({ code }: { code: string }) {
   const movementsQuery = useStockMovements(code);
@@ -39,29 +38,17 @@ export function StockHistoryTable({ code }: { code: string }) {
         </caption>
         <TableHead>
           <tr>
-            <TableHeader>
-              When
-            </TableHeader>
-            <TableHeader align="right">
-              Change
-            </TableHeader>
-            <TableHeader>
-              Reason
-            </TableHeader>
-            <TableHeader>
-              Note
-            </TableHeader>
-            <TableHeader>
-              By
-            </TableHeader>
+            <TableHeader>When</TableHeader>
+            <TableHeader align="right">Change</TableHeader>
+            <TableHeader>Reason</TableHeader>
+            <TableHeader>Note</TableHeader>
+            <TableHeader>By</TableHeader>
           </tr>
         </TableHead>
         <TableBody>
           {movements.map((movement) => (
             <tr key={movement.id}>
-              <TableRowHeader className="whitespace-nowrap">
-                {formatInstant(movement.createdAt)}
-              </TableRowHeader>
+              <TableRowHeader className="whitespace-nowrap">{formatInstant(movement.createdAt)}</TableRowHeader>
               <TableCell align="right" className={clsx('whitespace-nowrap', movement.deltaGrams < 0 ? 'text-alert' : 'text-ok')}>
                 {formatGramsChange(movement.deltaGrams)}
                 <span className="block text-caption text-ink-muted">{formatPounds(Math.abs(movement.deltaGrams))}</span>

@@ -1,6 +1,11 @@
 /** What each kind of lot file may be: the server checks the bytes again, this only saves a wasted upload. */
 export const lotFileRules = {
-  photo: { types: ['image/jpeg', 'image/png', 'image/webp'], extensions: ['.jpg', '.jpeg', '.png', '.webp'], maxBytes: 5 * 1024 * 1024, described: 'a JPEG, PNG or WebP image' },
+  photo: {
+    types: ['image/jpeg', 'image/png', 'image/webp'],
+    extensions: ['.jpg', '.jpeg', '.png', '.webp'],
+    maxBytes: 5 * 1024 * 1024,
+    described: 'a JPEG, PNG or WebP image',
+  },
   specSheet: { types: ['application/pdf'], extensions: ['.pdf'], maxBytes: 10 * 1024 * 1024, described: 'a PDF' },
 } as const;
 export type LotFileKind = keyof typeof lotFileRules;

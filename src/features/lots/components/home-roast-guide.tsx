@@ -113,20 +113,15 @@ export function HomeRoastGuide({ lotCode, size, unit, device, onDeviceChange, le
               <caption className="text-left text-h3 font-heading font-semibold">Time after first crack</caption>
               <TableHead>
                 <tr className="text-small text-ink-muted">
-                  <TableHeader>
-                    Roast level
-                  </TableHeader>
-                  <TableHeader>
-                    Keep roasting
-                  </TableHeader>
+                  <TableHeader>Roast level</TableHeader>
+                  <TableHeader>Keep roasting</TableHeader>
                 </tr>
               </TableHead>
               <TableBody>
                 {guide.levels.map((each) => (
                   <tr key={each.level} className={clsx(each.level === guide.level && 'bg-leaf-wash')}>
                     <TableRowHeader className="font-semibold">
-                      {roastLevelLabels[each.level]}{' '}
-                      {each.suggested ? <Badge tone="ok">Suggested for this lot</Badge> : null}
+                      {roastLevelLabels[each.level]} {each.suggested ? <Badge tone="ok">Suggested for this lot</Badge> : null}
                     </TableRowHeader>
                     <TableCell>{formatSeconds(each.afterFirstCrackSeconds)}</TableCell>
                   </tr>

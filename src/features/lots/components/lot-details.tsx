@@ -100,9 +100,7 @@ export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: React
           {lot.screenSize !== null ? <Descriptor term="Screen size">{lot.screenSize}</Descriptor> : null}
           {lot.cuppingScore !== null ? <Descriptor term="Cupping score">{formatScore(lot.cuppingScore)}</Descriptor> : null}
           <Descriptor term="Suggested roast level">{roastLevelLabels[lot.suggestedLevel]}</Descriptor>
-          <Descriptor term="Roast levels that suit it">
-            {lot.allowedLevels.map((level) => roastLevelLabels[level]).join(', ')}
-          </Descriptor>
+          <Descriptor term="Roast levels that suit it">{lot.allowedLevels.map((level) => roastLevelLabels[level]).join(', ')}</Descriptor>
         </dl>
       </section>
     </article>

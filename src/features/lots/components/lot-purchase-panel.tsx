@@ -117,8 +117,7 @@ export function LotPurchasePanel({ lot, size, onSizeChange, unit, onAddToCart }:
           />
         </div>
         <p className="pb-2" aria-live="polite">
-          <span className="font-semibold">{money(bagCents * wanted)}</span>{' '}
-          <span className="text-small text-ink-muted">({pricePerKg(pricePerKgCents)})</span>
+          <span className="font-semibold">{money(bagCents * wanted)}</span> <span className="text-small text-ink-muted">({pricePerKg(pricePerKgCents)})</span>
         </p>
       </div>
       {!quantityValid ? (

@@ -42,7 +42,8 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
                 <p className="text-small text-ink-muted">{itemDescription(item)}</p>
               </div>
               <p className="text-small">
-                {item.quantity} × {formatMoney(item.unitPriceCents, order.currency)} = <span className="font-semibold">{formatMoney(item.lineTotalCents, order.currency)}</span>
+                {item.quantity} × {formatMoney(item.unitPriceCents, order.currency)} ={' '}
+                <span className="font-semibold">{formatMoney(item.lineTotalCents, order.currency)}</span>
               </p>
             </li>
           ))}
@@ -100,7 +101,9 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
             </dl>
             {order.readyOnArrival !== null ? (
               <p className="mt-2 text-small">
-                {order.readyOnArrival ? 'Ready to brew on arrival: it will have rested by the time it lands.' : 'It can arrive before it is ready: brew it from its ready-from date.'}
+                {order.readyOnArrival
+                  ? 'Ready to brew on arrival: it will have rested by the time it lands.'
+                  : 'It can arrive before it is ready: brew it from its ready-from date.'}
               </p>
             ) : null}
           </section>

@@ -39,9 +39,9 @@ export function PaymentStatusPanel({ order, onCheckAgain }: PaymentStatusPanelPr
           {takingLong ? (
             <>
               <p className="text-small">
-                This is taking longer than usual: the payment has not been confirmed to us yet. This page keeps checking by itself,
-                and the order-confirmed e-mail follows as soon as it is. If you paid, your bags stay held for you; if you left the
-                payment page without paying, nothing has been charged.
+                This is taking longer than usual: the payment has not been confirmed to us yet. This page keeps checking by itself, and the order-confirmed
+                e-mail follows as soon as it is. If you paid, your bags stay held for you; if you left the payment page without paying, nothing has been
+                charged.
               </p>
               <Button variant="secondary" className="mt-3" onClick={onCheckAgain}>
                 Check again now
@@ -49,8 +49,8 @@ export function PaymentStatusPanel({ order, onCheckAgain }: PaymentStatusPanelPr
             </>
           ) : (
             <p className="text-small text-ink-muted">
-              This usually takes a few seconds. Keep this page open; it updates by itself. If you left the payment page without
-              paying, nothing has been charged.
+              This usually takes a few seconds. Keep this page open; it updates by itself. If you left the payment page without paying, nothing has been
+              charged.
             </p>
           )}
         </div>

@@ -18,7 +18,6 @@ import { useMarkPacked } from '../api/mark-packed';
 import { canPack, packStatusOf } from '../utils/pack-status';
 import { ShipOrderDialog } from './ship-order-dialog';
 
-
 function day(date: string | null): string {
   return date ? formatDayShort(date) : '—';
 }
@@ -31,9 +30,7 @@ function OrderBags({ order }: { order: PackOrder }) {
         <TableHead>
           <tr>
             {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
-              <TableHeader key={heading}>
-                {heading}
-              </TableHeader>
+              <TableHeader key={heading}>{heading}</TableHeader>
             ))}
           </tr>
         </TableHead>
@@ -82,9 +79,7 @@ function OrderParcels({ order }: { order: PackOrder }) {
   if (order.parcels.length === 0) return null;
   return (
     <div className="mt-3">
-      <h3 className="text-small font-semibold">
-        {order.parcels.length === 1 ? 'One parcel' : `${order.parcels.length} parcels`}
-      </h3>
+      <h3 className="text-small font-semibold">{order.parcels.length === 1 ? 'One parcel' : `${order.parcels.length} parcels`}</h3>
       <ul aria-label={`Parcels for ${order.customerName}`} className="mt-1 text-small">
         {order.parcels.map((parcel) => (
           <li key={parcel.parcelNumber}>
@@ -183,9 +178,7 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
           ))}
         </ul>
       )}
-      {shipping ? (
-        <ShipOrderDialog order={shipping} date={date} onClose={() => setShipping(undefined)} onShipped={setShipped} />
-      ) : null}
+      {shipping ? <ShipOrderDialog order={shipping} date={date} onClose={() => setShipping(undefined)} onShipped={setShipped} /> : null}
     </div>
   );
 }

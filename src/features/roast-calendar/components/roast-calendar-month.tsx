@@ -44,7 +44,13 @@ function DayCell({ day, isToday, isSelected, onChange }: { day: CalendarDay; isT
   const dayNumber = Number(day.date.slice(8));
   const state = day.open ? 'Roast day' : day.overridden ? 'Closed' : 'No roasting';
   return (
-    <td className={clsx('h-32 border border-rule p-2 align-top', day.open ? 'bg-sheet' : 'bg-paper-shade', isSelected && 'outline-3 -outline-offset-3 outline-focus')}>
+    <td
+      className={clsx(
+        'h-32 border border-rule p-2 align-top',
+        day.open ? 'bg-sheet' : 'bg-paper-shade',
+        isSelected && 'outline-3 -outline-offset-3 outline-focus',
+      )}
+    >
       <div className="flex items-baseline justify-between gap-1">
         <time dateTime={day.date} className={clsx('font-heading font-semibold', isToday && 'rounded-pill bg-ink px-1.5 text-paper')}>
           <span aria-hidden="true">{dayNumber}</span>
@@ -100,9 +106,7 @@ export function RoastCalendarMonth({ month, days, today, selected, onChangeDay }
               {week.map((date, index) => {
                 const day = date ? byDate.get(date) : undefined;
                 if (!date || !day) return <td key={date ?? `blank-${index}`} className="border border-rule bg-paper" />;
-                return (
-                  <DayCell key={date} day={day} isToday={date === today} isSelected={date === selected} onChange={() => onChangeDay(day)} />
-                );
+                return <DayCell key={date} day={day} isToday={date === today} isSelected={date === selected} onChange={() => onChangeDay(day)} />;
               })}
             </tr>
           ))}

@@ -41,8 +41,8 @@ function MovedSummary({ result }: { result: CalendarDayUpdateResponse }) {
     <FormAlert tone="status">
       {moved.length > 0 || movedDeliveries.length > 0 ? (
         <p className="font-semibold">
-          Saved {formatDayLongNoYear(result.date)}: {moved.length} {moved.length === 1 ? 'order' : 'orders'} and {movedDeliveries.length}{' '}
-          scheduled {movedDeliveries.length === 1 ? 'delivery' : 'deliveries'} moved; each customer is e-mailed the new dates.
+          Saved {formatDayLongNoYear(result.date)}: {moved.length} {moved.length === 1 ? 'order' : 'orders'} and {movedDeliveries.length} scheduled{' '}
+          {movedDeliveries.length === 1 ? 'delivery' : 'deliveries'} moved; each customer is e-mailed the new dates.
         </p>
       ) : (
         <p className="font-semibold">Saved {formatDayLongNoYear(result.date)}.</p>
@@ -170,17 +170,29 @@ export function RoastDayEditor({ day, onDone }: { day: CalendarDay; onDone: () =
           error={errors.capacityGrams?.message}
           {...form.register('capacityGrams')}
         />
-        <TextField label="Note" hint="Shown on the calendar, e.g. why the day is closed." autoComplete="off" error={errors.note?.message} {...form.register('note')} />
+        <TextField
+          label="Note"
+          hint="Shown on the calendar, e.g. why the day is closed."
+          autoComplete="off"
+          error={errors.note?.message}
+          {...form.register('note')}
+        />
 
         {confirming ? (
-          <div ref={confirmRef} tabIndex={-1} role="alertdialog" aria-labelledby="close-day-title" aria-describedby="close-day-text" className="rounded-control border border-caution/40 bg-caution-wash p-4">
+          <div
+            ref={confirmRef}
+            tabIndex={-1}
+            role="alertdialog"
+            aria-labelledby="close-day-title"
+            aria-describedby="close-day-text"
+            className="rounded-control border border-caution/40 bg-caution-wash p-4"
+          >
             <p id="close-day-title" className="font-semibold">
               Close roasting on {formatDayLongNoYear(day.date)}?
             </p>
             <p id="close-day-text" className="mt-1 text-small">
-              Its {day.ordersCount} {day.ordersCount === 1 ? 'order' : 'orders'} and any scheduled subscription deliveries move to the next
-              open roast day with room, their ship, ready-from and best-before dates are worked out again, and each customer gets an e-mail
-              with the new dates.
+              Its {day.ordersCount} {day.ordersCount === 1 ? 'order' : 'orders'} and any scheduled subscription deliveries move to the next open roast day with
+              room, their ship, ready-from and best-before dates are worked out again, and each customer gets an e-mail with the new dates.
             </p>
             <div className="mt-3 flex flex-wrap gap-2">
               <Button type="submit" disabled={form.formState.isSubmitting}>

@@ -5,4 +5,3 @@ const kilos = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
 export function formatLoad(value: number): string {
   return value < 1000 ? `${grams.format(value)} g` : `${kilos.format(value / 1000)} kg`;
 }
-

@@ -40,4 +40,3 @@ export function monthWeeks(month: string): (string | null)[][] {
   if (week.length > 0) weeks.push([...week, ...Array.from({ length: 7 - week.length }, () => null)]);
   return weeks;
 }
-

@@ -23,7 +23,17 @@ const oneOf =
   (value: string): T | undefined =>
     (values as readonly string[]).includes(value) ? (value as T) : undefined;
 
-function DateFilter({ label, value, error, onChange }: { label: string; value: string | undefined; error?: string; onChange: (value: string | undefined) => void }) {
+function DateFilter({
+  label,
+  value,
+  error,
+  onChange,
+}: {
+  label: string;
+  value: string | undefined;
+  error?: string;
+  onChange: (value: string | undefined) => void;
+}) {
   const id = useId();
   return (
     <Field id={id} label={label} error={error}>
@@ -46,7 +56,11 @@ export function OrderFiltersForm({ filters, onChange }: OrderFiltersFormProps) {
   return (
     <div className="rounded-card border border-rule bg-sheet p-4 sm:p-5">
       <form aria-label="Filter orders" onSubmit={(event) => event.preventDefault()} className="grid grid-cols-2 gap-x-3 gap-y-4 lg:grid-cols-6 lg:items-start">
-        <SelectField label="Status" value={filters.status ?? ''} onChange={(event) => onChange({ status: oneOf<OrderStatus>(orderStatuses)(event.target.value) })}>
+        <SelectField
+          label="Status"
+          value={filters.status ?? ''}
+          onChange={(event) => onChange({ status: oneOf<OrderStatus>(orderStatuses)(event.target.value) })}
+        >
           <option value="">Any status</option>
           {orderStatuses.map((status) => (
             <option key={status} value={status}>

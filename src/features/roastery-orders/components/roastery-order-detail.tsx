@@ -90,18 +90,10 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
             </caption>
             <TableHead>
               <tr className="border-b border-rule">
-                <TableHeader>
-                  Coffee
-                </TableHeader>
-                <TableHeader align="right">
-                  Quantity
-                </TableHeader>
-                <TableHeader align="right">
-                  Each
-                </TableHeader>
-                <TableHeader align="right">
-                  Line total
-                </TableHeader>
+                <TableHeader>Coffee</TableHeader>
+                <TableHeader align="right">Quantity</TableHeader>
+                <TableHeader align="right">Each</TableHeader>
+                <TableHeader align="right">Line total</TableHeader>
               </tr>
             </TableHead>
             <TableBody>
@@ -130,34 +122,44 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
                 <TableRowHeader colSpan={3} align="right" className="pt-3">
                   Bags
                 </TableRowHeader>
-                <TableCell align="right" className="pt-3">{formatMoney(order.subtotalCents, order.currency)}</TableCell>
+                <TableCell align="right" className="pt-3">
+                  {formatMoney(order.subtotalCents, order.currency)}
+                </TableCell>
               </tr>
               {order.discountCents > 0 ? (
                 <tr>
                   <TableRowHeader colSpan={3} align="right" className="pt-1">
                     {order.discountLabel ?? 'Discount'}
                   </TableRowHeader>
-                  <TableCell align="right" className="pt-1">−{formatMoney(order.discountCents, order.currency)}</TableCell>
+                  <TableCell align="right" className="pt-1">
+                    −{formatMoney(order.discountCents, order.currency)}
+                  </TableCell>
                 </tr>
               ) : null}
               <tr>
                 <TableRowHeader colSpan={3} align="right" className="pt-1">
                   Shipping
                 </TableRowHeader>
-                <TableCell align="right" className="pt-1">{formatMoney(order.shippingCents, order.currency)}</TableCell>
+                <TableCell align="right" className="pt-1">
+                  {formatMoney(order.shippingCents, order.currency)}
+                </TableCell>
               </tr>
               <tr>
                 <TableRowHeader colSpan={3} align="right" className="font-semibold">
                   Total ({order.currency.toUpperCase()})
                 </TableRowHeader>
-                <TableCell align="right" className="font-semibold">{formatMoney(order.totalCents, order.currency)}</TableCell>
+                <TableCell align="right" className="font-semibold">
+                  {formatMoney(order.totalCents, order.currency)}
+                </TableCell>
               </tr>
               {order.refundedCents > 0 ? (
                 <tr>
                   <TableRowHeader colSpan={3} align="right" className="pb-3">
                     Refunded
                   </TableRowHeader>
-                  <TableCell align="right" className="pb-3">−{formatMoney(order.refundedCents, order.currency)}</TableCell>
+                  <TableCell align="right" className="pb-3">
+                    −{formatMoney(order.refundedCents, order.currency)}
+                  </TableCell>
                 </tr>
               ) : null}
             </tfoot>

@@ -20,7 +20,6 @@ const sortedColumn: Record<OrderSort, { column: SortedColumn; direction: 'ascend
   status: { column: 'status', direction: 'ascending' },
 };
 
-
 export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; sort: OrderSort }) {
   const { money } = useShopMoney();
   const sorted = sortedColumn[sort];
@@ -32,15 +31,11 @@ export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; s
         <caption className="sr-only">Orders, {orderSortLabels[sort].toLowerCase()}</caption>
         <TableHead>
           <tr>
-            <TableHeader className="whitespace-nowrap">
-              Order
-            </TableHeader>
+            <TableHeader className="whitespace-nowrap">Order</TableHeader>
             <TableHeader className="whitespace-nowrap" aria-sort={ariaSort('placed')}>
               Placed
             </TableHeader>
-            <TableHeader className="whitespace-nowrap">
-              Customer
-            </TableHeader>
+            <TableHeader className="whitespace-nowrap">Customer</TableHeader>
             <TableHeader align="right" className="whitespace-nowrap">
               Bags
             </TableHeader>
@@ -53,9 +48,7 @@ export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; s
             <TableHeader className="whitespace-nowrap" aria-sort={ariaSort('roastDate')}>
               Roast date
             </TableHeader>
-            <TableHeader className="whitespace-nowrap">
-              Ship date
-            </TableHeader>
+            <TableHeader className="whitespace-nowrap">Ship date</TableHeader>
           </tr>
         </TableHead>
         <TableBody>

@@ -30,7 +30,9 @@ export const orderSortLabels: Record<OrderSort, string> = {
 };
 
 /** The order's money in one phrase: unpaid, paid, or how much went back. */
-export function paymentState(order: Pick<OrderDetail, 'status' | 'paidAt' | 'refundedCents' | 'totalCents'>): 'unpaid' | 'paid' | 'partly-refunded' | 'refunded' | 'cancelled-unpaid' {
+export function paymentState(
+  order: Pick<OrderDetail, 'status' | 'paidAt' | 'refundedCents' | 'totalCents'>,
+): 'unpaid' | 'paid' | 'partly-refunded' | 'refunded' | 'cancelled-unpaid' {
   if (order.paidAt === null) return order.status === 'cancelled' ? 'cancelled-unpaid' : 'unpaid';
   if (order.refundedCents >= order.totalCents) return 'refunded';
   if (order.refundedCents > 0) return 'partly-refunded';

@@ -56,10 +56,28 @@ export function RotationDayForm({ day, lots, range }: RotationDayFormProps) {
           {formatGrams(day.roastedGrams)} roasted
         </p>
       </div>
-      <p className="mt-1 text-small">{day.coffee ? <>Picked: <span className="font-semibold">{day.coffee}</span></> : 'No lot picked yet.'}</p>
-      <form noValidate aria-labelledby={headingId} onSubmit={(event) => void submit(event)} className="mt-3 grid gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+      <p className="mt-1 text-small">
+        {day.coffee ? (
+          <>
+            Picked: <span className="font-semibold">{day.coffee}</span>
+          </>
+        ) : (
+          'No lot picked yet.'
+        )}
+      </p>
+      <form
+        noValidate
+        aria-labelledby={headingId}
+        onSubmit={(event) => void submit(event)}
+        className="mt-3 grid gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-end"
+      >
         <div>
-          <SelectField label="Lot" aria-invalid={errors.lotCode ? true : undefined} aria-describedby={errors.lotCode ? `${headingId}-lot-error` : undefined} {...form.register('lotCode')}>
+          <SelectField
+            label="Lot"
+            aria-invalid={errors.lotCode ? true : undefined}
+            aria-describedby={errors.lotCode ? `${headingId}-lot-error` : undefined}
+            {...form.register('lotCode')}
+          >
             <option value="">Choose a lot</option>
             {lots.map((lot) => (
               <option key={lot.code} value={lot.code}>

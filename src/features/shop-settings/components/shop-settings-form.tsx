@@ -86,7 +86,14 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
       {saved ? <FormAlert tone="status">Settings saved.</FormAlert> : null}
 
       <Group title="Shop" description="Days and times are read in the shop’s time zone.">
-        <TextField label="Time zone" hint="An IANA name, e.g. America/Denver." autoComplete="off" spellCheck={false} error={errorAt('timeZone')} {...form.register('timeZone')} />
+        <TextField
+          label="Time zone"
+          hint="An IANA name, e.g. America/Denver."
+          autoComplete="off"
+          spellCheck={false}
+          error={errorAt('timeZone')}
+          {...form.register('timeZone')}
+        />
         <SelectField label="Currency" {...form.register('currency')}>
           {currencies.map((code) => (
             <option key={code} value={code}>
@@ -141,7 +148,10 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
         {numberField('overagePct', 'Overage (%)', 'Extra roasted weight planned per line.', '0.01')}
       </Group>
 
-      <Group title="Loss model" description="The roast loss planned for each level until a lot has enough batches of its own; batches outside the range are flagged.">
+      <Group
+        title="Loss model"
+        description="The roast loss planned for each level until a lot has enough batches of its own; batches outside the range are flagged."
+      >
         {numberField('lossModelMinBatches', 'Batches before a lot’s own loss is used')}
         {roastLevels.map((level) => (
           <fieldset key={level} className="sm:col-span-2 lg:col-span-3">

@@ -7,7 +7,6 @@ import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, subscr
 import { formatDayWithWeekday, formatInstantDate } from '@/lib/dates';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 
-
 /** A subscriber's subscription, where it ships, and every delivery with the order it became. */
 export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDetail }) {
   const status = subscriptionStatusLabels[subscriber.status];
@@ -80,9 +79,7 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
                   return (
                     <tr key={delivery.id}>
                       <TableCell>{delivery.sequence}</TableCell>
-                      <TableRowHeader className="font-semibold whitespace-nowrap">
-                        {formatDayWithWeekday(delivery.roastDate)}
-                      </TableRowHeader>
+                      <TableRowHeader className="font-semibold whitespace-nowrap">{formatDayWithWeekday(delivery.roastDate)}</TableRowHeader>
                       <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.shipDate)}</TableCell>
                       <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.readyFrom)}</TableCell>
                       <TableCell className="whitespace-nowrap">{formatDayWithWeekday(delivery.bestBefore)}</TableCell>

@@ -22,14 +22,23 @@ const sortLabels: Record<SubscriberSort, string> = {
 /** Each filter applies as soon as it changes and lives in the URL, so a filtered view can be shared. */
 export function SubscriberFiltersForm({ filters, lots, onChange }: SubscriberFiltersFormProps) {
   return (
-    <form role="search" aria-label="Filter subscribers" className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3 xl:grid-cols-6" onSubmit={(event) => event.preventDefault()}>
+    <form
+      role="search"
+      aria-label="Filter subscribers"
+      className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3 xl:grid-cols-6"
+      onSubmit={(event) => event.preventDefault()}
+    >
       <TextField
         label="Name or e-mail"
         type="search"
         defaultValue={filters.q ?? ''}
         onChange={(event) => onChange({ q: event.target.value.trim() || undefined, page: 1 })}
       />
-      <SelectField label="Status" value={filters.status ?? ''} onChange={(event) => onChange({ status: (event.target.value || undefined) as SubscriberFilters['status'], page: 1 })}>
+      <SelectField
+        label="Status"
+        value={filters.status ?? ''}
+        onChange={(event) => onChange({ status: (event.target.value || undefined) as SubscriberFilters['status'], page: 1 })}
+      >
         <option value="">All but unpaid</option>
         {subscriptionStatuses.map((status) => (
           <option key={status} value={status}>
@@ -37,7 +46,11 @@ export function SubscriberFiltersForm({ filters, lots, onChange }: SubscriberFil
           </option>
         ))}
       </SelectField>
-      <SelectField label="Roast level" value={filters.level ?? ''} onChange={(event) => onChange({ level: (event.target.value || undefined) as SubscriberFilters['level'], page: 1 })}>
+      <SelectField
+        label="Roast level"
+        value={filters.level ?? ''}
+        onChange={(event) => onChange({ level: (event.target.value || undefined) as SubscriberFilters['level'], page: 1 })}
+      >
         <option value="">Every level</option>
         {roastLevels.map((level) => (
           <option key={level} value={level}>

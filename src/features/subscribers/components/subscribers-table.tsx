@@ -23,9 +23,7 @@ type SubscribersTableProps = {
 export function SubscribersTable({ filters, onPageChange }: SubscribersTableProps) {
   const { money } = useShopMoney();
   const subscribersQuery = useSubscribers(filters);
-  const csvLink = (
-    <DownloadLink href={subscribersCsvHref(filters)}>Download these as CSV</DownloadLink>
-  );
+  const csvLink = <DownloadLink href={subscribersCsvHref(filters)}>Download these as CSV</DownloadLink>;
 
   if (subscribersQuery.isError) {
     return <ErrorState title="Subscribers could not load" error={subscribersQuery.error} onRetry={() => void subscribersQuery.refetch()} />;
@@ -55,7 +53,9 @@ export function SubscribersTable({ filters, onPageChange }: SubscribersTableProp
       </div>
       <TableFrame>
         <Table className="min-w-[48rem]">
-          <caption className="sr-only">Subscribers, page {page} of {pages}</caption>
+          <caption className="sr-only">
+            Subscribers, page {page} of {pages}
+          </caption>
           <TableHead>
             <tr>
               {['Customer', 'Coffee', 'Roast level', 'Each delivery', 'Cadence', 'Status', 'Next roast', 'Per delivery'].map((column) => (

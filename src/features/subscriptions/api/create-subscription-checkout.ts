@@ -1,9 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import {
-  subscriptionCheckoutResponseSchema,
-  type SubscriptionCheckoutRequest,
-  type SubscriptionCheckoutResponse,
-} from '@shared/schemas/subscriptions';
+import { subscriptionCheckoutResponseSchema, type SubscriptionCheckoutRequest, type SubscriptionCheckoutResponse } from '@shared/schemas/subscriptions';
 import { apiRequest } from '@/lib/api-client';
 
 /** Creates the subscription (not started until paid) and opens its payment page (`checkoutUrl`). */

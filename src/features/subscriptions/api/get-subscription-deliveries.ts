@@ -5,15 +5,7 @@ import { apiRequest } from '@/lib/api-client';
 /** How many deliveries Deliveries shows ahead. */
 export const DELIVERIES_SHOWN = 6;
 
-export function getSubscriptionDeliveries({
-  id,
-  count,
-  signal,
-}: {
-  id: string;
-  count: number;
-  signal?: AbortSignal;
-}): Promise<SubscriptionDeliveriesResponse> {
+export function getSubscriptionDeliveries({ id, count, signal }: { id: string; count: number; signal?: AbortSignal }): Promise<SubscriptionDeliveriesResponse> {
   return apiRequest(`/api/subscriptions/${encodeURIComponent(id)}/deliveries`, {
     schema: subscriptionDeliveriesResponseSchema,
     params: new URLSearchParams({ count: String(count) }),

@@ -14,8 +14,7 @@ export function ActivationStatusPanel({ subscription }: { subscription: Subscrip
         <div>
           <p className="font-semibold">Waiting for the payment to be confirmed…</p>
           <p className="text-small text-ink-muted">
-            This usually takes a few seconds. Keep this page open; it updates by itself. If you left the payment page without paying,
-            nothing has been charged.
+            This usually takes a few seconds. Keep this page open; it updates by itself. If you left the payment page without paying, nothing has been charged.
           </p>
         </div>
       </div>
@@ -26,8 +25,7 @@ export function ActivationStatusPanel({ subscription }: { subscription: Subscrip
   }
   return (
     <FormAlert tone="status">
-      <span className="font-semibold">Your subscription has started. Thank you!</span> A confirmation e-mail is on its way; your
-      deliveries are below.
+      <span className="font-semibold">Your subscription has started. Thank you!</span> A confirmation e-mail is on its way; your deliveries are below.
     </FormAlert>
   );
 }

@@ -8,12 +8,7 @@ import { FormAlert } from '@/components/ui/form-alert';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateSubscription } from '../api/update-subscription';
 import { describeChangeError } from '../utils/change-errors';
-import {
-  subscriptionChoiceKeys,
-  subscriptionChoiceSchema,
-  type SubscriptionChoice,
-  type SubscriptionChoiceFields,
-} from '../utils/subscription-form';
+import { subscriptionChoiceKeys, subscriptionChoiceSchema, type SubscriptionChoice, type SubscriptionChoiceFields } from '../utils/subscription-form';
 import { SubscriptionChoiceFieldset } from './subscription-choice-fields';
 
 type ChangeSubscriptionFormProps = {
@@ -67,9 +62,7 @@ export function ChangeSubscriptionForm({ subscription, allowedLevels, onDone, on
       <form noValidate aria-label="Change what each delivery brings" onSubmit={(event) => void submit(event)} className="grid gap-6">
         {formError ? <FormAlert>{formError}</FormAlert> : null}
         <SubscriptionChoiceFieldset allowedLevels={allowedLevels} idPrefix={`change-${subscription.id}`} />
-        <p className="text-small text-ink-muted">
-          A delivery already past its cutoff roasts as it is; the change reaches the next one.
-        </p>
+        <p className="text-small text-ink-muted">A delivery already past its cutoff roasts as it is; the change reaches the next one.</p>
         <div className="flex flex-wrap gap-3">
           <Button type="submit" disabled={form.formState.isSubmitting}>
             {form.formState.isSubmitting ? 'Saving…' : 'Save the changes'}

@@ -38,30 +38,14 @@ export function DeliverySchedule({ deliveries, caption, actions }: DeliverySched
         <caption className="sr-only">{caption}</caption>
         <TableHead>
           <tr>
-            <TableHeader>
-              Roasts
-            </TableHeader>
-            <TableHeader>
-              Ships
-            </TableHeader>
-            <TableHeader>
-              Arrives about
-            </TableHeader>
-            <TableHeader>
-              Ready from
-            </TableHeader>
-            <TableHeader>
-              Best before
-            </TableHeader>
-            <TableHeader>
-              Coffee
-            </TableHeader>
-            <TableHeader>
-              Brings
-            </TableHeader>
-            <TableHeader>
-              Status
-            </TableHeader>
+            <TableHeader>Roasts</TableHeader>
+            <TableHeader>Ships</TableHeader>
+            <TableHeader>Arrives about</TableHeader>
+            <TableHeader>Ready from</TableHeader>
+            <TableHeader>Best before</TableHeader>
+            <TableHeader>Coffee</TableHeader>
+            <TableHeader>Brings</TableHeader>
+            <TableHeader>Status</TableHeader>
             {actions ? (
               <TableHeader>
                 <span className="sr-only">Skip or undo</span>

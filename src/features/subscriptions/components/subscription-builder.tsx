@@ -77,7 +77,10 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
     chosenLot !== undefined &&
     chosenLot.code === watched.lotCode &&
     chosenLot.stockGrams <
-      deliveryGreenGrams({ roastLevel: watched.roastLevel ?? chosenLot.suggestedLevel, bagSize: watched.bagSize ?? '12oz', bagsPerDelivery: watched.bagsPerDelivery ?? 1 }, defaultShopSettings);
+      deliveryGreenGrams(
+        { roastLevel: watched.roastLevel ?? chosenLot.suggestedLevel, bagSize: watched.bagSize ?? '12oz', bagsPerDelivery: watched.bagsPerDelivery ?? 1 },
+        defaultShopSettings,
+      );
 
   const shippingHref = paths.subscribeShipping.getHref(new URLSearchParams(searchNow));
   const submit = form.handleSubmit(() => {

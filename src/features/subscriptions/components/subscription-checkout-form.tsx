@@ -73,8 +73,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
             {busy ? 'Opening the payment page…' : 'Continue to payment'}
           </Button>
           <p className="mt-2 text-small text-ink-muted">
-            You pay the first delivery on the next page; later ones are charged as each period starts. Nothing is charged until you
-            confirm there.
+            You pay the first delivery on the next page; later ones are charged as each period starts. Nothing is charged until you confirm there.
           </p>
         </div>
       </form>

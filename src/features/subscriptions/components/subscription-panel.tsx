@@ -32,8 +32,8 @@ function StatusNotice({ subscription }: { subscription: Subscription }) {
   if (subscription.status === 'past_due') {
     return (
       <FormAlert>
-        The last payment did not go through, so the next delivery is held. Once the card is charged it roasts on the next open
-        roast day; we have e-mailed you about it.
+        The last payment did not go through, so the next delivery is held. Once the card is charged it roasts on the next open roast day; we have e-mailed you
+        about it.
       </FormAlert>
     );
   }
@@ -43,8 +43,8 @@ function StatusNotice({ subscription }: { subscription: Subscription }) {
   if (subscription.cancelAtPeriodEnd && subscription.status !== 'cancelled') {
     return (
       <p className="text-small">
-        Cancelled at the end of the paid period{subscription.endsOn ? `, on ${formatDayWithWeekday(subscription.endsOn)}` : ''}. Deliveries
-        already paid for still roast and ship; nothing more is charged.
+        Cancelled at the end of the paid period{subscription.endsOn ? `, on ${formatDayWithWeekday(subscription.endsOn)}` : ''}. Deliveries already paid for
+        still roast and ship; nothing more is charged.
       </p>
     );
   }
@@ -140,9 +140,7 @@ export function SubscriptionPanel({ subscription, allowedLevels }: { subscriptio
             <Button
               variant="secondary"
               disabled={busy}
-              onClick={() =>
-                void run(() => skip.mutateAsync({ id: subscription.id, roastDate: nextSkippable.roastDate }))
-              }
+              onClick={() => void run(() => skip.mutateAsync({ id: subscription.id, roastDate: nextSkippable.roastDate }))}
             >
               Skip the delivery roasting {formatDayWithWeekday(nextSkippable.roastDate)}
             </Button>

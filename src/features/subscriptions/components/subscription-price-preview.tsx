@@ -50,7 +50,9 @@ export function SubscriptionPricePreview({ preview, updating, error, onRetry, ca
       <div>
         <h3 className="text-h3">Your first deliveries</h3>
         {firstCutoff ? (
-          <p className="mt-1 text-small text-ink-muted">If you pay before {formatInstantWithWeekday(firstCutoff)}; later, each date moves to the next roast day.</p>
+          <p className="mt-1 text-small text-ink-muted">
+            If you pay before {formatInstantWithWeekday(firstCutoff)}; later, each date moves to the next roast day.
+          </p>
         ) : null}
         <p className="mt-1 text-small">{shipPolicyCustomerNotes[preview.shipPolicy]}</p>
         <ol aria-label="First three deliveries" className="mt-3 grid gap-3">

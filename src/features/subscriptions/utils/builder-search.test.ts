@@ -3,7 +3,15 @@ import { builderDefaults, builderFromSearch, completeBuildFromSearch, searchFrom
 
 describe('Roasted to Order choices in the URL', () => {
   it('round-trip through the search without losing anything', () => {
-    const build = { lotCode: 'RD-T01', roastLevel: 'dark', bagSize: '2lb', bagsPerDelivery: 3, grind: 'french-press', brewMethod: 'filter', cadenceWeeks: 4 } as const;
+    const build = {
+      lotCode: 'RD-T01',
+      roastLevel: 'dark',
+      bagSize: '2lb',
+      bagsPerDelivery: 3,
+      grind: 'french-press',
+      brewMethod: 'filter',
+      cadenceWeeks: 4,
+    } as const;
     const search = searchFromBuilder(build);
 
     expect(search.toString()).toBe('lot=RD-T01&level=dark&size=2lb&bags=3&grind=french-press&brew=filter&every=4');

@@ -7,7 +7,6 @@ import { ApiError } from '@/lib/api-client';
 import { formatInstant } from '@/lib/dates';
 import { roleLabels } from '../utils/role-labels';
 
-
 /** An invitation still waiting for an answer, which the owner can withdraw. */
 export function InvitationRow({ invitation, onWithdraw }: { invitation: PendingInvitation; onWithdraw: () => Promise<unknown> }) {
   const [busy, setBusy] = useState(false);

@@ -15,7 +15,6 @@ type TeamMemberRowProps = {
   onSetDisabled: (disabled: boolean) => Promise<unknown>;
 };
 
-
 function isTeamRole(value: string): value is TeamRole {
   return (teamRoles as readonly string[]).includes(value);
 }

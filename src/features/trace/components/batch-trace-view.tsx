@@ -7,7 +7,6 @@ import { paths } from '@/config/paths';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { formatTraceDay, formatTraceGrams, traceStatusLabels } from '../utils/trace-format';
 
-
 /** A batch and every order it went into: who to reach in a recall. */
 export function BatchTraceView({ trace }: { trace: BatchTrace }) {
   const { batch, orders } = trace;
@@ -41,9 +40,7 @@ export function BatchTraceView({ trace }: { trace: BatchTrace }) {
               <TableHead>
                 <tr>
                   {['Order', 'Customer', 'Bags', 'Status', 'Ship day'].map((heading) => (
-                    <TableHeader key={heading}>
-                      {heading}
-                    </TableHeader>
+                    <TableHeader key={heading}>{heading}</TableHeader>
                   ))}
                 </tr>
               </TableHead>

@@ -8,7 +8,6 @@ import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableR
 import { useOrderTrace } from '../api/get-order-trace';
 import { formatTraceDay, formatTraceGrams, traceStatusLabels } from '../utils/trace-format';
 
-
 type OrderTraceProps = {
   orderId: string;
   /** The section heading's level: 2 on a page of its own, 3 inside an order's page. */
@@ -47,9 +46,7 @@ export function OrderTrace({ orderId, headingLevel = 2 }: OrderTraceProps) {
             <TableHead>
               <tr>
                 {['Lot', 'Level', 'Bags', 'Roast day', 'Batch'].map((heading) => (
-                  <TableHeader key={heading}>
-                    {heading}
-                  </TableHeader>
+                  <TableHeader key={heading}>{heading}</TableHeader>
                 ))}
               </tr>
             </TableHead>

@@ -23,4 +23,3 @@ export const traceStatusLabels: Record<OrderStatus, string> = {
   cancelled: 'Cancelled',
   refunded: 'Refunded',
 };
-
