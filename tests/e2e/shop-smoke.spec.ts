@@ -1,4 +1,5 @@
-import type { Browser } from 'playwright-core';
+import type { Browser, Route } from 'playwright-core';
+import { lotListResponseSchema } from '@shared/schemas/lots';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchChromium } from '../setup/chromium';
 
@@ -47,6 +48,20 @@ describe('the shop in a real browser', () => {
     expect(naturals).toBeLessThan(all);
     expect(problems).toEqual([]);
     await close();
+  });
+
+  it('a lot page shows its name before any /api answer arrives: the server sends the lot with the page', async () => {
+    const [lot] = lotListResponseSchema.parse(await (await fetch(`${baseUrl}/api/lots`)).json()).items;
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    // Every API request the page makes is held back until the name is on screen.
+    const held: Route[] = [];
+    await page.route('**/api/**', (route) => void held.push(route));
+    await page.goto(`${baseUrl}/lots/${lot!.code}`);
+    await page.getByRole('heading', { level: 1, name: lot!.name }).waitFor();
+    expect(await page.getByText(/\$\d+\.\d{2}/).count()).toBeGreaterThan(0);
+    await Promise.all(held.map((route) => route.abort().catch(() => undefined)));
+    await context.close();
   });
 
   it('an unknown address shows the 404 page from the SPA', async () => {
