@@ -10,6 +10,8 @@ export interface MailCatcher {
   stop(): Promise<void>;
 }
 
+const startDeadlineMs = 45_000;
+
 async function answers(url: string): Promise<boolean> {
   try {
     return (await fetch(url, { signal: AbortSignal.timeout(500) })).ok;
@@ -48,7 +50,9 @@ export async function startMailCatcher(options: { smtpPort: number; webPort: num
   );
   const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));
 
-  for (let attempt = 0; attempt < 100; attempt++) {
+  // A cold start on a busy 2-core machine (modules read from a fresh install) can take well over 10 s.
+  const deadline = Date.now() + startDeadlineMs;
+  while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new Error(`The mail catcher exited at start (is SMTP port ${options.smtpPort} taken?).`);
     if (await answers(`${webUrl}/api/healthz`)) {
       return {
@@ -63,5 +67,5 @@ export async function startMailCatcher(options: { smtpPort: number; webPort: num
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
   child.kill('SIGKILL');
-  throw new Error('The mail catcher did not answer within 10 s.');
+  throw new Error(`The mail catcher did not answer on ${webUrl} within ${startDeadlineMs / 1000} s.`);
 }
