@@ -30,13 +30,13 @@ export type RoastedBagSize = (typeof roastedBagSizes)[number];
 export const brewMethods = ['filter', 'espresso'] as const;
 export type BrewMethod = (typeof brewMethods)[number];
 
-export const grinds = ['whole-bean', 'espresso', 'moka-pot', 'aeropress', 'pour-over', 'drip', 'french-press', 'cold-brew'] as const;
+export const grinds = ['whole-bean', 'espresso', 'moka-pot', 'hand-press', 'pour-over', 'drip', 'french-press', 'cold-brew'] as const;
 export type Grind = (typeof grinds)[number];
 export const grindLabels: Record<Grind, string> = {
   'whole-bean': 'Whole bean',
   espresso: 'Espresso',
   'moka-pot': 'Moka pot',
-  aeropress: 'AeroPress-style',
+  'hand-press': 'Hand press',
   'pour-over': 'Pour-over',
   drip: 'Drip machine',
   'french-press': 'French press',

@@ -97,7 +97,7 @@ export function demoSubscriptions(ctx: ScenarioContext, pickedLotOn: (roastDate:
     const grind: Grind =
       brewMethod === 'espresso'
         ? rng.pick(['whole-bean', 'whole-bean', 'espresso', 'moka-pot'] as const)
-        : rng.pick(['whole-bean', 'whole-bean', 'pour-over', 'drip', 'french-press', 'aeropress', 'cold-brew'] as const);
+        : rng.pick(['whole-bean', 'whole-bean', 'pour-over', 'drip', 'french-press', 'hand-press', 'cold-brew'] as const);
     const bagSize = rng.pick(['12oz', '12oz', '1lb', '1lb', '2lb'] as const);
     const bagsPerDelivery = rng.pick([1, 1, 1, 2, 2, 3]);
     const cadenceWeeks = rng.pick([1, 2, 2, 2, 3, 4, 4]);
