@@ -1,5 +1,6 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
+import { reactOnPreact } from './vite.config';
 
 const alias = {
   '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
@@ -18,9 +19,22 @@ export default defineConfig({
     },
     projects: [
       {
-        resolve: { alias },
+        resolve: {
+          alias: {
+            ...alias,
+            ...reactOnPreact,
+            // Its CommonJS build would require the real react-dom past the aliases.
+            // ES module builds, as the browser gets: the CommonJS ones require React past the aliases.
+            '@testing-library/react': '@testing-library/react/dist/@testing-library/react.esm.js',
+            'react-router-dom': fileURLToPath(new URL('./node_modules/react-router-dom/dist/index.mjs', import.meta.url)),
+            'react-router/dom': fileURLToPath(new URL('./node_modules/react-router/dist/development/dom-export.mjs', import.meta.url)),
+            'react-router': fileURLToPath(new URL('./node_modules/react-router/dist/development/index.mjs', import.meta.url)),
+          },
+        },
         test: {
           name: 'unit',
+          // Libraries that import React go through the aliases too, so every component sees one Preact.
+          server: { deps: { inline: [/react/, /preact/, /@tanstack/, /@hookform/, /@testing-library/, /lucide/] } },
           // Component tests load lazy routes; on a busy 2-core machine the first import is slow.
           testTimeout: 15_000,
           include: ['shared/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/unit/**/*.test.{ts,tsx}'],

@@ -1,5 +1,5 @@
 import { QueryClientProvider } from '@tanstack/react-query';
-import { configure, render } from '@testing-library/react';
+import { configure, fireEvent, render } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { vi } from 'vitest';
 import type { CurrencyCode } from '@shared/domain/money';
@@ -37,6 +37,15 @@ export function renderApp(url: string, { session = null, currency = 'usd' }: Ren
     </QueryClientProvider>,
   );
   return { ...view, router, queryClient };
+}
+
+/**
+ * Types or picks `value` as a browser reports it: an `input` event, then `change`. The client's
+ * Preact listens to `input` on text fields where React listened to either.
+ */
+export function enterValue(field: HTMLElement, value: string) {
+  fireEvent.input(field, { target: { value } });
+  fireEvent.change(field, { target: { value } });
 }
 
 type ApiHandler = (url: URL, init: RequestInit | undefined) => Response | Promise<Response>;

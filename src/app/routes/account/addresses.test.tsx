@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Address } from '@shared/schemas/account';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -50,7 +50,7 @@ function addressServer(initial: Address[]) {
 }
 
 function fill(label: string, value: string) {
-  fireEvent.change(screen.getByLabelText(label), { target: { value } });
+  enterValue(screen.getByLabelText(label), value);
 }
 
 function cardOf(name: string): HTMLElement {
@@ -134,7 +134,7 @@ describe('addresses page', () => {
     fireEvent.click(within(await screen.findByRole('listitem', { name: 'Ines at the studio' })).getByRole('button', { name: 'Edit' }));
     const form = screen.getByRole('listitem', { name: 'Edit address' });
     expect((within(form).getByLabelText('Apartment, suite or unit (optional)') as HTMLInputElement).value).toBe('Unit 2');
-    fireEvent.change(within(form).getByLabelText('Street address'), { target: { value: '5 Kiln Row' } });
+    enterValue(within(form).getByLabelText('Street address'), '5 Kiln Row');
     fireEvent.click(within(form).getByRole('button', { name: 'Save address' }));
 
     const card = await screen.findByRole('listitem', { name: 'Ines at the studio' });

@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Subscription, SubscriptionDelivery } from '@shared/schemas/subscriptions';
-import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -214,7 +214,7 @@ describe('Deliveries page', () => {
 
     fireEvent.click(await screen.findByRole('button', { name: 'Change level, size, grind or cadence' }, { timeout: 15_000 }));
     const form = await screen.findByRole('form', { name: 'Change what each delivery brings' });
-    expect(document.activeElement?.textContent).toBe('Change what each delivery brings');
+    await waitFor(() => expect(document.activeElement?.textContent).toBe('Change what each delivery brings'));
     const levels = within(form).getByRole('group', { name: 'Roast level' });
     expect(
       within(levels)
@@ -264,7 +264,7 @@ describe('Deliveries page', () => {
     expect(await within(form).findByText('Use a day to resume like 2026-12-01.')).toBeTruthy();
     expect(sentRequests(fetchMock, 'POST', `/api/subscriptions/${subscriptionId}/pause`)).toHaveLength(0);
 
-    fireEvent.change(within(form).getByLabelText('Pause until'), { target: { value: '2027-01-11' } });
+    enterValue(within(form).getByLabelText('Pause until'), '2027-01-11');
     fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
 
     expect(await screen.findByText('Paused until Monday, January 11, 2027.', { selector: '[role="status"] *' })).toBeTruthy();
@@ -291,7 +291,7 @@ describe('Deliveries page', () => {
 
     fireEvent.click(await screen.findByRole('button', { name: 'Pause until a date' }, { timeout: 15_000 }));
     const form = await screen.findByRole('form', { name: 'Pause deliveries' });
-    fireEvent.change(within(form).getByLabelText('Pause until'), { target: { value: '2027-01-11' } });
+    enterValue(within(form).getByLabelText('Pause until'), '2027-01-11');
     fireEvent.click(within(form).getByRole('button', { name: 'Pause deliveries' }));
 
     const group = await within(form).findByRole('group', { name: 'A paid delivery falls inside the pause' });

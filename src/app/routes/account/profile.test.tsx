@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -29,7 +29,7 @@ describe('profile page', () => {
 
     const name = within(await section('Name')).getByLabelText('Name');
     expect((name as HTMLInputElement).value).toBe('Ines Marlow');
-    fireEvent.change(name, { target: { value: 'Ines Marlow-Reyes' } });
+    enterValue(name, 'Ines Marlow-Reyes');
     fireEvent.click(within(await section('Name')).getByRole('button', { name: 'Save name' }));
 
     expect(await within(await section('Name')).findByRole('status')).toBeTruthy();
@@ -45,14 +45,14 @@ describe('profile page', () => {
     renderApp('/account/profile', { session: customer });
     const emailSection = await section('E-mail address');
 
-    fireEvent.change(within(emailSection).getByLabelText('E-mail'), { target: { value: 'ines.new@example.test' } });
+    enterValue(within(emailSection).getByLabelText('E-mail'), 'ines.new@example.test');
     fireEvent.click(within(emailSection).getByRole('button', { name: 'Change e-mail' }));
     const currentPassword = within(emailSection).getByLabelText('Current password');
     await waitFor(() => expect(errorOf(currentPassword)).toBe('Enter your password.'));
     expect(currentPassword.getAttribute('autocomplete')).toBe('current-password');
     expect(fetchMock).not.toHaveBeenCalled();
 
-    fireEvent.change(currentPassword, { target: { value: 'wrong guess here' } });
+    enterValue(currentPassword, 'wrong guess here');
     fireEvent.click(within(emailSection).getByRole('button', { name: 'Change e-mail' }));
 
     await waitFor(() => expect(errorOf(currentPassword)).toBe('That is not your current password.'));
@@ -70,8 +70,8 @@ describe('profile page', () => {
     const current = within(passwordSection).getByLabelText('Current password');
     const next = within(passwordSection).getByLabelText('New password');
     expect(next.getAttribute('autocomplete')).toBe('new-password');
-    fireEvent.change(current, { target: { value: 'kettle lantern orchard' } });
-    fireEvent.change(next, { target: { value: 'quiet heron under copper rain' } });
+    enterValue(current, 'kettle lantern orchard');
+    enterValue(next, 'quiet heron under copper rain');
     fireEvent.click(within(passwordSection).getByRole('button', { name: 'Change password' }));
 
     expect((await within(passwordSection).findByRole('status')).textContent).toContain('Your password is changed.');

@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -9,9 +9,9 @@ afterEach(() => {
 });
 
 function fillForm({ name, email, password }: { name: string; email: string; password: string }) {
-  fireEvent.change(screen.getByLabelText('Name'), { target: { value: name } });
-  fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: email } });
-  fireEvent.change(screen.getByLabelText('Password'), { target: { value: password } });
+  enterValue(screen.getByLabelText('Name'), name);
+  enterValue(screen.getByLabelText('E-mail'), email);
+  enterValue(screen.getByLabelText('Password'), password);
   fireEvent.click(screen.getByRole('button', { name: 'Create account' }));
 }
 

@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -25,8 +25,8 @@ describe('joining the team from an invitation', () => {
     expect((screen.getByLabelText('E-mail') as HTMLInputElement).value).toBe('juno.reed@example.test');
     expect(sentRequests(fetchMock, 'POST', '/api/auth/invitations/preview')[0]?.body).toEqual({ token });
 
-    fireEvent.change(screen.getByLabelText('Your name'), { target: { value: 'Juno Reed' } });
-    fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'copper kettle at dawn' } });
+    enterValue(screen.getByLabelText('Your name'), 'Juno Reed');
+    enterValue(screen.getByLabelText('Password'), 'copper kettle at dawn');
     fireEvent.click(screen.getByRole('button', { name: 'Join the team' }));
 
     await waitFor(() => expect(router.state.location.pathname).toBe('/roastery'));

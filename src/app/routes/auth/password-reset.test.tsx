@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, jsonResponse, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -16,7 +16,7 @@ describe('forgotten password', () => {
     renderApp('/forgot-password');
     await screen.findByRole('heading', { level: 1, name: 'Forgot your password?' });
 
-    fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'Ines.Marlow@example.test' } });
+    enterValue(screen.getByLabelText('E-mail'), 'Ines.Marlow@example.test');
     fireEvent.click(screen.getByRole('button', { name: 'Send the reset link' }));
 
     const heading = await screen.findByRole('heading', { name: 'Check your e-mail' });
@@ -30,7 +30,7 @@ describe('forgotten password', () => {
     renderApp('/forgot-password');
     await screen.findByRole('heading', { level: 1, name: 'Forgot your password?' });
 
-    fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'ines.marlow@example.test' } });
+    enterValue(screen.getByLabelText('E-mail'), 'ines.marlow@example.test');
     fireEvent.click(screen.getByRole('button', { name: 'Send the reset link' }));
 
     expect((await screen.findByRole('alert')).textContent).toContain('Too many tries. Wait 15 minutes and try again.');
@@ -52,7 +52,7 @@ describe('reset-password page', () => {
 
     const password = screen.getByLabelText('New password');
     expect(password.getAttribute('autocomplete')).toBe('new-password');
-    fireEvent.change(password, { target: { value: 'quiet heron under copper rain' } });
+    enterValue(password, 'quiet heron under copper rain');
     fireEvent.click(screen.getByRole('button', { name: 'Save the new password' }));
 
     expect(await screen.findByText('Your password is changed. Sign in with the new one.')).toBeTruthy();
@@ -68,7 +68,7 @@ describe('reset-password page', () => {
     renderApp(`/reset-password#token=${token}`);
     await screen.findByRole('heading', { level: 1, name: 'Choose a new password' });
 
-    fireEvent.change(screen.getByLabelText('New password'), { target: { value: 'quiet heron under copper rain' } });
+    enterValue(screen.getByLabelText('New password'), 'quiet heron under copper rain');
     fireEvent.click(screen.getByRole('button', { name: 'Save the new password' }));
 
     const alert = await screen.findByRole('alert');

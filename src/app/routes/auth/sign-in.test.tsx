@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, createEvent, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -11,8 +11,8 @@ afterEach(() => {
 const customer = makeUser();
 
 function fillSignIn(email: string, password: string) {
-  fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: email } });
-  fireEvent.change(screen.getByLabelText('Password'), { target: { value: password } });
+  enterValue(screen.getByLabelText('E-mail'), email);
+  enterValue(screen.getByLabelText('Password'), password);
   fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
 }
 

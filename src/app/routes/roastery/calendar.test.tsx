@@ -4,7 +4,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { addDays, weekdayOf } from '@shared/domain/shop-time';
 import { defaultShopSettings } from '@shared/schemas/settings';
 import type { CalendarDay, CalendarDayUpdateResponse } from '@shared/schemas/roastery';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 // The calendar marks the shop's today; these tests read December 2026 from a day before it, so no
 // day of it carries that mark whenever they run.
@@ -126,7 +126,7 @@ describe('Roast Calendar', () => {
     fireEvent.click(await screen.findByRole('button', { name: 'Change Thursday, December 3' }, { timeout: 15_000 }));
     const editor = await screen.findByRole('region', { name: 'Change Thursday, December 3' });
     fireEvent.click(within(editor).getByLabelText('Closed'));
-    fireEvent.change(within(editor).getByLabelText('Note'), { target: { value: 'Burner service (invented)' } });
+    enterValue(within(editor).getByLabelText('Note'), 'Burner service (invented)');
     fireEvent.click(within(editor).getByRole('button', { name: 'Save day' }));
 
     const confirm = await within(editor).findByRole('alertdialog', { name: 'Close roasting on Thursday, December 3?' });
@@ -151,7 +151,7 @@ describe('Roast Calendar', () => {
 
     fireEvent.click(await screen.findByRole('button', { name: 'Change Tuesday, December 8' }, { timeout: 15_000 }));
     const editor = await screen.findByRole('region', { name: 'Change Tuesday, December 8' });
-    fireEvent.change(within(editor).getByLabelText('Capacity (g of green)'), { target: { value: '30000' } });
+    enterValue(within(editor).getByLabelText('Capacity (g of green)'), '30000');
     fireEvent.click(within(editor).getByRole('button', { name: 'Save day' }));
 
     expect(await within(editor).findByText(/Nothing needed to move/)).toBeTruthy();

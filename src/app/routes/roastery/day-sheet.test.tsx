@@ -5,7 +5,7 @@ import { localDateOf } from '@shared/domain/shop-time';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
 import type { Batch, BatchCreated, RoastListResponse } from '@shared/schemas/roastery';
 import { defaultShopSettings } from '@shared/schemas/settings';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 beforeEach(() => window.localStorage.clear());
 afterEach(() => {
@@ -202,9 +202,9 @@ describe('Day Sheet → Roast List', () => {
     const form = screen.getByRole('form', { name: 'Record a batch of Test Ridge Washed, Medium' });
     // The planned load is offered as the green weight.
     expect((within(form).getByLabelText('Green in (g)') as HTMLInputElement).value).toBe('4635');
-    fireEvent.change(within(form).getByLabelText('Roasted out (g)'), { target: { value: '3940' } });
-    fireEvent.change(within(form).getByLabelText(/Total time/), { target: { value: '11:45' } });
-    fireEvent.change(within(form).getByLabelText(/First crack at/), { target: { value: '9:15' } });
+    enterValue(within(form).getByLabelText('Roasted out (g)'), '3940');
+    enterValue(within(form).getByLabelText(/Total time/), '11:45');
+    enterValue(within(form).getByLabelText(/First crack at/), '9:15');
 
     // Loss = (4,635 − 3,940) ÷ 4,635 = 14.99 %; DTR = (705 − 555) ÷ 705 = 21.28 % (S. Rao, development time ratio).
     await waitFor(() => expect(within(form).getByRole('status').textContent).toContain('Loss 14.99 %'));
@@ -240,12 +240,12 @@ describe('Day Sheet → Roast List', () => {
     fireEvent.click(await screen.findByRole('button', { name: 'Record batch of Test Ridge Washed, Medium' }));
     const form = screen.getByRole('form', { name: 'Record a batch of Test Ridge Washed, Medium' });
     const roasted = within(form).getByLabelText('Roasted out (g)');
-    fireEvent.change(roasted, { target: { value: '5000' } });
+    enterValue(roasted, '5000');
     fireEvent.click(within(form).getByRole('button', { name: 'Save batch' }));
     await waitFor(() => expect(roasted.getAttribute('aria-invalid')).toBe('true'));
     expect(sentRequests(fetchMock, 'POST', '/api/roastery/batches')).toHaveLength(0);
 
-    fireEvent.change(roasted, { target: { value: '3940' } });
+    enterValue(roasted, '3940');
     fireEvent.click(within(form).getByRole('button', { name: 'Save batch' }));
     const green = within(form).getByLabelText('Green in (g)');
     await waitFor(() => expect(green.getAttribute('aria-invalid')).toBe('true'));
@@ -313,8 +313,8 @@ describe('Day Sheet tabs and Pack List', () => {
     const dialog = await screen.findByRole('dialog', { name: 'Mark Juno Reed’s order shipped' });
     fireEvent.click(within(dialog).getByRole('button', { name: 'Mark shipped' }));
     expect(await within(dialog).findByText('Name the carrier.')).toBeTruthy();
-    fireEvent.change(within(dialog).getByLabelText('Carrier'), { target: { value: 'USPS' } });
-    fireEvent.change(within(dialog).getByLabelText('Tracking number'), { target: { value: 'wr 1234 5678' } });
+    enterValue(within(dialog).getByLabelText('Carrier'), 'USPS');
+    enterValue(within(dialog).getByLabelText('Tracking number'), 'wr 1234 5678');
     fireEvent.click(within(dialog).getByRole('button', { name: 'Mark shipped' }));
 
     expect(await screen.findByText(/order is marked shipped \(USPS WR12345678\)/)).toBeTruthy();

@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { LotCreate, LotStaffDetail } from '@shared/schemas/lots';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -51,7 +51,7 @@ async function openForm() {
   return screen.findByRole('form', { name: 'New lot' }, { timeout: 15_000 });
 }
 
-const type = (form: HTMLElement, label: string, value: string) => fireEvent.change(within(form).getByLabelText(label), { target: { value } });
+const type = (form: HTMLElement, label: string, value: string) => enterValue(within(form).getByLabelText(label), value);
 
 describe('New lot', () => {
   it('shows the shared schema’s reasons on their fields, focuses the first, and sends nothing', async () => {

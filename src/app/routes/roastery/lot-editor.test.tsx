@@ -3,7 +3,7 @@ import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/re
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { GreenStockItem } from '@shared/schemas/green-stock';
 import type { LotStaffDetail } from '@shared/schemas/lots';
-import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -106,11 +106,11 @@ describe('Lot page in Green Stock: stock', () => {
     expect(within(history).getAllByRole('row')).toHaveLength(2);
 
     const form = screen.getByRole('form', { name: 'Adjust stock' });
-    fireEvent.change(within(form).getByLabelText('Unit'), { target: { value: 'lb' } });
-    fireEvent.change(within(form).getByLabelText('Change'), { target: { value: '5' } });
+    enterValue(within(form).getByLabelText('Unit'), 'lb');
+    enterValue(within(form).getByLabelText('Change'), '5');
     // 5 lb × 453.59237 g/lb = 2267.96 g, to the nearest gram 2268 (NIST SP 811, Appendix B).
     expect(within(form).getByText(/That is 2\.3 kg\./)).toBeTruthy();
-    fireEvent.change(within(form).getByLabelText('Note'), { target: { value: 'Two sacks from the port' } });
+    enterValue(within(form).getByLabelText('Note'), 'Two sacks from the port');
     fireEvent.click(within(form).getByRole('button', { name: 'Record the change' }));
 
     expect(await within(form).findByText('Arrival recorded. On hand now: 4.3 kg · 9.4 lb.')).toBeTruthy();
@@ -129,9 +129,9 @@ describe('Lot page in Green Stock: stock', () => {
   it('refuses a sample that adds stock on its field, without asking the server', async () => {
     const { fetchMock } = await openEditor();
     const form = screen.getByRole('form', { name: 'Adjust stock' });
-    fireEvent.change(within(form).getByLabelText('Reason'), { target: { value: 'sample' } });
+    enterValue(within(form).getByLabelText('Reason'), 'sample');
     const change = within(form).getByLabelText('Change');
-    fireEvent.change(change, { target: { value: '250' } });
+    enterValue(change, '250');
     fireEvent.click(within(form).getByRole('button', { name: 'Record the change' }));
 
     await waitFor(() => expect(change.getAttribute('aria-invalid')).toBe('true'));
@@ -151,8 +151,8 @@ describe('Lot page in Green Stock: stock', () => {
           : undefined,
     });
     const form = screen.getByRole('form', { name: 'Adjust stock' });
-    fireEvent.change(within(form).getByLabelText('Reason'), { target: { value: 'loss' } });
-    fireEvent.change(within(form).getByLabelText('Change'), { target: { value: '-9000' } });
+    enterValue(within(form).getByLabelText('Reason'), 'loss');
+    enterValue(within(form).getByLabelText('Change'), '-9000');
     fireEvent.click(within(form).getByRole('button', { name: 'Record the change' }));
 
     expect(await within(form).findByText('The change would take stock below zero.')).toBeTruthy();
@@ -162,7 +162,7 @@ describe('Lot page in Green Stock: stock', () => {
   it('sets the reorder point and raises the reorder alert', async () => {
     const { fetchMock } = await openEditor();
     const form = screen.getByRole('form', { name: 'Reorder point' });
-    fireEvent.change(within(form).getByLabelText('Reorder point (g)'), { target: { value: '5000' } });
+    enterValue(within(form).getByLabelText('Reorder point (g)'), '5000');
     fireEvent.click(within(form).getByRole('button', { name: 'Save reorder point' }));
 
     expect(await within(form).findByText('Reorder point set to 5 kg · 11 lb.')).toBeTruthy();
@@ -231,15 +231,15 @@ describe('Lot page in Green Stock: descriptors', () => {
   it('sends only what changed, with dollars as cents and notes as a list', async () => {
     const { fetchMock } = await openEditor();
     const form = await screen.findByRole('form', { name: 'Lot descriptors' });
-    fireEvent.change(within(form).getByLabelText('Name'), { target: { value: 'Test Ridge Washed, Second Pick' } });
-    fireEvent.change(within(form).getByLabelText('Price per kg ($)'), { target: { value: '26.80' } });
-    fireEvent.change(within(form).getByLabelText('Tasting notes'), { target: { value: 'bergamot, apricot, honey' } });
+    enterValue(within(form).getByLabelText('Name'), 'Test Ridge Washed, Second Pick');
+    enterValue(within(form).getByLabelText('Price per kg ($)'), '26.80');
+    enterValue(within(form).getByLabelText('Tasting notes'), 'bergamot, apricot, honey');
     fireEvent.click(within(form).getByRole('button', { name: 'Save changes' }));
 
     expect(await within(form).findByText('Saved. The lot page shows the changes now.')).toBeTruthy();
 
     // A second save sends only what changed since the first.
-    fireEvent.change(within(form).getByLabelText('Region'), { target: { value: 'Upper Sidama' } });
+    enterValue(within(form).getByLabelText('Region'), 'Upper Sidama');
     fireEvent.click(within(form).getByRole('button', { name: 'Save changes' }));
     await waitFor(() => expect(sentRequests(fetchMock, 'PATCH', '/api/lots/RD-T01')).toHaveLength(2));
     expect(sentRequests(fetchMock, 'PATCH', '/api/lots/RD-T01').map((request) => request.body)).toEqual([
@@ -256,7 +256,7 @@ describe('Lot page in Green Stock: descriptors', () => {
           : undefined,
     });
     const form = await screen.findByRole('form', { name: 'Lot descriptors' });
-    fireEvent.change(within(form).getByLabelText('Suggested level'), { target: { value: 'medium' } });
+    enterValue(within(form).getByLabelText('Suggested level'), 'medium');
     fireEvent.click(within(form).getByRole('button', { name: 'Save changes' }));
 
     const suggested = within(form).getByLabelText('Suggested level');

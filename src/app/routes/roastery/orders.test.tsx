@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { OrderDetail, OrderListResponse, OrderSummary } from '@shared/schemas/orders';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -115,7 +115,7 @@ describe('Roastery orders table', () => {
     // Each step waits until the page shows what the URL now says, as a person would.
     const choose = async (label: string, value: string, search: string) => {
       const control = within(filters).getByLabelText(label) as HTMLInputElement | HTMLSelectElement;
-      fireEvent.change(control, { target: { value } });
+      enterValue(control, value);
       await waitFor(() => expect(router.state.location.search).toBe(search));
       await waitFor(() => expect(control.value).toBe(value));
       await waitFor(() => expect(apiListRequests(fetchMock)).toContain(`/api/orders${search}`));

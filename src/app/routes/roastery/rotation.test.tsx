@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { RotationDay } from '@shared/schemas/rotation';
-import { jsonResponse, makeLot, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { jsonResponse, makeLot, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -58,8 +58,8 @@ describe('Roaster’s Rotation (Roastery)', () => {
     expect(within(day).getByLabelText('Lot').getAttribute('aria-describedby')).toBe(error.id);
     expect(sentRequests(fetchMock, 'PUT', '/api/roastery/rotation/2026-12-09')).toHaveLength(0);
 
-    fireEvent.change(within(day).getByLabelText('Lot'), { target: { value: 'RD-T02' } });
-    fireEvent.change(within(day).getByLabelText('Note for the team (optional)'), { target: { value: 'Sweet and heavy for the holidays' } });
+    enterValue(within(day).getByLabelText('Lot'), 'RD-T02');
+    enterValue(within(day).getByLabelText('Note for the team (optional)'), 'Sweet and heavy for the holidays');
     fireEvent.click(within(day).getByRole('button', { name: 'Save the pick' }));
 
     expect(await within(day).findByText(/this day’s rotation needs about 4.2 kg/)).toBeTruthy();

@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { defaultShopSettings, type ShopSettings } from '@shared/schemas/settings';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -33,10 +33,10 @@ describe('Shop settings', () => {
     expect(screen.getByRole('list', { name: 'Weight bands' }).children).toHaveLength(5);
 
     fireEvent.click(within(roastDays).getByLabelText('Saturday'));
-    fireEvent.change(screen.getByLabelText('Overage (%)'), { target: { value: '3' } });
+    enterValue(screen.getByLabelText('Overage (%)'), '3');
     const medium = screen.getByRole('group', { name: 'Medium' });
-    fireEvent.change(within(medium).getByLabelText('Planned loss (%)'), { target: { value: '15.5' } });
-    fireEvent.change(screen.getByLabelText('Roasted 12 oz bag'), { target: { value: '19.50' } });
+    enterValue(within(medium).getByLabelText('Planned loss (%)'), '15.5');
+    enterValue(screen.getByLabelText('Roasted 12 oz bag'), '19.50');
     fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
 
     expect(await screen.findByText('Settings saved.')).toBeTruthy();
@@ -76,7 +76,7 @@ describe('Shop settings', () => {
 
     const medium = await screen.findByRole('group', { name: 'Medium' }, { timeout: 15_000 });
     const planned = within(medium).getByLabelText('Planned loss (%)');
-    fireEvent.change(planned, { target: { value: '18' } });
+    enterValue(planned, '18');
     fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
 
     await waitFor(() => expect(planned.getAttribute('aria-invalid')).toBe('true'));

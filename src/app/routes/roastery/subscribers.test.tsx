@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { SubscriberDetail, SubscriberSummary } from '@shared/schemas/subscribers';
-import { jsonResponse, makeLot, makeUser, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
+import { jsonResponse, makeLot, makeUser, renderApp, requestedUrls, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -92,7 +92,7 @@ describe('Subscribers (Roastery)', () => {
     );
     expect(screen.getByLabelText('Coffee')).toHaveProperty('value', 'rotation');
 
-    fireEvent.change(screen.getByLabelText('Roast level'), { target: { value: 'dark' } });
+    enterValue(screen.getByLabelText('Roast level'), 'dark');
     await waitFor(() => expect(router.state.location.search).toBe('?status=active&level=dark&cadence=2&lot=rotation'));
     await waitFor(() => expect(screen.getByRole('link', { name: 'Download these as CSV' }).getAttribute('href')).toContain('level=dark'));
 

@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { TeamMember, TeamResponse } from '@shared/schemas/team';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -69,8 +69,8 @@ describe('Team page', () => {
     renderApp('/roastery/team', { session: owner });
 
     const form = await screen.findByRole('region', { name: 'Invite someone' });
-    fireEvent.change(within(form).getByLabelText('Their e-mail'), { target: { value: 'Juno.Reed@example.test' } });
-    fireEvent.change(within(form).getByLabelText('Role'), { target: { value: 'owner' } });
+    enterValue(within(form).getByLabelText('Their e-mail'), 'Juno.Reed@example.test');
+    enterValue(within(form).getByLabelText('Role'), 'owner');
     fireEvent.click(within(form).getByRole('button', { name: 'Send invitation' }));
 
     expect(await screen.findByText('Invitation sent to juno.reed@example.test.')).toBeTruthy();
@@ -110,7 +110,7 @@ describe('Team page', () => {
 
     const form = await screen.findByRole('region', { name: 'Invite someone' });
     const email = within(form).getByLabelText('Their e-mail');
-    fireEvent.change(email, { target: { value: 'oren.vale@example.test' } });
+    enterValue(email, 'oren.vale@example.test');
     fireEvent.click(within(form).getByRole('button', { name: 'Send invitation' }));
 
     await waitFor(() => expect(email.getAttribute('aria-invalid')).toBe('true'));
@@ -124,7 +124,7 @@ describe('Team page', () => {
     const oren = await screen.findByRole('listitem', { name: 'Oren Vale' });
     const change = within(oren).getByRole('button', { name: 'Change role' }) as HTMLButtonElement;
     expect(change.disabled).toBe(true);
-    fireEvent.change(within(oren).getByLabelText('Role'), { target: { value: 'owner' } });
+    enterValue(within(oren).getByLabelText('Role'), 'owner');
     fireEvent.click(change);
     expect(await screen.findByText('Oren Vale is now owner.')).toBeTruthy();
     expect(sentRequests(fetchMock, 'PATCH', `/api/owner/team/${roaster.id}`)[0]?.body).toEqual({ role: 'owner' });

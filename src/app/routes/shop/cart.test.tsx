@@ -3,7 +3,7 @@ import { cleanup, fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { CartLine } from '@/features/cart/stores/cart-store';
 import { defaultShopSettings } from '@shared/schemas/settings';
-import { jsonResponse, renderApp, stubFetch } from '@/testing/test-utils';
+import { jsonResponse, renderApp, stubFetch, enterValue } from '@/testing/test-utils';
 
 // Invented lots, priced as their lot pages showed them.
 const ridge: CartLine = {
@@ -54,7 +54,7 @@ describe('cart page', () => {
     renderApp('/cart');
 
     const ridgeLine = await screen.findByRole('listitem', { name: 'Test Ridge Washed, 1 lb' });
-    fireEvent.change(within(ridgeLine).getByLabelText('Bags'), { target: { value: '5' } });
+    enterValue(within(ridgeLine).getByLabelText('Bags'), '5');
     // 5 × 454 g = 2,270 g reaches the 2,268 g break: $22.00/kg × 453.59237 g = $9.98 a bag.
     expect(await within(ridgeLine).findByText(/\$9\.98 a bag/)).toBeTruthy();
     expect(storedLines()[0]?.quantity).toBe(5);

@@ -4,7 +4,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { CartLine } from '@/features/cart/stores/cart-store';
 import { leaveFor } from '@/lib/leave-for';
 import { defaultShopSettings } from '@shared/schemas/settings';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 vi.mock('@/lib/leave-for', () => ({ leaveFor: vi.fn() }));
 
@@ -19,7 +19,7 @@ const ridge: CartLine = {
 };
 
 function fill(label: string, value: string) {
-  fireEvent.change(screen.getByLabelText(label), { target: { value } });
+  enterValue(screen.getByLabelText(label), value);
 }
 
 function fillAddress() {
@@ -57,7 +57,10 @@ describe('checkout page', () => {
     stubFetch(() => new Response(null, { status: 404 }));
     const { router } = renderApp('/checkout');
 
-    await waitFor(() => expect(`${router.state.location.pathname}${router.state.location.search}`).toBe('/sign-in?redirectTo=%2Fcheckout'));
+    // The first render of a file waits for its lazy modules to compile.
+    await waitFor(() => expect(`${router.state.location.pathname}${router.state.location.search}`).toBe('/sign-in?redirectTo=%2Fcheckout'), {
+      timeout: 15_000,
+    });
     expect(window.localStorage.getItem('restday.cart')).toContain('RD-T01');
   });
 

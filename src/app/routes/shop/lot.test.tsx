@@ -4,7 +4,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { homeRoastGuide } from '@shared/domain/home-roast-guide';
 import { defaultLossModel } from '@shared/domain/roast-loss';
 import { roastLevels } from '@shared/domain/vocabulary';
-import { apiErrorResponse, jsonResponse, makeLotDetail, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeLotDetail, renderApp, requestedUrls, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -108,7 +108,7 @@ describe('lot page', () => {
     expect(screen.getByText('Batches for a 1 lb bag').nextElementSibling?.textContent).toBe('6');
 
     fireEvent.click(screen.getByLabelText(/^5 lb/));
-    fireEvent.change(screen.getByLabelText('Roast level'), { target: { value: 'medium' } });
+    enterValue(screen.getByLabelText('Roast level'), 'medium');
     await waitFor(() => expect(screen.getByText('Batches for a 5 lb bag').nextElementSibling?.textContent).toBe('29'));
     expect(requestedUrls(fetchMock)).toContain('/api/lots/RD-T01/roast-guide?device=popper&greenGrams=2268&level=medium');
     expect(screen.getAllByRole('listitem').some((item) => item.textContent?.includes('Development.'))).toBe(true);
@@ -119,7 +119,7 @@ describe('lot page', () => {
     renderApp('/lots/RD-T01');
 
     fireEvent.click(await screen.findByLabelText(/^2 lb/));
-    fireEvent.change(screen.getByLabelText('Bags'), { target: { value: '2' } });
+    enterValue(screen.getByLabelText('Bags'), '2');
     fireEvent.click(screen.getByRole('button', { name: 'Add to cart' }));
 
     expect(await screen.findByText(/Added 2 × 2 lb to your cart/)).toBeTruthy();
@@ -142,7 +142,7 @@ describe('lot page', () => {
     renderApp('/lots/RD-T01');
 
     fireEvent.click(await screen.findByLabelText(/^2 lb/));
-    fireEvent.change(screen.getByLabelText('Bags'), { target: { value: '2' } });
+    enterValue(screen.getByLabelText('Bags'), '2');
     expect(screen.getByText(/Only 1 kg left: not enough for 2 × 2 lb/)).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Add to cart' }).hasAttribute('disabled')).toBe(true);
   });

@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { apiErrorResponse, jsonResponse, makeLot, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeLot, renderApp, requestedUrls, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -113,18 +113,18 @@ describe('Green Lots page', () => {
     const { router } = renderApp('/lots');
     await screen.findAllByTestId('lot-card');
 
-    fireEvent.change(screen.getByLabelText('Process'), { target: { value: 'natural' } });
+    enterValue(screen.getByLabelText('Process'), 'natural');
     await waitFor(() => expect(router.state.location.search).toBe('?process=natural'));
 
-    fireEvent.change(screen.getByLabelText('Suggested roast'), { target: { value: 'medium-dark' } });
+    enterValue(screen.getByLabelText('Suggested roast'), 'medium-dark');
     await waitFor(() => expect(router.state.location.search).toBe('?process=natural&level=medium-dark'));
 
-    fireEvent.change(screen.getByLabelText('Origin'), { target: { value: 'Brazil' } });
+    enterValue(screen.getByLabelText('Origin'), 'Brazil');
     await waitFor(() => expect(router.state.location.search).toBe('?origin=Brazil&process=natural&level=medium-dark'));
     fireEvent.click(screen.getByLabelText('In stock only'));
     await waitFor(() => expect(router.state.location.search).toBe('?origin=Brazil&process=natural&level=medium-dark&inStock=true'));
 
-    fireEvent.change(screen.getByRole('searchbox', { name: 'Search' }), { target: { value: '  cocoa ' } });
+    enterValue(screen.getByRole('searchbox', { name: 'Search' }), '  cocoa ');
     fireEvent.submit(screen.getByRole('search'));
     await waitFor(() => expect(router.state.location.search).toBe('?q=cocoa&origin=Brazil&process=natural&level=medium-dark&inStock=true'));
 
@@ -139,12 +139,12 @@ describe('Green Lots page', () => {
     const { router } = renderApp('/lots');
     await screen.findAllByTestId('lot-card');
 
-    fireEvent.change(screen.getByLabelText('Prices'), { target: { value: 'lb' } });
+    enterValue(screen.getByLabelText('Prices'), 'lb');
     await waitFor(() => expect(router.state.location.search).toBe('?priceUnit=lb'));
 
     const range = screen.getByRole('form', { name: 'Price range' });
-    fireEvent.change(within(range).getByLabelText('Lowest ($ per lb)'), { target: { value: '10' } });
-    fireEvent.change(within(range).getByLabelText('Highest ($ per lb)'), { target: { value: '12.50' } });
+    enterValue(within(range).getByLabelText('Lowest ($ per lb)'), '10');
+    enterValue(within(range).getByLabelText('Highest ($ per lb)'), '12.50');
     fireEvent.submit(range);
 
     // $10/lb = 2204.62 cents/kg, $12.50/lb = 2755.78 cents/kg (1 lb = 453.59237 g, NIST SP 811 App. B):
@@ -154,7 +154,7 @@ describe('Green Lots page', () => {
     await waitFor(() => expect((screen.getByLabelText('Lowest ($ per lb)') as HTMLInputElement).value).toBe('10.00'));
     expect((screen.getByLabelText('Highest ($ per lb)') as HTMLInputElement).value).toBe('12.50');
 
-    fireEvent.change(screen.getByLabelText('Prices'), { target: { value: 'kg' } });
+    enterValue(screen.getByLabelText('Prices'), 'kg');
     await waitFor(() => expect((screen.getByLabelText('Lowest ($ per kg)') as HTMLInputElement).value).toBe('22.05'));
     expect(router.state.location.search).toBe('?minPricePerKgCents=2205&maxPricePerKgCents=2755');
   });
@@ -165,8 +165,8 @@ describe('Green Lots page', () => {
     await screen.findAllByTestId('lot-card');
 
     const range = screen.getByRole('form', { name: 'Price range' });
-    fireEvent.change(within(range).getByLabelText('Lowest ($ per kg)'), { target: { value: '30' } });
-    fireEvent.change(within(range).getByLabelText('Highest ($ per kg)'), { target: { value: '20' } });
+    enterValue(within(range).getByLabelText('Lowest ($ per kg)'), '30');
+    enterValue(within(range).getByLabelText('Highest ($ per kg)'), '20');
     fireEvent.submit(range);
 
     const lowest = await screen.findByLabelText('Lowest ($ per kg)');
@@ -180,11 +180,11 @@ describe('Green Lots page', () => {
     const { router } = renderApp('/lots?process=washed');
     await screen.findAllByTestId('lot-card');
 
-    fireEvent.change(screen.getByLabelText('Sort by'), { target: { value: 'price-asc' } });
+    enterValue(screen.getByLabelText('Sort by'), 'price-asc');
     await waitFor(() => expect(router.state.location.search).toBe('?process=washed&sort=price-asc'));
     await waitFor(() => expect(requestedUrls(fetchMock)).toContain('/api/lots?process=washed&sort=price-asc'));
 
-    fireEvent.change(screen.getByLabelText('Sort by'), { target: { value: 'origin' } });
+    enterValue(screen.getByLabelText('Sort by'), 'origin');
     await waitFor(() => expect(router.state.location.search).toBe('?process=washed'));
   });
 

@@ -1,5 +1,5 @@
 // @vitest-environment happy-dom
-import { act, cleanup, fireEvent, screen } from '@testing-library/react';
+import { act, cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { OrderDetail } from '@shared/schemas/orders';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
@@ -101,7 +101,8 @@ describe('order page', () => {
     expect(screen.queryByText('Waiting for the payment to be confirmed…')).toBeNull();
     expect(screen.getAllByText('Paid').length).toBeGreaterThan(0);
     expect(requestedUrls(fetchMock)).toEqual([`/api/orders/${orderId}`, `/api/orders/${orderId}`]);
-    expect(window.localStorage.getItem('restday.cart')).toBeNull();
+    // The cart empties in an effect once the paid order is on screen.
+    await waitFor(() => expect(window.localStorage.getItem('restday.cart')).toBeNull());
     expect(screen.getByRole('link', { name: 'Cart, empty' })).toBeTruthy();
   });
 

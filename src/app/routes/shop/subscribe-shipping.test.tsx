@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { leaveFor } from '@/lib/leave-for';
-import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, sentRequests, stubFetch } from '@/testing/test-utils';
+import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 vi.mock('@/lib/leave-for', () => ({ leaveFor: vi.fn() }));
 
@@ -35,7 +35,7 @@ function shippingServer(onCheckout: () => Response) {
 }
 
 function fill(label: string, value: string) {
-  fireEvent.change(screen.getByLabelText(label), { target: { value } });
+  enterValue(screen.getByLabelText(label), value);
 }
 
 describe('Roasted to Order shipping step', () => {

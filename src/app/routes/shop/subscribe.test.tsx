@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { SubscriptionPreview } from '@shared/schemas/subscription-preview';
-import { jsonResponse, makeLot, makeLotDetail, makeUser, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
+import { jsonResponse, makeLot, makeLotDetail, makeUser, renderApp, requestedUrls, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -136,7 +136,7 @@ describe('Roasted to Order builder', () => {
     const { router } = renderApp('/subscribe', { session: makeUser() });
 
     const bags = await screen.findByLabelText('Bags per delivery', undefined, { timeout: 15_000 });
-    fireEvent.change(bags, { target: { value: '12' } });
+    enterValue(bags, '12');
     fireEvent.click(screen.getByRole('button', { name: 'Continue to the shipping address' }));
 
     const error = await screen.findByText('Each delivery brings at most 10 bags.');
