@@ -24,7 +24,7 @@ const apiPort = process.env.RESTDAY_API_PORT ?? '3000';
 
 export default defineConfig({
   // Brotli and gzip copies made once at build time; the server sends whichever the browser accepts.
-  plugins: [react(), tailwindcss(), compression({ algorithms: ['brotliCompress', 'gzip'] })],
+  plugins: [react(), tailwindcss(), { ...compression({ algorithms: ['brotliCompress', 'gzip'] }), apply: (_config, env) => !env.isSsrBuild }],
   resolve: {
     alias: {
       '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
@@ -42,4 +42,6 @@ export default defineConfig({
     outDir: 'dist',
     emptyOutDir: true,
   },
+  // The server render (src/entry-server.tsx) bundles its libraries, so they get the aliases too.
+  ssr: { noExternal: true },
 });

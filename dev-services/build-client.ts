@@ -1,4 +1,4 @@
-// Builds the SPA into dist/ only when a source file is newer than the last build.
+// Builds the SPA into dist/ (and its server render into dist/.ssr) only when a source file is newer than the last build.
 import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -25,11 +25,14 @@ export function buildClientIfStale(): void {
   if (!clientBuildIsStale()) return;
   console.log('Building the shop client (sources changed since the last build)…');
   const vite = path.join(path.dirname(createRequire(import.meta.url).resolve('vite/package.json')), 'bin', 'vite.js');
-  // Always a production bundle, even when a test runner (NODE_ENV=test) asks for the build.
-  const result = spawnSync(process.execPath, [vite, 'build', '--logLevel', 'warn'], {
-    cwd: projectRoot,
-    stdio: 'inherit',
-    env: { ...process.env, NODE_ENV: 'production' },
-  });
-  if (result.status !== 0) throw new Error('The client build failed; see the messages above.');
+  // Always a production bundle, even when a test runner (NODE_ENV=test) asks for the build; then the
+  // server render of the public pages, beside it (the same two steps as `npm run build`).
+  for (const args of [[], ['--ssr', 'src/entry-server.tsx', '--outDir', 'dist/.ssr']]) {
+    const result = spawnSync(process.execPath, [vite, 'build', '--logLevel', 'warn', ...args], {
+      cwd: projectRoot,
+      stdio: 'inherit',
+      env: { ...process.env, NODE_ENV: 'production' },
+    });
+    if (result.status !== 0) throw new Error('The client build failed; see the messages above.');
+  }
 }

@@ -172,7 +172,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(auditDenials(audit));
   app.use('/api', api);
 
-  app.use(createStorefront({ config, db, lots: lots.catalogue }));
+  app.use(createStorefront({ config, db, lots: lots.catalogue, logger }));
 
   app.use(errorHandler);
   return app;

@@ -1,8 +1,6 @@
-import { QueryClientProvider } from '@tanstack/react-query';
-import { useState, type ReactNode } from 'react';
-import { createQueryClient } from '@/lib/query-client';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
 
-export function AppProvider({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(createQueryClient);
+export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
   return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
 }

@@ -1,6 +1,6 @@
-import { useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { useMemo, type ComponentType } from 'react';
-import { createBrowserRouter, RouterProvider, type LoaderFunction, type RouteObject } from 'react-router-dom';
+import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
+import type { LoaderFunction, RouteObject } from 'react-router-dom';
 import { RouteErrorBoundary } from '@/components/errors/route-error-boundary';
 import { PageLoading } from '@/components/ui/page-loading';
 import { paths } from '@/config/paths';
@@ -20,7 +20,7 @@ function toRoute(queryClient: QueryClient) {
   });
 }
 
-/** Every route of the SPA; each page and layout loads lazily. Exported for tests (memory router). */
+/** Every route of the SPA; each page and layout loads lazily. Used by the browser, the server render and tests. */
 export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
   const load = toRoute(queryClient);
   return [
@@ -97,10 +97,4 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
       ],
     },
   ];
-}
-
-export function AppRouter() {
-  const queryClient = useQueryClient();
-  const router = useMemo(() => createBrowserRouter(createAppRoutes(queryClient)), [queryClient]);
-  return <RouterProvider router={router} />;
 }

@@ -64,6 +64,16 @@ function takePreloaded(url: string): unknown {
   return answer;
 }
 
+let firstAnswerFor: (url: string) => unknown = takePreloaded;
+
+/**
+ * Where a GET looks before it asks the network: the page's preloaded answers in a browser; the
+ * answers of the page being rendered on the server, which has no network to ask.
+ */
+export function takeFirstAnswersFrom(source: (url: string) => unknown) {
+  firstAnswerFor = source;
+}
+
 /**
  * Calls Restday's API on the same origin. Every response body goes through `schema`; every
  * failure becomes an `ApiError`. State-changing requests carry `X-Restday-Client: web`, which the
@@ -74,7 +84,7 @@ export async function apiRequest<S extends z.ZodType>(path: string, options: Api
   const query = params?.toString();
   const url = query ? `${path}?${query}` : path;
   if (method === 'GET') {
-    const preloaded = takePreloaded(url);
+    const preloaded = firstAnswerFor(url);
     if (preloaded !== undefined) return schema.parse(preloaded);
   }
 

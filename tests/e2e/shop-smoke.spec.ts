@@ -64,6 +64,50 @@ describe('the shop in a real browser', () => {
     await context.close();
   });
 
+  it('the public pages arrive drawn: with JavaScript off, the home page lists lots and a lot page shows its name and prices', async () => {
+    const [lot] = lotListResponseSchema.parse(await (await fetch(`${baseUrl}/api/lots`)).json()).items;
+    const context = await browser.newContext({ javaScriptEnabled: false });
+    const page = await context.newPage();
+    await page.goto(`${baseUrl}/`);
+    expect(await page.getByTestId('lot-card').count()).toBeGreaterThan(0);
+    await page.goto(`${baseUrl}/lots/${lot!.code}`);
+    expect(await page.getByRole('heading', { level: 1, name: lot!.name }).count()).toBe(1);
+    expect(await page.getByText(/\$\d+\.\d{2}/).count()).toBeGreaterThan(0);
+    await context.close();
+  });
+
+  it('the browser takes over a drawn lot page without redrawing it, and the page then works as an app', async () => {
+    const [lot] = lotListResponseSchema.parse(await (await fetch(`${baseUrl}/api/lots`)).json()).items;
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    const problems: string[] = [];
+    page.on('console', (message) => {
+      if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);
+    });
+    // Notes whether the heading the server drew is ever taken out of the page.
+    await page.addInitScript(() => {
+      document.addEventListener('DOMContentLoaded', () => {
+        const drawn = document.querySelector('h1');
+        const record = window as unknown as { drawnHeadingRemoved: boolean };
+        record.drawnHeadingRemoved = !drawn;
+        new MutationObserver(() => {
+          if (drawn && !drawn.isConnected) record.drawnHeadingRemoved = true;
+        }).observe(document.body, { childList: true, subtree: true });
+      });
+    });
+    const whoAmI = page.waitForResponse((response) => response.url().endsWith('/api/auth/me'));
+    await page.goto(`${baseUrl}/lots/${lot!.code}`);
+    // The header asks who is signed in once the app runs.
+    await whoAmI;
+    await page.waitForTimeout(300);
+    expect(await page.evaluate(() => (window as unknown as { drawnHeadingRemoved: boolean }).drawnHeadingRemoved)).toBe(false);
+    await page.getByRole('link', { name: 'Green Lots' }).first().click();
+    await page.waitForURL(`${baseUrl}/lots`);
+    await page.getByTestId('lot-card').first().waitFor();
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
   it('an unknown address shows the 404 page from the SPA', async () => {
     const { page, close } = await openPage('/no-such-page');
     await page.getByRole('heading', { level: 1 }).waitFor();

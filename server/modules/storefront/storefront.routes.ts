@@ -1,16 +1,46 @@
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { Router } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 import { AppError } from '../../lib/app-error';
+import type { Logger } from '../../lib/logger';
 import { headTags, scriptJson } from './page-head';
 import type { StorefrontService } from './storefront.service';
+
+type StorefrontLog = Pick<Logger, 'error'>;
 
 /** The id of the script block holding a page's preloaded API answers (read by src/lib/api-client.ts). */
 export const preloadedScriptId = 'restday-preloaded';
 
 /** Kept out of search engines: people's own pages, the Roastery, and the API. */
 const disallowedPaths = ['/roastery', '/account', '/api', '/checkout', '/cart', '/orders', '/subscriptions'];
+
+/** The id of the script block holding the query cache a server-rendered page was drawn from (read by src/main.tsx). */
+export const queryStateScriptId = 'restday-query-state';
+
+/** What the server render (src/entry-server.tsx, built into dist/.ssr) draws for a page. */
+export type RenderPage = (url: string, answers: Record<string, unknown>) => Promise<{ html: string; queryState: unknown } | null>;
+
+/**
+ * The server render as built, imported once: its lazy chunks import the entry by its plain URL, so
+ * a second copy (a cache-busting import) would split React Router's context in two.
+ */
+function builtRenderer(file: string, log: StorefrontLog) {
+  let loading: Promise<RenderPage | undefined> | undefined;
+  return () => {
+    if (loading) return loading;
+    if (!existsSync(file)) return Promise.resolve(undefined);
+    loading = import(pathToFileURL(file).href).then(
+      (module: { renderPage: RenderPage }) => module.renderPage,
+      (error: unknown) => {
+        log.error({ err: error }, 'The server render could not be loaded; pages are drawn in the browser alone');
+        return undefined;
+      },
+    );
+    return loading;
+  };
+}
 
 /** index.html as built, read again only when a new build replaces it. */
 function builtIndexHtml(file: string) {
@@ -28,10 +58,11 @@ function builtIndexHtml(file: string) {
  * every other GET answered with index.html carrying the page's own head (title, description,
  * canonical URL, Open Graph, JSON-LD) and the public API answers its first render needs.
  */
-export function storefrontRoutes(service: StorefrontService, options: { staticDir: string; baseUrl: string }): Router {
+export function storefrontRoutes(service: StorefrontService, options: { staticDir: string; baseUrl: string; log: StorefrontLog }): Router {
   const router = Router();
   const staticDir = path.resolve(options.staticDir);
   const indexHtml = builtIndexHtml(path.join(staticDir, 'index.html'));
+  const renderer = builtRenderer(path.join(staticDir, '.ssr', 'entry-server.js'), options.log);
   const precompressed = { enableBrotli: true, orderPreference: ['br', 'gz'] };
 
   router.use(
@@ -56,18 +87,35 @@ export function storefrontRoutes(service: StorefrontService, options: { staticDi
     );
   });
 
+  /** The page drawn on the server for its first paint; null when only the browser can draw it. */
+  async function drawOnServer(url: string, answers: Record<string, unknown>) {
+    const render = await renderer();
+    if (!render) return null;
+    try {
+      return await render(url, answers);
+    } catch (error) {
+      options.log.error({ err: error, url }, 'The server render failed; the page is drawn in the browser alone');
+      return null;
+    }
+  }
+
   // Every other GET is a client-side route: the SPA decides what to show (its own 404 included).
   router.get('/{*splat}', async (req, res, next) => {
     const html = indexHtml();
     // Without a build (API-only runs), answer through the error handler so every header still applies.
     if (!html) return next(new AppError(404, 'client_not_built', 'The shop client is not built yet: run npm run build.'));
     const page = await service.pageFor(req.path);
-    const preloaded =
-      Object.keys(page.preloaded).length > 0 ? `<script type="application/json" id="${preloadedScriptId}">${scriptJson(page.preloaded)}</script>\n    ` : '';
+    const drawn = page.head.indexable ? await drawOnServer(`${options.baseUrl}${req.originalUrl}`, page.preloaded) : null;
+    const startingData = drawn
+      ? `<script type="application/json" id="${queryStateScriptId}">${scriptJson(drawn.queryState)}</script>\n    `
+      : Object.keys(page.preloaded).length > 0
+        ? `<script type="application/json" id="${preloadedScriptId}">${scriptJson(page.preloaded)}</script>\n    `
+        : '';
     const rendered = html
       .replace(/<title>[^<]*<\/title>/, '')
       .replace(/<meta name="description"[^>]*>/, '')
-      .replace('</head>', `  ${headTags(page.head)}\n    ${preloaded}</head>`);
+      .replace('</head>', `  ${headTags(page.head)}\n    ${startingData}</head>`)
+      .replace('<div id="root"></div>', () => `<div id="root">${drawn?.html ?? ''}</div>`);
     res.status(page.status).setHeader('Cache-Control', 'no-cache');
     res.type('html').send(rendered);
   });
