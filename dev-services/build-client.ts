@@ -16,7 +16,7 @@ function newestModification(entry: string): number {
 
 export function clientBuildIsStale(): boolean {
   const builtIndex = path.join(projectRoot, 'dist', 'index.html');
-  if (!existsSync(builtIndex)) return true;
+  if (!existsSync(builtIndex) || !existsSync(path.join(projectRoot, 'dist', '.ssr', 'entry-server.js'))) return true;
   const built = statSync(builtIndex).mtimeMs;
   return clientInputs.some((input) => newestModification(path.join(projectRoot, input)) > built);
 }

@@ -26,6 +26,17 @@ beforeAll(async () => {
   writeFileSync(path.join(staticDir, 'assets', 'index-abc123.js'), script);
   writeFileSync(path.join(staticDir, 'assets', 'index-abc123.js.br'), brotliCompressSync(script));
   writeFileSync(path.join(staticDir, 'assets', 'index-abc123.js.gz'), gzipSync(script));
+  // A stand-in for the server render (`vite build --ssr`): it draws the roasting basics page, fails
+  // on the subscription page, and would draw any other page it were asked for.
+  mkdirSync(path.join(staticDir, '.ssr'));
+  writeFileSync(
+    path.join(staticDir, '.ssr', 'entry-server.js'),
+    `export async function renderPage(url, answers) {
+      if (url.includes('/subscribe')) throw new Error('the render broke');
+      if (url.includes('/lots')) return null;
+      return { html: '<main><h1>Drawn for ' + new URL(url).pathname + '</h1></main>', queryState: { answers } };
+    }\n`,
+  );
   app = createTestApp({ env: { STATIC_DIR: staticDir, PUBLIC_URL: publicUrl } });
   lot = await createLotForSale(1000);
 });
@@ -130,6 +141,30 @@ describe('pages found and shared', () => {
     expect(lotListResponseSchema.parse(preloadedLots).items.map((item) => item.code)).toContain(lot.code);
     expect(roastery('meta[name="robots"]').attr('content')).toBe('noindex');
     expect(roastery('script#restday-preloaded').length).toBe(0);
+  });
+
+  it('GET /roasting-basics — drawn on the server into #root, with the query state it was drawn from instead of the preloaded answers', async () => {
+    const response = await request(app).get('/roasting-basics');
+
+    const $ = load(response.text);
+    expect($('#root h1').text()).toBe('Drawn for /roasting-basics');
+    const state = JSON.parse($('script#restday-query-state').text()) as { answers: Record<string, unknown> };
+    expect(shippingRulesSchema.parse(state.answers['/api/shipping']).currency).toBe('usd');
+    expect($('script#restday-preloaded').length).toBe(0);
+  });
+
+  it('a page the server cannot draw (it fails, or declines) and a private page are sent for the browser to draw', async () => {
+    const failed = load((await request(app).get('/subscribe')).text);
+    const declined = load((await request(app).get(`/lots/${lot.code}`)).text);
+    const account = load((await request(app).get('/account')).text);
+
+    for (const page of [failed, declined, account]) {
+      expect(page('#root').html()).toBe('');
+      expect(page('script#restday-query-state').length).toBe(0);
+    }
+    // What the browser needs for its first render still comes with the public pages.
+    expect(failed('script#restday-preloaded').length).toBe(1);
+    expect(declined('script#restday-preloaded').length).toBe(1);
   });
 
   it('a lot name that looks like markup stays text in the head and cannot close the JSON blocks', async () => {
