@@ -45,4 +45,6 @@ void (queryState ? routerReady() : Promise.resolve()).then(() => {
     </StrictMode>
   );
   render(app as ComponentChild, container);
+  // From here the page answers clicks and typing (browser tests wait for it after a page load).
+  container.dataset.appReady = 'true';
 });

@@ -1,6 +1,7 @@
 import type { Browser, BrowserContext, ConsoleMessage, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchChromium } from '../setup/chromium';
+import { openInApp } from '../setup/open-in-app';
 
 const baseUrl = inject('baseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');
@@ -89,7 +90,7 @@ async function signIn(password: string) {
 
 describe('accounts in a real browser', () => {
   it('a visitor creates an account and lands in it, signed in', async () => {
-    await page.goto(`${baseUrl}/`);
+    await openInApp(page, `${baseUrl}/`);
     await header().getByRole('link', { name: 'Sign in', exact: true }).click();
     await page.getByRole('link', { name: 'Create an account' }).click();
     await page.getByRole('heading', { level: 1, name: 'Create your account' }).waitFor();
@@ -112,7 +113,7 @@ describe('accounts in a real browser', () => {
 
   it('signs out from the account menu and the account area asks for a sign-in again', async () => {
     await signOut();
-    await page.goto(`${baseUrl}/account/profile`);
+    await openInApp(page, `${baseUrl}/account/profile`);
     await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
     expect(new URL(page.url()).searchParams.get('redirectTo')).toBe('/account/profile');
   });
@@ -156,7 +157,7 @@ describe('accounts in a real browser', () => {
     const link = await resetLinkFor(customer.email);
     // The token rides in the fragment, which the browser never sends to the server.
     expect(link.startsWith(`${baseUrl}/reset-password#token=`)).toBe(true);
-    await page.goto(link);
+    await openInApp(page, link);
     await page.getByLabel('New password', { exact: true }).fill(customer.newPassword);
     await page.getByRole('button', { name: 'Save the new password' }).click();
 
@@ -170,7 +171,7 @@ describe('accounts in a real browser', () => {
     await page.getByRole('heading', { level: 1, name: `Hello, ${customer.name}` }).waitFor();
 
     // The link was single-use.
-    await page.goto(link);
+    await openInApp(page, link);
     await page.getByLabel('New password', { exact: true }).fill('another fresh passphrase here');
     await page.getByRole('button', { name: 'Save the new password' }).click();
     await page.getByRole('alert').waitFor();

@@ -2,6 +2,7 @@ import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, ConsoleMessage, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchChromium } from '../setup/chromium';
+import { openInApp } from '../setup/open-in-app';
 
 const baseUrl = inject('baseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');
@@ -70,7 +71,7 @@ async function accessibilityViolations(target: Page): Promise<string[]> {
 
 describe('a home roaster buys green coffee in Chromium', () => {
   it('filters Green Lots by process and price per lb, opens a lot, reads its roast guide and puts two sizes in the cart', async () => {
-    await page.goto(`${baseUrl}/lots`);
+    await openInApp(page, `${baseUrl}/lots`);
     await page.getByTestId('lot-card').first().waitFor();
 
     await page.getByLabel('Process').selectOption('natural');
@@ -181,7 +182,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     it(
       'finds no violations on the filtered catalog',
       async () => {
-        await auditPage.goto(`${baseUrl}/lots?process=natural&priceUnit=lb`);
+        await openInApp(auditPage, `${baseUrl}/lots?process=natural&priceUnit=lb`);
         await auditPage.getByTestId('lot-card').first().waitFor();
         expect(await accessibilityViolations(auditPage)).toEqual([]);
         expect(auditProblems).toEqual([]);
@@ -192,7 +193,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     it(
       'finds no violations on a lot page with its roast guide',
       async () => {
-        await auditPage.goto(`${baseUrl}/lots/${lot.code}`);
+        await openInApp(auditPage, `${baseUrl}/lots/${lot.code}`);
         await auditPage.getByRole('region', { name: 'Home Roast Guide' }).getByText('Expected roasted yield').waitFor();
         expect(await accessibilityViolations(auditPage)).toEqual([]);
         await auditPage.getByRole('button', { name: 'Add to cart' }).click();
@@ -205,7 +206,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     it(
       'finds no violations on the cart',
       async () => {
-        await auditPage.goto(`${baseUrl}/cart`);
+        await openInApp(auditPage, `${baseUrl}/cart`);
         await auditPage.getByRole('link', { name: 'Check out' }).waitFor();
         expect(await accessibilityViolations(auditPage)).toEqual([]);
         expect(auditProblems).toEqual([]);
@@ -216,7 +217,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     it(
       'finds no violations on checkout',
       async () => {
-        await auditPage.goto(`${baseUrl}/checkout`);
+        await openInApp(auditPage, `${baseUrl}/checkout`);
         await auditPage.getByRole('button', { name: 'Continue to payment' }).waitFor();
         expect(await accessibilityViolations(auditPage)).toEqual([]);
         expect(auditProblems).toEqual([]);
@@ -227,7 +228,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     it(
       'finds no violations on the paid order',
       async () => {
-        await auditPage.goto(orderUrl);
+        await openInApp(auditPage, orderUrl);
         await auditPage.getByRole('heading', { level: 1, name: 'Your order' }).waitFor();
         expect(await accessibilityViolations(auditPage)).toEqual([]);
         expect(auditProblems).toEqual([]);
@@ -244,7 +245,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
         const staffProblems: string[] = [];
         watchConsole(staffPage, staffProblems);
         try {
-          await staffPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/green-stock')}`);
+          await openInApp(staffPage, `${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/green-stock')}`);
           await staffPage.getByLabel('E-mail').fill(staff.email);
           await staffPage.getByLabel('Password', { exact: true }).fill(staff.password);
           await staffPage.getByRole('button', { name: 'Sign in', exact: true }).click();

@@ -3,6 +3,7 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { LotDetail } from '../../shared/schemas/lots';
 import { launchChromium } from '../setup/chromium';
+import { openInApp } from '../setup/open-in-app';
 
 const baseUrl = inject('baseUrl');
 // The demo seed's invented roaster (server/db/seed).
@@ -54,14 +55,14 @@ describe('a lot photo under the default uploads folder (.data/uploads)', () => {
     const staff = await browser.newContext();
     const page = await staff.newPage();
     page.setDefaultTimeout(10_000);
-    await page.goto(`${baseUrl}/sign-in?redirectTo=%2Froastery%2Fgreen-stock`);
+    await openInApp(page, `${baseUrl}/sign-in?redirectTo=%2Froastery%2Fgreen-stock`);
     await page.getByLabel('E-mail').fill(roaster.email);
     await page.getByLabel('Password', { exact: true }).fill(roaster.password);
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
     await page.waitForURL(/\/roastery\/green-stock$/);
     const lots = (await (await page.request.get(`${baseUrl}/api/lots`)).json()) as { items: { code: string }[] };
     const code = lots.items[0]!.code;
-    await page.goto(`${baseUrl}/roastery/green-stock/${code}`);
+    await openInApp(page, `${baseUrl}/roastery/green-stock/${code}`);
     await page.getByLabel('Add a photo').setInputFiles({ name: 'invented-lot.png', mimeType: 'image/png', buffer: smallPng() });
     await page.getByRole('status').filter({ hasText: /./ }).first().waitFor();
     const lot = (await (await page.request.get(`${baseUrl}/api/lots/${code}`)).json()) as LotDetail;
@@ -74,7 +75,7 @@ describe('a lot photo under the default uploads folder (.data/uploads)', () => {
     shop.on('response', (response) => {
       if (response.url().endsWith(photoUrl)) answers.push(response.status());
     });
-    await shop.goto(`${baseUrl}/lots/${code}`);
+    await openInApp(shop, `${baseUrl}/lots/${code}`);
     const image = shop.locator(`img[src$="${photoUrl}"]`).first();
     await image.scrollIntoViewIfNeeded();
     await expect.poll(() => image.evaluate((element: HTMLImageElement) => element.complete && element.naturalWidth), { timeout: 10_000 }).toBe(4);

@@ -8,6 +8,7 @@ import type { PackListResponse } from '../../shared/schemas/packing';
 import type { BatchListResponse, RoastListResponse } from '../../shared/schemas/roastery';
 import type { ShopSettings } from '../../shared/schemas/settings';
 import { launchChromium } from '../setup/chromium';
+import { openInApp } from '../setup/open-in-app';
 
 const baseUrl = inject('baseUrl');
 // The demo seed's invented team (server/db/seed): every account shares the demo password.
@@ -37,7 +38,7 @@ async function signedIn(account: { email: string; password: string }, options: {
     if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()} (${message.location().url})`);
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
-  await page.goto(`${baseUrl}/sign-in?redirectTo=%2Froastery`);
+  await openInApp(page, `${baseUrl}/sign-in?redirectTo=%2Froastery`);
   await page.getByLabel('E-mail').fill(account.email);
   await page.getByLabel('Password', { exact: true }).fill(account.password);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
@@ -115,7 +116,7 @@ describe('a roast day in a real browser', () => {
     roastDate = date;
     const before = await getJson<BatchListResponse>(page, `/api/roastery/days/${date}/batches`);
 
-    await page.goto(`${baseUrl}/roastery/days/${date}`);
+    await openInApp(page, `${baseUrl}/roastery/days/${date}`);
     await page.getByRole('heading', { level: 2, name: 'By lot and roast level' }).waitFor();
     await page.getByText('Safety before you start the roaster').waitFor();
 
@@ -156,7 +157,7 @@ describe('a roast day in a real browser', () => {
 
   it('prints the Roast List without navigation or buttons', async () => {
     const { page, problems } = session;
-    await page.goto(`${baseUrl}/roastery/days/${roastDate}`);
+    await openInApp(page, `${baseUrl}/roastery/days/${roastDate}`);
     await page.getByRole('heading', { level: 2, name: 'Pull list' }).waitFor();
     expect(await page.getByRole('navigation', { name: 'Roastery' }).isVisible()).toBe(true);
     await page.screenshot({ path: `${screenshotDir}/roast-list-screen.png`, fullPage: true });
@@ -192,7 +193,7 @@ describe('a roast day in a real browser', () => {
   it('packs an order and marks it shipped from the Pack List', async () => {
     const { page, problems } = session;
     const { date, order } = await packDayWithOrder(page);
-    await page.goto(`${baseUrl}/roastery/days/${date}`);
+    await openInApp(page, `${baseUrl}/roastery/days/${date}`);
     await page.getByRole('tab', { name: 'Pack List' }).click();
     expect(new URL(page.url()).searchParams.get('tab')).toBe('pack');
 
@@ -225,7 +226,7 @@ describe('a roast day in a real browser', () => {
     const tags = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 
     async function violationsOn(page: Page, path: string, ready: () => Promise<void>) {
-      await page.goto(`${baseUrl}${path}`);
+      await openInApp(page, `${baseUrl}${path}`);
       await ready();
       // A picture of each audited page for review, named after its address.
       await page.screenshot({ path: `${screenshotDir}/${path.replace(/[^a-z0-9]+/gi, '-').replace(/^-|-$/g, '')}.png`, fullPage: true });

@@ -2,6 +2,7 @@ import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchChromium } from '../setup/chromium';
+import { openInApp } from '../setup/open-in-app';
 
 const baseUrl = inject('baseUrl');
 const mailCatcherUrl = inject('mailCatcherUrl');
@@ -61,7 +62,7 @@ const schedule = () => page.getByRole('table', { name: /^Upcoming deliveries of 
 
 describe('Roasted to Order in a real browser', () => {
   it('a visitor builds a subscription from a lot, with its price and first deliveries, and no accessibility violations', async () => {
-    await page.goto(`${baseUrl}/lots`);
+    await openInApp(page, `${baseUrl}/lots`);
     await page.getByTestId('lot-card').first().getByRole('link').first().click();
     await page.getByRole('link', { name: 'Subscribe to this lot, roasted to order' }).click();
 
@@ -194,7 +195,7 @@ describe('Roasted to Order in a real browser', () => {
     });
     try {
       // A member of the invented demo team.
-      await staffPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/subscribers')}`);
+      await openInApp(staffPage, `${baseUrl}/sign-in?redirectTo=${encodeURIComponent('/roastery/subscribers')}`);
       await staffPage.getByLabel('E-mail').fill('roaster@wrenfield.test');
       await staffPage.getByLabel('Password', { exact: true }).fill('restday-demo');
       await staffPage.getByRole('button', { name: 'Sign in', exact: true }).click();
