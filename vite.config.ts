@@ -41,6 +41,13 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     emptyOutDir: true,
+    rolldownOptions: {
+      // React Router reads React 19's useOptimistic only where it exists; Preact has none, by design.
+      onwarn(warning, warn) {
+        if (warning.code === 'IMPORT_IS_UNDEFINED' && warning.message.includes('useOptimistic')) return;
+        warn(warning);
+      },
+    },
   },
   // The server render (src/entry-server.tsx) bundles its libraries, so they get the aliases too.
   ssr: { noExternal: true },
