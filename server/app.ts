@@ -142,7 +142,7 @@ export function createApp(deps: AppDeps): Express {
     createSubscribersModule({ db, clock }),
     createRotationModule({ db, clock, audit }),
     createCheckoutModule({ db, payments, clock }),
-    createOrdersModule({ db, gateway }),
+    createOrdersModule({ db, gateway, clock, audit }),
     // Before the subscriptions module, so /subscriptions/preview is never read as a subscription id.
     createSubscriptionPreviewModule({ db, clock }),
     createSubscriptionsModule({

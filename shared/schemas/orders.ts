@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { postalAddressSchema } from './address';
+import { postalAddressInputSchema, postalAddressSchema } from './address';
 import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
@@ -102,8 +102,32 @@ export const orderDetailSchema = z.object({
   paidAt: instant.nullable(),
   shippedAt: instant.nullable(),
   cancelledAt: instant.nullable(),
+  /** Staff only (absent for the customer): the staff's own note on the order. */
+  staffNote: z.string().nullable().optional(),
 });
 export type OrderDetail = z.infer<typeof orderDetailSchema>;
+
+/** The e-mails about one order that staff can send again (`POST /api/orders/:id/resend/:template`). */
+export const resendableTemplates = ['order-confirmed', 'roasted', 'shipped'] as const;
+export type ResendableTemplate = (typeof resendableTemplates)[number];
+
+export const orderResendParamsSchema = z.object({
+  id: z.uuid('No such order.'),
+  template: z.enum(resendableTemplates, { error: `Choose one of: ${resendableTemplates.join(', ')}.` }),
+});
+
+/** Body of `PATCH /api/orders/:id/address` (staff): where the order ships now; only before it ships. */
+export const orderAddressCorrectionSchema = postalAddressInputSchema;
+
+/** Body of `PUT /api/orders/:id/note` (staff); an empty note removes it. */
+export const orderNoteSchema = z.object({
+  note: z
+    .string({ error: 'Write the note as text.' })
+    .trim()
+    .max(2000, 'Use at most 2,000 characters.')
+    .transform((note) => note || null),
+});
+export type OrderNoteInput = z.input<typeof orderNoteSchema>;
 
 /** Columns of `GET /api/orders.csv`, in order. */
 export const orderCsvColumns = [

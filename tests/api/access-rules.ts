@@ -42,6 +42,11 @@ async function orderOf(owner: TestUser) {
   return { id: (await createOrder({ userId: owner.id, subtotalCents: 1899, shippingCents: 695 })).id };
 }
 
+/** A paid green order: its owner reaches it (and is told it is not waiting for payment), no one else does. */
+async function paidOrderOf(owner: TestUser) {
+  return { id: (await createOrder({ userId: owner.id, status: 'paid', subtotalCents: 1899, shippingCents: 695 })).id };
+}
+
 /** An active Roaster's Rotation subscription whose deliveries start in 2031 (nothing about it is locked). */
 async function subscriptionOf(owner: TestUser) {
   return { id: (await createSubscription({ userId: owner.id, status: 'active', priceCents: 3200, anchorDate: '2031-01-07' })).id };
@@ -110,6 +115,8 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
   { method: 'GET', path: '/api/orders.csv', access: 'staff' },
   { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
+  { method: 'POST', path: '/api/orders/:id/pay', access: 'own-record', record: paidOrderOf },
+  { method: 'POST', path: '/api/orders/:id/discard', access: 'own-record', record: orderOf },
 
   { method: 'GET', path: '/api/subscriptions/preview', access: 'public' },
   { method: 'POST', path: '/api/checkout/subscription', access: 'signed-in' },
@@ -123,6 +130,8 @@ export const accessRules: AccessRule[] = [
   { method: 'POST', path: '/api/subscriptions/:id/pause', access: 'own-record', record: subscriptionOf, body: { until: '2031-03-03' } },
   { method: 'POST', path: '/api/subscriptions/:id/resume', access: 'own-record', record: subscriptionOf },
   { method: 'POST', path: '/api/subscriptions/:id/cancel', access: 'own-record', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/pay', access: 'own-record', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/discard', access: 'own-record', record: subscriptionOf },
   { method: 'GET', path: '/api/roastery/subscribers', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers.csv', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },

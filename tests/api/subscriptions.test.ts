@@ -55,6 +55,24 @@ async function signedIn() {
 }
 
 describe('POST /api/checkout/subscription', () => {
+  it('with saveAddress keeps the shipping address in the address book as the default', async () => {
+    const { agent } = await signedIn();
+    const response = await agent.post('/api/checkout/subscription').send({
+      lotCode: null,
+      roastLevel: 'medium',
+      bagSize: '12oz',
+      bagsPerDelivery: 1,
+      grind: 'whole-bean',
+      brewMethod: 'filter',
+      cadenceWeeks: 2,
+      shippingAddress: shipTo,
+      saveAddress: true,
+    });
+    expect(response.status, JSON.stringify(response.body)).toBe(201);
+    const book = await agent.get('/api/account/addresses');
+    expect(book.body.items).toEqual([expect.objectContaining({ ...shipTo, line2: null, country: 'US', isDefault: true })]);
+  });
+
   it('prices one delivery with the trade engine, creates the subscription incomplete and opens a weekly-recurring checkout', async () => {
     const lot = await createLotForSale(20_000);
     const { user, agent } = await signedIn();

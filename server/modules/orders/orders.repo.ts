@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, gte, lt, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, isNull, lt, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lots, orderItems, orders, shopSettings, users } from '../../db/schema/index';
 import { loadShopSettings } from '../settings';
@@ -8,6 +8,8 @@ import type { OrderKind, OrderStatus } from '@shared/domain/vocabulary';
 export interface OrderFilters {
   /** Only this customer's orders; absent for staff, who see everyone's. */
   userId?: string;
+  /** Leaves out checkouts the customer discarded (their own history; staff see every order). */
+  hideDiscarded?: boolean;
   status?: OrderStatus;
   kind?: OrderKind;
   roastDate?: string;
@@ -51,6 +53,7 @@ const summaryColumns = {
 function conditionsOf(filters: Omit<OrderFilters, 'sort'>): SQL | undefined {
   const conditions: SQL[] = [];
   if (filters.userId) conditions.push(eq(orders.userId, filters.userId));
+  if (filters.hideDiscarded) conditions.push(isNull(orders.discardedAt));
   if (filters.status) conditions.push(eq(orders.status, filters.status));
   if (filters.kind) conditions.push(eq(orders.kind, filters.kind));
   if (filters.roastDate) conditions.push(eq(orders.roastDate, filters.roastDate));
@@ -98,6 +101,7 @@ export function createOrdersRepo(db: Db) {
           paidAt: orders.paidAt,
           shippedAt: orders.shippedAt,
           cancelledAt: orders.cancelledAt,
+          staffNote: orders.staffNote,
         })
         .from(orders)
         .innerJoin(users, eq(users.id, orders.userId))

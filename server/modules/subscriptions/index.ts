@@ -1,6 +1,7 @@
 import type { Db } from '../../db/client';
 import type { ApiModule } from '../../lib/api-module';
 import type { Clock } from '../../lib/clock';
+import { createAddressBook } from '../account';
 import type { PaymentsService } from '../payments';
 import { createSubscriptionsRepo } from './subscriptions.repo';
 import { subscriptionCheckoutRoutes, subscriptionsRoutes } from './subscriptions.routes';
@@ -20,7 +21,7 @@ export interface SubscriptionsModuleDeps {
 
 /** Roasted to Order: its checkout, and each subscriber's own subscriptions and deliveries. */
 export function createSubscriptionsModule({ db, payments, clock, onChanged }: SubscriptionsModuleDeps): ApiModule {
-  const service = createSubscriptionsService({ repo: createSubscriptionsRepo(db), payments, clock, onChanged });
+  const service = createSubscriptionsService({ repo: createSubscriptionsRepo(db), payments, clock, onChanged, addressBook: createAddressBook(db) });
   return {
     mounts: [
       { path: '/checkout/subscription', router: subscriptionCheckoutRoutes(service) },

@@ -1,3 +1,4 @@
+import { samePostalAddress } from '@shared/domain/address';
 import { deliveryGreenGrams, nextDelivery, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
 import { datesForRoastDate } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
@@ -16,6 +17,8 @@ import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SessionUser } from '../../middleware/require-role';
 import { queueEmail } from '../outbox';
+import type { CheckoutUrlResponse } from '@shared/schemas/checkout';
+import type { AddressBook } from '../account';
 import type { PaymentsService } from '../payments';
 import { dropDelivery, keepDelivery } from './delivery-grid.repo';
 import { moveOrderToDelivery, reshapePaidOrder } from './delivery-orders.repo';
@@ -29,7 +32,6 @@ import {
   maxPauseDays,
   planLength,
   planOf,
-  sameAddress,
   toApiDelivery,
   unchanged,
   type ChangeContext,
@@ -43,9 +45,10 @@ export interface SubscriptionsServiceDeps {
   clock: Clock;
   /** Called after a change commits: hands the subscription to the Stripe sync (a queued job). */
   onChanged?: (subscriptionId: string) => Promise<void>;
+  addressBook: AddressBook;
 }
 
-export function createSubscriptionsService({ repo, payments, clock, onChanged }: SubscriptionsServiceDeps) {
+export function createSubscriptionsService({ repo, payments, clock, onChanged, addressBook }: SubscriptionsServiceDeps) {
   async function present(subscription: SubscriptionRecord, count = 1): Promise<{ subscription: Subscription; plan: SubscriptionDelivery[] }> {
     const now = clock.now();
     const { settings, calendar } = await repo.scheduleContext(now);
@@ -188,12 +191,32 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
         priceCents: deliveryPrice(lot?.code ?? null, choice, settings),
         currency: settings.currency,
       });
+      if (request.saveAddress) await addressBook.keep(user.id, request.shippingAddress);
       try {
         const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId);
         return { subscriptionId, checkoutUrl };
       } catch (error) {
         await repo.cancelIncomplete(subscriptionId, clock.now());
         throw error;
+      }
+    },
+
+    /** "Pay now" on a subscription whose first payment never came: the same subscription and, while open, the same payment page. */
+    async resumePayment(user: SessionUser, subscriptionId: string): Promise<CheckoutUrlResponse> {
+      const subscription = await own(user, subscriptionId);
+      if (subscription.status !== 'incomplete') throw AppError.conflict('subscription_not_payable', 'This subscription has already started.');
+      const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId, {
+        successPath: `/subscriptions/${subscriptionId}?checkout=complete`,
+        cancelPath: `/subscriptions/${subscriptionId}?checkout=cancelled`,
+      });
+      return { checkoutUrl };
+    },
+
+    /** "Discard": a subscription never paid for is cancelled and leaves the customer's list. */
+    async discard(user: SessionUser, subscriptionId: string): Promise<void> {
+      await own(user, subscriptionId);
+      if (!(await repo.discardIncomplete(subscriptionId, clock.now()))) {
+        throw AppError.conflict('subscription_not_payable', 'This subscription has already started.');
       }
     },
 
@@ -221,7 +244,7 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
           Object.assign(fields, { [key]: value });
           summary.push((describeChoice[key] as (value: unknown) => string)(value));
         }
-        const addressChanged = update.shippingAddress !== undefined && !sameAddress(update.shippingAddress, subscription.shippingAddress);
+        const addressChanged = update.shippingAddress !== undefined && !samePostalAddress(update.shippingAddress, subscription.shippingAddress);
         if (addressChanged) {
           fields.shippingAddress = update.shippingAddress;
           summary.push(`Ship to: ${update.shippingAddress!.line1}, ${update.shippingAddress!.city}`);

@@ -61,6 +61,11 @@ export function OrderList({ page, onPageChange }: { page: number; onPageChange: 
               </p>
             </div>
             <div className="flex items-center gap-3">
+              {order.kind === 'green' && order.status === 'pending_payment' ? (
+                <Link to={paths.order.getHref(order.id)} className="font-semibold text-leaf underline">
+                  Pay now or discard
+                </Link>
+              ) : null}
               <OrderStatusBadge status={order.status} />
               <span className="font-semibold">{money(order.totalCents)}</span>
             </div>
