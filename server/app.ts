@@ -149,6 +149,7 @@ export function createApp(deps: AppDeps): Express {
       db,
       payments,
       clock,
+      audit,
       // The Stripe side follows in a job; without a queue (API-only tests) the scheduled sweep or a test pushes it.
       onChanged: async (subscriptionId) => {
         // The change is committed: if the queue cannot take the push now, the every-minute sync sends it.

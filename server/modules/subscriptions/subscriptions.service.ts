@@ -19,6 +19,7 @@ import type { SessionUser } from '../../middleware/require-role';
 import { queueEmail } from '../outbox';
 import type { CheckoutUrlResponse } from '@shared/schemas/checkout';
 import type { AddressBook } from '../account';
+import type { AuditTrail } from '../audit';
 import type { PaymentsService } from '../payments';
 import { dropDelivery, keepDelivery } from './delivery-grid.repo';
 import { moveOrderToDelivery, reshapePaidOrder } from './delivery-orders.repo';
@@ -46,9 +47,11 @@ export interface SubscriptionsServiceDeps {
   /** Called after a change commits: hands the subscription to the Stripe sync (a queued job). */
   onChanged?: (subscriptionId: string) => Promise<void>;
   addressBook: AddressBook;
+  /** Records changes staff make on a subscriber's behalf. */
+  audit: AuditTrail;
 }
 
-export function createSubscriptionsService({ repo, payments, clock, onChanged, addressBook }: SubscriptionsServiceDeps) {
+export function createSubscriptionsService({ repo, payments, clock, onChanged, addressBook, audit }: SubscriptionsServiceDeps) {
   async function present(subscription: SubscriptionRecord, count = 1): Promise<{ subscription: Subscription; plan: SubscriptionDelivery[] }> {
     const now = clock.now();
     const { settings, calendar } = await repo.scheduleContext(now);
@@ -84,6 +87,17 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged, a
     return subscription;
   }
 
+  const isStaff = (user: SessionUser) => user.role === 'staff' || user.role === 'owner';
+
+  /** The subscriber themselves, or staff acting on their behalf (audited). */
+  const mayChange = (user: SessionUser, subscription: { userId: string }) => subscription.userId === user.id || isStaff(user);
+
+  async function changeable(user: SessionUser, subscriptionId: string) {
+    const subscription = isStaff(user) ? await repo.findById(subscriptionId) : await repo.findOwn(subscriptionId, user.id);
+    if (!subscription) throw AppError.notFound('Subscription');
+    return subscription;
+  }
+
   /** Deliveries past their cutoff keep what they bring from now on: a change must never reach them. */
   async function freezeLocked({ tx, subscription, plan }: ChangeContext) {
     for (const delivery of plan) {
@@ -103,11 +117,11 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged, a
     kind: ChangeKind,
     decide: (context: ChangeContext) => Promise<ChangeOutcome>,
   ): Promise<SubscriptionChangeResponse> {
-    await own(user, subscriptionId);
+    const before = await changeable(user, subscriptionId);
     const now = clock.now();
     const { changed, notice } = await repo.transaction(async (tx) => {
       const subscription = await lockSubscription(tx, subscriptionId);
-      if (!subscription || subscription.userId !== user.id) throw AppError.notFound('Subscription');
+      if (!subscription || !mayChange(user, subscription)) throw AppError.notFound('Subscription');
       if (subscription.status === 'cancelled')
         throw AppError.conflict('subscription_ended', 'This subscription has ended; start a new one to receive coffee again.');
       if (subscription.status === 'incomplete')
@@ -143,7 +157,10 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged, a
       return { changed: true, notice };
     });
     if (changed) await onChanged?.(subscriptionId);
-    return { ...(await present(await own(user, subscriptionId))).subscription, notice };
+    if (changed && before.userId !== user.id) {
+      await audit.record({ action: 'subscription.changed_by_staff', actorId: user.id, detail: { subscriptionId, customerId: before.userId, change: kind } });
+    }
+    return { ...(await present(await changeable(user, subscriptionId))).subscription, notice };
   }
 
   /** The delivery on a roast date, or the next one a skip can take. */
