@@ -16,6 +16,7 @@ const buyer = {
 // A seeded demo lot (server/db/seed/demo-lots.ts): natural process, $18.00/kg.
 const lot = { code: 'WR-24-BRA-01', name: 'Fazenda Três Pinhas' };
 const staff = { email: 'roaster@wrenfield.test', password: 'restday-demo' };
+const owner = { email: 'owner@wrenfield.test', password: 'restday-demo' };
 const wcagTags = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 
 let browser: Browser;
@@ -160,6 +161,47 @@ describe('a home roaster buys green coffee in Chromium', () => {
     expect(confirmation!.text).toContain(lot.name);
     expect(problems).toEqual([]);
   });
+
+  it('the owner refunds from the order page: part of the order, asked once, and the order shows it once the payment provider confirms', async () => {
+    // axe-core needs its script past the shop's CSP; this context is the owner's own.
+    const ownerContext = await browser.newContext({ bypassCSP: true });
+    const ownerPage = await ownerContext.newPage();
+    ownerPage.setDefaultTimeout(10_000);
+    const ownerProblems: string[] = [];
+    watchConsole(ownerPage, ownerProblems);
+    try {
+      const staffOrderPath = `/roastery${new URL(orderUrl).pathname}`;
+      await ownerPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent(staffOrderPath)}`);
+      await ownerPage.getByLabel('E-mail').fill(owner.email);
+      await ownerPage.getByLabel('Password', { exact: true }).fill(owner.password);
+      await ownerPage.getByRole('button', { name: 'Sign in', exact: true }).click();
+      await ownerPage.waitForURL(`${baseUrl}${staffOrderPath}`);
+      const refund = ownerPage.getByRole('form', { name: 'Refund' });
+      await refund.waitFor();
+      expect(await accessibilityViolations(ownerPage)).toEqual([]);
+
+      await refund.getByText('Part of it').click();
+      await refund.getByLabel(/^Amount to refund/).fill('2.00');
+      await refund.getByRole('button', { name: 'Review the refund' }).click();
+      const question = ownerPage.getByRole('dialog', { name: 'Refund $2.00?' });
+      await question.waitFor();
+      expect(await accessibilityViolations(ownerPage)).toEqual([]);
+      await question.getByRole('button', { name: 'Refund $2.00' }).click();
+      await refund.getByText('Refund of $2.00 sent.', { exact: false }).waitFor();
+
+      // The order's figures move when the charge.refunded webhook lands.
+      const deadline = Date.now() + 20_000;
+      while (Date.now() < deadline && (await ownerPage.getByText('$2.00 refunded.', { exact: false }).count()) === 0) {
+        await new Promise((resolve) => setTimeout(resolve, 500));
+        await ownerPage.reload();
+        await ownerPage.getByRole('heading', { level: 2, name: 'Act on this order' }).waitFor();
+      }
+      expect(await ownerPage.getByText('$2.00 refunded.', { exact: false }).count()).toBeGreaterThan(0);
+      expect(ownerProblems).toEqual([]);
+    } finally {
+      await ownerContext.close();
+    }
+  }, 60_000);
 
   it('checkout saves and reuses an address: Addresses lists it, and the next checkout starts from it', async () => {
     await page.goto(`${baseUrl}/account/addresses`);
