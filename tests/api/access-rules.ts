@@ -147,5 +147,6 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders/:id/trace', access: 'staff' },
   { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'staff', params: { date: '2026-12-08' } },
   { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'POST', path: '/api/roastery/days/:date/ship', access: 'staff', params: { date: '2026-12-08' } },
   { method: 'GET', path: '/api/roastery/batches/:id/trace', access: 'staff' },
 ];
