@@ -1,6 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import AxeBuilder from '@axe-core/playwright';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { addDays, localDateOf } from '../../shared/domain/shop-time';
 import { roastLevelLabels } from '../../shared/domain/vocabulary';
@@ -80,6 +80,16 @@ async function packDayWithOrder(page: Page): Promise<{ date: string; order: Pack
     if (order) return { date, order };
   }
   throw new Error('The demo seed has no order to pack in the next two weeks.');
+}
+
+/** Marks a roasted order packed from its Pack List card, through the one confirmation it asks. */
+async function markPackedOnPage(page: Page, card: Locator) {
+  await card.getByRole('button', { name: 'Mark packed' }).click();
+  await page
+    .getByRole('dialog', { name: /order packed\?$/ })
+    .getByRole('button', { name: 'Mark packed' })
+    .click();
+  await card.getByText('Packed', { exact: true }).waitFor();
 }
 
 /** A seeded order of the last two weeks whose bags were filled from a batch, for the trace pages. */
@@ -197,15 +207,7 @@ describe('a roast day in a real browser', () => {
     expect(new URL(page.url()).searchParams.get('tab')).toBe('pack');
 
     const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });
-    if (order.status === 'roasted') {
-      await card.getByRole('button', { name: 'Mark packed' }).click();
-      // Asked once, in a dialog, before the bags are filled from batches.
-      await page
-        .getByRole('dialog', { name: /order packed\?$/ })
-        .getByRole('button', { name: 'Mark packed' })
-        .click();
-      await card.getByText('Packed', { exact: true }).waitFor();
-    }
+    if (order.status === 'roasted') await markPackedOnPage(page, card);
     await card.getByRole('button', { name: 'Mark shipped' }).click();
     const dialog = page.getByRole('dialog');
     await dialog.getByLabel('Carrier').fill('USPS');
@@ -232,14 +234,7 @@ describe('a roast day in a real browser', () => {
     const { date, order } = await packDayWithOrder(page);
     await page.goto(`${baseUrl}/roastery/days/${date}?tab=pack`);
     const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });
-    if (order.status === 'roasted') {
-      await card.getByRole('button', { name: 'Mark packed' }).click();
-      await page
-        .getByRole('dialog', { name: /order packed\?$/ })
-        .getByRole('button', { name: 'Mark packed' })
-        .click();
-      await card.getByText('Packed', { exact: true }).waitFor();
-    }
+    if (order.status === 'roasted') await markPackedOnPage(page, card);
     const before = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
     const packed = before.orders.filter((candidate) => candidate.status === 'packed');
     const shippedBefore = before.orders.filter((candidate) => candidate.status === 'shipped').length;

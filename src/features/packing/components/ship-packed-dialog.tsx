@@ -1,4 +1,4 @@
-import { useEffect, useId, useRef, useState } from 'react';
+import { useId, useState } from 'react';
 import { orderReference } from '@shared/domain/order-reference';
 import type { PackOrder } from '@shared/schemas/packing';
 import { Button } from '@/components/ui/button';
@@ -6,6 +6,7 @@ import { FormAlert } from '@/components/ui/form-alert';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { useShipDay } from '../api/ship-day';
+import { useOpenDialog } from '../hooks/use-open-dialog';
 
 type ShipPackedDialogProps = {
   orders: PackOrder[];
@@ -16,21 +17,12 @@ type ShipPackedDialogProps = {
 
 /** "Mark all packed orders shipped": one carrier for all, a tracking number for each; all ship together or none does. */
 export function ShipPackedDialog({ orders, date, onClose, onShipped }: ShipPackedDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
+  const { dialogRef, finish } = useOpenDialog();
   const titleId = useId();
   const shipDay = useShipDay(date);
   const [carrier, setCarrier] = useState('');
   const [tracking, setTracking] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string>();
-  const [done, setDone] = useState(false);
-
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (dialog && !dialog.open) dialog.showModal();
-  }, []);
-  useEffect(() => {
-    if (done) dialogRef.current?.close();
-  }, [done]);
 
   async function submit() {
     setFormError(undefined);
@@ -43,7 +35,7 @@ export function ShipPackedDialog({ orders, date, onClose, onShipped }: ShipPacke
         body: { carrier, shipments: orders.map((order) => ({ orderId: order.orderId, trackingNumber: tracking[order.orderId]! })) },
       });
       onShipped(orders.length, carrier.trim());
-      setDone(true);
+      finish();
     } catch (error) {
       setFormError(error instanceof ApiError ? error.message : 'That did not work. Please try again.');
     }
