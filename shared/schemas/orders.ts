@@ -10,10 +10,17 @@ export type OrderSort = (typeof orderSorts)[number];
 /**
  * Query string of `GET /api/orders` and `GET /api/orders.csv`. Customers always see only their
  * own orders; staff see everyone's. `from`/`to` bound the day the order was placed (shop's dates,
- * both inclusive); `roastDate` is the roast day of roasted orders.
+ * both inclusive); `roastDate` is the roast day of roasted orders; `q` searches name, e-mail and reference.
  */
 export const orderListQuerySchema = z
   .object({
+    /** Staff: words in the customer's name or e-mail, or the start of the order reference ("3F2A9C1E"). */
+    q: z
+      .string()
+      .trim()
+      .max(100, 'Search with at most 100 characters.')
+      .optional()
+      .transform((text) => text || undefined),
     status: z.enum(orderStatuses).optional(),
     kind: z.enum(orderKinds).optional(),
     roastDate: isoDate('roast date').optional(),

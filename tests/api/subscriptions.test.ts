@@ -98,6 +98,19 @@ describe('POST /api/checkout/subscription', () => {
     expect(session.mode).toBe('subscription');
     expect(session.amount_total).toBe(4135);
     expect(session.line_items?.data[0]?.price?.recurring).toMatchObject({ interval: 'week', interval_count: 2 });
+    // Leaving the payment page returns to the builder with these choices, not its defaults.
+    const cancelUrl = new URL(session.cancel_url!);
+    expect(cancelUrl.pathname).toBe('/subscribe');
+    expect(Object.fromEntries(cancelUrl.searchParams)).toEqual({
+      lot: lot.code,
+      level: 'light',
+      size: '12oz',
+      bags: '2',
+      grind: 'pour-over',
+      brew: 'filter',
+      every: '2',
+      checkout: 'cancelled',
+    });
   });
 
   it("the Roaster's Rotation takes any level; a lot refuses a level it does not offer with 422 naming roastLevel", async () => {

@@ -36,6 +36,7 @@ export function createOrdersService(repo: OrdersRepo) {
     const timeZone = query.from || query.to ? ((await repo.shopTimeZone()) ?? 'UTC') : 'UTC';
     return {
       ...(isStaff(user) ? {} : { userId: user.id, hideDiscarded: true }),
+      text: query.q,
       status: query.status,
       kind: query.kind,
       roastDate: query.roastDate,

@@ -1,4 +1,5 @@
 import { samePostalAddress } from '@shared/domain/address';
+import { searchFromBuilder } from '@shared/domain/builder-search';
 import { deliveryGreenGrams, nextDelivery, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
 import { datesForRoastDate } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
@@ -209,8 +210,14 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged, a
         currency: settings.currency,
       });
       if (request.saveAddress) await addressBook.keep(user.id, request.shippingAddress);
+      // Leaving the payment page comes back to the builder with these same choices, not the defaults.
+      const backToBuilder = searchFromBuilder(request);
+      backToBuilder.set('checkout', 'cancelled');
       try {
-        const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId);
+        const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId, {
+          successPath: `/subscriptions/${subscriptionId}?checkout=complete`,
+          cancelPath: `/subscribe?${backToBuilder.toString()}`,
+        });
         return { subscriptionId, checkoutUrl };
       } catch (error) {
         await repo.cancelIncomplete(subscriptionId, clock.now());

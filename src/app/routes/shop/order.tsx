@@ -14,6 +14,7 @@ import { PaymentStatusPanel } from '@/features/orders/components/payment-status-
 import { UnpaidOrderActions } from '@/features/orders/components/unpaid-order-actions';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
+import { orderReference } from '@shared/domain/order-reference';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -42,7 +43,7 @@ export default function OrderRoute() {
     return (
       <>
         <PageTitle title="Your order" />
-        <PageHeader title="Your order" />
+        <PageHeader title="Your order" lead={`Order ${orderReference(order.id)}: quote it when you write to us about this order.`} />
         {returningFromPayment ? (
           <div className="mb-6">
             <PaymentStatusPanel order={order} onCheckAgain={() => void orderQuery.refetch()} />
