@@ -10,7 +10,7 @@ import { signedInAgent } from '../setup/test-users';
 import { movementsOf, stockOf } from './checkout-support';
 import { waitFor } from './outbox-support';
 import { orderRow, startPaymentsServer, subscriptionRow, type PaymentsServer } from './payments-support';
-import { createLotForSale, createTestUser, shipTo } from '../factories/index';
+import { createLotForSale, createTestUser, rotationCheckoutRequest, shipTo } from '../factories/index';
 
 const app = createTestApp();
 
@@ -89,16 +89,7 @@ describe('POST /api/orders/:id/discard', () => {
 describe('POST /api/subscriptions/:id/pay and /discard — a subscription whose first payment never came', () => {
   async function startUnpaidSubscription() {
     const agent = await signedInAgent(app, await createTestUser('customer'));
-    const started = await agent.post('/api/checkout/subscription').send({
-      lotCode: null,
-      roastLevel: 'medium',
-      bagSize: '12oz',
-      bagsPerDelivery: 1,
-      grind: 'whole-bean',
-      brewMethod: 'filter',
-      cadenceWeeks: 2,
-      shippingAddress: shipTo,
-    });
+    const started = await agent.post('/api/checkout/subscription').send(rotationCheckoutRequest);
     expect(started.status).toBe(201);
     return { agent, ...subscriptionCheckoutResponseSchema.parse(started.body) };
   }

@@ -15,7 +15,7 @@ import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
 import { subscriptionRow, testStripe } from './payments-support';
-import { createLotForSale, createTestUser, createWeeklySubscription, shipTo } from '../factories/index';
+import { createLotForSale, createTestUser, createWeeklySubscription, rotationCheckoutRequest, shipTo } from '../factories/index';
 
 // The shop runs on Restday's default settings here (shared/schemas/settings.ts): New York time,
 // roasting Monday, Wednesday and Friday, cutoff 12:00 the day before, filter rest 2 days,
@@ -57,17 +57,7 @@ async function signedIn() {
 describe('POST /api/checkout/subscription', () => {
   it('with saveAddress keeps the shipping address in the address book as the default', async () => {
     const { agent } = await signedIn();
-    const response = await agent.post('/api/checkout/subscription').send({
-      lotCode: null,
-      roastLevel: 'medium',
-      bagSize: '12oz',
-      bagsPerDelivery: 1,
-      grind: 'whole-bean',
-      brewMethod: 'filter',
-      cadenceWeeks: 2,
-      shippingAddress: shipTo,
-      saveAddress: true,
-    });
+    const response = await agent.post('/api/checkout/subscription').send({ ...rotationCheckoutRequest, saveAddress: true });
     expect(response.status, JSON.stringify(response.body)).toBe(201);
     const book = await agent.get('/api/account/addresses');
     expect(book.body.items).toEqual([expect.objectContaining({ ...shipTo, line2: null, country: 'US', isDefault: true })]);
