@@ -142,13 +142,14 @@ export function createApp(deps: AppDeps): Express {
     createSubscribersModule({ db, clock }),
     createRotationModule({ db, clock, audit }),
     createCheckoutModule({ db, payments, clock }),
-    createOrdersModule({ db, gateway }),
+    createOrdersModule({ db, gateway, clock, audit }),
     // Before the subscriptions module, so /subscriptions/preview is never read as a subscription id.
     createSubscriptionPreviewModule({ db, clock }),
     createSubscriptionsModule({
       db,
       payments,
       clock,
+      audit,
       // The Stripe side follows in a job; without a queue (API-only tests) the scheduled sweep or a test pushes it.
       onChanged: async (subscriptionId) => {
         // The change is committed: if the queue cannot take the push now, the every-minute sync sends it.

@@ -6,6 +6,9 @@ import { postalAddressInputSchema } from './address';
 export const shippingAddressSchema = postalAddressInputSchema;
 export type ShippingAddress = z.infer<typeof shippingAddressSchema>;
 
+/** A checkout's "Save for next time": true keeps the shipping address in the address book (once). */
+export const saveAddressField = z.boolean({ error: 'Answer true or false.' }).optional();
+
 /** Most bags of one size of one lot in a single order. */
 export const maxBagsPerLine = 50;
 /** Most lines in a single order. */
@@ -33,6 +36,7 @@ export const greenCheckoutRequestSchema = z.object({
       'Each lot and size may appear only once; add to its quantity instead.',
     ),
   shippingAddress: shippingAddressSchema,
+  saveAddress: saveAddressField,
 });
 export type GreenCheckoutRequest = z.infer<typeof greenCheckoutRequestSchema>;
 
@@ -54,3 +58,7 @@ export const greenCheckoutResponseSchema = z.object({
   checkoutUrl: z.url(),
 });
 export type GreenCheckoutResponse = z.infer<typeof greenCheckoutResponseSchema>;
+
+/** `POST /api/orders/:id/pay` and `POST /api/subscriptions/:id/pay` (own, awaiting payment): the payment page to go on to. */
+export const checkoutUrlResponseSchema = z.object({ checkoutUrl: z.url() });
+export type CheckoutUrlResponse = z.infer<typeof checkoutUrlResponseSchema>;

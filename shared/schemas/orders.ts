@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { postalAddressSchema } from './address';
+import { postalAddressInputSchema, postalAddressSchema } from './address';
 import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, brewMethods, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
@@ -10,10 +10,17 @@ export type OrderSort = (typeof orderSorts)[number];
 /**
  * Query string of `GET /api/orders` and `GET /api/orders.csv`. Customers always see only their
  * own orders; staff see everyone's. `from`/`to` bound the day the order was placed (shop's dates,
- * both inclusive); `roastDate` is the roast day of roasted orders.
+ * both inclusive); `roastDate` is the roast day of roasted orders; `q` searches name, e-mail and reference.
  */
 export const orderListQuerySchema = z
   .object({
+    /** Staff: words in the customer's name or e-mail, or the start of the order reference ("3F2A9C1E"). */
+    q: z
+      .string()
+      .trim()
+      .max(100, 'Search with at most 100 characters.')
+      .optional()
+      .transform((text) => text || undefined),
     status: z.enum(orderStatuses).optional(),
     kind: z.enum(orderKinds).optional(),
     roastDate: isoDate('roast date').optional(),
@@ -102,8 +109,32 @@ export const orderDetailSchema = z.object({
   paidAt: instant.nullable(),
   shippedAt: instant.nullable(),
   cancelledAt: instant.nullable(),
+  /** Staff only (absent for the customer): the staff's own note on the order. */
+  staffNote: z.string().nullable().optional(),
 });
 export type OrderDetail = z.infer<typeof orderDetailSchema>;
+
+/** The e-mails about one order that staff can send again (`POST /api/orders/:id/resend/:template`). */
+export const resendableTemplates = ['order-confirmed', 'roasted', 'shipped'] as const;
+export type ResendableTemplate = (typeof resendableTemplates)[number];
+
+export const orderResendParamsSchema = z.object({
+  id: z.uuid('No such order.'),
+  template: z.enum(resendableTemplates, { error: `Choose one of: ${resendableTemplates.join(', ')}.` }),
+});
+
+/** Body of `PATCH /api/orders/:id/address` (staff): where the order ships now; only before it ships. */
+export const orderAddressCorrectionSchema = postalAddressInputSchema;
+
+/** Body of `PUT /api/orders/:id/note` (staff); an empty note removes it. */
+export const orderNoteSchema = z.object({
+  note: z
+    .string({ error: 'Write the note as text.' })
+    .trim()
+    .max(2000, 'Use at most 2,000 characters.')
+    .transform((note) => note || null),
+});
+export type OrderNoteInput = z.input<typeof orderNoteSchema>;
 
 /** Columns of `GET /api/orders.csv`, in order. */
 export const orderCsvColumns = [

@@ -79,6 +79,17 @@ export const shipOrderBodySchema = z.object({
 });
 export type ShipOrderBody = z.input<typeof shipOrderBodySchema>;
 
+/** Body of `POST /api/roastery/days/:date/ship` (staff): the day's packed orders, one carrier, each its tracking number. */
+export const bulkShipBodySchema = z.object({
+  carrier: shipOrderBodySchema.shape.carrier,
+  shipments: z
+    .array(z.object({ orderId: z.uuid('No such order.'), trackingNumber: shipOrderBodySchema.shape.trackingNumber }), { error: 'List the orders to ship.' })
+    .min(1, 'List at least one order to ship.')
+    .max(200, 'Ship at most 200 orders at once.')
+    .refine((shipments) => new Set(shipments.map((each) => each.orderId)).size === shipments.length, 'List each order once.'),
+});
+export type BulkShipBody = z.infer<typeof bulkShipBodySchema>;
+
 /** Why the owner refunds, in Stripe's own terms. */
 export const refundReasons = ['requested_by_customer', 'duplicate', 'fraudulent'] as const;
 export type RefundReason = (typeof refundReasons)[number];

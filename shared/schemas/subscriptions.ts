@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { instant, isoDate, roastDatesSchema } from './dates';
 import { brewMethods, deliveryStatuses, grinds, roastedBagSizes, roastLevels, subscriptionStatuses } from '../domain/vocabulary';
 import { postalAddressSchema } from './address';
-import { shippingAddressSchema } from './checkout';
+import { saveAddressField, shippingAddressSchema } from './checkout';
 
 /** Most bags in one delivery. */
 export const maxBagsPerDelivery = 10;
@@ -37,6 +37,7 @@ export const subscriptionCheckoutRequestSchema = z.object({
   brewMethod: brewMethodField,
   cadenceWeeks: cadenceWeeksField,
   shippingAddress: shippingAddressSchema,
+  saveAddress: saveAddressField,
 });
 export type SubscriptionCheckoutRequest = z.infer<typeof subscriptionCheckoutRequestSchema>;
 

@@ -42,6 +42,11 @@ async function orderOf(owner: TestUser) {
   return { id: (await createOrder({ userId: owner.id, subtotalCents: 1899, shippingCents: 695 })).id };
 }
 
+/** A paid green order: its owner reaches it (and is told it is not waiting for payment), no one else does. */
+async function paidOrderOf(owner: TestUser) {
+  return { id: (await createOrder({ userId: owner.id, status: 'paid', subtotalCents: 1899, shippingCents: 695 })).id };
+}
+
 /** An active Roaster's Rotation subscription whose deliveries start in 2031 (nothing about it is locked). */
 async function subscriptionOf(owner: TestUser) {
   return { id: (await createSubscription({ userId: owner.id, status: 'active', priceCents: 3200, anchorDate: '2031-01-07' })).id };
@@ -110,19 +115,23 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
   { method: 'GET', path: '/api/orders.csv', access: 'staff' },
   { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
+  { method: 'POST', path: '/api/orders/:id/pay', access: 'own-record', record: paidOrderOf },
+  { method: 'POST', path: '/api/orders/:id/discard', access: 'own-record', record: orderOf },
 
   { method: 'GET', path: '/api/subscriptions/preview', access: 'public' },
   { method: 'POST', path: '/api/checkout/subscription', access: 'signed-in' },
   { method: 'GET', path: '/api/subscriptions', access: 'signed-in' },
   { method: 'GET', path: '/api/subscriptions/:id', access: 'own-record', record: subscriptionOf },
   { method: 'GET', path: '/api/subscriptions/:id/deliveries', access: 'own-record', record: subscriptionOf },
-  { method: 'PATCH', path: '/api/subscriptions/:id', access: 'own-record', record: subscriptionOf, body: { grind: 'pour-over' } },
-  { method: 'POST', path: '/api/subscriptions/:id/skip', access: 'own-record', record: subscriptionOf },
-  { method: 'POST', path: '/api/subscriptions/:id/deliveries/:date/skip', access: 'own-record', record: subscriptionOf, params: { date: '2031-01-22' } },
-  { method: 'POST', path: '/api/subscriptions/:id/deliveries/:date/unskip', access: 'own-record', record: subscriptionOf, params: { date: '2031-01-22' } },
-  { method: 'POST', path: '/api/subscriptions/:id/pause', access: 'own-record', record: subscriptionOf, body: { until: '2031-03-03' } },
-  { method: 'POST', path: '/api/subscriptions/:id/resume', access: 'own-record', record: subscriptionOf },
-  { method: 'POST', path: '/api/subscriptions/:id/cancel', access: 'own-record', record: subscriptionOf },
+  { method: 'PATCH', path: '/api/subscriptions/:id', access: 'own-or-staff', record: subscriptionOf, body: { grind: 'pour-over' } },
+  { method: 'POST', path: '/api/subscriptions/:id/skip', access: 'own-or-staff', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/deliveries/:date/skip', access: 'own-or-staff', record: subscriptionOf, params: { date: '2031-01-22' } },
+  { method: 'POST', path: '/api/subscriptions/:id/deliveries/:date/unskip', access: 'own-or-staff', record: subscriptionOf, params: { date: '2031-01-22' } },
+  { method: 'POST', path: '/api/subscriptions/:id/pause', access: 'own-or-staff', record: subscriptionOf, body: { until: '2031-03-03' } },
+  { method: 'POST', path: '/api/subscriptions/:id/resume', access: 'own-or-staff', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/cancel', access: 'own-or-staff', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/pay', access: 'own-record', record: subscriptionOf },
+  { method: 'POST', path: '/api/subscriptions/:id/discard', access: 'own-record', record: subscriptionOf },
   { method: 'GET', path: '/api/roastery/subscribers', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers.csv', access: 'staff' },
   { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },
@@ -131,8 +140,13 @@ export const accessRules: AccessRule[] = [
   { method: 'POST', path: '/api/orders/:id/pack', access: 'staff' },
   { method: 'POST', path: '/api/orders/:id/ship', access: 'staff', body: { carrier: 'Invented Parcel Co', trackingNumber: 'TEST123' } },
   { method: 'POST', path: '/api/orders/:id/refund', access: 'owner' },
+  { method: 'POST', path: '/api/orders/:id/cancel', access: 'staff' },
+  { method: 'POST', path: '/api/orders/:id/resend/:template', access: 'staff', params: { template: 'order-confirmed' } },
+  { method: 'PATCH', path: '/api/orders/:id/address', access: 'staff' },
+  { method: 'PUT', path: '/api/orders/:id/note', access: 'staff', body: { note: 'Leave with the neighbour.' } },
   { method: 'GET', path: '/api/orders/:id/trace', access: 'staff' },
   { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'staff', params: { date: '2026-12-08' } },
   { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'POST', path: '/api/roastery/days/:date/ship', access: 'staff', params: { date: '2026-12-08' } },
   { method: 'GET', path: '/api/roastery/batches/:id/trace', access: 'staff' },
 ];

@@ -1,5 +1,6 @@
 import { count, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { addressListResponseSchema } from '@shared/schemas/account';
 import { greenCheckoutResponseSchema } from '@shared/schemas/checkout';
 import { payOnTestPaymentPage } from '../../dev-services/stripe-fake/control-client';
 import { succeedingTestCard } from '../../dev-services/stripe-fake/test-cards';
@@ -158,6 +159,46 @@ describe('POST /api/checkout/green', () => {
     expect(twice.status).toBe(400);
     expect(apiErrorSchema.parse(twice.body).error.fields).toHaveProperty('items');
     expect(await stockOf(lot.id)).toBe(10_000);
+  });
+});
+
+describe('POST /api/checkout/green — save for next time', () => {
+  async function addressBookOf(agent: Awaited<ReturnType<typeof signedInAgent>>) {
+    const response = await agent.get('/api/account/addresses');
+    expect(response.status).toBe(200);
+    return addressListResponseSchema.parse(response.body).items;
+  }
+
+  it('keeps the shipping address in the address book as the default, once however often it is used again', async () => {
+    const lot = await createLotForSale(10_000);
+    const agent = await signedInAgent(app, await createTestUser('customer'));
+    const order = { items: [{ lotCode: lot.code, size: '8oz', quantity: 1 }], shippingAddress: shipTo, saveAddress: true };
+
+    expect((await agent.post('/api/checkout/green').send(order)).status).toBe(201);
+    expect(await addressBookOf(agent)).toEqual([expect.objectContaining({ ...shipTo, line2: null, country: 'US', isDefault: true })]);
+
+    expect((await agent.post('/api/checkout/green').send(order)).status).toBe(201);
+    const elsewhere = { ...shipTo, line1: '9 Heron Close' };
+    expect((await agent.post('/api/checkout/green').send({ ...order, shippingAddress: elsewhere })).status).toBe(201);
+    const book = await addressBookOf(agent);
+    expect(book.map((address) => [address.line1, address.isDefault])).toEqual([
+      [shipTo.line1, true],
+      ['9 Heron Close', false],
+    ]);
+  });
+
+  it('keeps nothing when the customer leaves it unticked, and answers 400 naming saveAddress for a value that is not true or false', async () => {
+    const lot = await createLotForSale(10_000);
+    const customer = await createTestUser('customer');
+    const agent = await signedInAgent(app, customer);
+    const order = { items: [{ lotCode: lot.code, size: '8oz', quantity: 1 }], shippingAddress: shipTo };
+
+    expect((await agent.post('/api/checkout/green').send({ ...order, saveAddress: false })).status).toBe(201);
+    const refused = await agent.post('/api/checkout/green').send({ ...order, saveAddress: 'yes' });
+    expect(refused.status).toBe(400);
+    expect(apiErrorSchema.parse(refused.body).error.fields).toHaveProperty('saveAddress');
+    expect(await ordersOf(customer.id)).toBe(1);
+    expect(await addressBookOf(agent)).toEqual([]);
   });
 });
 

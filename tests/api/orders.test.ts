@@ -171,3 +171,31 @@ describe('the staff orders table', () => {
     });
   });
 });
+
+describe('GET /api/orders?q= — staff search by name, e-mail or order reference', () => {
+  it('finds the orders of a customer by part of their name or e-mail, and one order by the start of its reference; % matches only itself', async () => {
+    const staff = await signedInAgent(app, await createTestUser('staff'));
+    const marker = `Quillon${Date.now()}`;
+    const customer = await createTestUser('customer', { name: `Ada ${marker}` });
+    const first = await createOrder({ userId: customer.id, status: 'paid', subtotalCents: 1899 });
+    const second = await createOrder({ userId: customer.id, status: 'paid', subtotalCents: 2500 });
+    const search = async (q: string) => orderListResponseSchema.parse((await staff.get('/api/orders').query({ q, pageSize: 200 })).body);
+
+    const byName = await search(marker.toLowerCase());
+    expect(byName.items.map((order) => order.id).sort()).toEqual([first.id, second.id].sort());
+    expect(byName.total).toBe(2);
+    const byEmail = await search(customer.email.slice(0, 12).toUpperCase());
+    expect(byEmail.items.map((order) => order.id)).toEqual(expect.arrayContaining([first.id, second.id]));
+    // The reference people read: the id's first eight characters, upper-case.
+    const reference = first.id.replace(/-/g, '').slice(0, 8).toUpperCase();
+    expect((await search(reference)).items.map((order) => order.id)).toContain(first.id);
+    expect((await search(`${marker}%`)).total).toBe(0);
+  });
+
+  it('answers 400 naming q for a search longer than 100 characters', async () => {
+    const staff = await signedInAgent(app, await createTestUser('staff'));
+    const response = await staff.get('/api/orders').query({ q: 'x'.repeat(101) });
+    expect(response.status).toBe(400);
+    expect(apiErrorSchema.parse(response.body).error.fields).toHaveProperty('q');
+  });
+});

@@ -289,3 +289,45 @@ async function deliveryFor(orderId: string, roastDate: string, lotId: string) {
   });
   return delivery.id;
 }
+
+describe('POST /api/roastery/days/:date/ship — mark all packed orders shipped', () => {
+  it('ships every listed packed order of the day with one carrier and each its tracking number, and queues each shipped e-mail', async () => {
+    const date = uniqueDay();
+    const lot = await createLotForSale(20_000);
+    const first = await createGreenOrder(customer.id, lot.id, { status: 'packed', shipDate: date });
+    const second = await createGreenOrder(customer.id, lot.id, { status: 'packed', shipDate: date });
+
+    const response = await staff.post(`/api/roastery/days/${date}/ship`).send({
+      carrier: 'Invented Parcel Co',
+      shipments: [
+        { orderId: first.id, trackingNumber: 'ipc 0001' },
+        { orderId: second.id, trackingNumber: 'ipc 0002' },
+      ],
+    });
+    expect(response.status, JSON.stringify(response.body)).toBe(200);
+    const shipped = packListResponseSchema.parse(response.body).orders;
+    expect(shipped.find((order) => order.orderId === first.id)).toMatchObject({ status: 'shipped', carrier: 'Invented Parcel Co', trackingNumber: 'IPC0001' });
+    expect(shipped.find((order) => order.orderId === second.id)).toMatchObject({ status: 'shipped', trackingNumber: 'IPC0002' });
+    expect(await outboxRows([`shipped:${first.id}`, `shipped:${second.id}`])).toHaveLength(2);
+  });
+
+  it('ships none when one order is not packed (409) or not on that day (400), and answers 400 naming the carrier when it is missing', async () => {
+    const date = uniqueDay();
+    const lot = await createLotForSale(20_000);
+    const packed = await createGreenOrder(customer.id, lot.id, { status: 'packed', shipDate: date });
+    const unpacked = await createGreenOrder(customer.id, lot.id, { status: 'paid', shipDate: date });
+    const otherDay = await createGreenOrder(customer.id, lot.id, { status: 'packed', shipDate: uniqueDay() });
+    const send = (orderIds: string[], carrier = 'Invented Parcel Co') =>
+      staff
+        .post(`/api/roastery/days/${date}/ship`)
+        .send({ carrier, shipments: orderIds.map((orderId, index) => ({ orderId, trackingNumber: `IPC${index}` })) });
+
+    expect((await send([packed.id, unpacked.id])).status).toBe(409);
+    expect((await send([packed.id, otherDay.id])).status).toBe(400);
+    const noCarrier = await send([packed.id], ' ');
+    expect(noCarrier.status).toBe(400);
+    expect(apiErrorSchema.parse(noCarrier.body).error.fields).toHaveProperty('carrier');
+    expect((await orderStatusOf(packed.id)).status).toBe('packed');
+    expect(await outboxRows([`shipped:${packed.id}`])).toHaveLength(0);
+  });
+});

@@ -15,7 +15,7 @@ import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
 import { subscriptionRow, testStripe } from './payments-support';
-import { createLotForSale, createTestUser, createWeeklySubscription, shipTo } from '../factories/index';
+import { createLotForSale, createTestUser, createWeeklySubscription, rotationCheckoutRequest, shipTo } from '../factories/index';
 
 // The shop runs on Restday's default settings here (shared/schemas/settings.ts): New York time,
 // roasting Monday, Wednesday and Friday, cutoff 12:00 the day before, filter rest 2 days,
@@ -55,6 +55,14 @@ async function signedIn() {
 }
 
 describe('POST /api/checkout/subscription', () => {
+  it('with saveAddress keeps the shipping address in the address book as the default', async () => {
+    const { agent } = await signedIn();
+    const response = await agent.post('/api/checkout/subscription').send({ ...rotationCheckoutRequest, saveAddress: true });
+    expect(response.status, JSON.stringify(response.body)).toBe(201);
+    const book = await agent.get('/api/account/addresses');
+    expect(book.body.items).toEqual([expect.objectContaining({ ...shipTo, line2: null, country: 'US', isDefault: true })]);
+  });
+
   it('prices one delivery with the trade engine, creates the subscription incomplete and opens a weekly-recurring checkout', async () => {
     const lot = await createLotForSale(20_000);
     const { user, agent } = await signedIn();
@@ -80,6 +88,19 @@ describe('POST /api/checkout/subscription', () => {
     expect(session.mode).toBe('subscription');
     expect(session.amount_total).toBe(4135);
     expect(session.line_items?.data[0]?.price?.recurring).toMatchObject({ interval: 'week', interval_count: 2 });
+    // Leaving the payment page returns to the builder with these choices, not its defaults.
+    const cancelUrl = new URL(session.cancel_url!);
+    expect(cancelUrl.pathname).toBe('/subscribe');
+    expect(Object.fromEntries(cancelUrl.searchParams)).toEqual({
+      lot: lot.code,
+      level: 'light',
+      size: '12oz',
+      bags: '2',
+      grind: 'pour-over',
+      brew: 'filter',
+      every: '2',
+      checkout: 'cancelled',
+    });
   });
 
   it("the Roaster's Rotation takes any level; a lot refuses a level it does not offer with 422 naming roastLevel", async () => {

@@ -1,6 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import AxeBuilder from '@axe-core/playwright';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { addDays, localDateOf } from '../../shared/domain/shop-time';
 import { roastLevelLabels } from '../../shared/domain/vocabulary';
@@ -81,6 +81,16 @@ async function packDayWithOrder(page: Page): Promise<{ date: string; order: Pack
     if (order) return { date, order };
   }
   throw new Error('The demo seed has no order to pack in the next two weeks.');
+}
+
+/** Marks a roasted order packed from its Pack List card, through the one confirmation it asks. */
+async function markPackedOnPage(page: Page, card: Locator) {
+  await card.getByRole('button', { name: 'Mark packed' }).click();
+  await page
+    .getByRole('dialog', { name: /order packed\?$/ })
+    .getByRole('button', { name: 'Mark packed' })
+    .click();
+  await card.getByText('Packed', { exact: true }).waitFor();
 }
 
 /** A seeded order of the last two weeks whose bags were filled from a batch, for the trace pages. */
@@ -198,10 +208,7 @@ describe('a roast day in a real browser', () => {
     expect(new URL(page.url()).searchParams.get('tab')).toBe('pack');
 
     const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });
-    if (order.status === 'roasted') {
-      await card.getByRole('button', { name: 'Mark packed' }).click();
-      await card.getByText('Packed', { exact: true }).waitFor();
-    }
+    if (order.status === 'roasted') await markPackedOnPage(page, card);
     await card.getByRole('button', { name: 'Mark shipped' }).click();
     const dialog = page.getByRole('dialog');
     await dialog.getByLabel('Carrier').fill('USPS');
@@ -209,6 +216,9 @@ describe('a roast day in a real browser', () => {
     await dialog.getByLabel('Tracking number').fill('wr e2e 0042');
     await dialog.getByRole('button', { name: 'Mark shipped' }).click();
     await page.getByText(/order is marked shipped \(USPS WRE2E0042\)/).waitFor();
+    // Shipped orders leave the list of those still to ship; the Shipped filter shows them.
+    await card.waitFor({ state: 'detached' });
+    await page.getByRole('radio', { name: /^Shipped \(\d+\)$/ }).check();
     await card.getByText('Shipped', { exact: true }).waitFor();
 
     const packList = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
@@ -217,6 +227,37 @@ describe('a roast day in a real browser', () => {
       carrier: 'USPS',
       trackingNumber: 'WRE2E0042',
     });
+    expect(problems).toEqual([]);
+  });
+
+  it('the pack list bulk-ship: counts by state, then every packed order marked shipped with one carrier, each with its own tracking number', async () => {
+    const { page, problems } = session;
+    const { date, order } = await packDayWithOrder(page);
+    await page.goto(`${baseUrl}/roastery/days/${date}?tab=pack`);
+    const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });
+    if (order.status === 'roasted') await markPackedOnPage(page, card);
+    const before = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
+    const packed = before.orders.filter((candidate) => candidate.status === 'packed');
+    const shippedBefore = before.orders.filter((candidate) => candidate.status === 'shipped').length;
+    await page.getByRole('radio', { name: `Packed (${packed.length})` }).waitFor();
+
+    await page.getByRole('button', { name: `Mark all packed orders shipped (${packed.length})` }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Carrier').fill('Invented Parcel Co');
+    const trackingFields = dialog.getByLabel(/^Tracking number for /);
+    expect(await trackingFields.count()).toBe(packed.length);
+    for (let index = 0; index < packed.length; index += 1) {
+      // Invented tracking numbers, one per parcel.
+      await trackingFields.nth(index).fill(`ipc bulk ${index + 1}`);
+    }
+    await dialog.getByRole('button', { name: /^Mark (it|all \d+) shipped$/ }).click();
+    await page.getByText(/marked shipped with Invented Parcel Co/).waitFor();
+    await page.getByRole('radio', { name: `Shipped (${shippedBefore + packed.length})` }).waitFor();
+
+    const after = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
+    for (const each of packed) {
+      expect(after.orders.find((candidate) => candidate.orderId === each.orderId)).toMatchObject({ status: 'shipped', carrier: 'Invented Parcel Co' });
+    }
     expect(problems).toEqual([]);
   });
 

@@ -112,3 +112,15 @@ export async function createPendingSubscription(userId: string, lotId: string | 
   const subscription = await createSubscription({ userId, lotId, bagsPerDelivery: 2, priceCents: 3600 });
   return { id: subscription.id };
 }
+
+/** A `POST /api/checkout/subscription` body: the Roaster's Rotation, one 12 oz bag, medium, whole bean for filter, every 2 weeks, to the tests' address. */
+export const rotationCheckoutRequest = {
+  lotCode: null,
+  roastLevel: 'medium',
+  bagSize: '12oz',
+  bagsPerDelivery: 1,
+  grind: 'whole-bean',
+  brewMethod: 'filter',
+  cadenceWeeks: 2,
+  shippingAddress: shipTo,
+} as const;

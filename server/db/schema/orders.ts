@@ -47,6 +47,10 @@ export const orders = pgTable(
     packedAt: instant('packed_at'),
     shippedAt: instant('shipped_at'),
     cancelledAt: instant('cancelled_at'),
+    /** Set when the customer discarded the unpaid checkout: it is cancelled and left out of their history. */
+    discardedAt: instant('discarded_at'),
+    /** Staff's own note on the order; never shown to the customer. */
+    staffNote: text('staff_note'),
     refundedCents: integer('refunded_cents').notNull().default(0),
     ...timestamps(),
   },

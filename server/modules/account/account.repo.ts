@@ -1,5 +1,7 @@
-import { and, asc, desc, eq, ne } from 'drizzle-orm';
+import { and, asc, desc, eq, ne, sql } from 'drizzle-orm';
+import { samePostalAddress } from '@shared/domain/address';
 import type { AddressInput } from '@shared/schemas/account';
+import type { PostalAddressInput } from '@shared/schemas/address';
 import type { DbOrTx } from '../../db/client';
 import { addresses } from '../../db/schema/index';
 
@@ -37,6 +39,19 @@ export function createAccountRepo(db: DbOrTx) {
           .values({ ...input, userId, isDefault })
           .returning(addressColumns);
         return row!;
+      });
+    },
+
+    /**
+     * Keeps an address a checkout shipped to, unless the book already holds the same one; the first
+     * address kept becomes the default. Serialised per account, so two checkouts at once keep one copy.
+     */
+    keepAddress(userId: string, address: PostalAddressInput) {
+      return db.transaction(async (tx) => {
+        await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`address-book:${userId}`}))`);
+        const book = await tx.select(addressColumns).from(addresses).where(eq(addresses.userId, userId));
+        if (book.some((kept) => samePostalAddress(kept, address))) return;
+        await tx.insert(addresses).values({ ...address, userId, isDefault: book.length === 0 });
       });
     },
 

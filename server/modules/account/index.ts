@@ -1,3 +1,4 @@
+import type { PostalAddressInput } from '@shared/schemas/address';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
 import type { ApiModule } from '../../lib/api-module';
@@ -19,4 +20,14 @@ export interface AccountModuleDeps {
 export function createAccountModule({ config, db, audit, sessions, throttles }: AccountModuleDeps): ApiModule {
   const service = createAccountService({ repo: createAccountRepo(db), authRepo: createUserAccounts(db), sessions, audit });
   return { mounts: [{ path: '/account', router: accountRoutes({ service, throttles, config }) }] };
+}
+
+/** For checkouts: keeps the address a customer asked to save for next time in their address book. */
+export interface AddressBook {
+  keep(userId: string, address: PostalAddressInput): Promise<void>;
+}
+
+export function createAddressBook(db: Db): AddressBook {
+  const repo = createAccountRepo(db);
+  return { keep: (userId, address) => repo.keepAddress(userId, address) };
 }

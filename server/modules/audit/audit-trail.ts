@@ -21,6 +21,11 @@ export type AuditAction =
   | 'team.disabled'
   | 'team.enabled'
   | 'rotation.picked'
+  | 'order.cancelled'
+  | 'order.email_resent'
+  | 'order.address_corrected'
+  | 'order.note_saved'
+  | 'subscription.changed_by_staff'
   | 'access.denied';
 
 export interface AuditEvent {

@@ -173,6 +173,24 @@ export function createCheckoutRepo(db: Db) {
     async cancelUnpaidOrder(orderId: string, at: Date, note: string) {
       return db.transaction((tx) => cancelUnpaidOrder(tx, orderId, at, note));
     },
+
+    /** The customer's own order (kind and status); anyone else's reads as absent. */
+    async ownOrder(userId: string, orderId: string) {
+      const [row] = await db
+        .select({ id: orders.id, kind: orders.kind, status: orders.status })
+        .from(orders)
+        .where(and(eq(orders.id, orderId), eq(orders.userId, userId)));
+      return row;
+    },
+
+    /** Cancels the unpaid order, puts its stock back and leaves it out of the customer's history; false when it had moved on. */
+    async discardUnpaidOrder(orderId: string, at: Date) {
+      return db.transaction(async (tx) => {
+        if (!(await cancelUnpaidOrder(tx, orderId, at, 'checkout discarded by the customer'))) return false;
+        await tx.update(orders).set({ discardedAt: at }).where(eq(orders.id, orderId));
+        return true;
+      });
+    },
   };
 }
 

@@ -1,9 +1,10 @@
 import { quoteGreenOrder, type GreenLotPrice } from '@shared/domain/pricing';
 import { bagFillGrams } from '@shared/domain/units';
-import type { GreenCheckoutRequest, GreenCheckoutResponse } from '@shared/schemas/checkout';
+import type { CheckoutUrlResponse, GreenCheckoutRequest, GreenCheckoutResponse } from '@shared/schemas/checkout';
 import type { Clock } from '../../lib/clock';
 import { AppError } from '../../lib/app-error';
 import type { SessionUser } from '../../middleware/require-role';
+import type { AddressBook } from '../account';
 import type { PaymentsService } from '../payments';
 import { assertBagsShip } from '../shipping';
 import { StockShortfall, type CheckoutRepo, type ShortLot } from './checkout.repo';
@@ -12,6 +13,7 @@ export interface CheckoutServiceDeps {
   repo: CheckoutRepo;
   payments: Pick<PaymentsService, 'createCheckoutForOrder'>;
   clock: Clock;
+  addressBook: AddressBook;
 }
 
 const grams = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
@@ -36,7 +38,7 @@ function shortOfStock(items: GreenCheckoutRequest['items'], shortLots: ShortLot[
   );
 }
 
-export function createCheckoutService({ repo, payments, clock }: CheckoutServiceDeps) {
+export function createCheckoutService({ repo, payments, clock, addressBook }: CheckoutServiceDeps) {
   /** Prices the cart and places its order with the stock reserved; the id of the order (an existing one under the same key). */
   async function placeOrder(user: SessionUser, request: GreenCheckoutRequest, checkoutKey: string | undefined): Promise<string> {
     const codes = [...new Set(request.items.map((item) => item.lotCode))];
@@ -92,7 +94,35 @@ export function createCheckoutService({ repo, payments, clock }: CheckoutService
     }
   }
 
+  async function ownUnpaidOrder(user: SessionUser, orderId: string) {
+    const order = await repo.ownOrder(user.id, orderId);
+    if (!order) throw AppError.notFound('Order');
+    if (order.kind !== 'green' || order.status !== 'pending_payment') throw AppError.conflict('order_not_payable', 'This order is not waiting for payment.');
+    return order;
+  }
+
   return {
+    /**
+     * "Pay now" on an order left awaiting payment: the same order and, while it is open, the same
+     * payment page; nothing is reserved again. Abandoning that page comes back to the order.
+     */
+    async resumePayment(user: SessionUser, orderId: string): Promise<CheckoutUrlResponse> {
+      await ownUnpaidOrder(user, orderId);
+      const { checkoutUrl } = await payments.createCheckoutForOrder(orderId, {
+        successPath: `/orders/${orderId}?checkout=complete`,
+        cancelPath: `/orders/${orderId}?checkout=cancelled`,
+      });
+      return { checkoutUrl };
+    },
+
+    /** "Discard": the unpaid order is cancelled, its stock goes back, and it leaves the customer's history. */
+    async discard(user: SessionUser, orderId: string): Promise<void> {
+      await ownUnpaidOrder(user, orderId);
+      if (!(await repo.discardUnpaidOrder(orderId, clock.now()))) {
+        throw AppError.conflict('order_not_payable', 'This order is not waiting for payment.');
+      }
+    },
+
     /**
      * Prices the cart with the trade engine, places the order with its stock reserved (one
      * transaction), then opens the payment page. If the page cannot be opened, the order is
@@ -107,6 +137,7 @@ export function createCheckoutService({ repo, payments, clock }: CheckoutService
     async checkoutGreen(user: SessionUser, request: GreenCheckoutRequest, checkoutKey?: string): Promise<GreenCheckoutResponse> {
       const resumed = checkoutKey ? await repo.orderForCheckoutKey(user.id, checkoutKey) : undefined;
       const orderId = resumed ?? (await placeOrder(user, request, checkoutKey));
+      if (request.saveAddress) await addressBook.keep(user.id, request.shippingAddress);
       try {
         const { checkoutUrl } = await payments.createCheckoutForOrder(orderId);
         return { orderId, checkoutUrl };

@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, gte, lt, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, ilike, isNull, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { lots, orderItems, orders, shopSettings, users } from '../../db/schema/index';
 import { loadShopSettings } from '../settings';
@@ -8,6 +8,10 @@ import type { OrderKind, OrderStatus } from '@shared/domain/vocabulary';
 export interface OrderFilters {
   /** Only this customer's orders; absent for staff, who see everyone's. */
   userId?: string;
+  /** Leaves out checkouts the customer discarded (their own history; staff see every order). */
+  hideDiscarded?: boolean;
+  /** Part of the customer's name or e-mail, or the start of the order reference. */
+  text?: string;
   status?: OrderStatus;
   kind?: OrderKind;
   roastDate?: string;
@@ -51,6 +55,15 @@ const summaryColumns = {
 function conditionsOf(filters: Omit<OrderFilters, 'sort'>): SQL | undefined {
   const conditions: SQL[] = [];
   if (filters.userId) conditions.push(eq(orders.userId, filters.userId));
+  if (filters.hideDiscarded) conditions.push(isNull(orders.discardedAt));
+  if (filters.text) {
+    // The search is literal: % and _ in it match themselves, not any text.
+    const literal = filters.text.replace(/[\\%_]/g, (char) => `\\${char}`);
+    const reference = literal.replace(/-/g, '');
+    conditions.push(
+      or(ilike(users.name, `%${literal}%`), ilike(users.email, `%${literal}%`), ilike(sql`replace(${orders.id}::text, '-', '')`, `${reference}%`))!,
+    );
+  }
   if (filters.status) conditions.push(eq(orders.status, filters.status));
   if (filters.kind) conditions.push(eq(orders.kind, filters.kind));
   if (filters.roastDate) conditions.push(eq(orders.roastDate, filters.roastDate));
@@ -80,7 +93,7 @@ export function createOrdersRepo(db: Db) {
         .where(where)
         .orderBy(...sortOrder[filters.sort]);
       const rows = page ? await query.limit(page.limit).offset(page.offset) : await query;
-      const [total] = await db.select({ n: count() }).from(orders).where(where);
+      const [total] = await db.select({ n: count() }).from(orders).innerJoin(users, eq(users.id, orders.userId)).where(where);
       return { rows, total: total!.n };
     },
 
@@ -98,6 +111,7 @@ export function createOrdersRepo(db: Db) {
           paidAt: orders.paidAt,
           shippedAt: orders.shippedAt,
           cancelledAt: orders.cancelledAt,
+          staffNote: orders.staffNote,
         })
         .from(orders)
         .innerJoin(users, eq(users.id, orders.userId))

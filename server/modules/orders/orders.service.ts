@@ -35,7 +35,8 @@ export function createOrdersService(repo: OrdersRepo) {
   async function filtersOf(user: SessionUser, query: OrderListQuery): Promise<OrderFilters> {
     const timeZone = query.from || query.to ? ((await repo.shopTimeZone()) ?? 'UTC') : 'UTC';
     return {
-      ...(isStaff(user) ? {} : { userId: user.id }),
+      ...(isStaff(user) ? {} : { userId: user.id, hideDiscarded: true }),
+      text: query.q,
       status: query.status,
       kind: query.kind,
       roastDate: query.roastDate,
@@ -75,6 +76,7 @@ export function createOrdersService(repo: OrdersRepo) {
         paidAt: order.paidAt?.toISOString() ?? null,
         shippedAt: order.shippedAt?.toISOString() ?? null,
         cancelledAt: order.cancelledAt?.toISOString() ?? null,
+        ...(isStaff(user) ? { staffNote: order.staffNote } : {}),
       };
     },
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { packDayParamsSchema, shipOrderBodySchema, type PackListResponse, type PackOrder } from '@shared/schemas/packing';
+import { bulkShipBodySchema, packDayParamsSchema, shipOrderBodySchema, type PackListResponse, type PackOrder } from '@shared/schemas/packing';
 import { sendDownload } from '../../lib/download';
 import { requireRole } from '../../middleware/require-role';
 import type { PackingService } from './packing.service';
@@ -19,6 +19,11 @@ export function packDayRoutes(packing: PackingService): Router {
   router.get('/:date/pack-list', staff, async (req, res) => {
     const { date } = packDayParamsSchema.parse(req.params);
     res.json((await packing.packList(date)) satisfies PackListResponse);
+  });
+
+  router.post('/:date/ship', staff, async (req, res) => {
+    const { date } = packDayParamsSchema.parse(req.params);
+    res.json((await packing.shipDay(date, bulkShipBodySchema.parse(req.body))) satisfies PackListResponse);
   });
 
   router.get('/:date/labels.pdf', staff, async (req, res) => {

@@ -3,7 +3,7 @@ import { BagTooHeavyForShipping, planShipping, type ShippingSettings } from '@sh
 import { arrivalDate } from '@shared/domain/roast-schedule';
 import { localDateOf } from '@shared/domain/shop-time';
 import { roastLevelLabels, type OrderStatus } from '@shared/domain/vocabulary';
-import type { PackBag, PackListResponse, PackOrder } from '@shared/schemas/packing';
+import type { BulkShipBody, PackBag, PackListResponse, PackOrder } from '@shared/schemas/packing';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import { queueEmail } from '../outbox';
@@ -144,6 +144,45 @@ export function createPackingService({ repo, clock }: PackingDeps) {
     return lines;
   }
 
+  /**
+   * Marks a packed order shipped and queues the shipped e-mail with the tracking number (and, for
+   * roasted coffee, the ready-from date), in the caller's transaction. The same carrier and number
+   * again is a no-op; different ones are refused.
+   */
+  async function shipInTransaction(tx: PackingTransaction, orderId: string, { carrier, trackingNumber }: { carrier: string; trackingNumber: string }) {
+    const order = await tx.lockOrder(orderId);
+    if (!order) throw AppError.notFound('Order');
+    if (order.status === 'shipped') {
+      if (order.carrier === carrier && order.trackingNumber === trackingNumber) return;
+      throw AppError.conflict('already_shipped', `This order already shipped with ${order.carrier}, tracking number ${order.trackingNumber}.`);
+    }
+    if (order.status !== 'packed') {
+      throw AppError.conflict('not_packed', `Mark the order packed before shipping it (it is ${order.status.replace('_', ' ')}).`);
+    }
+    const shippedAt = clock.now();
+    await tx.markShipped(order.id, { carrier, trackingNumber, shippedAt });
+    await tx.setDeliveryStatus(order.id, 'shipped', ['scheduled', 'roasted']);
+    const roasted = order.kind === 'roasted';
+    // When it should land, counted from the day it really left, and whether it is ready by then.
+    const settings = await tx.shopSettings();
+    const expectedArrival = arrivalDate(localDateOf(shippedAt, settings.timeZone), settings.transitDays);
+    await queueEmail(tx.tx, {
+      template: 'shipped',
+      to: order.customerEmail,
+      dedupeKey: `shipped:${order.id}`,
+      payload: {
+        name: order.customerName,
+        orderId: order.id,
+        kind: order.kind,
+        carrier,
+        trackingNumber,
+        expectedArrival,
+        ...(roasted && order.readyFrom ? { readyFrom: order.readyFrom, readyOnArrival: expectedArrival >= order.readyFrom } : {}),
+        ...(roasted && order.bestBefore ? { bestBefore: order.bestBefore } : {}),
+      },
+    });
+  }
+
   return {
     async packList(date: string): Promise<PackListResponse> {
       const [orders, shipping] = await Promise.all([repo.packList(date), repo.shippingSettings()]);
@@ -196,45 +235,27 @@ export function createPackingService({ repo, clock }: PackingDeps) {
       return currentOrder(orderId);
     },
 
-    /**
-     * Marks a packed order shipped and e-mails the tracking number (and, for roasted coffee, the
-     * ready-from date). The same carrier and number again is a no-op; different ones are refused.
-     */
-    async ship(orderId: string, { carrier, trackingNumber }: { carrier: string; trackingNumber: string }): Promise<PackOrder> {
-      await repo.transaction(async (tx) => {
-        const order = await tx.lockOrder(orderId);
-        if (!order) throw AppError.notFound('Order');
-        if (order.status === 'shipped') {
-          if (order.carrier === carrier && order.trackingNumber === trackingNumber) return;
-          throw AppError.conflict('already_shipped', `This order already shipped with ${order.carrier}, tracking number ${order.trackingNumber}.`);
-        }
-        if (order.status !== 'packed') {
-          throw AppError.conflict('not_packed', `Mark the order packed before shipping it (it is ${order.status.replace('_', ' ')}).`);
-        }
-        const shippedAt = clock.now();
-        await tx.markShipped(order.id, { carrier, trackingNumber, shippedAt });
-        await tx.setDeliveryStatus(order.id, 'shipped', ['scheduled', 'roasted']);
-        const roasted = order.kind === 'roasted';
-        // When it should land, counted from the day it really left, and whether it is ready by then.
-        const settings = await tx.shopSettings();
-        const expectedArrival = arrivalDate(localDateOf(shippedAt, settings.timeZone), settings.transitDays);
-        await queueEmail(tx.tx, {
-          template: 'shipped',
-          to: order.customerEmail,
-          dedupeKey: `shipped:${order.id}`,
-          payload: {
-            name: order.customerName,
-            orderId: order.id,
-            kind: order.kind,
-            carrier,
-            trackingNumber,
-            expectedArrival,
-            ...(roasted && order.readyFrom ? { readyFrom: order.readyFrom, readyOnArrival: expectedArrival >= order.readyFrom } : {}),
-            ...(roasted && order.bestBefore ? { bestBefore: order.bestBefore } : {}),
-          },
-        });
-      });
+    /** Marks one packed order shipped (see shipInTransaction). */
+    async ship(orderId: string, shipment: { carrier: string; trackingNumber: string }): Promise<PackOrder> {
+      await repo.transaction((tx) => shipInTransaction(tx, orderId, shipment));
       return currentOrder(orderId);
+    },
+
+    /**
+     * "Mark all packed orders shipped": every order named, with one carrier, in one transaction
+     * (all ship or none does). Each must be on this day's Pack List.
+     */
+    async shipDay(date: string, { carrier, shipments }: BulkShipBody): Promise<PackListResponse> {
+      await repo.transaction(async (tx) => {
+        for (const { orderId, trackingNumber } of shipments) {
+          const order = await tx.lockOrder(orderId);
+          if (!order || order.shipDate !== date) {
+            throw AppError.badRequest('An order is not on this day’s Pack List.', { shipments: `Order ${orderId} does not ship on ${date}.` });
+          }
+          await shipInTransaction(tx, orderId, { carrier, trackingNumber });
+        }
+      });
+      return this.packList(date);
     },
   };
 }

@@ -1,6 +1,8 @@
 import type { Db } from '../../db/client';
 import type { ApiModule } from '../../lib/api-module';
 import type { Clock } from '../../lib/clock';
+import { createAddressBook } from '../account';
+import type { AuditTrail } from '../audit';
 import type { PaymentsService } from '../payments';
 import { createSubscriptionsRepo } from './subscriptions.repo';
 import { subscriptionCheckoutRoutes, subscriptionsRoutes } from './subscriptions.routes';
@@ -15,12 +17,13 @@ export interface SubscriptionsModuleDeps {
   db: Db;
   payments: PaymentsService;
   clock: Clock;
+  audit: AuditTrail;
   onChanged?: SubscriptionsServiceDeps['onChanged'];
 }
 
 /** Roasted to Order: its checkout, and each subscriber's own subscriptions and deliveries. */
-export function createSubscriptionsModule({ db, payments, clock, onChanged }: SubscriptionsModuleDeps): ApiModule {
-  const service = createSubscriptionsService({ repo: createSubscriptionsRepo(db), payments, clock, onChanged });
+export function createSubscriptionsModule({ db, payments, clock, audit, onChanged }: SubscriptionsModuleDeps): ApiModule {
+  const service = createSubscriptionsService({ repo: createSubscriptionsRepo(db), payments, clock, onChanged, addressBook: createAddressBook(db), audit });
   return {
     mounts: [
       { path: '/checkout/subscription', router: subscriptionCheckoutRoutes(service) },

@@ -7,7 +7,6 @@ import { grindLabels, roastLevelLabels, type RoastLevel } from '@shared/domain/v
 import type { SubscriptionDelivery } from '@shared/schemas/subscriptions';
 import type { ShopSettings } from '@shared/schemas/settings';
 import type { Tx } from '../../db/client';
-import type { AddressSnapshot } from '../../db/schema/common';
 import { AppError } from '../../lib/app-error';
 import { assertBagsShip } from '../shipping';
 import { choiceOf, type keptDeliveries, type SubscriptionRecord } from './subscription-records.repo';
@@ -17,15 +16,6 @@ import type { SubscriptionFieldsChange } from './subscriptions.repo';
 export const planLength = 26;
 /** The longest pause a subscriber can set themselves. */
 export const maxPauseDays = 366;
-
-export const sameAddress = (a: AddressSnapshot, b: AddressSnapshot) =>
-  a.name === b.name &&
-  a.line1 === b.line1 &&
-  (a.line2 ?? null) === (b.line2 ?? null) &&
-  a.city === b.city &&
-  a.region === b.region &&
-  a.postalCode === b.postalCode &&
-  a.country === b.country;
 
 export function levelOffered(level: RoastLevel, allowed: readonly RoastLevel[] | null) {
   return allowed === null || allowed.includes(level);

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, gte, inArray, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, inArray, isNull, sql } from 'drizzle-orm';
 import type { DeliveryChoice } from '@shared/domain/delivery-plan';
 import type { IsoDate } from '@shared/domain/shop-time';
 import type { RoastedBagSize, RoastLevel, SubscriptionStatus } from '@shared/domain/vocabulary';
@@ -68,14 +68,27 @@ export function createSubscriptionsRepo(db: Db) {
         .where(and(eq(subscriptions.id, subscriptionId), eq(subscriptions.status, 'incomplete')));
     },
 
+    /** Cancels a subscription whose first payment never came and leaves it out of the customer's list; false when it had started. */
+    async discardIncomplete(subscriptionId: string, at: Date) {
+      const discarded = await db
+        .update(subscriptions)
+        .set({ status: 'cancelled', cancelledAt: at, discardedAt: at })
+        .where(and(eq(subscriptions.id, subscriptionId), eq(subscriptions.status, 'incomplete')))
+        .returning({ id: subscriptions.id });
+      return discarded.length > 0;
+    },
+
     /** The customer's own subscription; someone else's reads as missing. */
     async findOwn(subscriptionId: string, userId: string) {
       const [row] = await subscriptionSelect(db).where(and(eq(subscriptions.id, subscriptionId), eq(subscriptions.userId, userId)));
       return row;
     },
 
+    /** A customer's subscriptions, less checkouts they discarded. */
     async listOwn(userId: string) {
-      return subscriptionSelect(db).where(eq(subscriptions.userId, userId)).orderBy(desc(subscriptions.createdAt), asc(subscriptions.id));
+      return subscriptionSelect(db)
+        .where(and(eq(subscriptions.userId, userId), isNull(subscriptions.discardedAt)))
+        .orderBy(desc(subscriptions.createdAt), asc(subscriptions.id));
     },
 
     keptDeliveries: (subscriptionId: string) => keptDeliveries(db, subscriptionId),

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { CheckoutUrlResponse } from '@shared/schemas/checkout';
 import { z } from 'zod';
 import {
   subscriptionCheckoutRequestSchema,
@@ -73,6 +74,17 @@ export function subscriptionsRoutes(service: SubscriptionsService): Router {
   router.post('/:id/cancel', async (req, res) => {
     const { id } = subscriptionParams.parse(req.params);
     res.json((await service.cancel(req.user!, id)) satisfies SubscriptionChangeResponse);
+  });
+
+  router.post('/:id/pay', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    res.json((await service.resumePayment(req.user!, id)) satisfies CheckoutUrlResponse);
+  });
+
+  router.post('/:id/discard', async (req, res) => {
+    const { id } = subscriptionParams.parse(req.params);
+    await service.discard(req.user!, id);
+    res.status(204).end();
   });
 
   return router;

@@ -1,3 +1,5 @@
+import { samePostalAddress } from '@shared/domain/address';
+import { searchFromBuilder } from '@shared/domain/builder-search';
 import { deliveryGreenGrams, nextDelivery, type DeliveryChoice, type PlannedDelivery } from '@shared/domain/delivery-plan';
 import { datesForRoastDate } from '@shared/domain/roast-schedule';
 import { addDays, localDateOf, type IsoDate } from '@shared/domain/shop-time';
@@ -16,6 +18,9 @@ import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { SessionUser } from '../../middleware/require-role';
 import { queueEmail } from '../outbox';
+import type { CheckoutUrlResponse } from '@shared/schemas/checkout';
+import type { AddressBook } from '../account';
+import type { AuditTrail } from '../audit';
 import type { PaymentsService } from '../payments';
 import { dropDelivery, keepDelivery } from './delivery-grid.repo';
 import { moveOrderToDelivery, reshapePaidOrder } from './delivery-orders.repo';
@@ -29,7 +34,6 @@ import {
   maxPauseDays,
   planLength,
   planOf,
-  sameAddress,
   toApiDelivery,
   unchanged,
   type ChangeContext,
@@ -43,9 +47,12 @@ export interface SubscriptionsServiceDeps {
   clock: Clock;
   /** Called after a change commits: hands the subscription to the Stripe sync (a queued job). */
   onChanged?: (subscriptionId: string) => Promise<void>;
+  addressBook: AddressBook;
+  /** Records changes staff make on a subscriber's behalf. */
+  audit: AuditTrail;
 }
 
-export function createSubscriptionsService({ repo, payments, clock, onChanged }: SubscriptionsServiceDeps) {
+export function createSubscriptionsService({ repo, payments, clock, onChanged, addressBook, audit }: SubscriptionsServiceDeps) {
   async function present(subscription: SubscriptionRecord, count = 1): Promise<{ subscription: Subscription; plan: SubscriptionDelivery[] }> {
     const now = clock.now();
     const { settings, calendar } = await repo.scheduleContext(now);
@@ -81,6 +88,17 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
     return subscription;
   }
 
+  const isStaff = (user: SessionUser) => user.role === 'staff' || user.role === 'owner';
+
+  /** The subscriber themselves, or staff acting on their behalf (audited). */
+  const mayChange = (user: SessionUser, subscription: { userId: string }) => subscription.userId === user.id || isStaff(user);
+
+  async function changeable(user: SessionUser, subscriptionId: string) {
+    const subscription = isStaff(user) ? await repo.findById(subscriptionId) : await repo.findOwn(subscriptionId, user.id);
+    if (!subscription) throw AppError.notFound('Subscription');
+    return subscription;
+  }
+
   /** Deliveries past their cutoff keep what they bring from now on: a change must never reach them. */
   async function freezeLocked({ tx, subscription, plan }: ChangeContext) {
     for (const delivery of plan) {
@@ -100,11 +118,11 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
     kind: ChangeKind,
     decide: (context: ChangeContext) => Promise<ChangeOutcome>,
   ): Promise<SubscriptionChangeResponse> {
-    await own(user, subscriptionId);
+    const before = await changeable(user, subscriptionId);
     const now = clock.now();
     const { changed, notice } = await repo.transaction(async (tx) => {
       const subscription = await lockSubscription(tx, subscriptionId);
-      if (!subscription || subscription.userId !== user.id) throw AppError.notFound('Subscription');
+      if (!subscription || !mayChange(user, subscription)) throw AppError.notFound('Subscription');
       if (subscription.status === 'cancelled')
         throw AppError.conflict('subscription_ended', 'This subscription has ended; start a new one to receive coffee again.');
       if (subscription.status === 'incomplete')
@@ -140,7 +158,10 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
       return { changed: true, notice };
     });
     if (changed) await onChanged?.(subscriptionId);
-    return { ...(await present(await own(user, subscriptionId))).subscription, notice };
+    if (changed && before.userId !== user.id) {
+      await audit.record({ action: 'subscription.changed_by_staff', actorId: user.id, detail: { subscriptionId, customerId: before.userId, change: kind } });
+    }
+    return { ...(await present(await changeable(user, subscriptionId))).subscription, notice };
   }
 
   /** The delivery on a roast date, or the next one a skip can take. */
@@ -188,12 +209,38 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
         priceCents: deliveryPrice(lot?.code ?? null, choice, settings),
         currency: settings.currency,
       });
+      if (request.saveAddress) await addressBook.keep(user.id, request.shippingAddress);
+      // Leaving the payment page comes back to the builder with these same choices, not the defaults.
+      const backToBuilder = searchFromBuilder(request);
+      backToBuilder.set('checkout', 'cancelled');
       try {
-        const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId);
+        const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId, {
+          successPath: `/subscriptions/${subscriptionId}?checkout=complete`,
+          cancelPath: `/subscribe?${backToBuilder.toString()}`,
+        });
         return { subscriptionId, checkoutUrl };
       } catch (error) {
         await repo.cancelIncomplete(subscriptionId, clock.now());
         throw error;
+      }
+    },
+
+    /** "Pay now" on a subscription whose first payment never came: the same subscription and, while open, the same payment page. */
+    async resumePayment(user: SessionUser, subscriptionId: string): Promise<CheckoutUrlResponse> {
+      const subscription = await own(user, subscriptionId);
+      if (subscription.status !== 'incomplete') throw AppError.conflict('subscription_not_payable', 'This subscription has already started.');
+      const { checkoutUrl } = await payments.createCheckoutForSubscription(subscriptionId, {
+        successPath: `/subscriptions/${subscriptionId}?checkout=complete`,
+        cancelPath: `/subscriptions/${subscriptionId}?checkout=cancelled`,
+      });
+      return { checkoutUrl };
+    },
+
+    /** "Discard": a subscription never paid for is cancelled and leaves the customer's list. */
+    async discard(user: SessionUser, subscriptionId: string): Promise<void> {
+      await own(user, subscriptionId);
+      if (!(await repo.discardIncomplete(subscriptionId, clock.now()))) {
+        throw AppError.conflict('subscription_not_payable', 'This subscription has already started.');
       }
     },
 
@@ -221,7 +268,7 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged }:
           Object.assign(fields, { [key]: value });
           summary.push((describeChoice[key] as (value: unknown) => string)(value));
         }
-        const addressChanged = update.shippingAddress !== undefined && !sameAddress(update.shippingAddress, subscription.shippingAddress);
+        const addressChanged = update.shippingAddress !== undefined && !samePostalAddress(update.shippingAddress, subscription.shippingAddress);
         if (addressChanged) {
           fields.shippingAddress = update.shippingAddress;
           summary.push(`Ship to: ${update.shippingAddress!.line1}, ${update.shippingAddress!.city}`);

@@ -40,13 +40,20 @@ describe('account orders page', () => {
     const rows = within(list).getAllByRole('listitem');
     expect(rows).toHaveLength(2);
     expect(rows[0]?.textContent).toContain('Awaiting payment');
+    // The reference staff use (the id's first eight characters), and a way on for the unpaid one.
+    expect(rows[0]?.textContent).toContain('Order 5E1C9A4D of');
+    expect(
+      within(rows[0] as HTMLElement)
+        .getByRole('link', { name: 'Pay now or discard' })
+        .getAttribute('href'),
+    ).toBe(`/orders/${waiting.id}`);
     expect(rows[1]?.textContent).toContain('Shipped');
     expect(rows[1]?.textContent).toContain('3 bags');
     expect(rows[1]?.textContent).toContain('ships Nov 21, 2026');
     expect(rows[1]?.textContent).toContain('$42.11');
     expect(
       within(rows[1] as HTMLElement)
-        .getByRole('link')
+        .getAllByRole('link')[0]!
         .getAttribute('href'),
     ).toBe(`/orders/${shipped.id}`);
     expect(requestedUrls(fetchMock)).toEqual(['/api/orders?page=1&sort=newest']);

@@ -302,6 +302,8 @@ describe('Day Sheet tabs and Pack List', () => {
     );
 
     fireEvent.click(within(order).getByRole('button', { name: 'Mark packed' }));
+    const packQuestion = await screen.findByRole('dialog', { name: 'Mark Juno Reed’s order packed?' });
+    fireEvent.click(within(packQuestion).getByRole('button', { name: 'Mark packed' }));
     await waitFor(() => expect(within(order).getByText('Packed', { selector: 'span' })).toBeTruthy());
     expect(
       within(order)
@@ -322,7 +324,11 @@ describe('Day Sheet tabs and Pack List', () => {
       carrier: 'USPS',
       trackingNumber: 'WR12345678',
     });
-    await waitFor(() => expect(within(order).getByText('Shipped', { selector: 'span' })).toBeTruthy());
+    // Shipped orders leave the list of those still to ship; the Shipped filter shows them.
+    await waitFor(() => expect(screen.queryByRole('listitem', { name: /Juno Reed/ })).toBeNull());
+    fireEvent.click(screen.getByRole('radio', { name: /^Shipped \(1\)$/ }));
+    const shipped = await screen.findByRole('listitem', { name: /Juno Reed/ });
+    expect(within(shipped).getByText('Shipped', { selector: 'span' })).toBeTruthy();
   });
 });
 

@@ -11,7 +11,9 @@ import { paths } from '@/config/paths';
 import { requireUser } from '@/features/auth/utils/require-user';
 import { roasteryRoles } from '@/features/auth/utils/roles';
 import { getRoasteryOrderQueryOptions, useRoasteryOrder } from '@/features/roastery-orders/api/get-roastery-order';
+import { OrderDesk } from '@/features/roastery-orders/components/order-desk';
 import { RoasteryOrderDetail } from '@/features/roastery-orders/components/roastery-order-detail';
+import { useCurrentUser } from '@/features/auth/api/get-current-user';
 import { ApiError } from '@/lib/api-client';
 
 export const clientLoader =
@@ -37,6 +39,7 @@ export default function RoasteryOrderRoute() {
   const { id = '' } = useParams();
   const orderQuery = useRoasteryOrder(id);
   const order = orderQuery.data;
+  const canRefund = useCurrentUser().data?.role === 'owner';
 
   if (order) {
     const title = `Order ${orderReference(order.id)}`;
@@ -74,6 +77,12 @@ export default function RoasteryOrderRoute() {
             </>
           }
         />
+        <section aria-labelledby="order-desk" className="mt-8 max-w-2xl rounded-card border border-rule bg-sheet p-4 sm:p-5">
+          <h2 id="order-desk" className="mb-4 text-h2">
+            Act on this order
+          </h2>
+          <OrderDesk key={order.id} order={order} canRefund={canRefund} />
+        </section>
       </>
     );
   }

@@ -8,6 +8,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { getSubscriberQueryOptions, useSubscriber } from '@/features/subscribers/api/get-subscriber';
+import { ActForSubscriber } from '@/features/subscribers/components/act-for-subscriber';
 import { SubscriberDetailView } from '@/features/subscribers/components/subscriber-detail-view';
 import { ApiError } from '@/lib/api-client';
 
@@ -36,6 +37,9 @@ export default function SubscriberRoute() {
         {backLink}
         <PageHeader eyebrow="Subscriber" title={subscriber.customer.name} />
         <SubscriberDetailView subscriber={subscriber} />
+        <div className="mt-8 max-w-2xl">
+          <ActForSubscriber key={subscriber.id} subscriber={subscriber} />
+        </div>
       </>
     );
   }

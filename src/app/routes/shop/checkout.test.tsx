@@ -91,6 +91,8 @@ describe('checkout page', () => {
     expect(request?.body).toEqual({
       items: [{ lotCode: 'RD-T01', size: '1lb', quantity: 2 }],
       shippingAddress: { name: 'Ines Marlow', line1: '14 Quarry Lane', line2: null, city: 'Ashfield', region: 'OR', postalCode: '97000', country: 'US' },
+      // The address book is empty, so the address is kept for next time unless the customer unticks it.
+      saveAddress: true,
     });
     expect(request?.headers.get('X-Restday-Client')).toBe('web');
   });

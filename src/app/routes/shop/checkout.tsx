@@ -61,7 +61,11 @@ export default function CheckoutRoute() {
             <h2 id="checkout-address" className="mb-3 text-h2">
               Where it ships
             </h2>
-            {addressesQuery.isPending ? <Skeleton className="h-96" /> : <CheckoutForm initialAddress={initialAddress} onLineErrors={setLineErrors} />}
+            {addressesQuery.isPending ? (
+              <Skeleton className="h-96" />
+            ) : (
+              <CheckoutForm initialAddress={initialAddress} addressBookEmpty={!initialAddress} onLineErrors={setLineErrors} />
+            )}
           </section>
         </div>
       )}

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
-import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { NotFoundMessage } from '@/components/errors/not-found-message';
 import { PageTitle } from '@/components/seo/page-title';
 import { ErrorState } from '@/components/ui/error-state';
@@ -11,7 +11,10 @@ import { useCart } from '@/features/cart/hooks/use-cart';
 import { getOrderQueryOptions, useOrder } from '@/features/orders/api/get-order';
 import { OrderDetailView } from '@/features/orders/components/order-detail-view';
 import { PaymentStatusPanel } from '@/features/orders/components/payment-status-panel';
+import { UnpaidOrderActions } from '@/features/orders/components/unpaid-order-actions';
+import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
+import { orderReference } from '@shared/domain/order-reference';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -28,6 +31,7 @@ export default function OrderRoute() {
   const orderQuery = useOrder(id, { awaitPayment: returningFromPayment });
   const order = orderQuery.data;
   const { remove } = useCart();
+  const navigate = useNavigate();
 
   // Once the payment is confirmed, the bags bought are no longer in the cart.
   const paidItems = returningFromPayment && order && order.paidAt !== null ? order.items : null;
@@ -39,12 +43,16 @@ export default function OrderRoute() {
     return (
       <>
         <PageTitle title="Your order" />
-        <PageHeader title="Your order" />
+        <PageHeader title="Your order" lead={`Order ${orderReference(order.id)}: quote it when you write to us about this order.`} />
         {returningFromPayment ? (
           <div className="mb-6">
             <PaymentStatusPanel order={order} onCheckAgain={() => void orderQuery.refetch()} />
           </div>
-        ) : null}
+        ) : (
+          <div className="mb-6">
+            <UnpaidOrderActions order={order} onDiscarded={() => void navigate(paths.account.orders.getHref(), { replace: true })} />
+          </div>
+        )}
         <OrderDetailView order={order} />
       </>
     );

@@ -66,6 +66,8 @@ describe('Roasted to Order shipping step', () => {
       brewMethod: 'filter',
       cadenceWeeks: 2,
       shippingAddress: { name: 'Ines Marlow', line1: '14 Quarry Lane', line2: null, city: 'Ashfield', region: 'OR', postalCode: '97000', country: 'US' },
+      // The address book is empty, so the address is kept for next time unless the customer unticks it.
+      saveAddress: true,
     });
   });
 

@@ -61,7 +61,11 @@ function Shipping({ build }: { build: SubscriptionBuild }) {
         <h2 id="subscription-address" className="mb-3 text-h2">
           Where it ships
         </h2>
-        {addressesQuery.isPending ? <Skeleton className="h-96" /> : <SubscriptionCheckoutForm build={build} initialAddress={initialAddress} />}
+        {addressesQuery.isPending ? (
+          <Skeleton className="h-96" />
+        ) : (
+          <SubscriptionCheckoutForm build={build} initialAddress={initialAddress} addressBookEmpty={!initialAddress} />
+        )}
       </section>
     </div>
   );

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { NotFoundMessage } from '@/components/errors/not-found-message';
 import { PageTitle } from '@/components/seo/page-title';
 import { buttonStyles } from '@/components/ui/button';
@@ -9,6 +9,7 @@ import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { requireUser } from '@/features/auth/utils/require-user';
 import { getSubscriptionQueryOptions, useSubscription } from '@/features/subscriptions/api/get-subscription';
+import { UnpaidSubscriptionActions } from '@/features/subscriptions/components/unpaid-subscription-actions';
 import { ActivationStatusPanel } from '@/features/subscriptions/components/activation-status-panel';
 import { SubscriptionSchedule } from '@/features/subscriptions/components/subscription-schedule';
 import { SubscriptionSummary } from '@/features/subscriptions/components/subscription-summary';
@@ -28,6 +29,7 @@ export default function SubscriptionRoute() {
   const returningFromPayment = search.get('checkout') === 'complete';
   const subscriptionQuery = useSubscription(id, { awaitActivation: returningFromPayment });
   const subscription = subscriptionQuery.data;
+  const navigate = useNavigate();
 
   if (subscription) {
     return (
@@ -38,7 +40,11 @@ export default function SubscriptionRoute() {
           <div className="mb-6">
             <ActivationStatusPanel subscription={subscription} />
           </div>
-        ) : null}
+        ) : (
+          <div className="mb-6">
+            <UnpaidSubscriptionActions subscription={subscription} onDiscarded={() => void navigate(paths.account.deliveries.getHref(), { replace: true })} />
+          </div>
+        )}
         <div className="grid gap-8">
           <SubscriptionSummary subscription={subscription} />
           {subscription.status !== 'incomplete' ? (

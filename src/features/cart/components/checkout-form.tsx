@@ -6,6 +6,7 @@ import type { StoredPostalAddress } from '@shared/schemas/address';
 import { greenCheckoutRequestSchema } from '@shared/schemas/checkout';
 import { AddressFields, addressFieldPaths, addressFormValues } from '@/components/address/address-fields';
 import { Button } from '@/components/ui/button';
+import { CheckboxField } from '@/components/ui/checkbox-field';
 import { FormAlert } from '@/components/ui/form-alert';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -34,12 +35,14 @@ function lineErrorsOf(error: unknown): Record<number, string> {
 type CheckoutFormProps = {
   /** The address to start from (the customer's saved default), or blank fields. */
   initialAddress?: StoredPostalAddress;
+  /** With nothing in the address book yet, "Save for next time" starts ticked. */
+  addressBookEmpty: boolean;
   /** Shows the server's reasons against the cart lines they concern. */
   onLineErrors: (errors: Record<number, string>) => void;
 };
 
 /** Where the order ships; submitting places it and goes on to the payment page. */
-export function CheckoutForm({ initialAddress, onLineErrors }: CheckoutFormProps) {
+export function CheckoutForm({ initialAddress, addressBookEmpty, onLineErrors }: CheckoutFormProps) {
   const { lines } = useCart();
   const checkout = useCreateGreenCheckout();
   const [formError, setFormError] = useState<string>();
@@ -50,6 +53,7 @@ export function CheckoutForm({ initialAddress, onLineErrors }: CheckoutFormProps
     defaultValues: {
       items: toCheckoutItems(lines),
       shippingAddress: addressFormValues(initialAddress),
+      saveAddress: addressBookEmpty,
     },
   });
   const { errors } = form.formState;
@@ -81,6 +85,7 @@ export function CheckoutForm({ initialAddress, onLineErrors }: CheckoutFormProps
         {formError ? <FormAlert>{formError}</FormAlert> : null}
         {errors.items?.message ? <FormAlert>{errors.items.message}</FormAlert> : null}
         <AddressFields at="shippingAddress" />
+        <CheckboxField label="Save this address for next time" {...form.register('saveAddress')} />
         <div>
           <Button type="submit" disabled={busy || lines.length === 0}>
             {busy ? 'Opening the payment page…' : 'Continue to payment'}

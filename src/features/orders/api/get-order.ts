@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { orderDetailSchema, type OrderDetail } from '@shared/schemas/orders';
 import { apiRequest } from '@/lib/api-client';
+import { ordersQueryKey } from './get-orders';
 
 export function getOrder({ id, signal }: { id: string; signal?: AbortSignal }): Promise<OrderDetail> {
   return apiRequest(`/api/orders/${encodeURIComponent(id)}`, { schema: orderDetailSchema, signal });
@@ -8,7 +9,7 @@ export function getOrder({ id, signal }: { id: string; signal?: AbortSignal }): 
 
 export function getOrderQueryOptions(id: string) {
   return queryOptions({
-    queryKey: ['orders', 'detail', id],
+    queryKey: [...ordersQueryKey, 'detail', id],
     queryFn: ({ signal }) => getOrder({ id, signal }),
   });
 }

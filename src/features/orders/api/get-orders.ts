@@ -7,9 +7,12 @@ export function getOrders({ page, signal }: { page: number; signal?: AbortSignal
   return apiRequest('/api/orders', { schema: orderListResponseSchema, params: new URLSearchParams({ page: String(page), sort: 'newest' }), signal });
 }
 
+/** The root of every order query (the list's pages and each order): a change to an order invalidates it. */
+export const ordersQueryKey = ['orders'] as const;
+
 export function getOrdersQueryOptions(page = 1) {
   return queryOptions({
-    queryKey: ['orders', 'list', { page }],
+    queryKey: [...ordersQueryKey, 'list', { page }],
     queryFn: ({ signal }) => getOrders({ page, signal }),
   });
 }

@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { orderReference } from '@shared/domain/order-reference';
 import { Button, buttonStyles } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
@@ -53,7 +54,7 @@ export function OrderList({ page, onPageChange }: { page: number; onPageChange: 
           <li key={order.id} className="flex flex-wrap items-center justify-between gap-x-6 gap-y-1 p-4">
             <div>
               <Link to={paths.order.getHref(order.id)} className="font-semibold text-leaf underline">
-                Order of {formatInstant(order.placedAt)}
+                Order {orderReference(order.id)} of {formatInstant(order.placedAt)}
               </Link>
               <p className="text-small text-ink-muted">
                 {order.kind === 'green' ? 'Green coffee' : 'Roasted coffee'} · {order.bagCount} {order.bagCount === 1 ? 'bag' : 'bags'}
@@ -61,6 +62,11 @@ export function OrderList({ page, onPageChange }: { page: number; onPageChange: 
               </p>
             </div>
             <div className="flex items-center gap-3">
+              {order.kind === 'green' && order.status === 'pending_payment' ? (
+                <Link to={paths.order.getHref(order.id)} className="font-semibold text-leaf underline">
+                  Pay now or discard
+                </Link>
+              ) : null}
               <OrderStatusBadge status={order.status} />
               <span className="font-semibold">{money(order.totalCents)}</span>
             </div>

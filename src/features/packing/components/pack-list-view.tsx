@@ -15,7 +15,10 @@ import { Table, TableBody, TableCell, TableHead, TableHeader, TableRowHeader } f
 import { DownloadLink } from '@/components/ui/download-link';
 import { labelsPdfPath } from '../api/get-pack-list';
 import { useMarkPacked } from '../api/mark-packed';
-import { canPack, packStatusOf } from '../utils/pack-status';
+import { canPack, packStageCounts, packStageLabels, packStageOf, packStages, packStatusOf, type PackStage } from '../utils/pack-status';
+import { ShipPackedDialog } from './ship-packed-dialog';
+import { ChoiceGroup } from '@/components/ui/choice-group';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ShipOrderDialog } from './ship-order-dialog';
 
 function day(date: string | null): string {
@@ -95,6 +98,7 @@ function OrderParcels({ order }: { order: PackOrder }) {
 function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void }) {
   const markPacked = useMarkPacked(date);
   const [failure, setFailure] = useState<string>();
+  const [confirming, setConfirming] = useState(false);
   const status = packStatusOf(order);
   const headingId = `pack-order-${order.orderId}`;
 
@@ -104,6 +108,8 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
       await markPacked.mutateAsync(order.orderId);
     } catch (error) {
       setFailure(error instanceof ApiError ? error.message : 'That did not work. Please try again.');
+    } finally {
+      setConfirming(false);
     }
   }
 
@@ -131,11 +137,22 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
       ) : null}
       <div className="mt-4 flex flex-wrap items-center gap-2 print:hidden">
         {canPack(order.status) ? (
-          <Button variant="secondary" disabled={markPacked.isPending} aria-describedby={headingId} onClick={() => void pack()}>
+          <Button variant="secondary" disabled={markPacked.isPending} aria-describedby={headingId} onClick={() => setConfirming(true)}>
             <PackageCheck aria-hidden="true" className="size-4" />
-            {markPacked.isPending ? 'Marking…' : 'Mark packed'}
+            Mark packed
           </Button>
         ) : null}
+        <ConfirmDialog
+          open={confirming}
+          title={`Mark ${order.customerName}’s order packed?`}
+          confirmLabel={markPacked.isPending ? 'Marking…' : 'Mark packed'}
+          cancelLabel="Not yet"
+          busy={markPacked.isPending}
+          onConfirm={() => void pack()}
+          onCancel={() => setConfirming(false)}
+        >
+          {`All ${order.bags.length} ${order.bags.length === 1 ? 'bag is' : 'bags are'} in the box and labelled.${order.kind === 'roasted' ? ' Each roasted bag is filled from a batch of its coffee, and the customer gets the roasted e-mail.' : ''}`}
+        </ConfirmDialog>
         {order.status === 'packed' ? (
           <Button aria-describedby={headingId} onClick={() => onShip(order)}>
             <Truck aria-hidden="true" className="size-4" />
@@ -150,11 +167,21 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
   );
 }
 
-/** The day's orders to pack and ship, bag by bag, with the labels to print for them. */
+type PackFilter = 'open' | PackStage;
+
+/** The day's orders to pack and ship, bag by bag, with the labels to print for them. Shipped orders stay out of the way unless asked for. */
 export function PackListView({ packList }: { packList: PackListResponse }) {
   const [shipping, setShipping] = useState<PackOrder>();
-  const [shipped, setShipped] = useState<PackOrder>();
+  const [shipped, setShipped] = useState<string>();
+  const [shippingAll, setShippingAll] = useState(false);
+  const [filter, setFilter] = useState<PackFilter>('open');
   const { date, orders } = packList;
+  const counts = packStageCounts(orders);
+  const packed = orders.filter((order) => order.status === 'packed');
+  const shown = orders.filter((order) => {
+    const stage = packStageOf(order.status);
+    return filter === 'open' ? stage !== 'shipped' : stage === filter;
+  });
 
   return (
     <div>
@@ -162,23 +189,65 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
         <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
         <p className="text-small text-ink-muted">One label a bag, with both net weights.</p>
       </div>
+      {orders.length > 0 ? (
+        <div className="mb-6 grid gap-4 print:hidden">
+          <ChoiceGroup
+            legend="Show"
+            name="pack-filter"
+            columns={4}
+            value={filter}
+            onChange={setFilter}
+            choices={[
+              { value: 'open' as const, label: `Still to ship (${counts['to-pack'] + counts.packed})` },
+              ...packStages.map((stage) => ({ value: stage, label: `${packStageLabels[stage]} (${counts[stage]})` })),
+            ]}
+          />
+          {packed.length > 0 ? (
+            <div>
+              <Button onClick={() => setShippingAll(true)}>
+                <Truck aria-hidden="true" className="size-4" />
+                Mark all packed orders shipped ({packed.length})
+              </Button>
+            </div>
+          ) : null}
+        </div>
+      ) : null}
       {shipped ? (
         <div className="mb-4">
-          <FormAlert tone="status">
-            {shipped.customerName}&rsquo;s order is marked shipped ({shipped.carrier} {shipped.trackingNumber}); the shipped e-mail is on its way.
-          </FormAlert>
+          <FormAlert tone="status">{shipped}</FormAlert>
         </div>
       ) : null}
       {orders.length === 0 ? (
         <EmptyState title="Nothing ships this day">Orders appear here on the day they are due to ship.</EmptyState>
+      ) : shown.length === 0 ? (
+        <p className="text-ink-muted">No orders here.</p>
       ) : (
         <ul aria-label="Orders to pack" className="grid gap-4">
-          {orders.map((order) => (
+          {shown.map((order) => (
             <PackOrderCard key={order.orderId} order={order} date={date} onShip={setShipping} />
           ))}
         </ul>
       )}
-      {shipping ? <ShipOrderDialog order={shipping} date={date} onClose={() => setShipping(undefined)} onShipped={setShipped} /> : null}
+      {shipping ? (
+        <ShipOrderDialog
+          order={shipping}
+          date={date}
+          onClose={() => setShipping(undefined)}
+          onShipped={(order) =>
+            setShipped(`${order.customerName}’s order is marked shipped (${order.carrier} ${order.trackingNumber}); the shipped e-mail is on its way.`)
+          }
+        />
+      ) : null}
+      {shippingAll ? (
+        <ShipPackedDialog
+          orders={packed}
+          date={date}
+          onClose={() => setShippingAll(false)}
+          onShipped={(count, carrier) =>
+            setShipped(`${count} ${count === 1 ? 'order is' : 'orders are'} marked shipped with ${carrier}; each customer’s shipped e-mail is on its way.`)
+          }
+        />
+      ) : null}
     </div>
   );
 }

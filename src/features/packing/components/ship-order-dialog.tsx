@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useId, useRef, useState } from 'react';
+import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { shipOrderBodySchema, type PackOrder } from '@shared/schemas/packing';
@@ -8,6 +8,7 @@ import { FormAlert } from '@/components/ui/form-alert';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useShipOrder } from '../api/ship-order';
+import { useOpenDialog } from '../hooks/use-open-dialog';
 
 type ShipFields = z.input<typeof shipOrderBodySchema>;
 
@@ -20,7 +21,7 @@ type ShipOrderDialogProps = {
 
 /** A modal form for the carrier and tracking number; Escape or Cancel closes it and focus goes back. */
 export function ShipOrderDialog({ order, date, onClose, onShipped }: ShipOrderDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
+  const { dialogRef, finish } = useOpenDialog();
   const titleId = useId();
   const ship = useShipOrder(date);
   const [formError, setFormError] = useState<string>();
@@ -30,23 +31,12 @@ export function ShipOrderDialog({ order, date, onClose, onShipped }: ShipOrderDi
   });
   const { errors } = form.formState;
 
-  const [done, setDone] = useState(false);
-
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (dialog && !dialog.open) dialog.showModal();
-  }, []);
-  // Closing (not unmounting) gives the focus back to the button that opened the dialog.
-  useEffect(() => {
-    if (done) dialogRef.current?.close();
-  }, [done]);
-
   const submit = form.handleSubmit(async (shipment) => {
     setFormError(undefined);
     try {
       const shipped = await ship.mutateAsync({ orderId: order.orderId, shipment });
       onShipped(shipped);
-      setDone(true);
+      finish();
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ['carrier', 'trackingNumber']));
     }

@@ -23,3 +23,27 @@ export function packStatusOf(order: { status: OrderStatus; kind: OrderKind }): {
 export function canPack(status: OrderStatus): boolean {
   return status === 'paid' || status === 'roasted';
 }
+
+/** Where an order stands in the day's packing, for the Pack List's counts and filter. */
+export const packStages = ['to-pack', 'packed', 'shipped'] as const;
+export type PackStage = (typeof packStages)[number];
+
+export const packStageLabels: Record<PackStage, string> = { 'to-pack': 'To pack', packed: 'Packed', shipped: 'Shipped' };
+
+/** The stage of an order; null for one that is not the packer's to handle (awaiting payment, on hold, cancelled, refunded). */
+export function packStageOf(status: OrderStatus): PackStage | null {
+  if (canPack(status)) return 'to-pack';
+  if (status === 'packed') return 'packed';
+  if (status === 'shipped') return 'shipped';
+  return null;
+}
+
+/** How many orders are at each stage. */
+export function packStageCounts(orders: readonly { status: OrderStatus }[]): Record<PackStage, number> {
+  const counts: Record<PackStage, number> = { 'to-pack': 0, packed: 0, shipped: 0 };
+  for (const order of orders) {
+    const stage = packStageOf(order.status);
+    if (stage) counts[stage] += 1;
+  }
+  return counts;
+}

@@ -8,9 +8,12 @@ export function getRoasteryOrders({ filters, signal }: { filters: RoasteryOrderF
   return apiRequest('/api/orders', { schema: orderListResponseSchema, params: roasteryOrderFiltersToSearchParams(filters), signal });
 }
 
+/** The root of every page of the staff's order list: a change to an order invalidates it. */
+export const getRoasteryOrdersQueryRoot = ['orders', 'roastery', 'list'] as const;
+
 export function getRoasteryOrdersQueryOptions(filters: RoasteryOrderFilters) {
   return queryOptions({
-    queryKey: ['orders', 'roastery', 'list', filters],
+    queryKey: [...getRoasteryOrdersQueryRoot, filters],
     queryFn: ({ signal }) => getRoasteryOrders({ filters, signal }),
   });
 }

@@ -7,6 +7,7 @@ import { orderKinds, orderStatuses, type OrderKind, type OrderStatus } from '@sh
 import { Button } from '@/components/ui/button';
 import { controlStyles } from '@/components/ui/control-styles';
 import { Field, fieldDescribedBy } from '@/components/ui/field';
+import { TextField } from '@/components/ui/text-field';
 import { SelectField } from '@/components/ui/select-field';
 import { DownloadLink } from '@/components/ui/download-link';
 import { paths } from '@/config/paths';
@@ -56,6 +57,14 @@ export function OrderFiltersForm({ filters, onChange }: OrderFiltersFormProps) {
   return (
     <div className="rounded-card border border-rule bg-sheet p-4 sm:p-5">
       <form aria-label="Filter orders" onSubmit={(event) => event.preventDefault()} className="grid grid-cols-2 gap-x-3 gap-y-4 lg:grid-cols-6 lg:items-start">
+        <TextField
+          label="Search"
+          type="search"
+          hint="Name, e-mail or order reference"
+          className="col-span-2 lg:col-span-6"
+          defaultValue={filters.q ?? ''}
+          onChange={(event) => onChange({ q: event.target.value.trim() || undefined })}
+        />
         <SelectField
           label="Status"
           value={filters.status ?? ''}

@@ -3,6 +3,8 @@ import type { OrderKind, OrderStatus } from '@shared/domain/vocabulary';
 
 /** The staff orders table's filters, sort and page, as kept in the page URL. */
 export type RoasteryOrderFilters = {
+  /** Name, e-mail or order reference. */
+  q?: string;
   status?: OrderStatus;
   kind?: OrderKind;
   /** Shop days the order was placed, both inclusive. */
@@ -13,7 +15,7 @@ export type RoasteryOrderFilters = {
   page: number;
 };
 
-const filterKeys = ['status', 'kind', 'from', 'to', 'roastDate'] as const;
+const filterKeys = ['q', 'status', 'kind', 'from', 'to', 'roastDate'] as const;
 type FilterKey = (typeof filterKeys)[number];
 const defaultSort: OrderSort = 'newest';
 

@@ -7,6 +7,7 @@ import type { StoredPostalAddress } from '@shared/schemas/address';
 import { subscriptionCheckoutRequestSchema } from '@shared/schemas/subscriptions';
 import { AddressFields, addressFieldPaths, addressFormValues } from '@/components/address/address-fields';
 import { Button } from '@/components/ui/button';
+import { CheckboxField } from '@/components/ui/checkbox-field';
 import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
@@ -22,10 +23,12 @@ type SubscriptionCheckoutFormProps = {
   build: SubscriptionBuild;
   /** The address to start from (the customer's saved default), or blank fields. */
   initialAddress?: StoredPostalAddress;
+  /** With nothing in the address book yet, "Save for next time" starts ticked. */
+  addressBookEmpty: boolean;
 };
 
 /** Where the deliveries ship; submitting creates the subscription and goes on to the payment page. */
-export function SubscriptionCheckoutForm({ build, initialAddress }: SubscriptionCheckoutFormProps) {
+export function SubscriptionCheckoutForm({ build, initialAddress, addressBookEmpty }: SubscriptionCheckoutFormProps) {
   const checkout = useCreateSubscriptionCheckout();
   const [formError, setFormError] = useState<string>();
   const [soldOut, setSoldOut] = useState(false);
@@ -34,6 +37,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
     defaultValues: {
       ...build,
       shippingAddress: addressFormValues(initialAddress),
+      saveAddress: addressBookEmpty,
     },
   });
 
@@ -68,6 +72,7 @@ export function SubscriptionCheckoutForm({ build, initialAddress }: Subscription
           </FormAlert>
         ) : null}
         <AddressFields at="shippingAddress" />
+        <CheckboxField label="Save this address for next time" {...form.register('saveAddress')} />
         <div>
           <Button type="submit" disabled={busy}>
             {busy ? 'Opening the payment page…' : 'Continue to payment'}

@@ -4,6 +4,7 @@ import type { Subscription } from '@shared/schemas/subscriptions';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { UnpaidSubscriptionActions } from './unpaid-subscription-actions';
 import { FormAlert } from '@/components/ui/form-alert';
 import { useCancelSubscription } from '../api/cancel-subscription';
 import { useSubscriptionDeliveries } from '../api/get-subscription-deliveries';
@@ -49,7 +50,7 @@ function StatusNotice({ subscription }: { subscription: Subscription }) {
     );
   }
   if (subscription.status === 'incomplete') {
-    return <p className="text-small">Waiting for the first payment to be confirmed; deliveries are scheduled once it is.</p>;
+    return <UnpaidSubscriptionActions subscription={subscription} />;
   }
   return null;
 }

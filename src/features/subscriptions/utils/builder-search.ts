@@ -1,21 +1,13 @@
 import type { z } from 'zod';
+import { builderSearchKeys, rotationSearchValue, searchFromBuilder as searchFromSharedBuilder } from '@shared/domain/builder-search';
 import { subscriptionBuilderSchema, type SubscriptionBuild } from './subscription-form';
 
 /** The builder's choices as the URL carries them, so sign-in and a shared link keep them. */
 export type BuilderFields = z.input<typeof subscriptionBuilderSchema>;
 
-/** The search value that stands for the Roaster's Rotation (it has no lot code). */
-export const rotationSearchValue = 'rotation';
+export { rotationSearchValue } from '@shared/domain/builder-search';
 
-const keys = {
-  lotCode: 'lot',
-  roastLevel: 'level',
-  bagSize: 'size',
-  bagsPerDelivery: 'bags',
-  grind: 'grind',
-  brewMethod: 'brew',
-  cadenceWeeks: 'every',
-} as const satisfies Record<keyof BuilderFields, string>;
+const keys = builderSearchKeys satisfies Record<keyof BuilderFields, string>;
 
 export const builderDefaults: SubscriptionBuild = {
   lotCode: null,
@@ -60,17 +52,7 @@ export function searchNamesLevel(search: URLSearchParams): boolean {
 
 /** The inverse of `builderFromSearch`, in a stable order; a half-typed bag count is left out. */
 export function searchFromBuilder(fields: Partial<BuilderFields>): URLSearchParams {
-  const search = new URLSearchParams();
-  search.set(keys.lotCode, fields.lotCode ?? rotationSearchValue);
-  if (fields.roastLevel) search.set(keys.roastLevel, fields.roastLevel);
-  if (fields.bagSize) search.set(keys.bagSize, fields.bagSize);
-  if (typeof fields.bagsPerDelivery === 'number' && Number.isFinite(fields.bagsPerDelivery)) {
-    search.set(keys.bagsPerDelivery, String(fields.bagsPerDelivery));
-  }
-  if (fields.grind) search.set(keys.grind, fields.grind);
-  if (fields.brewMethod) search.set(keys.brewMethod, fields.brewMethod);
-  if (fields.cadenceWeeks !== undefined) search.set(keys.cadenceWeeks, String(fields.cadenceWeeks));
-  return search;
+  return searchFromSharedBuilder({ ...fields, bagsPerDelivery: typeof fields.bagsPerDelivery === 'number' ? fields.bagsPerDelivery : undefined });
 }
 
 /** A complete, valid set of choices from the search, or null when something is missing or refused. */

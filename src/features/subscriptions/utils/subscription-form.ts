@@ -15,6 +15,6 @@ export type SubscriptionChoiceFields = z.input<typeof subscriptionChoiceSchema>;
 
 export const subscriptionChoiceKeys = ['roastLevel', 'bagSize', 'bagsPerDelivery', 'grind', 'brewMethod', 'cadenceWeeks'] as const;
 
-/** The Roasted to Order builder: everything but where it ships. */
-export const subscriptionBuilderSchema = subscriptionCheckoutRequestSchema.omit({ shippingAddress: true });
+/** The Roasted to Order builder: everything but where it ships (and whether to keep that address). */
+export const subscriptionBuilderSchema = subscriptionCheckoutRequestSchema.omit({ shippingAddress: true, saveAddress: true });
 export type SubscriptionBuild = z.output<typeof subscriptionBuilderSchema>;
