@@ -172,7 +172,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     watchConsole(ownerPage, ownerProblems);
     try {
       const staffOrderPath = `/roastery${new URL(orderUrl).pathname}`;
-      await ownerPage.goto(`${baseUrl}/sign-in?redirectTo=${encodeURIComponent(staffOrderPath)}`);
+      await openInApp(ownerPage, `${baseUrl}/sign-in?redirectTo=${encodeURIComponent(staffOrderPath)}`);
       await ownerPage.getByLabel('E-mail').fill(owner.email);
       await ownerPage.getByLabel('Password', { exact: true }).fill(owner.password);
       await ownerPage.getByRole('button', { name: 'Sign in', exact: true }).click();
@@ -205,17 +205,17 @@ describe('a home roaster buys green coffee in Chromium', () => {
   }, 60_000);
 
   it('checkout saves and reuses an address: Addresses lists it, and the next checkout starts from it', async () => {
-    await page.goto(`${baseUrl}/account/addresses`);
+    await openInApp(page, `${baseUrl}/account/addresses`);
     await page.getByRole('heading', { level: 1, name: 'Addresses' }).waitFor();
     await page.getByText('7 Lantern Row').waitFor();
     expect(await page.getByText('No addresses yet').count()).toBe(0);
 
-    await page.goto(`${baseUrl}/lots/${lot.code}`);
+    await openInApp(page, `${baseUrl}/lots/${lot.code}`);
     const buy = page.getByRole('region', { name: 'Buy green' });
     await buy.getByText('8 oz', { exact: true }).click();
     await buy.getByRole('button', { name: 'Add to cart' }).click();
     await buy.getByText('Added 1 × 8 oz to your cart.').waitFor();
-    await page.goto(`${baseUrl}/checkout`);
+    await openInApp(page, `${baseUrl}/checkout`);
     const address = page.getByRole('form', { name: 'Shipping address' });
     await address.getByRole('button', { name: 'Continue to payment' }).waitFor();
     expect(await address.getByLabel('Recipient’s name').inputValue()).toBe(buyer.name);
@@ -230,7 +230,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     // Where the previous step left off: at checkout with an 8 oz bag; the buyer leaves the payment page unpaid.
     await page.getByRole('form', { name: 'Shipping address' }).getByRole('button', { name: 'Continue to payment' }).click();
     await page.getByRole('heading', { name: 'Test payment' }).waitFor();
-    await page.goto(`${baseUrl}/account/orders`);
+    await openInApp(page, `${baseUrl}/account/orders`);
     await page.getByRole('link', { name: 'Pay now or discard' }).click();
     await page.waitForURL(/\/orders\/[0-9a-f-]{36}$/);
     const abandonedUrl = page.url();
@@ -246,7 +246,7 @@ describe('a home roaster buys green coffee in Chromium', () => {
     await page.waitForURL(`${abandonedUrl}?checkout=complete`);
     await page.getByText('Payment confirmed. Thank you!').waitFor({ timeout: 15_000 });
     // Paid: there is no other unpaid order left behind.
-    await page.goto(`${baseUrl}/account/orders`);
+    await openInApp(page, `${baseUrl}/account/orders`);
     await page.getByRole('list', { name: 'Your orders' }).waitFor();
     expect(await page.getByRole('link', { name: 'Pay now or discard' }).count()).toBe(0);
     expect(problems).toEqual([]);
@@ -321,10 +321,10 @@ describe('a home roaster buys green coffee in Chromium', () => {
       'finds no violations on an unpaid order with Pay now and Discard, nor in the Discard question; discarding leaves the history',
       async () => {
         // The audit's cart holds the 1 lb bag added on the lot page; checkout starts from the saved address.
-        await auditPage.goto(`${baseUrl}/checkout`);
+        await openInApp(auditPage, `${baseUrl}/checkout`);
         await auditPage.getByRole('button', { name: 'Continue to payment' }).click();
         await auditPage.getByRole('heading', { name: 'Test payment' }).waitFor();
-        await auditPage.goto(`${baseUrl}/account/orders`);
+        await openInApp(auditPage, `${baseUrl}/account/orders`);
         await auditPage.getByRole('link', { name: 'Pay now or discard' }).click();
         const unpaid = auditPage.getByRole('region', { name: 'Unpaid order' });
         await unpaid.getByRole('button', { name: 'Pay now' }).waitFor();

@@ -233,7 +233,7 @@ describe('a roast day in a real browser', () => {
   it('the pack list bulk-ship: counts by state, then every packed order marked shipped with one carrier, each with its own tracking number', async () => {
     const { page, problems } = session;
     const { date, order } = await packDayWithOrder(page);
-    await page.goto(`${baseUrl}/roastery/days/${date}?tab=pack`);
+    await openInApp(page, `${baseUrl}/roastery/days/${date}?tab=pack`);
     const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });
     if (order.status === 'roasted') await markPackedOnPage(page, card);
     const before = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
