@@ -34,7 +34,7 @@ const until = '2027-04-25'; // today + 8 weeks − 1 day
 
 const choice = { roastLevel: 'medium', bagSize: '12oz', bagsPerDelivery: 2, grind: 'whole-bean', brewMethod: 'filter' } as const;
 
-function weekly(id: string, overrides: Partial<SubscriptionForPlanning> = {}): SubscriptionForPlanning {
+function weekly(overrides: Partial<SubscriptionForPlanning> = {}): SubscriptionForPlanning {
   return {
     status: 'active',
     anchorDate: '2027-03-02',
@@ -73,7 +73,7 @@ function planFor(subscriptions: SubscriptionForPlanning[], calendar: RoastCalend
   }).lots[0]!;
 }
 
-const four = () => [weekly('a'), weekly('b'), weekly('c'), weekly('d')];
+const four = () => [weekly(), weekly(), weekly(), weekly()];
 
 describe('planGreen — one lot, four weekly subscriptions of 2 × 12 oz at medium', () => {
   // 12 oz = 340.19 g, filled to 341 g (NIST SP 811: 1 oz = 28.349523125 g; rounded up to a whole gram).
@@ -156,7 +156,7 @@ describe('planGreen — one lot, four weekly subscriptions of 2 × 12 oz at medi
   });
 
   it('a cancelled subscription and a lot nobody buys need nothing', () => {
-    const plan = planFor([weekly('a', { status: 'cancelled' })]);
+    const plan = planFor([weekly({ status: 'cancelled' })]);
     expect(plan.needGrams).toBe(0);
     expect(plan.runOutDate).toBeNull();
     expect(plan.reorderBy).toBeNull();
@@ -165,7 +165,7 @@ describe('planGreen — one lot, four weekly subscriptions of 2 × 12 oz at medi
 
 describe('planGreen — Roaster’s Rotation', () => {
   it('a picked day charges its lot; an unpicked day is counted apart', () => {
-    const rotation = weekly('r', { lotCode: null });
+    const rotation = weekly({ lotCode: null });
     const demand = subscriptionRoastDemand([rotation], schedule, {}, now, until, { '2027-03-02': 'LOT-A' });
     const plan = planGreen({
       today,
@@ -184,7 +184,7 @@ describe('planGreen — properties', () => {
   it('stock after each week is the stock less everything needed so far, and more stock never runs out sooner', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 60_000 }), fc.integer({ min: 0, max: 20_000 }), fc.integer({ min: 1, max: 4 }), (stock, sold, cadence) => {
-        const subscriptions = [weekly('a', { cadenceWeeks: cadence })];
+        const subscriptions = [weekly({ cadenceWeeks: cadence })];
         const base = planFor(subscriptions, {}, { stockGrams: stock, greenSoldGrams: sold });
         let left = stock;
         for (const week of base.weeks) {
