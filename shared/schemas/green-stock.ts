@@ -7,6 +7,8 @@ export const greenStockItemSchema = z.object({
   isListed: z.boolean(),
   stockGrams: z.number().int(),
   reorderPointGrams: z.number().int(),
+  /** Days from ordering more from the supplier to the coffee on the shelf. */
+  supplierLeadTimeDays: z.number().int(),
   /** Stock is at or below a reorder point staff have set. */
   reorderAlert: z.boolean(),
   /** Grams sold and roasted over the cover window (the last 28 days). */

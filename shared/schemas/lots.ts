@@ -113,8 +113,13 @@ const lotFieldsSchema = z.object({
   pricePerKgCents: z.number().int('must be whole cents').positive().max(10_000_000),
   priceBreaks: z.array(priceBreakSchema).max(10),
   reorderPointGrams: z.number().int('must be whole grams').min(0).max(10_000_000),
+  /** Days from ordering more from the supplier to the coffee on the shelf; green planning's reorder-by day is the run-out day less this. */
+  supplierLeadTimeDays: z.number().int('must be whole days').min(0, 'must be 0 days or more').max(365, 'must be at most 365 days'),
   isListed: z.boolean(),
 });
+
+/** Two weeks from a supplier's warehouse to the shelf, until staff set the lot's own (common practice). */
+export const DEFAULT_SUPPLIER_LEAD_TIME_DAYS = 14;
 
 type LotFields = z.infer<typeof lotFieldsSchema>;
 type LotConsistencyFields = Pick<LotFields, 'suggestedLevel' | 'allowedLevels' | 'pricePerKgCents' | 'priceBreaks'>;
@@ -157,6 +162,7 @@ export const lotCreateSchema = lotFieldsSchema
     description: lotFieldsSchema.shape.description.default(''),
     priceBreaks: lotFieldsSchema.shape.priceBreaks.default([]),
     reorderPointGrams: lotFieldsSchema.shape.reorderPointGrams.default(0),
+    supplierLeadTimeDays: lotFieldsSchema.shape.supplierLeadTimeDays.default(DEFAULT_SUPPLIER_LEAD_TIME_DAYS),
     isListed: lotFieldsSchema.shape.isListed.default(true),
   })
   .superRefine(refineConsistency);
@@ -173,6 +179,7 @@ export type LotUpdate = z.infer<typeof lotUpdateSchema>;
 /** What staff see of a lot after creating or changing it: the public detail plus the Roastery's fields. */
 export const lotStaffDetailSchema = lotDetailSchema.extend({
   reorderPointGrams: z.number().int(),
+  supplierLeadTimeDays: z.number().int(),
   isListed: z.boolean(),
 });
 export type LotStaffDetail = z.infer<typeof lotStaffDetailSchema>;

@@ -25,6 +25,7 @@ function stockItem(overrides: Partial<GreenStockItem> = {}): GreenStockItem {
     isListed: true,
     stockGrams: 18_144,
     reorderPointGrams: 0,
+    supplierLeadTimeDays: 14,
     reorderAlert: false,
     usedGramsInWindow: 0,
     averageDailyUseGrams: 0,
