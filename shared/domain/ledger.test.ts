@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { ledgerWeekStarts, monthlyRecurringCents, orderSalesKind, weekStartOf } from './ledger';
+import { ledgerWeekStarts, monthlyRecurringCents, orderSalesKind, subscriptionWeeks, weekStartOf, type SubscriptionHistory } from './ledger';
 import { weekdayOf } from './shop-time';
 
 describe('ledgerWeekStarts', () => {
@@ -41,5 +41,37 @@ describe('orderSalesKind', () => {
     expect(orderSalesKind('green', null)).toBe('green');
     expect(orderSalesKind('roasted', null)).toBe('roasted');
     expect(orderSalesKind('roasted', 'sub-1')).toBe('subscription');
+  });
+});
+
+describe('subscriptionWeeks', () => {
+  // Two weeks in New York: Monday 1 March and Monday 8 March 2027 (EST, UTC−5, until 14 March).
+  const weeks = ['2027-03-01', '2027-03-08'];
+  const at = (instant: string) => new Date(instant);
+  const subscription = (fields: Partial<SubscriptionHistory>): SubscriptionHistory => ({
+    createdAt: at('2027-01-04T15:00:00Z'),
+    cancelledAt: null,
+    pausedAt: null,
+    pausedUntil: null,
+    priceCents: 3000,
+    cadenceWeeks: 1,
+    ...fields,
+  });
+
+  it('counts on the books, started, paused and cancelled by week, with the recurring revenue of those still paying', () => {
+    const rows = [
+      // Weekly at $30.00 since January: 13,000 cents a month in both weeks.
+      subscription({}),
+      // Started Wednesday 3 March, every 2 weeks at $30.00: 6,500 cents a month from the first week.
+      subscription({ createdAt: at('2027-03-03T17:00:00Z'), cadenceWeeks: 2 }),
+      // Paused Tuesday 9 March until 1 April: on the books, but no revenue at the end of the second week.
+      subscription({ pausedAt: at('2027-03-09T17:00:00Z'), pausedUntil: '2027-04-01' }),
+      // Cancelled Sunday 7 March 23:30 EST (Monday 04:30 UTC): counted in the first week, gone by its end.
+      subscription({ cancelledAt: at('2027-03-08T04:30:00Z') }),
+    ];
+    expect(subscriptionWeeks(rows, weeks, 'America/New_York')).toEqual([
+      { weekStart: '2027-03-01', active: 3, started: 1, paused: 0, cancelled: 1, monthlyRecurringCents: 13_000 + 6500 + 13_000 },
+      { weekStart: '2027-03-08', active: 3, started: 0, paused: 1, cancelled: 0, monthlyRecurringCents: 13_000 + 6500 },
+    ]);
   });
 });

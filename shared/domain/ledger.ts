@@ -6,9 +6,12 @@
  * - `monthlyRecurringCents(priceCents, cadenceWeeks)`: one subscription's recurring revenue per
  *   month, a delivery's price × 52 weeks ÷ 12 months ÷ the cadence, rounded half up to a cent.
  * - `orderSalesKind(kind, subscriptionId)`: green, roasted one-off, or subscription.
+ * - `subscriptionWeeks(subscriptions, weekStarts, timeZone)`: per week, the subscriptions on the
+ *   books at its end (paused ones too), started, paused and cancelled in it, and the recurring
+ *   revenue per month of those neither cancelled nor paused at its end.
  */
 import { roundHalfUpDiv } from './integer-math';
-import { addDays, weekdayOf, type IsoDate } from './shop-time';
+import { addDays, instantAt, weekdayOf, type IsoDate } from './shop-time';
 import { weekdays, type OrderKind } from './vocabulary';
 
 export const salesKinds = ['green', 'roasted', 'subscription'] as const;
@@ -33,4 +36,46 @@ export function monthlyRecurringCents(priceCents: number, cadenceWeeks: number):
 export function orderSalesKind(kind: OrderKind, subscriptionId: string | null): SalesKind {
   if (kind === 'green') return 'green';
   return subscriptionId === null ? 'roasted' : 'subscription';
+}
+
+/** What the Ledger reads of one subscription. */
+export interface SubscriptionHistory {
+  createdAt: Date;
+  cancelledAt: Date | null;
+  /** The latest pause, and the shop-local day it runs until. */
+  pausedAt: Date | null;
+  pausedUntil: IsoDate | null;
+  priceCents: number;
+  cadenceWeeks: number;
+}
+
+export interface SubscriptionWeek {
+  weekStart: IsoDate;
+  active: number;
+  started: number;
+  paused: number;
+  cancelled: number;
+  monthlyRecurringCents: number;
+}
+
+export function subscriptionWeeks(subscriptions: readonly SubscriptionHistory[], weekStarts: readonly IsoDate[], timeZone: string): SubscriptionWeek[] {
+  return weekStarts.map((weekStart) => {
+    const starts = instantAt(weekStart, '00:00', timeZone).getTime();
+    const ends = instantAt(addDays(weekStart, 7), '00:00', timeZone).getTime();
+    const lastDay = addDays(weekStart, 6);
+    const within = (at: Date | null) => at !== null && at.getTime() >= starts && at.getTime() < ends;
+    const week: SubscriptionWeek = { weekStart, active: 0, started: 0, paused: 0, cancelled: 0, monthlyRecurringCents: 0 };
+    for (const subscription of subscriptions) {
+      if (within(subscription.createdAt)) week.started += 1;
+      if (within(subscription.pausedAt)) week.paused += 1;
+      if (within(subscription.cancelledAt)) week.cancelled += 1;
+      const onBooks = subscription.createdAt.getTime() < ends && (subscription.cancelledAt === null || subscription.cancelledAt.getTime() >= ends);
+      if (!onBooks) continue;
+      week.active += 1;
+      const pausedAtEnd =
+        subscription.pausedAt !== null && subscription.pausedAt.getTime() < ends && subscription.pausedUntil !== null && subscription.pausedUntil > lastDay;
+      if (!pausedAtEnd) week.monthlyRecurringCents += monthlyRecurringCents(subscription.priceCents, subscription.cadenceWeeks);
+    }
+    return week;
+  });
 }

@@ -26,7 +26,9 @@ export const todayResponseSchema = z.object({
   }),
   failedMessages: z.object({
     count: z.number().int(),
-    items: z.array(z.object({ id: z.string(), template: z.string(), to: z.string(), attempts: z.number().int(), createdAt: z.string(), orderId: z.string().nullable() })),
+    items: z.array(
+      z.object({ id: z.string(), template: z.string(), to: z.string(), attempts: z.number().int(), createdAt: z.string(), orderId: z.string().nullable() }),
+    ),
   }),
   reorder: z.array(
     z.object({

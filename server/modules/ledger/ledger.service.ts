@@ -1,33 +1,9 @@
-import { ledgerWeekStarts, monthlyRecurringCents } from '@shared/domain/ledger';
+import { ledgerWeekStarts, subscriptionWeeks } from '@shared/domain/ledger';
 import { assessBatchLoss } from '@shared/domain/roast-loss';
-import { addDays, instantAt, localDateOf, type IsoDate } from '@shared/domain/shop-time';
-import type { LedgerResponse, LedgerSubscriptionsWeek } from '@shared/schemas/ledger';
+import { addDays, instantAt, localDateOf } from '@shared/domain/shop-time';
+import type { LedgerResponse } from '@shared/schemas/ledger';
 import type { Clock } from '../../lib/clock';
 import type { LedgerRepo, LedgerSpan } from './ledger.repo';
-
-type SubscriptionRow = Awaited<ReturnType<LedgerRepo['subscriptionsInSpan']>>[number];
-
-/** Each week's subscription figures: on the books at its end, started, paused and cancelled in it, and recurring revenue at its end. */
-function subscriptionWeeks(rows: readonly SubscriptionRow[], weekStarts: readonly IsoDate[], timeZone: string): LedgerSubscriptionsWeek[] {
-  return weekStarts.map((weekStart) => {
-    const starts = instantAt(weekStart, '00:00', timeZone).getTime();
-    const ends = instantAt(addDays(weekStart, 7), '00:00', timeZone).getTime();
-    const lastDay = addDays(weekStart, 6);
-    const within = (at: Date | null) => at !== null && at.getTime() >= starts && at.getTime() < ends;
-    const figures = { weekStart, active: 0, started: 0, paused: 0, cancelled: 0, monthlyRecurringCents: 0 };
-    for (const row of rows) {
-      if (within(row.createdAt)) figures.started += 1;
-      if (within(row.pausedAt)) figures.paused += 1;
-      if (within(row.cancelledAt)) figures.cancelled += 1;
-      const onBooks = row.createdAt.getTime() < ends && (row.cancelledAt === null || row.cancelledAt.getTime() >= ends);
-      if (!onBooks) continue;
-      figures.active += 1;
-      const pausedAtEnd = row.pausedAt !== null && row.pausedAt.getTime() < ends && row.pausedUntil !== null && row.pausedUntil > lastDay;
-      if (!pausedAtEnd) figures.monthlyRecurringCents += monthlyRecurringCents(row.priceCents, row.cadenceWeeks);
-    }
-    return figures;
-  });
-}
 
 /** The owner's Ledger: the last weeks' sales, refunds, subscriptions, green coffee and roast loss. */
 export function createLedgerService({ repo, clock }: { repo: LedgerRepo; clock: Clock }) {

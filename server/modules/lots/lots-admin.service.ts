@@ -49,7 +49,12 @@ export function createLotsAdminService(repo: LotsAdminRepo, storage: FileStorage
   async function detail(code: string): Promise<LotStaffDetail> {
     const found = await repo.findByCode(code);
     if (!found) throw lotNotFound(code);
-    return { ...lotDetailOf(found.lot, found.priceBreaks, found.files), reorderPointGrams: found.lot.reorderPointGrams, supplierLeadTimeDays: found.lot.supplierLeadTimeDays, isListed: found.lot.isListed };
+    return {
+      ...lotDetailOf(found.lot, found.priceBreaks, found.files),
+      reorderPointGrams: found.lot.reorderPointGrams,
+      supplierLeadTimeDays: found.lot.supplierLeadTimeDays,
+      isListed: found.lot.isListed,
+    };
   }
 
   async function requireLotId(code: string) {

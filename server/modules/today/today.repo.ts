@@ -38,7 +38,15 @@ export function createTodayRepo(db: Db) {
 
     /** Messages the outbox gave up on, newest first, with the order they concern when there is one. */
     async failedMessages(limit: number) {
-      const result = await db.execute<{ id: string; template: string; to_address: string; attempts: number; created_at: Date; order_id: string | null; total: string }>(sql`
+      const result = await db.execute<{
+        id: string;
+        template: string;
+        to_address: string;
+        attempts: number;
+        created_at: Date;
+        order_id: string | null;
+        total: string;
+      }>(sql`
         select e.id, e.template, e.to_address, e.attempts, e.created_at, e.payload->>'orderId' as order_id, count(*) over ()::int8 as total
         from email_outbox e
         where e.status = 'failed'

@@ -26,7 +26,12 @@ type Movement = {
 
 /** A tiny in-memory server for the Roastery's lot routes, starting with one invented lot. */
 function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (method: string, path: string) => Response | undefined } = {}) {
-  const lot: LotStaffDetail = { ...makeLotDetail({ stockGrams: 2000, photos: [`/api/uploads/${photoId}`] }), reorderPointGrams: 0, supplierLeadTimeDays: 14, isListed };
+  const lot: LotStaffDetail = {
+    ...makeLotDetail({ stockGrams: 2000, photos: [`/api/uploads/${photoId}`] }),
+    reorderPointGrams: 0,
+    supplierLeadTimeDays: 14,
+    isListed,
+  };
   const movements: Movement[] = [
     {
       id: 'm1',
