@@ -133,8 +133,9 @@ export function createApp(deps: AppDeps): Express {
   api.use(auth.loadSession);
 
   const { sessions, throttles } = auth;
-  const lots = createLotsModule({ db, storage, clock, listCache: deps.lotListCache });
   const planning = createPlanningModule({ db, clock });
+  const reorderDates = async () => new Map((await planning.service.plan(8)).lots.map((lot) => [lot.lotCode, lot]));
+  const lots = createLotsModule({ db, storage, clock, listCache: deps.lotListCache, reorderDates });
   const modules: ApiModule[] = [
     auth,
     createAccountModule({ config, db, audit, sessions, throttles }),

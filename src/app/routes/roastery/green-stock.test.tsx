@@ -26,6 +26,7 @@ function stockItem(overrides: Partial<GreenStockItem> = {}): GreenStockItem {
     stockGrams: 18_144,
     reorderPointGrams: 0,
     supplierLeadTimeDays: 14,
+    reorderBy: null,
     reorderAlert: false,
     usedGramsInWindow: 0,
     averageDailyUseGrams: 0,
@@ -46,7 +47,7 @@ describe('Roastery', () => {
       within(nav)
         .getAllByRole('link')
         .map((link) => link.textContent),
-    ).toEqual(['Overview', 'Day Sheet', 'Roast Calendar', 'Orders', 'Green Stock', 'Subscribers', 'Rotation']);
+    ).toEqual(['Today', 'Day Sheet', 'Roast Calendar', 'Orders', 'Green Stock', 'Subscribers', 'Rotation']);
 
     const figure = async (label: string) => (await screen.findByText(label)).nextElementSibling?.textContent;
     expect(await figure('Lots listed')).toBe('3');

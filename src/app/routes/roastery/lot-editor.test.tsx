@@ -50,6 +50,7 @@ function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (
     isListed: lot.isListed,
     stockGrams: lot.stockGrams,
     supplierLeadTimeDays: lot.supplierLeadTimeDays,
+    reorderBy: null,
     reorderPointGrams: lot.reorderPointGrams,
     reorderAlert: lot.reorderPointGrams > 0 && lot.stockGrams <= lot.reorderPointGrams,
     usedGramsInWindow: 0,
