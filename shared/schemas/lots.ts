@@ -113,13 +113,15 @@ const lotFieldsSchema = z.object({
   pricePerKgCents: z.number().int('must be whole cents').positive().max(10_000_000),
   priceBreaks: z.array(priceBreakSchema).max(10),
   reorderPointGrams: z.number().int('must be whole grams').min(0).max(10_000_000),
-  /** Days from ordering more from the supplier to the coffee on the shelf; green planning's reorder-by day is the run-out day less this. */
-  supplierLeadTimeDays: z.number().int('must be whole days').min(0, 'must be 0 days or more').max(365, 'must be at most 365 days'),
   isListed: z.boolean(),
 });
 
-/** Two weeks from a supplier's warehouse to the shelf, until staff set the lot's own (common practice). */
-export const DEFAULT_SUPPLIER_LEAD_TIME_DAYS = 14;
+/**
+ * Days from ordering more from the supplier to the coffee on the shelf; green planning's reorder-by
+ * day is the run-out day less this. A new lot starts at two weeks (the column's default), set on
+ * its Green Stock page.
+ */
+const supplierLeadTimeDays = z.number().int('must be whole days').min(0, 'must be 0 days or more').max(365, 'must be at most 365 days');
 
 type LotFields = z.infer<typeof lotFieldsSchema>;
 type LotConsistencyFields = Pick<LotFields, 'suggestedLevel' | 'allowedLevels' | 'pricePerKgCents' | 'priceBreaks'>;
@@ -162,7 +164,6 @@ export const lotCreateSchema = lotFieldsSchema
     description: lotFieldsSchema.shape.description.default(''),
     priceBreaks: lotFieldsSchema.shape.priceBreaks.default([]),
     reorderPointGrams: lotFieldsSchema.shape.reorderPointGrams.default(0),
-    supplierLeadTimeDays: lotFieldsSchema.shape.supplierLeadTimeDays.default(DEFAULT_SUPPLIER_LEAD_TIME_DAYS),
     isListed: lotFieldsSchema.shape.isListed.default(true),
   })
   .superRefine(refineConsistency);
@@ -171,6 +172,7 @@ export type LotCreate = z.infer<typeof lotCreateSchema>;
 /** Body of `PATCH /api/lots/:code` (staff): any descriptor but the code; the merged lot is checked again. */
 export const lotUpdateSchema = lotFieldsSchema
   .omit({ code: true })
+  .extend({ supplierLeadTimeDays })
   .partial()
   .refine((patch) => Object.keys(patch).length > 0, { message: 'change at least one field' })
   .superRefine(refineConsistency);

@@ -37,7 +37,7 @@ export const lots = pgTable(
     stockGrams: integer('stock_grams').notNull().default(0),
     /** Staff want to reorder once stock falls to this many grams (0: no alert). */
     reorderPointGrams: integer('reorder_point_grams').notNull().default(0),
-    /** Days from ordering more of this lot from the supplier to having it on the shelf (green planning's reorder-by day). */
+    /** Days from ordering more of this lot from the supplier to having it on the shelf (green planning's reorder-by day); two weeks until staff set it (common practice). */
     supplierLeadTimeDays: integer('supplier_lead_time_days').notNull().default(14),
     pricePerKgCents: integer('price_per_kg_cents').notNull(),
     isListed: boolean('is_listed').notNull().default(true),

@@ -57,7 +57,7 @@ describe('Roastery', () => {
     const cautions = screen.getByRole('region', { name: 'Before a roast day' });
     expect(within(cautions).getByText('Carbon monoxide and smoke.')).toBeTruthy();
     expect(within(cautions).getByText(/local codes and licensed/)).toBeTruthy();
-    await waitFor(() => expect(document.title).toBe('Roastery · Restday'));
+    await waitFor(() => expect(document.title).toBe('Today · Roastery · Restday'));
   });
 });
 

@@ -52,8 +52,8 @@ function Ledger({ weeks }: { weeks: number }) {
   return (
     <>
       <p className="mb-6 text-small text-ink-muted">
-        {formatDay(from)} to {formatDay(to)}, week by week (Monday to Sunday). Sales are order totals with shipping, in the week they were paid; refunds in
-        the week they were made.
+        {formatDay(from)} to {formatDay(to)}, week by week (Monday to Sunday). Sales are order totals with shipping, in the week they were paid; refunds in the
+        week they were made.
       </p>
       <LedgerView ledger={ledgerQuery.data} />
     </>
@@ -73,10 +73,17 @@ export default function LedgerRoute() {
   const [search, setSearch] = useSearchParams();
   const weeks = weeksOf(search);
   return (
-    <RequireRole allowed={ownerRoles} notAllowed={{ title: 'The Ledger is for the owner', reason: 'Only the shop’s owner sees its sales, refunds and revenue.' }}>
+    <RequireRole
+      allowed={ownerRoles}
+      notAllowed={{ title: 'The Ledger is for the owner', reason: 'Only the shop’s owner sees its sales, refunds and revenue.' }}
+    >
       <PageTitle title="Ledger · Roastery" />
       <div className="flex flex-wrap items-start justify-between gap-4">
-        <PageHeader eyebrow="Roastery" title="Ledger" lead="Sales, refunds, subscriptions, green coffee and roast loss by week, and the green coffee the coming weeks need." />
+        <PageHeader
+          eyebrow="Roastery"
+          title="Ledger"
+          lead="Sales, refunds, subscriptions, green coffee and roast loss by week, and the green coffee the coming weeks need."
+        />
         <label className="grid gap-1 text-small font-semibold">
           Weeks shown
           <select
