@@ -20,10 +20,12 @@ import { createAuthModule } from './modules/auth';
 import { createCheckoutModule } from './modules/checkout';
 import { createDevClockModule, isAdjustableClock } from './modules/dev-clock';
 import { createHealthModule } from './modules/health';
+import { createLedgerModule } from './modules/ledger';
 import { createLotsModule } from './modules/lots';
 import { createOrdersModule } from './modules/orders';
 import { createOutboxModule } from './modules/outbox';
 import { createPackingModule } from './modules/packing';
+import { createPlanningModule } from './modules/planning';
 import { createPaymentsService, createPaymentsWebhookModule } from './modules/payments';
 import { createRoasteryModule } from './modules/roastery';
 import { createRotationModule } from './modules/rotation';
@@ -32,6 +34,7 @@ import { createStorefront } from './modules/storefront';
 import { createSubscribersModule } from './modules/subscribers';
 import { createSubscriptionPreviewModule } from './modules/subscription-preview';
 import { createSubscriptionsModule } from './modules/subscriptions';
+import { createTodayModule } from './modules/today';
 import { createTeamModule } from './modules/team';
 import { createTraceModule } from './modules/trace';
 import { createUploadsModule } from './modules/uploads';
@@ -130,7 +133,9 @@ export function createApp(deps: AppDeps): Express {
   api.use(auth.loadSession);
 
   const { sessions, throttles } = auth;
-  const lots = createLotsModule({ db, storage, clock, listCache: deps.lotListCache });
+  const planning = createPlanningModule({ db, clock });
+  const reorderDates = async () => new Map((await planning.service.plan(8)).lots.map((lot) => [lot.lotCode, lot]));
+  const lots = createLotsModule({ db, storage, clock, listCache: deps.lotListCache, reorderDates });
   const modules: ApiModule[] = [
     auth,
     createAccountModule({ config, db, audit, sessions, throttles }),
@@ -160,6 +165,9 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
     createRoasteryModule({ db }),
+    planning,
+    createTodayModule({ db, clock, planning: planning.service }),
+    createLedgerModule({ db, clock }),
     createPackingModule({ db, clock }),
     createTraceModule({ db }),
   ];

@@ -34,6 +34,18 @@ export interface RoastListSettings {
 
 export type LotLossHistory = Readonly<Record<string, Partial<Record<RoastLevel, LotLossRecord>>>>;
 
+/** One lot and level's recorded batches, as a database sums them. */
+export interface LotLossRow extends LotLossRecord {
+  lotCode: string;
+  roastLevel: RoastLevel;
+}
+
+export function lotLossHistoryOf(rows: readonly LotLossRow[]): LotLossHistory {
+  const history: Record<string, Partial<Record<RoastLevel, LotLossRecord>>> = {};
+  for (const { lotCode, roastLevel, ...record } of rows) (history[lotCode] ??= {})[roastLevel] = record;
+  return history;
+}
+
 export interface RoastListInput {
   date: string;
   lines: readonly RoastOrderLine[];

@@ -7,7 +7,11 @@ export const greenStockItemSchema = z.object({
   isListed: z.boolean(),
   stockGrams: z.number().int(),
   reorderPointGrams: z.number().int(),
-  /** Stock is at or below a reorder point staff have set. */
+  /** Days from ordering more from the supplier to the coffee on the shelf. */
+  supplierLeadTimeDays: z.number().int(),
+  /** Green planning's last day to reorder (run-out day less the lead time); null when stock lasts the plan. */
+  reorderBy: z.string().nullable(),
+  /** Stock is at or below a reorder point staff have set, or green planning's reorder-by day has come. */
   reorderAlert: z.boolean(),
   /** Grams sold and roasted over the cover window (the last 28 days). */
   usedGramsInWindow: z.number().int(),

@@ -116,6 +116,13 @@ const lotFieldsSchema = z.object({
   isListed: z.boolean(),
 });
 
+/**
+ * Days from ordering more from the supplier to the coffee on the shelf; green planning's reorder-by
+ * day is the run-out day less this. A new lot starts at two weeks (the column's default), set on
+ * its Green Stock page.
+ */
+const supplierLeadTimeDays = z.number().int('must be whole days').min(0, 'must be 0 days or more').max(365, 'must be at most 365 days');
+
 type LotFields = z.infer<typeof lotFieldsSchema>;
 type LotConsistencyFields = Pick<LotFields, 'suggestedLevel' | 'allowedLevels' | 'pricePerKgCents' | 'priceBreaks'>;
 
@@ -165,6 +172,7 @@ export type LotCreate = z.infer<typeof lotCreateSchema>;
 /** Body of `PATCH /api/lots/:code` (staff): any descriptor but the code; the merged lot is checked again. */
 export const lotUpdateSchema = lotFieldsSchema
   .omit({ code: true })
+  .extend({ supplierLeadTimeDays })
   .partial()
   .refine((patch) => Object.keys(patch).length > 0, { message: 'change at least one field' })
   .superRefine(refineConsistency);
@@ -173,6 +181,7 @@ export type LotUpdate = z.infer<typeof lotUpdateSchema>;
 /** What staff see of a lot after creating or changing it: the public detail plus the Roastery's fields. */
 export const lotStaffDetailSchema = lotDetailSchema.extend({
   reorderPointGrams: z.number().int(),
+  supplierLeadTimeDays: z.number().int(),
   isListed: z.boolean(),
 });
 export type LotStaffDetail = z.infer<typeof lotStaffDetailSchema>;

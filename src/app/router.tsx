@@ -90,6 +90,7 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: paths.roastery.batch.path, lazy: () => import('./routes/roastery/batch-trace').then(load) },
                 { path: paths.roastery.orderTrace.path, lazy: () => import('./routes/roastery/order-trace').then(load) },
                 { path: paths.roastery.settings.path, lazy: () => import('./routes/roastery/settings').then(load) },
+                { path: paths.roastery.ledger.path, lazy: () => import('./routes/roastery/ledger').then(load) },
               ],
             },
           ],

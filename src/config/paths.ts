@@ -76,5 +76,6 @@ export const paths = {
     batch: { path: '/roastery/batches/:id', getHref: (id: string) => `/roastery/batches/${encodeURIComponent(id)}` },
     orderTrace: { path: '/roastery/orders/:id/trace', getHref: (id: string) => `/roastery/orders/${encodeURIComponent(id)}/trace` },
     settings: { path: '/roastery/settings', getHref: () => '/roastery/settings' },
+    ledger: { path: '/roastery/ledger', getHref: () => '/roastery/ledger' },
   },
 } as const;

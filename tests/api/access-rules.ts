@@ -83,6 +83,11 @@ export const accessRules: AccessRule[] = [
   { method: 'POST', path: '/api/owner/team', access: 'owner' },
   { method: 'PATCH', path: '/api/owner/team/:id', access: 'owner' },
   { method: 'DELETE', path: '/api/owner/team/invitations/:id', access: 'owner' },
+  { method: 'GET', path: '/api/owner/ledger', access: 'owner' },
+  { method: 'GET', path: '/api/owner/ledger/sales.csv', access: 'owner' },
+  { method: 'GET', path: '/api/owner/ledger/subscriptions.csv', access: 'owner' },
+  { method: 'GET', path: '/api/owner/ledger/green.csv', access: 'owner' },
+  { method: 'GET', path: '/api/owner/ledger/loss.csv', access: 'owner' },
 
   { method: 'GET', path: '/api/lots', access: 'public' },
   { method: 'GET', path: '/api/shipping', access: 'public' },
@@ -100,6 +105,9 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/uploads/:id', access: 'public' },
 
   { method: 'GET', path: '/api/roastery/outbox', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/today', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/planning', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/planning.csv', access: 'staff' },
 
   { method: 'GET', path: '/api/roastery/settings', access: 'staff' },
   { method: 'PUT', path: '/api/roastery/settings', access: 'owner' },

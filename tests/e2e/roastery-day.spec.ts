@@ -204,7 +204,7 @@ describe('a roast day in a real browser', () => {
     const { page, problems } = session;
     const { date, order } = await packDayWithOrder(page);
     await openInApp(page, `${baseUrl}/roastery/days/${date}`);
-    await page.getByRole('tab', { name: 'Pack List' }).click();
+    await page.getByRole('tab', { name: /^Pack List/ }).click();
     expect(new URL(page.url()).searchParams.get('tab')).toBe('pack');
 
     const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: new RegExp(`order ${order.orderId.slice(0, 8)}`, 'i') }) });

@@ -37,6 +37,8 @@ export const lots = pgTable(
     stockGrams: integer('stock_grams').notNull().default(0),
     /** Staff want to reorder once stock falls to this many grams (0: no alert). */
     reorderPointGrams: integer('reorder_point_grams').notNull().default(0),
+    /** Days from ordering more of this lot from the supplier to having it on the shelf (green planning's reorder-by day); two weeks until staff set it (common practice). */
+    supplierLeadTimeDays: integer('supplier_lead_time_days').notNull().default(14),
     pricePerKgCents: integer('price_per_kg_cents').notNull(),
     isListed: boolean('is_listed').notNull().default(true),
     ...timestamps(),
@@ -49,6 +51,7 @@ export const lots = pgTable(
     check('lots_code_not_blank', sql`length(trim(${t.code})) > 0`),
     check('lots_stock_grams_non_negative', sql`${t.stockGrams} >= 0`),
     check('lots_reorder_point_non_negative', sql`${t.reorderPointGrams} >= 0`),
+    check('lots_supplier_lead_time_range', sql`${t.supplierLeadTimeDays} between 0 and 365`),
     check('lots_price_per_kg_positive', sql`${t.pricePerKgCents} > 0`),
     check('lots_moisture_range', sql`${t.moisturePct} >= 0 and ${t.moisturePct} <= 20`),
     check('lots_cupping_score_range', sql`${t.cuppingScore} is null or (${t.cuppingScore} >= 0 and ${t.cuppingScore} <= 100)`),

@@ -52,6 +52,8 @@ export const orders = pgTable(
     /** Staff's own note on the order; never shown to the customer. */
     staffNote: text('staff_note'),
     refundedCents: integer('refunded_cents').notNull().default(0),
+    /** When the latest refund was recorded: the Ledger counts refunds in the week they were made. */
+    refundedAt: instant('refunded_at'),
     ...timestamps(),
   },
   (t) => [
@@ -71,6 +73,13 @@ export const orders = pgTable(
       .on(t.createdAt)
       .where(sql`${t.status} = 'pending_payment'`),
     index('orders_stripe_payment_intent_id_idx').on(t.stripePaymentIntentId),
+    // The Ledger's weekly sums read paid orders by payment time, and refunds by refund time.
+    index('orders_paid_at_idx')
+      .on(t.paidAt)
+      .where(sql`${t.paidAt} is not null`),
+    index('orders_refunded_at_idx')
+      .on(t.refundedAt)
+      .where(sql`${t.refundedAt} is not null`),
     check('orders_subtotal_non_negative', sql`${t.subtotalCents} >= 0`),
     check('orders_shipping_non_negative', sql`${t.shippingCents} >= 0`),
     check('orders_total_non_negative', sql`${t.totalCents} >= 0`),

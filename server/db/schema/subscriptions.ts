@@ -38,6 +38,8 @@ export const subscriptions = pgTable(
     cancelledAt: instant('cancelled_at'),
     /** Set when the customer discarded the unpaid checkout: it is cancelled and left out of their subscriptions. */
     discardedAt: instant('discarded_at'),
+    /** When the subscriber last paused it (the Ledger's pauses per week). */
+    pausedAt: instant('paused_at'),
     /** Nominal roast date of the first delivery; later ones sit every cadence on from it (re-anchored when the cadence changes). */
     anchorDate: date('anchor_date', { mode: 'string' }),
     /** The subscriber cancelled: it ends when the paid period does (Stripe's cancel_at_period_end). */

@@ -141,6 +141,7 @@ export function demoGreenOrders(ctx: ScenarioContext) {
       packedAt,
       shippedAt,
       refundedCents: refundedAt ? totalCents : 0,
+      refundedAt,
       createdAt,
       updatedAt: refundedAt ?? shippedAt ?? packedAt ?? paidAt ?? createdAt,
     });

@@ -8,7 +8,7 @@ import type { LotListCache } from './lot-list-cache';
 import { createLotsService, type LotsService } from './lots.service';
 import { createLotsAdminRepo } from './lots-admin.repo';
 import { greenStockRoutes, lotsAdminRoutes } from './lots-admin.routes';
-import { createLotsAdminService } from './lots-admin.service';
+import { createLotsAdminService, type ReorderDates } from './lots-admin.service';
 
 /** Lots: the shop's public catalogue, the staff's lot editing, and Green Stock in the Roastery. */
 export function createLotsModule({
@@ -16,13 +16,16 @@ export function createLotsModule({
   storage,
   clock,
   listCache,
+  reorderDates,
 }: {
   db: Db;
   storage: FileStorage;
   clock: Clock;
   listCache?: LotListCache | undefined;
+  /** Green planning's reorder-by day per lot, for Green Stock's reorder alerts. */
+  reorderDates?: ReorderDates;
 }): ApiModule & { catalogue: LotsService } {
-  const admin = createLotsAdminService(createLotsAdminRepo(db), storage, clock);
+  const admin = createLotsAdminService(createLotsAdminRepo(db), storage, clock, reorderDates);
   const catalogue = createLotsService(createLotsRepo(db), listCache);
   return {
     catalogue,

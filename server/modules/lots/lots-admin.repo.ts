@@ -177,6 +177,7 @@ export function createLotsAdminRepo(db: Db) {
           isListed: lots.isListed,
           stockGrams: lots.stockGrams,
           reorderPointGrams: lots.reorderPointGrams,
+          supplierLeadTimeDays: lots.supplierLeadTimeDays,
           usedGrams: sql<number>`coalesce(${used.usedGrams}, 0)`.mapWith(Number),
         })
         .from(lots)

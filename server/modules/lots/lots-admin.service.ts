@@ -45,11 +45,19 @@ function displayName(originalName: string, extension: string): string {
   return base || `file.${extension}`;
 }
 
-export function createLotsAdminService(repo: LotsAdminRepo, storage: FileStorage, clock: Clock) {
+/** Each lot's last day to reorder and whether that day has come (green planning); none without planning. */
+export type ReorderDates = () => Promise<ReadonlyMap<string, { reorderBy: string | null; reorderNow: boolean }>>;
+
+export function createLotsAdminService(repo: LotsAdminRepo, storage: FileStorage, clock: Clock, reorderDates: ReorderDates = async () => new Map()) {
   async function detail(code: string): Promise<LotStaffDetail> {
     const found = await repo.findByCode(code);
     if (!found) throw lotNotFound(code);
-    return { ...lotDetailOf(found.lot, found.priceBreaks, found.files), reorderPointGrams: found.lot.reorderPointGrams, isListed: found.lot.isListed };
+    return {
+      ...lotDetailOf(found.lot, found.priceBreaks, found.files),
+      reorderPointGrams: found.lot.reorderPointGrams,
+      supplierLeadTimeDays: found.lot.supplierLeadTimeDays,
+      isListed: found.lot.isListed,
+    };
   }
 
   async function requireLotId(code: string) {
@@ -150,12 +158,13 @@ export function createLotsAdminService(repo: LotsAdminRepo, storage: FileStorage
     },
 
     async greenStock(): Promise<GreenStockResponse> {
-      const rows = await repo.greenStock(new Date(clock.now().getTime() - coverWindowDays * DAY_MS));
+      const [rows, reorder] = await Promise.all([repo.greenStock(new Date(clock.now().getTime() - coverWindowDays * DAY_MS)), reorderDates()]);
       return {
         windowDays: coverWindowDays,
         items: rows.map(({ usedGrams, ...row }) => ({
           ...row,
-          reorderAlert: isAtReorderPoint(row.stockGrams, row.reorderPointGrams),
+          reorderBy: reorder.get(row.code)?.reorderBy ?? null,
+          reorderAlert: isAtReorderPoint(row.stockGrams, row.reorderPointGrams) || (reorder.get(row.code)?.reorderNow ?? false),
           usedGramsInWindow: usedGrams,
           averageDailyUseGrams: averageDailyUseGrams(usedGrams),
           daysOfCover: daysOfCover(row.stockGrams, usedGrams),

@@ -297,7 +297,7 @@ export function createPaymentEventsService({ repo, ports, gateway, clock, logger
       // Stripe's amount_refunded is the running total, so applying it in any order lands on the same figure.
       const refundedCents = Math.min(order.totalCents, Math.max(order.refundedCents, charge.amount_refunded));
       const refundedInFull = refundedCents >= order.totalCents && order.status !== 'pending_payment';
-      await tx.setOrderRefund(order.id, { refundedCents, status: refundedInFull ? 'refunded' : order.status, paymentIntentId });
+      await tx.setOrderRefund(order.id, { refundedCents, status: refundedInFull ? 'refunded' : order.status, paymentIntentId, at: clock.now() });
     };
   }
 

@@ -124,10 +124,16 @@ function queries(db: DbOrTx) {
         .where(eq(orders.id, orderId));
     },
 
-    async setOrderRefund(orderId: string, change: { refundedCents: number; status: OrderStatus; paymentIntentId: string }) {
+    async setOrderRefund(orderId: string, change: { refundedCents: number; status: OrderStatus; paymentIntentId: string; at: Date }) {
       await db
         .update(orders)
-        .set({ refundedCents: change.refundedCents, status: change.status, stripePaymentIntentId: change.paymentIntentId })
+        .set({
+          refundedCents: change.refundedCents,
+          status: change.status,
+          stripePaymentIntentId: change.paymentIntentId,
+          // A repeated event for a refund already recorded keeps its first date.
+          refundedAt: sql`case when ${orders.refundedCents} = ${change.refundedCents} then ${orders.refundedAt} else ${change.at.toISOString()}::timestamptz end`,
+        })
         .where(eq(orders.id, orderId));
     },
 

@@ -1,5 +1,5 @@
 import { buildRoastList, type LotLossHistory, type RoastOrderLine } from '@shared/domain/roast-list';
-import { greenNeededForRoasted, type LotLossRecord } from '@shared/domain/roast-loss';
+import { greenNeededForRoasted } from '@shared/domain/roast-loss';
 import {
   dayCapacityGrams,
   datesForLines,
@@ -26,16 +26,8 @@ export interface PlannedGroup {
   bags: number;
 }
 
-export interface LossHistoryRow extends LotLossRecord {
-  lotCode: string;
-  roastLevel: RoastLevel;
-}
-
-export function lossHistoryOf(rows: readonly LossHistoryRow[]): LotLossHistory {
-  const history: Record<string, Partial<Record<RoastLevel, LotLossRecord>>> = {};
-  for (const { lotCode, roastLevel, ...record } of rows) (history[lotCode] ??= {})[roastLevel] = record;
-  return history;
-}
+export type { LotLossRow as LossHistoryRow } from '@shared/domain/roast-list';
+export { lotLossHistoryOf as lossHistoryOf } from '@shared/domain/roast-list';
 
 /**
  * Green grams each day's orders need, as the Roast List plans them. Unpicked Roaster's Rotation

@@ -6,9 +6,14 @@ import { createCalendarRepo } from './calendar.repo';
 import { createCalendarService } from './calendar.service';
 import { roasteryRoutes } from './roastery.routes';
 import { createRoastListRepo } from './roast-list.repo';
-import { createRoastListService } from './roast-list.service';
+import { createRoastListService, type RoastListService } from './roast-list.service';
 import { createRoasterySettingsRepo } from './settings.repo';
 import { createRoasterySettingsService } from './settings.service';
+
+export type { RoastListService };
+
+/** A day's Roast List as the Roastery plans it, for modules that summarise it (Today). */
+export const createRoastListReader = (db: Db): RoastListService => createRoastListService(createRoastListRepo(db));
 
 /** The Roastery's settings, Roast Calendar, Roast List and batches. */
 export function createRoasteryModule({ db }: { db: Db }): ApiModule {

@@ -144,6 +144,7 @@ export interface SubscriptionFieldsChange {
   priceCents?: number;
   anchorDate?: IsoDate | null;
   pausedUntil?: IsoDate | null;
+  pausedAt?: Date;
   cancelAtPeriodEnd?: boolean;
   status?: SubscriptionStatus;
 }

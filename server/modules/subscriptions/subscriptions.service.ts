@@ -420,7 +420,7 @@ export function createSubscriptionsService({ repo, payments, clock, onChanged, a
         }
         const notice = pauseNotice(outcome);
         return {
-          fields: { pausedUntil: until, status: subscriptionStatusOf(subscription.status, until, today) },
+          fields: { pausedUntil: until, pausedAt: now, status: subscriptionStatusOf(subscription.status, until, today) },
           summary: [notice],
           notice,
         };

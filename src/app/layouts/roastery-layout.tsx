@@ -16,12 +16,13 @@ export const clientLoader = signedInLoader;
 
 /** Pages only the owner may open; the rest of the nav is for all staff. */
 const ownerNav = [
+  { to: paths.roastery.ledger.getHref(), label: 'Ledger', end: false },
   { to: paths.roastery.team.getHref(), label: 'Team', end: false },
   { to: paths.roastery.settings.getHref(), label: 'Settings', end: false },
 ];
 
 const roasteryNav = [
-  { to: paths.roastery.overview.getHref(), label: 'Overview', end: true },
+  { to: paths.roastery.overview.getHref(), label: 'Today', end: true },
   { to: paths.roastery.daySheetToday.getHref(), label: 'Day Sheet', end: false },
   { to: paths.roastery.calendar.getHref(), label: 'Roast Calendar', end: false },
   { to: paths.roastery.orders.getHref(), label: 'Orders', end: false },

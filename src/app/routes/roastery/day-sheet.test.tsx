@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { localDateOf } from '@shared/domain/shop-time';
+import { addDays, localDateOf } from '@shared/domain/shop-time';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
 import type { Batch, BatchCreated, RoastListResponse } from '@shared/schemas/roastery';
 import { defaultShopSettings } from '@shared/schemas/settings';
@@ -166,9 +166,9 @@ describe('Day Sheet → Roast List', () => {
 
     // The first render in the file waits for the lazy route modules to compile.
     expect(await screen.findByRole('heading', { level: 1, name: 'Thursday, December 3, 2026' }, { timeout: 15_000 })).toBeTruthy();
-    const tab = screen.getByRole('tab', { name: 'Roast List' });
+    const tab = screen.getByRole('tab', { name: /^Roast List/ });
     expect(tab.getAttribute('aria-selected')).toBe('true');
-    const panel = screen.getByRole('tabpanel', { name: 'Roast List' });
+    const panel = screen.getByRole('tabpanel', { name: /^Roast List/ });
 
     const lines = await within(panel).findByRole('region', { name: 'By lot and roast level' });
     const ridge = within(lines).getByRole('row', { name: /Test Ridge Washed/ });
@@ -276,12 +276,12 @@ describe('Day Sheet tabs and Pack List', () => {
     daySheetServer();
     const { router } = renderApp(`/roastery/days/${day}`, { session: staff });
 
-    const roastTab = await screen.findByRole('tab', { name: 'Roast List' });
+    const roastTab = await screen.findByRole('tab', { name: /^Roast List/ });
     expect(roastTab.getAttribute('tabindex')).toBe('0');
-    expect(screen.getByRole('tab', { name: 'Pack List' }).getAttribute('tabindex')).toBe('-1');
+    expect(screen.getByRole('tab', { name: /^Pack List/ }).getAttribute('tabindex')).toBe('-1');
     fireEvent.keyDown(roastTab, { key: 'ArrowRight' });
 
-    const packTab = screen.getByRole('tab', { name: 'Pack List' });
+    const packTab = screen.getByRole('tab', { name: /^Pack List/ });
     await waitFor(() => expect(packTab.getAttribute('aria-selected')).toBe('true'));
     expect(document.activeElement).toBe(packTab);
     expect(router.state.location.search).toBe('?tab=pack');
@@ -333,27 +333,63 @@ describe('Day Sheet tabs and Pack List', () => {
 });
 
 describe('Reaching the Day Sheet', () => {
-  it('opens today’s sheet in the shop’s time zone from the navigation and the overview', async () => {
+  /** Today as the server reports it, with the next roast day `daysAhead` after the shop's today (none when null). */
+  function todayServer(daysAhead: number | null) {
+    // UTC+14 all year (IANA tz database): a day no browser in a test run is likely to share with UTC.
+    const today = localDateOf(new Date(), 'Pacific/Kiritimati');
+    const roastDay = daysAhead === null ? null : addDays(today, daysAhead);
     const fetchMock = stubFetch((url) => {
       if (url.pathname === '/api/roastery/settings') return jsonResponse({ ...defaultShopSettings, timeZone: 'Pacific/Kiritimati' });
+      if (url.pathname === '/api/roastery/today') {
+        return jsonResponse({
+          today,
+          nextRoastDay: roastDay && {
+            date: roastDay,
+            isToday: daysAhead === 0,
+            bags: 0,
+            roastedGrams: 0,
+            greenGrams: 0,
+            batches: 0,
+            shortfalls: [],
+            warnings: 0,
+          },
+          parcels: { toPack: 0, toShip: 0 },
+          stuck: { held: 0, awaitingPayment: 0, awaitingPaymentHours: 24 },
+          failedMessages: { count: 0, items: [] },
+          reorder: [],
+        });
+      }
       if (url.pathname.endsWith('/batches')) return jsonResponse({ items: [] });
+      if (url.pathname.endsWith('/pack-list')) return jsonResponse({ date: url.pathname.split('/')[4] ?? '', orders: [] });
       if (url.pathname.endsWith('/roast-list')) {
         const date = url.pathname.split('/')[4] ?? '';
         return jsonResponse({ ...roastList, date, lines: [], pull: [], warnings: [] });
       }
       return apiErrorResponse(404, 'not_found', 'No fake');
     });
+    return { fetchMock, today, roastDay };
+  }
+
+  it('opens the next roast day’s sheet from the navigation and from Today when today does not roast', async () => {
+    const { fetchMock, roastDay } = todayServer(2);
     const { router } = renderApp('/roastery', { session: staff });
 
     const nav = await screen.findByRole('navigation', { name: 'Roastery' }, { timeout: 15_000 });
-    expect((await screen.findByRole('link', { name: 'Open today’s Day Sheet' })).getAttribute('href')).toBe('/roastery/days');
+    expect((await screen.findByRole('link', { name: 'Open the Roast List' })).getAttribute('href')).toBe(`/roastery/days/${roastDay}`);
     fireEvent.click(within(nav).getByRole('link', { name: 'Day Sheet' }));
-    // UTC+14 all year (IANA tz database): a day no browser in a test run is likely to share with UTC.
-    const today = localDateOf(new Date(), 'Pacific/Kiritimati');
-    await waitFor(() => expect(router.state.location.pathname).toBe(`/roastery/days/${today}`));
+    await waitFor(() => expect(router.state.location.pathname).toBe(`/roastery/days/${roastDay}`));
     expect(await screen.findByText('Nothing to roast')).toBeTruthy();
-    expect(sentRequests(fetchMock, 'GET', `/api/roastery/days/${today}/roast-list`).length).toBeGreaterThan(0);
+    expect(sentRequests(fetchMock, 'GET', `/api/roastery/days/${roastDay}/roast-list`).length).toBeGreaterThan(0);
     expect(within(nav).getByRole('link', { name: 'Day Sheet' }).getAttribute('aria-current')).toBe('page');
+    // Each tab shows its count once its list has loaded.
+    expect(await screen.findByRole('tab', { name: /^Roast List\W+0 bags$/ })).toBeTruthy();
+    expect(await screen.findByRole('tab', { name: /^Pack List\W+0 orders$/ })).toBeTruthy();
+  });
+
+  it('opens today’s sheet in the shop’s time zone when no roast day lies ahead', async () => {
+    const { today } = todayServer(null);
+    const { router } = renderApp('/roastery/days', { session: staff });
+    await waitFor(() => expect(router.state.location.pathname).toBe(`/roastery/days/${today}`), { timeout: 15_000 });
   });
 
   it('answers an address that is not a date with the not-found page', async () => {

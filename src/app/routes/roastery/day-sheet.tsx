@@ -27,12 +27,10 @@ export const clientLoader =
   ({ params, request }: LoaderFunctionArgs) => {
     const date = params.date;
     if (!date || !isIsoDate(date)) return null;
-    if (tabOf(new URL(request.url).searchParams) === 'pack') {
-      void queryClient.prefetchQuery(getPackListQueryOptions(date));
-    } else {
-      void queryClient.prefetchQuery(getRoastListQueryOptions(date));
-      void queryClient.prefetchQuery(getDayBatchesQueryOptions(date));
-    }
+    // Both lists, whichever tab opens: each tab shows its count.
+    void queryClient.prefetchQuery(getPackListQueryOptions(date));
+    void queryClient.prefetchQuery(getRoastListQueryOptions(date));
+    if (tabOf(new URL(request.url).searchParams) === 'roast') void queryClient.prefetchQuery(getDayBatchesQueryOptions(date));
     return null;
   };
 
@@ -79,10 +77,19 @@ function PackListPanel({ date }: { date: string }) {
   return <PackListView packList={packList.data} />;
 }
 
-export default function DaySheetRoute() {
-  const { date = '' } = useParams();
+/** Bags on the Roast List and orders on the Pack List, once each has loaded. */
+function useTabCounts(date: string): Partial<Record<DaySheetTab, number>> {
+  const roastList = useRoastList(date).data;
+  const packList = usePackList(date).data;
+  return {
+    ...(roastList ? { roast: roastList.lines.reduce((sum, line) => sum + line.bags, 0) } : {}),
+    ...(packList ? { pack: packList.orders.length } : {}),
+  };
+}
+
+function DaySheet({ date }: { date: string }) {
   const [search, setSearch] = useSearchParams();
-  if (!isIsoDate(date)) return <NotFoundMessage />;
+  const counts = useTabCounts(date);
   const tab = tabOf(search);
   const dayName = formatDayLong(date);
 
@@ -102,7 +109,14 @@ export default function DaySheetRoute() {
         selected={tab}
         onSelect={(next) => setSearch(next === 'pack' ? { tab: 'pack' } : {}, { replace: true })}
         panels={{ roast: <RoastListPanel date={date} />, pack: <PackListPanel date={date} /> }}
+        counts={counts}
       />
     </>
   );
+}
+
+export default function DaySheetRoute() {
+  const { date = '' } = useParams();
+  if (!isIsoDate(date)) return <NotFoundMessage />;
+  return <DaySheet date={date} />;
 }

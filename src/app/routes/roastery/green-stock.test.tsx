@@ -25,6 +25,8 @@ function stockItem(overrides: Partial<GreenStockItem> = {}): GreenStockItem {
     isListed: true,
     stockGrams: 18_144,
     reorderPointGrams: 0,
+    supplierLeadTimeDays: 14,
+    reorderBy: null,
     reorderAlert: false,
     usedGramsInWindow: 0,
     averageDailyUseGrams: 0,
@@ -45,7 +47,7 @@ describe('Roastery', () => {
       within(nav)
         .getAllByRole('link')
         .map((link) => link.textContent),
-    ).toEqual(['Overview', 'Day Sheet', 'Roast Calendar', 'Orders', 'Green Stock', 'Subscribers', 'Rotation']);
+    ).toEqual(['Today', 'Day Sheet', 'Roast Calendar', 'Orders', 'Green Stock', 'Subscribers', 'Rotation']);
 
     const figure = async (label: string) => (await screen.findByText(label)).nextElementSibling?.textContent;
     expect(await figure('Lots listed')).toBe('3');
@@ -55,7 +57,7 @@ describe('Roastery', () => {
     const cautions = screen.getByRole('region', { name: 'Before a roast day' });
     expect(within(cautions).getByText('Carbon monoxide and smoke.')).toBeTruthy();
     expect(within(cautions).getByText(/local codes and licensed/)).toBeTruthy();
-    await waitFor(() => expect(document.title).toBe('Roastery · Restday'));
+    await waitFor(() => expect(document.title).toBe('Today · Roastery · Restday'));
   });
 });
 

@@ -12,12 +12,17 @@ import { requireUser } from '@/features/auth/utils/require-user';
 import { roasteryRoles } from '@/features/auth/utils/roles';
 import { getGreenStockQueryOptions, useGreenStock } from '@/features/green-stock/api/get-green-stock';
 import { GreenStockFigures, GreenStockTable } from '@/features/green-stock/components/green-stock-table';
+import { getPlanningQueryOptions, usePlanning } from '@/features/planning/api/get-planning';
+import { GreenPlanning } from '@/features/planning/components/green-planning';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const user = await requireUser(queryClient, request);
-    if (roasteryRoles.includes(user.role)) void queryClient.prefetchQuery(getGreenStockQueryOptions());
+    if (roasteryRoles.includes(user.role)) {
+      void queryClient.prefetchQuery(getGreenStockQueryOptions());
+      void queryClient.prefetchQuery(getPlanningQueryOptions());
+    }
     return null;
   };
 
@@ -28,6 +33,24 @@ function NewLotLink() {
       New lot
     </Link>
   );
+}
+
+function Planning() {
+  const planningQuery = usePlanning();
+  if (planningQuery.isError) {
+    return <ErrorState title="Green planning could not load" error={planningQuery.error} onRetry={() => void planningQuery.refetch()} />;
+  }
+  if (!planningQuery.data) {
+    return (
+      <div>
+        <p role="status" className="sr-only">
+          Loading green planning…
+        </p>
+        <Skeleton className="h-72 rounded-card" />
+      </div>
+    );
+  }
+  return <GreenPlanning plan={planningQuery.data} />;
 }
 
 function GreenStock() {
@@ -61,6 +84,7 @@ function GreenStock() {
         Days of cover: grams on hand at the pace of the last {windowDays} days’ sales and roasts. Samples, losses and counts are not use.
       </p>
       <GreenStockTable items={items} windowDays={windowDays} />
+      <Planning />
     </div>
   );
 }

@@ -19,7 +19,7 @@ function newLotServer(refuse?: Response) {
     if (url.pathname === '/api/lots' && method === 'POST') {
       if (refuse) return refuse;
       const input = JSON.parse(String(init?.body)) as LotCreate;
-      const lot: LotStaffDetail = { ...input, stockGrams: 0, photos: [], specSheetUrl: null };
+      const lot: LotStaffDetail = { ...input, supplierLeadTimeDays: 14, stockGrams: 0, photos: [], specSheetUrl: null };
       created.push(lot);
       return jsonResponse(lot, 201);
     }
@@ -32,6 +32,8 @@ function newLotServer(refuse?: Response) {
           isListed: lot.isListed,
           stockGrams: 0,
           reorderPointGrams: lot.reorderPointGrams,
+          supplierLeadTimeDays: lot.supplierLeadTimeDays,
+          reorderBy: null,
           reorderAlert: false,
           usedGramsInWindow: 0,
           averageDailyUseGrams: 0,

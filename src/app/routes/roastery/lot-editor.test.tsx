@@ -26,7 +26,12 @@ type Movement = {
 
 /** A tiny in-memory server for the Roastery's lot routes, starting with one invented lot. */
 function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (method: string, path: string) => Response | undefined } = {}) {
-  const lot: LotStaffDetail = { ...makeLotDetail({ stockGrams: 2000, photos: [`/api/uploads/${photoId}`] }), reorderPointGrams: 0, isListed };
+  const lot: LotStaffDetail = {
+    ...makeLotDetail({ stockGrams: 2000, photos: [`/api/uploads/${photoId}`] }),
+    reorderPointGrams: 0,
+    supplierLeadTimeDays: 14,
+    isListed,
+  };
   const movements: Movement[] = [
     {
       id: 'm1',
@@ -44,6 +49,8 @@ function lotServer({ isListed = true, answer }: { isListed?: boolean; answer?: (
     name: lot.name,
     isListed: lot.isListed,
     stockGrams: lot.stockGrams,
+    supplierLeadTimeDays: lot.supplierLeadTimeDays,
+    reorderBy: null,
     reorderPointGrams: lot.reorderPointGrams,
     reorderAlert: lot.reorderPointGrams > 0 && lot.stockGrams <= lot.reorderPointGrams,
     usedGramsInWindow: 0,

@@ -3,7 +3,6 @@ import { ArrowRight } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
-import { buttonStyles } from '@/components/ui/button';
 import { CautionPanel } from '@/components/ui/caution-panel';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
@@ -11,11 +10,32 @@ import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { getLotsQueryOptions, useLots } from '@/features/lots/api/get-lots';
 import { GreenStockSnapshot } from '@/features/lots/components/green-stock-snapshot';
+import { getTodayQueryOptions, useToday } from '@/features/today/api/get-today';
+import { TodayOverview } from '@/features/today/components/today-overview';
 
 export const clientLoader = (queryClient: QueryClient) => () => {
+  void queryClient.prefetchQuery(getTodayQueryOptions());
   void queryClient.prefetchQuery(getLotsQueryOptions());
   return null;
 };
+
+function Today() {
+  const todayQuery = useToday();
+  if (todayQuery.isError) return <ErrorState title="Today could not load" error={todayQuery.error} onRetry={() => void todayQuery.refetch()} />;
+  if (!todayQuery.data) {
+    return (
+      <div className="grid gap-4 lg:grid-cols-2">
+        <p role="status" className="sr-only">
+          Loading today…
+        </p>
+        {[0, 1, 2, 3].map((index) => (
+          <Skeleton key={index} className="h-40 rounded-card" />
+        ))}
+      </div>
+    );
+  }
+  return <TodayOverview today={todayQuery.data} />;
+}
 
 function Source({ children }: { children: ReactNode }) {
   return <cite className="text-small not-italic text-ink-muted">({children})</cite>;
@@ -42,15 +62,16 @@ function StockSnapshot() {
 export default function RoasteryOverviewRoute() {
   return (
     <>
-      <PageTitle title="Roastery" />
-      <PageHeader eyebrow="Staff" title="Roastery" lead="Where the shop plans its roast days, keeps its green coffee and gets bags out of the door." />
+      <PageTitle title="Today · Roastery" />
+      <PageHeader
+        eyebrow="Roastery"
+        title="Today"
+        lead="What the next roast day needs, what goes out today, and what is stuck, each with the place to act on it."
+      />
 
-      <p className="mb-10">
-        <Link to={paths.roastery.daySheetToday.getHref()} className={buttonStyles('primary')}>
-          Open today&rsquo;s Day Sheet
-          <ArrowRight aria-hidden="true" className="size-4" />
-        </Link>
-      </p>
+      <div className="mb-10">
+        <Today />
+      </div>
 
       <section aria-labelledby="green-stock" className="mb-10">
         <div className="mb-4 flex flex-wrap items-end justify-between gap-2">

@@ -5,18 +5,22 @@ export const daySheetTabs = ['roast', 'pack'] as const;
 export type DaySheetTab = (typeof daySheetTabs)[number];
 
 const tabLabels: Record<DaySheetTab, string> = { roast: 'Roast List', pack: 'Pack List' };
+/** What each tab's count counts: bags on the Roast List, orders on the Pack List. */
+const countUnits: Record<DaySheetTab, [one: string, many: string]> = { roast: ['bag', 'bags'], pack: ['order', 'orders'] };
 
 type DaySheetTabsProps = {
   selected: DaySheetTab;
   onSelect: (tab: DaySheetTab) => void;
   panels: Record<DaySheetTab, ReactNode>;
+  /** Shown beside each tab's name once known. */
+  counts?: Partial<Record<DaySheetTab, number>>;
 };
 
 /**
  * The Day Sheet's two tabs, as the WAI-ARIA tabs pattern: arrow keys, Home and End move between
  * tabs and select them; only the selected tab is in the Tab order. The selected tab lives in the URL.
  */
-export function DaySheetTabs({ selected, onSelect, panels }: DaySheetTabsProps) {
+export function DaySheetTabs({ selected, onSelect, panels, counts = {} }: DaySheetTabsProps) {
   const tabRefs = useRef<Partial<Record<DaySheetTab, HTMLButtonElement | null>>>({});
 
   function moveTo(tab: DaySheetTab) {
@@ -63,6 +67,13 @@ export function DaySheetTabs({ selected, onSelect, panels }: DaySheetTabsProps) 
               )}
             >
               {tabLabels[tab]}
+              {counts[tab] === undefined ? null : (
+                <span className="ml-2 rounded-pill bg-paper-shade px-2 py-0.5 text-caption text-ink">
+                  <span className="sr-only">, </span>
+                  {counts[tab].toLocaleString('en-US')}
+                  <span className="sr-only"> {countUnits[tab][counts[tab] === 1 ? 0 : 1]}</span>
+                </span>
+              )}
             </button>
           );
         })}

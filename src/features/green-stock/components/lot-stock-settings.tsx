@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState, type ReactNode } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
+import { isAtReorderPoint } from '@shared/domain/stock-cover';
 import type { GreenStockItem } from '@shared/schemas/green-stock';
 import { lotUpdateSchema } from '@shared/schemas/lots';
 import { Badge } from '@/components/ui/badge';
@@ -9,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
+import { formatDayWithWeekday } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateLot } from '../api/save-lot';
 import { fieldErrorText } from '../utils/field-error';
@@ -30,11 +32,20 @@ export function LotStockSettings({ item, windowDays }: { item: GreenStockItem; w
       </dl>
       {item.reorderAlert ? (
         <FormAlert>
-          <span className="font-semibold">Time to reorder.</span> Stock is at or below the reorder point of {formatGramsAndPounds(item.reorderPointGrams)}.
+          <span className="font-semibold">Time to reorder.</span>{' '}
+          {isAtReorderPoint(item.stockGrams, item.reorderPointGrams)
+            ? `Stock is at or below the reorder point of ${formatGramsAndPounds(item.reorderPointGrams)}.`
+            : `At the coming weeks’ needs the lot runs out within its supplier lead time of ${item.supplierLeadTimeDays} days.`}
         </FormAlert>
+      ) : item.reorderBy ? (
+        <p className="text-small">
+          Green planning: reorder by <strong>{formatDayWithWeekday(item.reorderBy)}</strong> (the run-out day less the {item.supplierLeadTimeDays}-day lead
+          time).
+        </p>
       ) : null}
       <div className="grid gap-6 md:grid-cols-2">
-        <ReorderPointForm item={item} />
+        <NumberSettingForm item={item} field="reorderPointGrams" />
+        <NumberSettingForm item={item} field="supplierLeadTimeDays" />
         <ListingToggle item={item} />
       </div>
     </div>
@@ -50,52 +61,84 @@ function Figure({ label, value }: { label: string; value: ReactNode }) {
   );
 }
 
-function ReorderPointForm({ item }: { item: GreenStockItem }) {
+type NumberSetting = 'reorderPointGrams' | 'supplierLeadTimeDays';
+
+type NumberSettingCopy = {
+  formLabel: string;
+  inputLabel: string;
+  /** The field's name in an error message, and an example of a good value. */
+  errorName: string;
+  errorExample: string;
+  hint: (value: unknown) => string;
+  saved: (value: number) => string;
+  button: string;
+};
+
+const numberSettingCopy: Record<NumberSetting, NumberSettingCopy> = {
+  reorderPointGrams: {
+    formLabel: 'Reorder point',
+    inputLabel: 'Reorder point (g)',
+    errorName: 'The reorder point',
+    errorExample: 'Enter whole grams, e.g. 5000.',
+    hint: (grams) =>
+      typeof grams === 'number' && Number.isFinite(grams) && grams > 0
+        ? `Flag the lot at or below this. That is ${formatPounds(grams)}.`
+        : 'Flag the lot at or below this; 0 for none.',
+    saved: (grams) => (grams > 0 ? `Reorder point set to ${formatGramsAndPounds(grams)}.` : 'Reorder point removed.'),
+    button: 'Save reorder point',
+  },
+  supplierLeadTimeDays: {
+    formLabel: 'Supplier lead time',
+    inputLabel: 'Supplier lead time (days)',
+    errorName: 'The supplier lead time',
+    errorExample: 'Enter whole days from 0 to 365, e.g. 14.',
+    hint: () => 'Days from ordering more of this lot to having it on the shelf. Green planning asks for the order this long before the lot runs out.',
+    saved: (days) => `Supplier lead time set to ${days} ${days === 1 ? 'day' : 'days'}.`,
+    button: 'Save lead time',
+  },
+};
+
+/** One of the lot's numeric Roastery settings, saved on its own. */
+function NumberSettingForm({ item, field }: { item: GreenStockItem; field: NumberSetting }) {
+  const copy = numberSettingCopy[field];
   const form = useForm<SettingsValues, unknown, z.output<typeof lotUpdateSchema>>({
     resolver: zodResolver(lotUpdateSchema),
-    defaultValues: { reorderPointGrams: item.reorderPointGrams },
+    defaultValues: { [field]: item[field] },
   });
   const updateLot = useUpdateLot();
   const [message, setMessage] = useState<{ tone: 'alert' | 'status'; text: string }>();
-  const grams = useWatch({ control: form.control, name: 'reorderPointGrams' });
+  const value = useWatch({ control: form.control, name: field });
 
-  const submit = form.handleSubmit(async ({ reorderPointGrams }) => {
+  const submit = form.handleSubmit(async (values) => {
     setMessage(undefined);
     try {
-      const saved = await updateLot.mutateAsync({ code: item.code, patch: { reorderPointGrams } });
-      form.reset({ reorderPointGrams: saved.reorderPointGrams });
-      setMessage({
-        tone: 'status',
-        text: saved.reorderPointGrams > 0 ? `Reorder point set to ${formatGramsAndPounds(saved.reorderPointGrams)}.` : 'Reorder point removed.',
-      });
+      const saved = await updateLot.mutateAsync({ code: item.code, patch: { [field]: values[field] } });
+      form.reset({ [field]: saved[field] });
+      setMessage({ tone: 'status', text: copy.saved(saved[field]) });
     } catch (error) {
-      const left = applyServerErrors(error, form.setError, ['reorderPointGrams']);
+      const left = applyServerErrors(error, form.setError, [field]);
       if (left) setMessage({ tone: 'alert', text: left });
     }
   });
 
-  const hint =
-    typeof grams === 'number' && Number.isFinite(grams) && grams > 0
-      ? `Flag the lot at or below this. That is ${formatPounds(grams)}.`
-      : 'Flag the lot at or below this; 0 for none.';
   return (
     <form
       noValidate
-      aria-label="Reorder point"
+      aria-label={copy.formLabel}
       onSubmit={(event) => void submit(event)}
       className="grid content-start gap-3 rounded-card border border-rule bg-sheet p-4"
     >
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <TextField
-        label="Reorder point (g)"
+        label={copy.inputLabel}
         inputMode="numeric"
-        hint={hint}
-        error={fieldErrorText(form.formState.errors.reorderPointGrams, 'The reorder point', 'Enter whole grams, e.g. 5000.')}
-        {...form.register('reorderPointGrams', { setValueAs: numberFromText })}
+        hint={copy.hint(value)}
+        error={fieldErrorText(form.formState.errors[field], copy.errorName, copy.errorExample)}
+        {...form.register(field, { setValueAs: numberFromText })}
       />
       <div>
         <Button type="submit" variant="secondary" disabled={form.formState.isSubmitting}>
-          Save reorder point
+          {copy.button}
         </Button>
       </div>
     </form>
