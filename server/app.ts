@@ -20,6 +20,7 @@ import { createAuthModule } from './modules/auth';
 import { createCheckoutModule } from './modules/checkout';
 import { createDevClockModule, isAdjustableClock } from './modules/dev-clock';
 import { createHealthModule } from './modules/health';
+import { createJournalModule } from './modules/journal';
 import { createLedgerModule } from './modules/ledger';
 import { createLotsModule } from './modules/lots';
 import { createOrdersModule } from './modules/orders';
@@ -170,6 +171,7 @@ export function createApp(deps: AppDeps): Express {
     createLedgerModule({ db, clock }),
     createPackingModule({ db, clock }),
     createTraceModule({ db }),
+    createJournalModule({ db, clock }),
   ];
   // The test clock: config already refuses RESTDAY_TEST_CLOCK in production; this is the second lock.
   if (config.RESTDAY_TEST_CLOCK && config.NODE_ENV !== 'production' && isAdjustableClock(clock)) {

@@ -5,6 +5,7 @@
  * - `developmentTimeRatioPct(firstCrackSeconds, endSeconds)`: development ÷ total roast time, %
  *   to two decimals (S. Rao, "Development Time Ratio", 2016).
  * - `DRUM_DTR_TARGET_PCT`: the common drum-roaster target, 20–25 % (S. Rao, 2016).
+ * - `journalEntryProblems(entry)`: field-level messages for an impossible journal entry.
  * - `journalMetrics(entry, lossModel, suggestedLevel?)`: loss %, development time and ratio, the
  *   level estimated from the loss, and how it compares with the lot's suggestion; or field-level
  *   messages for an impossible entry.
@@ -103,7 +104,8 @@ export interface JournalMetrics {
   comparedWithSuggestion?: 'lighter' | 'same' | 'darker';
 }
 
-export function journalMetrics(entry: JournalEntryInput, lossModel: LossModel, suggestedLevel?: RoastLevel): MetricsResult<JournalMetrics> {
+/** Field-level messages for a journal entry that cannot be a real roast (empty when it can). */
+export function journalEntryProblems(entry: JournalEntryInput): FieldErrors {
   const fields: FieldErrors = {};
   checkWeights({ green: { name: 'greenGrams', value: entry.greenGrams }, roasted: { name: 'roastedGrams', value: entry.roastedGrams } }, fields);
   checkTimes(
@@ -114,6 +116,11 @@ export function journalMetrics(entry: JournalEntryInput, lossModel: LossModel, s
     },
     fields,
   );
+  return fields;
+}
+
+export function journalMetrics(entry: JournalEntryInput, lossModel: LossModel, suggestedLevel?: RoastLevel): MetricsResult<JournalMetrics> {
+  const fields = journalEntryProblems(entry);
   if (Object.keys(fields).length > 0) return { ok: false, fields };
   const lossPct = lossPctOf(entry.greenGrams, entry.roastedGrams);
   const estimate = estimateLevelFromLoss(lossPct, lossModel);

@@ -63,6 +63,13 @@ export type DeliveryStatus = (typeof deliveryStatuses)[number];
 
 export const homeRoastDevices = ['popper', 'stovetop-pan', 'oven', 'drum-home', 'fluid-bed-home'] as const;
 export type HomeRoastDevice = (typeof homeRoastDevices)[number];
+export const homeRoastDeviceLabels: Record<HomeRoastDevice, string> = {
+  popper: 'Hot-air popper',
+  'stovetop-pan': 'Stovetop pan',
+  oven: 'Oven',
+  'drum-home': 'Home drum roaster',
+  'fluid-bed-home': 'Home fluid-bed roaster',
+};
 
 export const stockMovementReasons = ['arrival', 'sale', 'roast', 'sample', 'loss', 'count', 'refund'] as const;
 export type StockMovementReason = (typeof stockMovementReasons)[number];

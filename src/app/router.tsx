@@ -60,6 +60,7 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
                     { path: paths.account.addresses.path, lazy: () => import('./routes/account/addresses').then(load) },
                     { path: paths.account.orders.path, lazy: () => import('./routes/account/orders').then(load) },
                     { path: paths.account.deliveries.path, lazy: () => import('./routes/account/deliveries').then(load) },
+                    { path: paths.account.journal.path, lazy: () => import('./routes/account/journal').then(load) },
                   ],
                 },
                 { path: '*', lazy: () => import('./routes/shop/not-found').then(load) },

@@ -48,6 +48,12 @@ export const paths = {
     addresses: { path: '/account/addresses', getHref: () => '/account/addresses' },
     orders: { path: '/account/orders', getHref: () => '/account/orders' },
     deliveries: { path: '/account/deliveries', getHref: () => '/account/deliveries' },
+    journal: {
+      path: '/account/journal',
+      /** `lot`: show that lot's roasts; `log`: open the form to log a roast (of `lot`, when given). */
+      getHref: ({ lot, log = false }: { lot?: string; log?: boolean } = {}) =>
+        withSearch('/account/journal', lot || log ? new URLSearchParams({ ...(lot ? { lot } : {}), ...(log ? { log: '1' } : {}) }) : undefined),
+    },
   },
   roastery: {
     overview: { path: '/roastery', getHref: () => '/roastery' },

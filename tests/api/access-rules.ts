@@ -1,6 +1,7 @@
 // Who may call each API route. tests/api/access-control.test.ts reads the app's own route list and
 // fails for any route missing here (and for any rule naming no route): add a row with every new route.
-import { createAddress, createOrder, createSubscription, type TestUser } from '../factories/index';
+import { randomUUID } from 'node:crypto';
+import { createAddress, createJournalEntry, createLot, createOrder, createSubscription, type TestUser } from '../factories/index';
 
 export type Access =
   /** Anyone, signed in or not. */
@@ -52,6 +53,16 @@ async function subscriptionOf(owner: TestUser) {
   return { id: (await createSubscription({ userId: owner.id, status: 'active', priceCents: 3200, anchorDate: '2031-01-07' })).id };
 }
 
+/** The invented lot every access-test journal entry is of (made on first use). */
+const journalLotCode = `JRNL-${randomUUID().slice(0, 8).toUpperCase()}`;
+let journalLot: Promise<{ id: string }> | undefined;
+
+/** A Roast Journal entry (a popper roast of the invented lot). */
+async function journalEntryOf(owner: TestUser) {
+  journalLot ??= createLot({ code: journalLotCode });
+  return { id: await createJournalEntry(owner.id, (await journalLot).id) };
+}
+
 export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/health', access: 'public' },
   { method: 'POST', path: '/api/payments/webhook', access: 'signed-request' },
@@ -93,6 +104,7 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/shipping', access: 'public' },
   { method: 'GET', path: '/api/lots/:code', access: 'public' },
   { method: 'GET', path: '/api/lots/:code/roast-guide', access: 'public' },
+  { method: 'GET', path: '/api/lots/:code/home-roasts', access: 'public' },
   { method: 'POST', path: '/api/lots', access: 'staff' },
   { method: 'PATCH', path: '/api/lots/:code', access: 'staff' },
   { method: 'POST', path: '/api/lots/:code/photos', access: 'staff' },
@@ -153,6 +165,19 @@ export const accessRules: AccessRule[] = [
   { method: 'PATCH', path: '/api/orders/:id/address', access: 'staff' },
   { method: 'PUT', path: '/api/orders/:id/note', access: 'staff', body: { note: 'Leave with the neighbour.' } },
   { method: 'GET', path: '/api/orders/:id/trace', access: 'staff' },
+
+  { method: 'GET', path: '/api/journal', access: 'signed-in' },
+  { method: 'POST', path: '/api/journal', access: 'signed-in' },
+  { method: 'GET', path: '/api/journal.csv', access: 'signed-in' },
+  {
+    method: 'PUT',
+    path: '/api/journal/:id',
+    access: 'own-record',
+    record: journalEntryOf,
+    body: { lotCode: journalLotCode, device: 'popper', greenGrams: 80, roastedGrams: 68, endSeconds: 205 },
+  },
+  { method: 'DELETE', path: '/api/journal/:id', access: 'own-record', record: journalEntryOf },
+  { method: 'GET', path: '/api/roastery/lots/:code/journal-summary', access: 'staff', params: { code: 'ANY-LOT' } },
   { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'staff', params: { date: '2026-12-08' } },
   { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'staff', params: { date: '2026-12-08' } },
   { method: 'POST', path: '/api/roastery/days/:date/ship', access: 'staff', params: { date: '2026-12-08' } },

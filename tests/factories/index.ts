@@ -3,6 +3,7 @@
 // own flow would leave, with defaults a test overrides only where its story needs to.
 export * from './addresses';
 export * from './batches';
+export * from './journal';
 export * from './lots';
 export * from './orders';
 export * from './settings';

@@ -14,6 +14,7 @@ const accountNav = [
   { to: paths.account.profile.getHref(), label: 'Profile', end: false },
   { to: paths.account.orders.getHref(), label: 'Orders', end: false },
   { to: paths.account.deliveries.getHref(), label: 'Deliveries', end: false },
+  { to: paths.account.journal.getHref(), label: 'Roast Journal', end: false },
   { to: paths.account.addresses.getHref(), label: 'Addresses', end: false },
 ];
 

@@ -24,8 +24,9 @@ describe('account area', () => {
       within(nav)
         .getAllByRole('link')
         .map((link) => link.textContent),
-    ).toEqual(['Overview', 'Profile', 'Orders', 'Deliveries', 'Addresses']);
+    ).toEqual(['Overview', 'Profile', 'Orders', 'Deliveries', 'Roast Journal', 'Addresses']);
     expect(within(nav).getByRole('link', { name: 'Overview' }).getAttribute('aria-current')).toBe('page');
+    expect(within(screen.getByRole('main')).getByRole('link', { name: 'Roast Journal' }).getAttribute('href')).toBe('/account/journal');
     await waitFor(() => expect(document.title).toBe('Your account · Restday'));
   });
 

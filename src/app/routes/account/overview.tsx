@@ -1,4 +1,4 @@
-import { ArrowRight, KeyRound, MapPin, Package } from 'lucide-react';
+import { ArrowRight, Flame, KeyRound, MapPin, Package } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
@@ -45,13 +45,16 @@ export default function AccountOverviewRoute() {
         <AccountCard to={paths.account.orders.getHref()} icon={<Package aria-hidden="true" className="size-5 text-ember" />} title="Orders">
           Everything you have ordered, where each order is, and its tracking once it ships.
         </AccountCard>
+        <AccountCard to={paths.account.journal.getHref()} icon={<Flame aria-hidden="true" className="size-5 text-ember" />} title="Roast Journal">
+          Your home roasts: weight loss, development time and the level each one reached, against the lot&rsquo;s Home Roast Guide.
+        </AccountCard>
         <AccountCard to={paths.account.addresses.getHref()} icon={<MapPin aria-hidden="true" className="size-5 text-ember" />} title="Addresses">
           Where your green coffee and subscription bags ship, and which one checkout offers first.
         </AccountCard>
       </ul>
 
       <p className="mt-8 max-w-prose text-ink-muted">
-        Your upcoming Deliveries and Roast Journal will appear here as they open in the shop. Meanwhile,{' '}
+        Your upcoming Deliveries will appear here as they open in the shop. Meanwhile,{' '}
         <Link to={paths.lots.getHref()} className="font-semibold text-leaf underline">
           browse Green Lots
         </Link>

@@ -19,6 +19,7 @@ import { LotDescriptorsForm } from '@/features/green-stock/components/lot-forms'
 import { LotStockSettings } from '@/features/green-stock/components/lot-stock-settings';
 import { StockAdjustmentForm } from '@/features/green-stock/components/stock-adjustment-form';
 import { StockHistoryTable } from '@/features/green-stock/components/stock-history-table';
+import { LotRoastSummary } from '@/features/journal/components/lot-roast-summary';
 import type { GreenStockItem } from '@shared/schemas/green-stock';
 
 export const clientLoader =
@@ -141,6 +142,7 @@ export default function LotEditorRoute() {
       {created ? <CreatedNotice /> : null}
       {/* Keyed by lot, so moving to another lot starts its forms afresh. */}
       <div key={item.code} className="grid gap-12">
+        <LotRoastSummary code={item.code} audience="staff" />
         <Section id="lot-stock" title="Stock">
           <LotStockSettings item={item} windowDays={stockQuery.data.windowDays} />
           <div className="rounded-card border border-rule bg-sheet p-4 sm:p-5">

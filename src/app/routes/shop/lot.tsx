@@ -13,6 +13,7 @@ import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { useCart } from '@/features/cart/hooks/use-cart';
+import { LotRoastSummary } from '@/features/journal/components/lot-roast-summary';
 import { useLot, getLotQueryOptions } from '@/features/lots/api/get-lot';
 import { HomeRoastGuide } from '@/features/lots/components/home-roast-guide';
 import { LotDetails } from '@/features/lots/components/lot-details';
@@ -118,6 +119,9 @@ export default function LotRoute() {
             , a lot our roaster picks for each roast day.
           </p>
         )}
+        <div className="mt-10 max-w-prose">
+          <LotRoastSummary code={lotQuery.data.code} audience="public" />
+        </div>
         <div className="mt-10 max-w-prose">
           <HomeRoastingCautions />
           <p className="mt-3">

@@ -2,7 +2,9 @@ import { bagSizeDeclarations } from '@shared/domain/units';
 import { grindLabels, roastLevelLabels, roastersRotationName } from '@shared/domain/vocabulary';
 import { formatMoney } from '@shared/domain/money';
 import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
+import { Link } from 'react-router-dom';
 import { AddressDisplay } from '@/components/address/address-display';
+import { paths } from '@/config/paths';
 import { formatGrams } from '@/lib/format';
 import { formatDay, formatInstant } from '@/lib/dates';
 import { OrderStatusBadge } from './order-status-badge';
@@ -26,6 +28,8 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
     { term: 'Ready to brew from', value: order.readyFrom },
     { term: 'Best before', value: order.bestBefore },
   ].filter((each): each is { term: string; value: string } => each.value !== null);
+  // Green coffee the customer has paid for is theirs to roast and log.
+  const roastable = !['pending_payment', 'cancelled', 'refunded'].includes(order.status);
 
   return (
     <div className="grid gap-8 lg:grid-cols-[2fr_1fr]">
@@ -40,6 +44,14 @@ export function OrderDetailView({ order }: { order: OrderDetail }) {
               <div>
                 <p className="font-semibold">{item.lotName ?? roastersRotationName}</p>
                 <p className="text-small text-ink-muted">{itemDescription(item)}</p>
+                {item.roastLevel === null && item.lotCode && roastable ? (
+                  <Link
+                    to={paths.account.journal.getHref({ lot: item.lotCode, log: true })}
+                    className="mt-1 inline-block text-small font-semibold text-leaf underline"
+                  >
+                    Log a roast of this lot
+                  </Link>
+                ) : null}
               </div>
               <p className="text-small">
                 {item.quantity} × {formatMoney(item.unitPriceCents, order.currency)} ={' '}
