@@ -29,12 +29,13 @@ export default defineConfig({
             'react-router-dom': fileURLToPath(new URL('./node_modules/react-router-dom/dist/index.mjs', import.meta.url)),
             'react-router/dom': fileURLToPath(new URL('./node_modules/react-router/dist/development/dom-export.mjs', import.meta.url)),
             'react-router': fileURLToPath(new URL('./node_modules/react-router/dist/development/index.mjs', import.meta.url)),
+            recharts: fileURLToPath(new URL('./node_modules/recharts/es6/index.js', import.meta.url)),
           },
         },
         test: {
           name: 'unit',
           // Libraries that import React go through the aliases too, so every component sees one Preact.
-          server: { deps: { inline: [/react/, /preact/, /@tanstack/, /@hookform/, /@testing-library/, /lucide/] } },
+          server: { deps: { inline: [/react/, /preact/, /@tanstack/, /@hookform/, /@testing-library/, /lucide/, /recharts/] } },
           // Component tests load lazy routes; on a busy 2-core machine the first import is slow.
           testTimeout: 15_000,
           include: ['shared/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/unit/**/*.test.{ts,tsx}'],
