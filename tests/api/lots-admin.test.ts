@@ -242,6 +242,9 @@ describe('GET /api/roastery/green-stock', () => {
       usedGramsInWindow: 14_000,
       averageDailyUseGrams: 500,
       daysOfCover: 12,
+      // The lot's default lead time; its reorder-by day comes from green planning, worked by hand in its own tests.
+      supplierLeadTimeDays: 14,
+      reorderBy: expect.stringMatching(/^\d{4}-\d{2}-\d{2}$/),
     });
     expect(body.items.find((item) => item.code === `${tag}-IDLE`)).toMatchObject({
       stockGrams: 0,
