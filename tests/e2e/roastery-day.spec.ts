@@ -42,7 +42,7 @@ async function signedIn(account: { email: string; password: string }, options: {
   await page.getByLabel('E-mail').fill(account.email);
   await page.getByLabel('Password', { exact: true }).fill(account.password);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { level: 1, name: 'Roastery' }).waitFor();
+  await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor();
   // The sign-in page's own check of who is signed in answers 401 before signing in; only what follows counts.
   problems.length = 0;
   return { context, page, problems };
@@ -282,7 +282,7 @@ describe('a roast day in a real browser', () => {
         const { page } = audit;
         const heading = (level: number, name: string | RegExp) => () => page.getByRole('heading', { level, name }).waitFor();
         const violations = [
-          ...(await violationsOn(page, '/roastery', heading(1, 'Roastery'))),
+          ...(await violationsOn(page, '/roastery', heading(1, 'Today'))),
           ...(await violationsOn(page, '/roastery/calendar', () => page.getByRole('table', { name: 'Roast days in the month, Monday first' }).waitFor())),
           ...(await violationsOn(page, `/roastery/days/${roastDate}`, heading(2, 'By lot and roast level'))),
           ...(await violationsOn(page, `/roastery/days/${roastDate}?tab=pack`, () => page.getByRole('link', { name: 'Labels (PDF)' }).waitFor())),
