@@ -1,9 +1,9 @@
 import { and, asc, between, eq, gte, inArray, sql } from 'drizzle-orm';
 import { addDays, type IsoDate } from '@shared/domain/shop-time';
 import { SEARCH_HORIZON_DAYS } from '@shared/domain/roast-schedule';
-import type { RoastLevel } from '@shared/domain/vocabulary';
 import type { Db } from '../../db/client';
-import { batches, deliveries, lots, rotationPicks, stockMovements, subscriptions } from '../../db/schema/index';
+import { deliveries, lots, rotationPicks, stockMovements, subscriptions } from '../../db/schema/index';
+import { measuredLossByLot, roastedDemandBetween } from '../roastery';
 import { loadCalendarOverrides, loadShopSettings } from '../settings';
 import { keptDeliveryColumns } from '../subscriptions';
 
@@ -44,24 +44,7 @@ export function createPlanningRepo(db: Db) {
     },
 
     /** Bags of paid and held roasted orders still to roast between two days, by day, lot (a rotation line takes the day's pick), level and fill. */
-    async paidDemand(from: IsoDate, to: IsoDate) {
-      const result = await db.execute<{ roast_date: string; code: string | null; roast_level: RoastLevel; fill_grams: number; bags: string }>(sql`
-        select o.roast_date, l.code, oi.roast_level, oi.fill_grams, sum(oi.quantity)::int8 as bags
-        from orders o
-        join order_items oi on oi.order_id = o.id and oi.kind = 'roasted'
-        left join rotation_picks rp on oi.lot_id is null and rp.roast_date = o.roast_date
-        left join lots l on l.id = coalesce(oi.lot_id, rp.lot_id)
-        where o.kind = 'roasted' and o.status in ('paid', 'held') and o.roast_date between ${from} and ${to}
-        group by 1, 2, 3, 4
-      `);
-      return result.rows.map((row) => ({
-        roastDate: row.roast_date,
-        lotCode: row.code,
-        roastLevel: row.roast_level,
-        fillGrams: Number(row.fill_grams),
-        bags: Number(row.bags),
-      }));
-    },
+    paidDemand: (from: IsoDate, to: IsoDate) => roastedDemandBetween(db, from, to),
 
     /** Subscriptions that will deliver again, with their lot's code (null: Roaster's Rotation). */
     async subscriptions() {
@@ -105,19 +88,7 @@ export function createPlanningRepo(db: Db) {
     },
 
     /** What each lot's recorded batches add up to per level (the loss model's measured loss). */
-    async lossHistory() {
-      return db
-        .select({
-          lotCode: lots.code,
-          roastLevel: batches.roastLevel,
-          batchCount: sql<number>`count(*)`.mapWith(Number),
-          greenGramsIn: sql<number>`sum(${batches.greenGramsIn})`.mapWith(Number),
-          roastedGramsOut: sql<number>`sum(${batches.roastedGramsOut})`.mapWith(Number),
-        })
-        .from(batches)
-        .innerJoin(lots, eq(lots.id, batches.lotId))
-        .groupBy(lots.code, batches.roastLevel);
-    },
+    lossHistory: () => measuredLossByLot(db),
   };
 }
 

@@ -41,7 +41,7 @@ async function overridesBetween(db: DbOrTx, from: IsoDate, to: IsoDate): Promise
 }
 
 /** Bags of the paid and held roasted-coffee orders roasting between two days, summed by day, lot, level and fill. */
-async function plannedGroups(db: DbOrTx, from: IsoDate, to: IsoDate): Promise<PlannedGroup[]> {
+export async function plannedGroups(db: DbOrTx, from: IsoDate, to: IsoDate): Promise<PlannedGroup[]> {
   const result = await db.execute<{ roast_date: string; code: string | null; roast_level: RoastLevel; fill_grams: number; bags: string }>(sql`
     select o.roast_date, l.code, oi.roast_level, oi.fill_grams, sum(oi.quantity)::int8 as bags
     from orders o
@@ -60,7 +60,7 @@ async function plannedGroups(db: DbOrTx, from: IsoDate, to: IsoDate): Promise<Pl
   }));
 }
 
-async function lossHistory(db: DbOrTx): Promise<LossHistoryRow[]> {
+export async function lossHistory(db: DbOrTx): Promise<LossHistoryRow[]> {
   return db
     .select({
       lotCode: lots.code,

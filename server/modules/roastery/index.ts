@@ -2,7 +2,7 @@ import type { Db } from '../../db/client';
 import type { ApiModule } from '../../lib/api-module';
 import { createBatchesRepo } from './batches.repo';
 import { createBatchesService } from './batches.service';
-import { createCalendarRepo } from './calendar.repo';
+import { createCalendarRepo, lossHistory, plannedGroups } from './calendar.repo';
 import { createCalendarService } from './calendar.service';
 import { roasteryRoutes } from './roastery.routes';
 import { createRoastListRepo } from './roast-list.repo';
@@ -14,6 +14,10 @@ export type { RoastListService };
 
 /** A day's Roast List as the Roastery plans it, for modules that summarise it (Today). */
 export const createRoastListReader = (db: Db): RoastListService => createRoastListService(createRoastListRepo(db));
+
+/** What green planning shares with the Roast Calendar: paid roasted demand by day, and each lot's measured loss. */
+export const roastedDemandBetween = plannedGroups;
+export const measuredLossByLot = lossHistory;
 
 /** The Roastery's settings, Roast Calendar, Roast List and batches. */
 export function createRoasteryModule({ db }: { db: Db }): ApiModule {
