@@ -26,7 +26,8 @@ describe('account area', () => {
         .map((link) => link.textContent),
     ).toEqual(['Overview', 'Profile', 'Orders', 'Deliveries', 'Roast Journal', 'Addresses']);
     expect(within(nav).getByRole('link', { name: 'Overview' }).getAttribute('aria-current')).toBe('page');
-    expect(within(screen.getByRole('main')).getByRole('link', { name: 'Roast Journal' }).getAttribute('href')).toBe('/account/journal');
+    const journalCard = screen.getByRole('heading', { level: 2, name: 'Roast Journal' });
+    expect(within(journalCard).getByRole('link').getAttribute('href')).toBe('/account/journal');
     await waitFor(() => expect(document.title).toBe('Your account · Restday'));
   });
 
