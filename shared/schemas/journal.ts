@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { JOURNAL_SUMMARY_MINIMUM, parseClock } from '../domain/journal';
+import { parseClock } from '../domain/journal';
 import { journalEntryProblems } from '../domain/roast-metrics';
 import { homeRoastDevices, roastLevels } from '../domain/vocabulary';
 import { instant, isoDate } from './dates';
@@ -70,8 +70,6 @@ export const journalFormSchema = z
   .superRefine(refuseImpossibleRoast);
 export type JournalFormValues = z.input<typeof journalFormSchema>;
 
-const levelRow = z.object({ level: z.enum(roastLevels), roasts: z.number().int() });
-
 export const guideComparisonSchema = z.object({
   suggestedLevel: z.enum(roastLevels),
   level: z.enum(roastLevels),
@@ -126,24 +124,3 @@ export const journalListResponseSchema = z.object({
 export type JournalListResponse = z.infer<typeof journalListResponseSchema>;
 
 export const journalEntryParamsSchema = z.object({ id: z.uuid('No such journal entry.') });
-
-/**
- * `GET /api/roastery/lots/:code/journal-summary` (staff) and `GET /api/lots/:code/home-roasts`
- * (public): anonymous figures, null below the minimum roasts and customers.
- */
-export const lotRoastSummaryResponseSchema = z.object({
-  lotCode: z.string(),
-  suggestedLevel: z.enum(roastLevels),
-  minimum: z.object({ roasts: z.literal(JOURNAL_SUMMARY_MINIMUM.roasts), customers: z.literal(JOURNAL_SUMMARY_MINIMUM.customers) }),
-  summary: z
-    .object({
-      roasts: z.number().int(),
-      customers: z.number().int(),
-      medianLossPct: z.number(),
-      medianDevelopmentSeconds: z.number().int().nullable(),
-      levels: z.array(levelRow),
-      disagreement: z.object({ roasts: z.number().int(), customers: z.number().int(), mostly: z.enum(['lighter', 'darker']) }).nullable(),
-    })
-    .nullable(),
-});
-export type LotRoastSummaryResponse = z.infer<typeof lotRoastSummaryResponseSchema>;

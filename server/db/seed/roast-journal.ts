@@ -1,6 +1,7 @@
 // Roast Journal entries: invented home roasts of lots the customers bought.
 import { estimateLevelFromLoss, lossPctOf } from '../../../shared/domain/roast-loss';
 import type { RoastLevel } from '../../../shared/domain/vocabulary';
+import { DEMO_SEED, mulberry32, type Random } from './random';
 import type * as schema from '../schema/index';
 import type { ScenarioContext } from './scenario-context';
 import type { Insert } from './scenario-values';
@@ -26,18 +27,23 @@ const journalPlan: [string, number, Device][] = [
   ['WR-24-GTM-01', 2, 'popper'],
 ];
 
+// Other customers' popper roasts of one lot, all a level darker than its suggestion: enough roasts
+// by enough customers for the lot page and Green Stock to show home roasters' figures.
+const thresholdLot = { code: 'WR-24-ETH-01', level: 'medium' as RoastLevel, roasts: [[0, 40], [1, 33], [2, 26], [0, 18], [3, 11], [1, 5]] as [number, number][] };
+
 export function demoJournalEntries(
-  { rng, settings, cal, accounts, catalogue }: ScenarioContext,
+  { rng: mainRng, settings, cal, accounts, catalogue }: ScenarioContext,
   greenOrders: Insert<typeof schema.orders>[],
   greenOrderItems: Insert<typeof schema.orderItems>[],
 ): Insert<typeof schema.journalEntries>[] {
   const model = settings.lossModel;
   const { today } = cal;
-  const { demoCustomerId } = accounts;
+  const { demoCustomerId, customerIds } = accounts;
   const journalEntries: Insert<typeof schema.journalEntries>[] = [];
-  const addJournal = (userId: string, code: string, roastedOn: string, device: Device) => {
+  const addJournal = (userId: string, code: string, roastedOn: string, device: Device, forced?: { level: RoastLevel; rng: Random }) => {
     const lot = catalogue.lotByCode(code);
-    const level = rng.chance(0.6) ? lot.suggestedLevel : rng.pick(lot.allowedLevels);
+    const rng = forced?.rng ?? mainRng;
+    const level = forced?.level ?? (rng.chance(0.6) ? lot.suggestedLevel : rng.pick(lot.allowedLevels));
     const p = deviceProfile[device];
     const greenGrams = rng.int(p.green[0], p.green[1]);
     const lossTarget = model[level].minPct + rng.next() * (model[level].maxPct - model[level].minPct);
@@ -74,6 +80,12 @@ export function demoJournalEntries(
     });
   };
   for (const [code, ago, device] of journalPlan) addJournal(demoCustomerId, code, cal.addDays(today, -ago), device);
+  // Their own PRNG stream, so the scenario's main stream (and every demo value after this) is unchanged.
+  const thresholdRng = mulberry32(DEMO_SEED ^ 0x16);
+  const others = customerIds.filter((id) => id !== demoCustomerId);
+  for (const [customer, ago] of thresholdLot.roasts) {
+    addJournal(others[customer] as string, thresholdLot.code, cal.addDays(today, -ago), 'popper', { level: thresholdLot.level, rng: thresholdRng });
+  }
   // Other customers' roasts of lots from their shipped orders (anonymous in the per-lot summaries).
   for (const order of greenOrders) {
     if (order.status !== 'shipped' || order.userId === demoCustomerId || !order.shipDate) continue;
@@ -81,7 +93,7 @@ export function demoJournalEntries(
     if (firstDay >= today) continue;
     const item = greenOrderItems.find((it) => it.orderId === order.id) as Insert<typeof schema.orderItems>;
     const code = catalogue.lotCodeOf(item.lotId as string);
-    addJournal(order.userId, code, firstDay, rng.pick(['popper', 'popper', 'drum-home'] as const));
+    addJournal(order.userId, code, firstDay, mainRng.pick(['popper', 'popper', 'drum-home'] as const));
   }
   return journalEntries;
 }

@@ -6,8 +6,8 @@ import {
   journalListQuerySchema,
   type JournalEntryCreated,
   type JournalListResponse,
-  type LotRoastSummaryResponse,
 } from '@shared/schemas/journal';
+import type { LotRoastSummaryResponse } from '@shared/schemas/journal-summary';
 import { sendDownload } from '../../lib/download';
 import { requireRole, requireUser } from '../../middleware/require-role';
 import type { JournalService } from './journal.service';

@@ -3,14 +3,8 @@ import { compareWithGuide, summarizeLotRoasts, JOURNAL_SUMMARY_MINIMUM } from '@
 import { developmentTimeRatioPct, journalMetrics } from '@shared/domain/roast-metrics';
 import { localDateOf } from '@shared/domain/shop-time';
 import type { RoastLevel } from '@shared/domain/vocabulary';
-import type {
-  JournalEntry,
-  JournalEntryCreated,
-  JournalEntryInput,
-  JournalListQuery,
-  JournalListResponse,
-  LotRoastSummaryResponse,
-} from '@shared/schemas/journal';
+import type { JournalEntry, JournalEntryCreated, JournalEntryInput, JournalListQuery, JournalListResponse } from '@shared/schemas/journal';
+import type { LotRoastSummaryResponse } from '@shared/schemas/journal-summary';
 import { AppError } from '../../lib/app-error';
 import type { Clock } from '../../lib/clock';
 import type { JournalRepo, StoredEntry } from './journal.repo';

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { deliveryGreenGrams } from '@shared/domain/delivery-plan';
 import { defaultShopSettings } from '@shared/schemas/settings';
 import { ArrowLeft } from 'lucide-react';
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { GreenBagSize, HomeRoastDevice, RoastLevel } from '@shared/domain/vocabulary';
 import type { LotDetail } from '@shared/schemas/lots';
@@ -13,7 +13,6 @@ import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { useCart } from '@/features/cart/hooks/use-cart';
-import { LotRoastSummary } from '@/features/journal/components/lot-roast-summary';
 import { useLot, getLotQueryOptions } from '@/features/lots/api/get-lot';
 import { HomeRoastGuide } from '@/features/lots/components/home-roast-guide';
 import { LotDetails } from '@/features/lots/components/lot-details';
@@ -21,6 +20,9 @@ import { LotPurchasePanel } from '@/features/lots/components/lot-purchase-panel'
 import { WeightUnitToggle } from '@/features/lots/components/weight-unit-toggle';
 import type { WeightUnit } from '@/features/lots/utils/weight-unit';
 import { ApiError } from '@/lib/api-client';
+
+// Below the fold and shown only from enough roasts: its code loads after the page's own.
+const LotRoastSummary = lazy(() => import('@/features/journal/components/lot-roast-summary').then((module) => ({ default: module.LotRoastSummary })));
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -120,7 +122,9 @@ export default function LotRoute() {
           </p>
         )}
         <div className="mt-10 max-w-prose">
-          <LotRoastSummary code={lotQuery.data.code} audience="public" />
+          <Suspense fallback={null}>
+            <LotRoastSummary code={lotQuery.data.code} audience="public" />
+          </Suspense>
         </div>
         <div className="mt-10 max-w-prose">
           <HomeRoastingCautions />

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { lotRoastSummaryResponseSchema, type LotRoastSummaryResponse } from '@shared/schemas/journal';
+import { lotRoastSummaryResponseSchema, type LotRoastSummaryResponse } from '@shared/schemas/journal-summary';
 import { apiRequest } from '@/lib/api-client';
 
 /** Who reads the figures: the public lot page, or staff (the same figures, from the Roastery's own route). */

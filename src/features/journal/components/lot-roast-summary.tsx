@@ -1,5 +1,5 @@
 import { roastLevelLabels } from '@shared/domain/vocabulary';
-import type { LotRoastSummaryResponse } from '@shared/schemas/journal';
+import type { LotRoastSummaryResponse } from '@shared/schemas/journal-summary';
 import { formatPercent } from '@/lib/format';
 import { useLotRoastSummary, type SummaryAudience } from '../api/get-lot-roast-summary';
 
