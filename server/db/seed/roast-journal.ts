@@ -29,7 +29,18 @@ const journalPlan: [string, number, Device][] = [
 
 // Other customers' popper roasts of one lot, all a level darker than its suggestion: enough roasts
 // by enough customers for the lot page and Green Stock to show home roasters' figures.
-const thresholdLot = { code: 'WR-24-ETH-01', level: 'medium' as RoastLevel, roasts: [[0, 40], [1, 33], [2, 26], [0, 18], [3, 11], [1, 5]] as [number, number][] };
+const thresholdLot = {
+  code: 'WR-24-ETH-01',
+  level: 'medium' as RoastLevel,
+  roasts: [
+    [0, 40],
+    [1, 33],
+    [2, 26],
+    [0, 18],
+    [3, 11],
+    [1, 5],
+  ] as [number, number][],
+};
 
 export function demoJournalEntries(
   { rng: mainRng, settings, cal, accounts, catalogue }: ScenarioContext,
