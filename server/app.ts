@@ -31,7 +31,7 @@ import { createPaymentsService, createPaymentsWebhookModule } from './modules/pa
 import { createRoasteryModule } from './modules/roastery';
 import { createRotationModule } from './modules/rotation';
 import { createShippingModule } from './modules/shipping';
-import { createStorefront } from './modules/storefront';
+import { createBuiltAssets, createStorefront } from './modules/storefront';
 import { createSubscribersModule } from './modules/subscribers';
 import { createSubscriptionPreviewModule } from './modules/subscription-preview';
 import { createSubscriptionsModule } from './modules/subscriptions';
@@ -51,7 +51,8 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  // JSON and pages made per request, compressed above 1 kB; the built assets come precompressed and pass untouched.
+  app.use(createBuiltAssets(config));
+  // JSON and pages made per request, compressed above 1 kB; the built assets come precompressed.
   app.use(compression({ threshold: 1024 }));
 
   app.use(

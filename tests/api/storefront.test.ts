@@ -55,6 +55,17 @@ describe('the built shop, compressed', () => {
     // The bytes on the wire are the brotli file's (supertest decodes them for the check below).
     expect(Number(response.headers['content-length'])).toBe(brotliCompressSync(script).length);
     expect(response.text).toBe(script);
+    // A subresource carries only the headers it needs: no document policy, no request id, no validators.
+    expect(response.headers['x-content-type-options']).toBe('nosniff');
+    expect(response.headers['content-security-policy']).toBeUndefined();
+    expect(response.headers['x-request-id']).toBeUndefined();
+    expect(response.headers['etag']).toBeUndefined();
+  });
+
+  it('GET /assets/… of a file the build did not make — 404, not the shop page', async () => {
+    const response = await request(app).get('/assets/index-gone000.js');
+    expect(response.status).toBe(404);
+    expect(response.headers['content-type']).toMatch(/text\/plain/);
   });
 
   it('GET /assets/… — with gzip only, then the gzip copy; with no Accept-Encoding, then the file as it is', async () => {

@@ -4,7 +4,7 @@ import type { Db } from '../../db/client';
 import type { Logger } from '../../lib/logger';
 import type { LotsService } from '../lots';
 import { publishedShippingRules } from '../shipping';
-import { storefrontRoutes } from './storefront.routes';
+import { builtAssetsRoutes, storefrontRoutes } from './storefront.routes';
 import { createStorefrontService } from './storefront.service';
 
 /** The built shop at the site's root (not under /api): assets, pages with their own head, sitemap and robots. */
@@ -12,4 +12,9 @@ export function createStorefront({ config, db, lots, logger }: { config: Config;
   const baseUrl = publicBaseUrl(config);
   const service = createStorefrontService({ lots, baseUrl, shippingRules: () => publishedShippingRules(db) });
   return storefrontRoutes(service, { staticDir: config.STATIC_DIR, baseUrl, log: logger });
+}
+
+/** The hashed build assets, mounted before the request log and page headers (see builtAssetsRoutes). */
+export function createBuiltAssets(config: Config) {
+  return builtAssetsRoutes(config.STATIC_DIR);
 }

@@ -53,8 +53,35 @@ function builtIndexHtml(file: string) {
   };
 }
 
+const precompressed = { enableBrotli: true, orderPreference: ['br', 'gz'] };
+
 /**
- * The built shop: hashed assets served precompressed (brotli or gzip, made at build time), and
+ * The hashed build assets (scripts, styles, fonts): precompressed, kept a year, and sent with only the
+ * headers a subresource needs. Mounted ahead of the request log and the page security headers: a first
+ * visit loads some forty of these files, and a document's headers would add about 1 kB to each.
+ */
+export function builtAssetsRoutes(staticDir: string): Router {
+  const router = Router();
+  router.use(
+    '/assets',
+    (_req, res, next) => {
+      res.setHeader('X-Content-Type-Options', 'nosniff');
+      res.setHeader('Cross-Origin-Resource-Policy', 'same-origin');
+      next();
+    },
+    expressStaticGzip(path.join(path.resolve(staticDir), 'assets'), {
+      ...precompressed,
+      serveStatic: { immutable: true, maxAge: '1y', etag: false, lastModified: false, acceptRanges: false },
+    }),
+    (_req, res) => {
+      res.status(404).type('text/plain').send('Not found');
+    },
+  );
+  return router;
+}
+
+/**
+ * The built shop: static files at the root served precompressed (brotli or gzip, made at build time), and
  * every other GET answered with index.html carrying the page's own head (title, description,
  * canonical URL, Open Graph, JSON-LD) and the public API answers its first render needs.
  */
@@ -63,12 +90,7 @@ export function storefrontRoutes(service: StorefrontService, options: { staticDi
   const staticDir = path.resolve(options.staticDir);
   const indexHtml = builtIndexHtml(path.join(staticDir, 'index.html'));
   const renderer = builtRenderer(path.join(staticDir, '.ssr', 'entry-server.js'), options.log);
-  const precompressed = { enableBrotli: true, orderPreference: ['br', 'gz'] };
 
-  router.use(
-    '/assets',
-    expressStaticGzip(path.join(staticDir, 'assets'), { ...precompressed, serveStatic: { immutable: true, maxAge: '1y', fallthrough: false } }),
-  );
   router.use(expressStaticGzip(staticDir, { ...precompressed, index: false, serveStatic: { index: false, maxAge: '1h' } }));
 
   router.get('/robots.txt', (_req, res) => {
