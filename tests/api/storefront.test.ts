@@ -89,6 +89,18 @@ describe('the built shop, compressed', () => {
     expect(plain.headers['content-encoding']).toBeUndefined();
     expect(plain.body).toEqual(compressed.body);
   });
+
+  it('GET /api/lots — brotli when accepted, and 304 with no body for a client that holds the same list', async () => {
+    const brotli = await request(app).get('/api/lots').set('Accept-Encoding', 'br, gzip');
+    expect(brotli.headers['content-encoding']).toBe('br');
+    expect(brotli.headers['vary']).toMatch(/Accept-Encoding/i);
+    const etag = brotli.headers['etag'];
+    expect(etag).toMatch(/^".+"$/);
+
+    const again = await request(app).get('/api/lots').set('If-None-Match', etag!);
+    expect(again.status).toBe(304);
+    expect(again.text).toBe('');
+  });
 });
 
 describe('pages found and shared', () => {
