@@ -6,6 +6,9 @@ import { PageTitle } from '@/components/seo/page-title';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
+import { useCurrentUser } from '@/features/auth/api/get-current-user';
+import { requireUser } from '@/features/auth/utils/require-user';
+import { roasteryRoles, staffRoles } from '@/features/auth/utils/roles';
 import { getDayBatchesQueryOptions, useDayBatches } from '@/features/day-sheet/api/get-day-batches';
 import { getRoastListQueryOptions, useRoastList } from '@/features/day-sheet/api/get-roast-list';
 import { DateSwitcher } from '@/features/day-sheet/components/date-switcher';
@@ -24,11 +27,14 @@ function tabOf(search: URLSearchParams): DaySheetTab {
 
 export const clientLoader =
   (queryClient: QueryClient) =>
-  ({ params, request }: LoaderFunctionArgs) => {
+  async ({ params, request }: LoaderFunctionArgs) => {
     const date = params.date;
     if (!date || !isIsoDate(date)) return null;
-    // Both lists, whichever tab opens: each tab shows its count.
+    const user = await requireUser(queryClient, request);
+    if (!roasteryRoles.includes(user.role)) return null;
     void queryClient.prefetchQuery(getPackListQueryOptions(date));
+    if (!staffRoles.includes(user.role)) return null;
+    // Both lists, whichever tab opens: each tab shows its count.
     void queryClient.prefetchQuery(getRoastListQueryOptions(date));
     if (tabOf(new URL(request.url).searchParams) === 'roast') void queryClient.prefetchQuery(getDayBatchesQueryOptions(date));
     return null;
@@ -70,11 +76,11 @@ function RoastListPanel({ date }: { date: string }) {
   );
 }
 
-function PackListPanel({ date }: { date: string }) {
+function PackListPanel({ date, canTrace }: { date: string; canTrace: boolean }) {
   const packList = usePackList(date);
   if (packList.isError) return <ErrorState title="The Pack List could not load" error={packList.error} onRetry={() => void packList.refetch()} />;
   if (!packList.data) return <Loading what="Pack List" />;
-  return <PackListView packList={packList.data} />;
+  return <PackListView packList={packList.data} canTrace={canTrace} />;
 }
 
 /** Bags on the Roast List and orders on the Pack List, once each has loaded. */
@@ -85,6 +91,25 @@ function useTabCounts(date: string): Partial<Record<DaySheetTab, number>> {
     ...(roastList ? { roast: roastList.lines.reduce((sum, line) => sum + line.bags, 0) } : {}),
     ...(packList ? { pack: packList.orders.length } : {}),
   };
+}
+
+/** A packer's Day Sheet: the Pack List alone, since the Roast List is the roasting staff's. */
+function PackOnlySheet({ date }: { date: string }) {
+  return (
+    <>
+      <PageTitle title={`Pack List ${date} · Roastery`} />
+      <PageHeader eyebrow="Roastery · Day Sheet" title={formatDayLong(date)} lead="The bags to pack, label and ship." />
+      <div className="mb-6">
+        <DateSwitcher key={date} date={date} tab="pack" />
+      </div>
+      <section aria-labelledby="pack-list-heading">
+        <h2 id="pack-list-heading" className="mb-3 text-h2">
+          Pack List
+        </h2>
+        <PackListPanel date={date} canTrace={false} />
+      </section>
+    </>
+  );
 }
 
 function DaySheet({ date }: { date: string }) {
@@ -108,7 +133,7 @@ function DaySheet({ date }: { date: string }) {
       <DaySheetTabs
         selected={tab}
         onSelect={(next) => setSearch(next === 'pack' ? { tab: 'pack' } : {}, { replace: true })}
-        panels={{ roast: <RoastListPanel date={date} />, pack: <PackListPanel date={date} /> }}
+        panels={{ roast: <RoastListPanel date={date} />, pack: <PackListPanel date={date} canTrace /> }}
         counts={counts}
       />
     </>
@@ -117,6 +142,8 @@ function DaySheet({ date }: { date: string }) {
 
 export default function DaySheetRoute() {
   const { date = '' } = useParams();
+  const role = useCurrentUser().data?.role;
   if (!isIsoDate(date)) return <NotFoundMessage />;
-  return <DaySheet date={date} />;
+  if (!role) return null;
+  return staffRoles.includes(role) ? <DaySheet date={date} /> : <PackOnlySheet date={date} />;
 }

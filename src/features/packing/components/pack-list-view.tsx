@@ -25,14 +25,14 @@ function day(date: string | null): string {
   return date ? formatDayShort(date) : '—';
 }
 
-function OrderBags({ order }: { order: PackOrder }) {
+function OrderBags({ order, canTrace }: { order: PackOrder; canTrace: boolean }) {
   return (
     <div className="overflow-x-auto">
       <Table variant="sheet">
         <caption className="sr-only">Bags of order {orderReference(order.orderId)}</caption>
         <TableHead>
           <tr>
-            {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
+            {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', ...(canTrace ? ['Batch'] : [])].map((heading) => (
               <TableHeader key={heading}>{heading}</TableHeader>
             ))}
           </tr>
@@ -53,15 +53,17 @@ function OrderBags({ order }: { order: PackOrder }) {
               <TableCell>{day(bag.roastDate)}</TableCell>
               <TableCell>{day(bag.readyFrom)}</TableCell>
               <TableCell>{day(bag.bestBefore)}</TableCell>
-              <TableCell>
-                {bag.batchId ? (
-                  <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
-                    Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
-                  </Link>
-                ) : (
-                  '—'
-                )}
-              </TableCell>
+              {canTrace ? (
+                <TableCell>
+                  {bag.batchId ? (
+                    <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
+                      Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
+                    </Link>
+                  ) : (
+                    '—'
+                  )}
+                </TableCell>
+              ) : null}
             </tr>
           ))}
         </TableBody>
@@ -95,7 +97,7 @@ function OrderParcels({ order }: { order: PackOrder }) {
   );
 }
 
-function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void }) {
+function PackOrderCard({ order, date, onShip, canTrace }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void; canTrace: boolean }) {
   const markPacked = useMarkPacked(date);
   const [failure, setFailure] = useState<string>();
   const [confirming, setConfirming] = useState(false);
@@ -127,7 +129,7 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
         </p>
       ) : null}
       <div className="mt-3">
-        <OrderBags order={order} />
+        <OrderBags order={order} canTrace={canTrace} />
       </div>
       <OrderParcels order={order} />
       {failure ? (
@@ -159,9 +161,11 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
             Mark shipped
           </Button>
         ) : null}
-        <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="ml-auto font-semibold text-leaf underline">
-          Trace this order<span className="sr-only"> for {order.customerName}</span>
-        </Link>
+        {canTrace ? (
+          <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="ml-auto font-semibold text-leaf underline">
+            Trace this order<span className="sr-only"> for {order.customerName}</span>
+          </Link>
+        ) : null}
       </div>
     </li>
   );
@@ -170,7 +174,8 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
 type PackFilter = 'open' | PackStage;
 
 /** The day's orders to pack and ship, bag by bag, with the labels to print for them. Shipped orders stay out of the way unless asked for. */
-export function PackListView({ packList }: { packList: PackListResponse }) {
+/** `canTrace`: whether the person may open batch and order traces (staff may, a packer may not). */
+export function PackListView({ packList, canTrace = true }: { packList: PackListResponse; canTrace?: boolean }) {
   const [shipping, setShipping] = useState<PackOrder>();
   const [shipped, setShipped] = useState<string>();
   const [shippingAll, setShippingAll] = useState(false);
@@ -224,7 +229,7 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
       ) : (
         <ul aria-label="Orders to pack" className="grid gap-4">
           {shown.map((order) => (
-            <PackOrderCard key={order.orderId} order={order} date={date} onShip={setShipping} />
+            <PackOrderCard key={order.orderId} order={order} date={date} onShip={setShipping} canTrace={canTrace} />
           ))}
         </ul>
       )}
