@@ -1,6 +1,13 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { bulkShipBodySchema, packDayParamsSchema, shipOrderBodySchema, type PackListResponse, type PackOrder } from '@shared/schemas/packing';
+import {
+  bulkShipBodySchema,
+  labelsPdfQuerySchema,
+  packDayParamsSchema,
+  shipOrderBodySchema,
+  type PackListResponse,
+  type PackOrder,
+} from '@shared/schemas/packing';
 import { sendDownload } from '../../lib/download';
 import { packingRoles, requireRole } from '../../middleware/require-role';
 import type { PackingService } from './packing.service';
@@ -28,7 +35,8 @@ export function packDayRoutes(packing: PackingService): Router {
 
   router.get('/:date/labels.pdf', packers, async (req, res) => {
     const { date } = packDayParamsSchema.parse(req.params);
-    sendDownload(res, `restday-labels-${date}.pdf`, await packing.labelsPdf(date));
+    const { stock } = labelsPdfQuerySchema.parse(req.query);
+    sendDownload(res, `restday-labels-${date}${stock === 'single' ? '' : `-${stock}`}.pdf`, await packing.labelsPdf(date, stock));
   });
 
   return router;

@@ -10,17 +10,42 @@ afterEach(() => {
 });
 
 const owner = makeUser({ role: 'owner', name: 'Wren Calloway', email: 'wren@example.test' });
-const stored: ShopSettings = { ...defaultShopSettings, timeZone: 'America/Denver' };
+// An invented place of business.
+const placeOfBusiness = { line1: '9 Millrace Yard', line2: null, city: 'Greyhaven', region: 'WA', postalCode: '98201', country: 'US' };
+const stored: ShopSettings = { ...defaultShopSettings, timeZone: 'America/Denver', placeOfBusiness };
 
-function settingsServer(put: (body: ShopSettings) => Response = (body) => jsonResponse(body)) {
+function settingsServer(put: (body: ShopSettings) => Response = (body) => jsonResponse(body), current: ShopSettings = stored) {
   return stubFetch((url, init) => {
     if (url.pathname !== '/api/roastery/settings') return apiErrorResponse(404, 'not_found', 'No fake');
     if ((init?.method ?? 'GET') === 'PUT') return put(JSON.parse(String(init?.body)) as ShopSettings);
-    return jsonResponse(stored);
+    return jsonResponse(current);
   });
 }
 
 describe('Shop settings', () => {
+  it('asks for the place of business the labels print before it saves, then sends it with the rest', async () => {
+    const fetchMock = settingsServer(undefined, { ...stored, placeOfBusiness: null });
+    renderApp('/roastery/settings', { session: owner });
+
+    const place = await screen.findByRole('group', { name: 'Place of business' }, { timeout: 15_000 });
+    const street = within(place).getByLabelText('Street address');
+    expect((street as HTMLInputElement).value).toBe('');
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+    await waitFor(() => expect(street.getAttribute('aria-invalid')).toBe('true'));
+    expect(within(place).getByText('Enter the street address.')).toBeTruthy();
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/settings')).toHaveLength(0);
+
+    enterValue(street, placeOfBusiness.line1);
+    enterValue(within(place).getByLabelText('City or town'), placeOfBusiness.city);
+    enterValue(within(place).getByLabelText('State or region'), placeOfBusiness.region);
+    enterValue(within(place).getByLabelText('Postal code'), placeOfBusiness.postalCode);
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+
+    expect(await screen.findByText('Settings saved.')).toBeTruthy();
+    const body = sentRequests(fetchMock, 'PUT', '/api/roastery/settings')[0]?.body as ShopSettings;
+    expect(body.placeOfBusiness).toEqual(placeOfBusiness);
+  });
+
   it('shows every setting and saves the whole set as the server’s schema expects', async () => {
     const fetchMock = settingsServer();
     renderApp('/roastery/settings', { session: owner });

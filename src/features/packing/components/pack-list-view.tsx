@@ -174,8 +174,15 @@ function PackOrderCard({ order, date, onShip, canTrace }: { order: PackOrder; da
 type PackFilter = 'open' | PackStage;
 
 /** The day's orders to pack and ship, bag by bag, with the labels to print for them. Shipped orders stay out of the way unless asked for. */
-/** `canTrace`: whether the person may open batch and order traces (staff may, a packer may not). */
-export function PackListView({ packList, canTrace = true }: { packList: PackListResponse; canTrace?: boolean }) {
+type PackListViewProps = {
+  packList: PackListResponse;
+  /** Whether the person may open batch and order traces (staff may, a packer may not). */
+  canTrace?: boolean;
+  /** The shop has no place of business yet, so the labels cannot print. */
+  labelsNeedAddress?: boolean;
+};
+
+export function PackListView({ packList, canTrace = true, labelsNeedAddress = false }: PackListViewProps) {
   const [shipping, setShipping] = useState<PackOrder>();
   const [shipped, setShipped] = useState<string>();
   const [shippingAll, setShippingAll] = useState(false);
@@ -190,10 +197,21 @@ export function PackListView({ packList, canTrace = true }: { packList: PackList
 
   return (
     <div>
-      <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
-        <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
-        <p className="text-small text-ink-muted">One label a bag, with both net weights.</p>
-      </div>
+      {labelsNeedAddress ? (
+        <div className="mb-6 print:hidden">
+          <FormAlert>Bag labels print the shop’s postal address, and none is set yet. The owner enters it in Settings, under Place of business.</FormAlert>
+        </div>
+      ) : (
+        <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
+          <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
+          <DownloadLink href={labelsPdfPath(date, 'letter-10')}>Letter sheet (PDF)</DownloadLink>
+          <DownloadLink href={labelsPdfPath(date, 'a4-10')}>A4 sheet (PDF)</DownloadLink>
+          <p className="text-small text-ink-muted">
+            One label a bag, with the shop’s name and address and both net weights: 4 × 3 in for a label printer, or sheets of ten (4 × 2 in on US Letter, 99.1
+            × 57 mm on A4).
+          </p>
+        </div>
+      )}
       {orders.length > 0 ? (
         <div className="mb-6 grid gap-4 print:hidden">
           <ChoiceGroup
