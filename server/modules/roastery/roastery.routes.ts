@@ -72,8 +72,12 @@ export function roasteryRoutes(services: RoasteryServices): Router {
   router.get('/days/:date/roast-list.pdf', staffOnly, async (req, res) => {
     const { date } = roastDayParamsSchema.parse(req.params);
     const { paper } = paperQuerySchema.parse(req.query);
-    const { shopName, list } = await services.roastList.roastList(date);
-    sendDownload(res, `roast-list-${date}.pdf`, await roastListPdf(list, shopName, paper));
+    const [{ shopName, list }, settings, recorded] = await Promise.all([
+      services.roastList.roastList(date),
+      services.settings.get(),
+      services.batches.onDay(date),
+    ]);
+    sendDownload(res, `roast-list-${date}.pdf`, await roastListPdf(list, { shopName, timeZone: settings.timeZone }, paper, recorded.items));
   });
 
   router.post('/batches', staffOnly, async (req, res) => {

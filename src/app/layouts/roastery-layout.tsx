@@ -1,4 +1,5 @@
 import clsx from 'clsx';
+import { useQuery } from '@tanstack/react-query';
 import { ArrowLeft } from 'lucide-react';
 import { Link, matchPath, NavLink, Outlet, useLocation } from 'react-router-dom';
 import type { Role } from '@shared/domain/vocabulary';
@@ -8,6 +9,8 @@ import { useCurrentUser } from '@/features/auth/api/get-current-user';
 import { AccountMenu } from '@/features/auth/components/account-menu';
 import { RequireRole } from '@/features/auth/components/require-role';
 import { signedInLoader } from '@/features/auth/utils/require-user';
+import { getShopSettingsQueryOptions } from '@/features/shop-settings/api/get-shop-settings';
+import { ShopTimeZoneProvider } from '@/lib/shop-clock';
 import { ownerRoles, roasteryRoles, staffRoles } from '@/features/auth/utils/roles';
 import { NavigationProgress } from './navigation-progress';
 import { SkipLink } from './skip-link';
@@ -47,6 +50,8 @@ export default function RoasteryLayout() {
   const role = useCurrentUser().data?.role;
   const nav = role ? roasteryNav.filter((item) => item.roles.includes(role)) : [];
   const { pathname } = useLocation();
+  // One clock on every staff page: the shop's time zone, from the settings the whole team reads.
+  const timeZone = useQuery({ ...getShopSettingsQueryOptions(), enabled: role !== undefined && roasteryRoles.includes(role) }).data?.timeZone;
   return (
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
@@ -95,7 +100,9 @@ export default function RoasteryLayout() {
                 }
           }
         >
-          <Outlet />
+          <ShopTimeZoneProvider value={timeZone}>
+            <Outlet />
+          </ShopTimeZoneProvider>
         </RequireRole>
       </main>
     </div>

@@ -19,6 +19,7 @@ import { RoastListView } from '@/features/day-sheet/components/roast-list-view';
 import { getPackListQueryOptions, usePackList } from '@/features/packing/api/get-pack-list';
 import { PackListView } from '@/features/packing/components/pack-list-view';
 import { useShopSettings } from '@/features/shop-settings/api/get-shop-settings';
+import { shopToday } from '@/features/shop-settings/utils/shop-today';
 import { formatDayLong } from '@/lib/dates';
 
 function tabOf(search: URLSearchParams): DaySheetTab {
@@ -54,12 +55,12 @@ function Loading({ what }: { what: string }) {
 function RoastListPanel({ date }: { date: string }) {
   const roastList = useRoastList(date);
   const batches = useDayBatches(date);
-  const timeZone = useShopSettings().data?.timeZone;
+  const settings = useShopSettings().data;
   if (roastList.isError) return <ErrorState title="The Roast List could not load" error={roastList.error} onRetry={() => void roastList.refetch()} />;
   if (!roastList.data) return <Loading what="Roast List" />;
   return (
     <>
-      <RoastListView roastList={roastList.data} />
+      <RoastListView roastList={roastList.data} today={shopToday(settings)} />
       <section aria-labelledby="day-batches" className="print-section">
         <h2 id="day-batches" className="mb-3 text-h3">
           Batches recorded
@@ -67,7 +68,7 @@ function RoastListPanel({ date }: { date: string }) {
         {batches.isError ? (
           <ErrorState title="The day’s batches could not load" error={batches.error} onRetry={() => void batches.refetch()} />
         ) : batches.data ? (
-          <DayBatches batches={batches.data.items} timeZone={timeZone} />
+          <DayBatches batches={batches.data.items} />
         ) : (
           <Loading what="batches" />
         )}
