@@ -5,6 +5,7 @@ import { addDays, localDateOf } from '@shared/domain/shop-time';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
 import type { Batch, BatchCreated, RoastListResponse } from '@shared/schemas/roastery';
 import { defaultShopSettings } from '@shared/schemas/settings';
+import { axeViolations } from '@/testing/axe';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 beforeEach(() => window.localStorage.clear());
@@ -244,6 +245,7 @@ describe('Day Sheet → Roast List', () => {
     const pull = screen.getByRole('region', { name: 'Pull list' });
     await waitFor(() => expect(within(pull).queryByRole('row', { name: /Test Ridge Washed/ })).toBeNull());
     expect(within(pull).getByRole('row', { name: /Invented Valley Natural/ }).textContent).toContain('2,126 g');
+    expect(await axeViolations()).toEqual([]);
 
     const recorded = await screen.findByRole('table', { name: 'Batches recorded for the day' });
     const row = within(recorded).getByRole('row', { name: /Test Ridge Washed/ });
@@ -265,6 +267,7 @@ describe('Day Sheet → Roast List', () => {
 
     const dialog = await screen.findByRole('dialog', { name: /^Record this batch for / });
     expect(dialog.textContent).toContain('That roast day is still ahead');
+    expect(await axeViolations()).toEqual([]);
     fireEvent.click(within(dialog).getByRole('button', { name: 'Go back' }));
     await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
     expect(sentRequests(fetchMock, 'POST', '/api/roastery/batches')).toHaveLength(0);

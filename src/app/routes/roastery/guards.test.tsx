@@ -1,6 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { axeViolations } from '@/testing/axe';
 import { jsonResponse, makeUser, renderApp, requestedUrls, stubFetch } from '@/testing/test-utils';
 
 afterEach(() => {
@@ -69,6 +70,7 @@ describe('Roastery guards (the client hides what the server forbids)', () => {
     expect(screen.queryByRole('tab', { name: /Roast List/ })).toBeNull();
     // Their browser never asks for what the server would refuse them.
     expect(requestedUrls(fetchMock).filter((path) => /roast-list|batches|\/api\/roastery\/today/.test(path))).toEqual([]);
+    expect(await axeViolations()).toEqual([]);
   });
 
   it('tells a packer that Green Stock is for the roasting staff, and never asks for it', async () => {

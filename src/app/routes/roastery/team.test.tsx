@@ -2,6 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { TeamMember, TeamResponse } from '@shared/schemas/team';
+import { axeViolations } from '@/testing/axe';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
@@ -63,6 +64,7 @@ describe('Team page', () => {
     expect(await screen.findByText('Oren Vale is now packer.')).toBeTruthy();
     expect(sentRequests(fetchMock, 'PATCH', `/api/owner/team/${roaster.id}`)[0]?.body).toEqual({ role: 'packer' });
     await waitFor(() => expect(within(oren).getByText('Packer')).toBeTruthy());
+    expect(await axeViolations()).toEqual([]);
   });
 
   it('lists the team with roles and access, and keeps the owner’s own row out of reach', async () => {

@@ -199,7 +199,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
         title="Place of business"
         description="The shop’s street address. Every bag label prints it under the shop’s name, as a packed food label must say where it was packed."
       >
-        {addressField('line1', 'Street address', 'street-address address-line1', 'sm:col-span-2')}
+        {addressField('line1', 'Street address', 'address-line1', 'sm:col-span-2')}
         {addressField('line2', 'Second line (optional)', 'address-line2')}
         {addressField('city', 'City or town', 'address-level2')}
         {addressField('region', 'State or region', 'address-level1')}
