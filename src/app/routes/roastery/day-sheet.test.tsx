@@ -287,7 +287,7 @@ describe('Day Sheet → Roast List', () => {
     // Shown on paper only.
     expect(writeIn.className).toContain('hidden');
     expect(writeIn.className).toContain('print:table-cell');
-    expect(within(lines).getByRole('row', { name: /Test Ridge Washed/ }).textContent).toContain('in ________ g');
+    expect(within(lines).getByRole('row', { name: /Test Ridge Washed/ }).textContent).toContain('in ______');
   });
 
   it('refuses a roasted weight above the green before sending anything, and shows a server refusal on its field', async () => {

@@ -70,8 +70,8 @@ function LineRows({ line, date, today }: { line: RoastListLine; date: string; to
           {done ? null : <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>}
         </TableCell>
         <TableCell className="hidden print:table-cell">
-          <span className="block whitespace-nowrap">in ________ g</span>
-          <span className="mt-2 block whitespace-nowrap">out ________ g</span>
+          <span className="block">in ______</span>
+          <span className="mt-2 block">out ______</span>
         </TableCell>
         <TableCell className="print:hidden">
           <Button
