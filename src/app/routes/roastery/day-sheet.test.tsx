@@ -283,11 +283,11 @@ describe('Day Sheet → Roast List', () => {
     renderApp(`/roastery/days/${day}`, { session: staff });
 
     const lines = await screen.findByRole('region', { name: 'By lot and roast level' });
-    const writeIn = within(lines).getByRole('columnheader', { name: 'Actual weights (write in)' });
+    const writeIn = within(lines).getByRole('columnheader', { name: 'Actual weights, written in by hand' });
     // Shown on paper only.
     expect(writeIn.className).toContain('hidden');
     expect(writeIn.className).toContain('print:table-cell');
-    expect(within(lines).getByRole('row', { name: /Test Ridge Washed/ }).textContent).toContain('in ______');
+    expect(within(lines).getByRole('row', { name: /Test Ridge Washed/ }).textContent).toContain('in ___');
   });
 
   it('refuses a roasted weight above the green before sending anything, and shows a server refusal on its field', async () => {

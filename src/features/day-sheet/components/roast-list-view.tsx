@@ -69,9 +69,9 @@ function LineRows({ line, date, today }: { line: RoastListLine; date: string; to
           {done ? 'Done' : describeLoads(line.toRoast.batches)}
           {done ? null : <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>}
         </TableCell>
-        <TableCell className="hidden print:table-cell">
-          <span className="block">in ______</span>
-          <span className="mt-2 block">out ______</span>
+        <TableCell className="hidden text-small print:table-cell print:px-1">
+          <span className="block">in ___</span>
+          <span className="mt-2 block">out ___</span>
         </TableCell>
         <TableCell className="print:hidden">
           <Button
@@ -207,7 +207,9 @@ export function RoastListView({ roastList, today }: { roastList: RoastListRespon
                   <TableHeader>Batches</TableHeader>
                   <TableHeader>Recorded</TableHeader>
                   <TableHeader>Still to roast</TableHeader>
-                  <TableHeader className="hidden print:table-cell">Actual weights (write in)</TableHeader>
+                  <TableHeader className="hidden print:table-cell print:px-1">
+                    Actual<span className="sr-only"> weights, written in by hand</span>
+                  </TableHeader>
                   <TableHeader className="print:hidden">
                     <span className="sr-only">Actions</span>
                   </TableHeader>
