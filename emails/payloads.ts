@@ -152,7 +152,7 @@ export const emailPayloadSchemas = {
   }),
   'staff-invitation': z.object({
     invitedByName: name,
-    role: z.enum(['staff', 'owner']),
+    role: z.enum(['packer', 'staff', 'owner']),
     acceptUrl: link,
     expiresAt: instant,
   }),

@@ -5,7 +5,7 @@ export const staffInvitation: EmailTemplate<'staff-invitation'> = {
   subject: () => 'You are invited to the Roastery',
   content(p, context) {
     const who = p.invitedByName || 'The owner';
-    const as = p.role === 'owner' ? 'an owner' : 'a member of staff';
+    const as = { owner: 'an owner', staff: 'a member of staff', packer: 'a packer' }[p.role];
     return {
       heading: 'Join the Roastery',
       preheader: `${who} invited you to ${context.shop.name}.`,

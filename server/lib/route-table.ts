@@ -30,7 +30,7 @@ export interface ListedRoute {
   handler: RequestHandler;
 }
 
-const strictness: Record<AccessRule, number> = { public: 0, customer: 1, staff: 2, owner: 3 };
+const strictness: Record<AccessRule, number> = { public: 0, customer: 1, packer: 2, staff: 3, owner: 4 };
 const stricter = (a: AccessRule, b: AccessRule) => (strictness[b] > strictness[a] ? b : a);
 const joined = (prefix: string, tail: string) => `${prefix}/${tail}`.replace(/\/{2,}/g, '/').replace(/(.)\/$/, '$1');
 const pathsOf = (raw: string | string[] | undefined) => (raw === undefined ? ['/'] : Array.isArray(raw) ? raw : [raw]);

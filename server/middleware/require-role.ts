@@ -21,8 +21,8 @@ declare module 'express-serve-static-core' {
 
 const signInRequired = () => new AppError(401, 'sign_in_required', 'Please sign in to continue.');
 
-/** Who may call a route: anyone, any signed-in account, staff (and the owner), or the owner alone. */
-export type AccessRule = 'public' | 'customer' | 'staff' | 'owner';
+/** Who may call a route: anyone, any signed-in account, the packer (and staff and the owner), staff (and the owner), or the owner alone. */
+export type AccessRule = 'public' | 'customer' | 'packer' | 'staff' | 'owner';
 
 const accessRules = new WeakMap<RequestHandler, AccessRule>();
 
@@ -39,11 +39,14 @@ export const requireUser: RequestHandler = guard('customer', (req, _res, next) =
   next(req.user ? undefined : signInRequired());
 });
 
+/** The Pack List, shipping and reading orders: the packer's work, which staff and the owner do too. */
+export const packingRoles: readonly Role[] = ['packer', 'staff', 'owner'];
+
 /** Signed in with one of `roles` (list every role allowed: `requireRole('staff', 'owner')`). */
 export function requireRole(...roles: Role[]): RequestHandler {
   const allowed = new Set(roles);
   // The least role allowed names the rule: staff routes are open to the owner too.
-  const rule: AccessRule = allowed.has('customer') ? 'customer' : allowed.has('staff') ? 'staff' : 'owner';
+  const rule: AccessRule = allowed.has('customer') ? 'customer' : allowed.has('packer') ? 'packer' : allowed.has('staff') ? 'staff' : 'owner';
   return guard(rule, (req, _res, next) => {
     if (!req.user) return next(signInRequired());
     if (!allowed.has(req.user.role)) return next(new AppError(403, 'forbidden', 'Your account does not have access to this.'));

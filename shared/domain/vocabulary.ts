@@ -46,8 +46,15 @@ export const grindLabels: Record<Grind, string> = {
 export const cadences = [1, 2, 3, 4] as const;
 export type CadenceWeeks = (typeof cadences)[number];
 
-export const roles = ['customer', 'staff', 'owner'] as const;
+/** A packer packs and ships (Pack List, shipping, reading orders); staff run the whole Roastery; the owner also the team and settings. */
+export const roles = ['customer', 'packer', 'staff', 'owner'] as const;
 export type Role = (typeof roles)[number];
+export const roleLabels: Record<Role, string> = {
+  customer: 'Customer',
+  packer: 'Packer',
+  staff: 'Staff',
+  owner: 'Owner',
+};
 
 export const orderKinds = ['green', 'roasted'] as const;
 export type OrderKind = (typeof orderKinds)[number];

@@ -1,10 +1,16 @@
 import { z } from 'zod';
+import { labelStockIds } from '../domain/label-stock';
 import { instant, isoDate, roastDatesOrNullSchema } from './dates';
 import { bagSizes, grinds, orderKinds, orderStatuses, roastLevels } from '../domain/vocabulary';
 
 /** Path of `GET /api/roastery/days/:date/pack-list` and `…/labels.pdf`: a ship day in shop time. */
 export const packDayParamsSchema = z.object({ date: isoDate('date') });
 export type PackDayParams = z.infer<typeof packDayParamsSchema>;
+
+/** `GET …/labels.pdf?stock=` — the label stock to print on; one 4 × 3 in label a page unless asked. */
+export const labelsPdfQuerySchema = z.object({
+  stock: z.enum(labelStockIds, { error: `Choose one of: ${labelStockIds.join(', ')}.` }).default('single'),
+});
 
 /**
  * One bag on the Pack List, with what its label says. Green bags have no roast fields (null).

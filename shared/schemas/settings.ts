@@ -4,13 +4,14 @@ import { hasAtMostDecimals } from '../domain/integer-math';
 import { currencies, type CurrencyCode } from '../domain/money';
 import { DEFAULT_LOSS_MIN_BATCHES, defaultLossModel } from '../domain/roast-loss';
 import { isClockTime, isValidTimeZone } from '../domain/shop-time';
+import { postalAddressInputSchema } from './address';
 import { roastedBagSizes, roastLevels, shipPolicies, weekdays } from '../domain/vocabulary';
 
 /**
  * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET.
  * Fields added after the first version of that body (currency, restAdjustDays, dayCapacityGrams, lossModelMinBatches,
  * roastedBagPriceCents, subscriptionDiscountPct, renewalReminderDays, shipping, shipPolicy,
- * holdOverWeekend) default when left out.
+ * holdOverWeekend) default when left out; placeOfBusiness, added with the bag labels that print it, must be sent.
  */
 
 const percent = (max: number) =>
@@ -93,6 +94,13 @@ const DEFAULT_DAY_CAPACITY_GRAMS = 60_000;
 const DEFAULT_SUBSCRIPTION_DISCOUNT_PCT = 10;
 const DEFAULT_RENEWAL_REMINDER_DAYS = 3;
 
+/**
+ * The shop's place of business as a packed food label must state it (the shop's name comes first on
+ * the label; this is the street address under it).
+ */
+export const placeOfBusinessSchema = postalAddressInputSchema.omit({ name: true });
+export type PlaceOfBusiness = z.output<typeof placeOfBusinessSchema>;
+
 export const shopSettingsSchema = z
   .object({
     timeZone: z.string().refine(isValidTimeZone, 'Use an IANA time zone such as America/Denver.'),
@@ -126,6 +134,8 @@ export const shopSettingsSchema = z
     /** Days before a subscription's charge that the renewal reminder goes out; 0 sends none. */
     renewalReminderDays: wholeDays(14).default(DEFAULT_RENEWAL_REMINDER_DAYS),
     shipping: shippingSchema.default(() => ({ ...defaultShipping, bands: defaultShipping.bands.map((band) => ({ ...band })) })),
+    /** Null only until the owner first saves the settings: a shop installed before labels carried it. */
+    placeOfBusiness: placeOfBusinessSchema.nullable(),
   })
   .refine((settings) => settings.bestBeforeDays > Math.max(settings.restDays.filter, settings.restDays.espresso), {
     message: 'The best-before date must come after the coffee is ready.',
@@ -134,6 +144,12 @@ export const shopSettingsSchema = z
 
 export type ShopSettings = z.output<typeof shopSettingsSchema>;
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;
+
+/** `PUT /api/roastery/settings`: as the GET reads, and the place of business is required, since every bag label prints it. */
+export const shopSettingsUpdateSchema = shopSettingsSchema.refine((settings) => settings.placeOfBusiness !== null, {
+  message: 'Enter the shop’s postal address: every bag label prints it.',
+  path: ['placeOfBusiness'],
+});
 
 /** The product's defaults; the demo seed sets its own time zone (America/Denver). */
 export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
@@ -165,4 +181,5 @@ export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
   subscriptionDiscountPct: DEFAULT_SUBSCRIPTION_DISCOUNT_PCT,
   renewalReminderDays: DEFAULT_RENEWAL_REMINDER_DAYS,
   shipping: defaultShipping,
+  placeOfBusiness: null,
 } satisfies ShopSettingsInput);

@@ -3,7 +3,7 @@ import { roles } from '../domain/vocabulary';
 import { emailSchema, linkTokenSchema, newPasswordSchema, personNameSchema } from './auth';
 
 /** Roles the owner can invite someone into; customers sign themselves up. */
-export const teamRoles = ['staff', 'owner'] as const;
+export const teamRoles = ['packer', 'staff', 'owner'] as const;
 export type TeamRole = (typeof teamRoles)[number];
 
 export const teamMemberSchema = z.object({

@@ -10,7 +10,6 @@ import {
   formatInstantDate,
   formatInstantWithWeekday,
   formatMonth,
-  formatTime,
 } from './dates';
 
 describe('dates as people read them', () => {
@@ -24,8 +23,7 @@ describe('dates as people read them', () => {
     expect(formatMonth('2026-12')).toBe('December 2026');
   });
 
-  it('prints an instant in the zone it is asked for', () => {
-    expect(formatTime('2026-12-03T23:15:00Z', 'America/Denver')).toBe('4:15 PM');
+  it('prints an instant in the reader’s zone', () => {
     expect(formatInstant(new Date('2026-12-01T16:05:00'))).toBe('Dec 1, 2026, 4:05 PM');
     expect(formatInstantDate(new Date('2026-12-01T16:05:00'))).toBe('Dec 1, 2026');
     expect(formatInstantWithWeekday(new Date('2026-12-08T12:00:00'))).toBe('Tue, Dec 8, 12:00 PM');

@@ -2,7 +2,8 @@
  * Dates as people read them, in one place. Two kinds (money aside, the only way time is shown):
  * - a shop day (`YYYY-MM-DD`: a roast date, a ship date) is a calendar date in the shop's time zone
  *   already, so it prints as written, whatever the reader's own zone;
- * - an instant (an ISO 8601 timestamp) prints in the reader's own time zone unless one is given.
+ * - an instant (an ISO 8601 timestamp) prints in the reader's own time zone; staff pages use the
+ *   shop's clock instead (`useShopClock` in shop-clock.tsx), in the shop's zone and labelled.
  */
 const locale = 'en-US';
 
@@ -42,8 +43,3 @@ export const formatInstant = instantFormat({ dateStyle: 'medium', timeStyle: 'sh
 export const formatInstantDate = instantFormat({ dateStyle: 'medium' });
 /** An instant in the reader's time, with the weekday and without the year: "Tue, Dec 8, 12:00 PM" */
 export const formatInstantWithWeekday = instantFormat({ weekday: 'short', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
-
-/** The clock time of an instant in `timeZone` (the shop's), else the reader's: "4:15 PM" */
-export function formatTime(instant: string | Date, timeZone?: string): string {
-  return new Intl.DateTimeFormat(locale, { hour: 'numeric', minute: '2-digit', timeZone }).format(new Date(instant));
-}

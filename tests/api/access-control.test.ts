@@ -12,7 +12,7 @@ const app = createTestApp();
 const apiRoutes = listRoutes(app).filter((route) => route.path.startsWith('/api/'));
 const ruleKey = (route: { method: string; path: string }) => `${route.method} ${route.path}`;
 
-const callers = ['visitor', 'customer A', 'customer B', 'staff', 'owner'] as const;
+const callers = ['visitor', 'customer A', 'customer B', 'packer', 'staff', 'owner'] as const;
 type Caller = (typeof callers)[number];
 
 type Expectation = 'allowed' | 'not signed in' | 'wrong role' | 'someone else’s record' | 'refused without its proof';
@@ -28,6 +28,10 @@ function expectationFor(access: Access, caller: Caller): Expectation {
       return caller === 'customer A' ? 'allowed' : 'someone else’s record';
     case 'own-or-staff':
       return caller === 'customer A' || caller === 'staff' || caller === 'owner' ? 'allowed' : 'someone else’s record';
+    case 'own-or-team':
+      return caller === 'customer B' ? 'someone else’s record' : 'allowed';
+    case 'packing':
+      return caller === 'packer' || caller === 'staff' || caller === 'owner' ? 'allowed' : 'wrong role';
     case 'staff':
       return caller === 'staff' || caller === 'owner' ? 'allowed' : 'wrong role';
     case 'owner':
@@ -56,6 +60,7 @@ async function pathFor(rule: AccessRule): Promise<string> {
 beforeAll(async () => {
   people['customer A'] = await createTestUser('customer');
   people['customer B'] = await createTestUser('customer');
+  people.packer = await createTestUser('packer');
   people.staff = await createTestUser('staff');
   people.owner = await createTestUser('owner');
 });
@@ -72,12 +77,13 @@ describe('the access-control rules cover the router exactly', () => {
     expect(accessRules.map(ruleKey).filter((key) => !answered.has(key))).toEqual([]);
   });
 
-  it('own-record and own-or-staff rules make a record to ask for', () => {
-    expect(accessRules.filter((rule) => (rule.access === 'own-record' || rule.access === 'own-or-staff') && !rule.record).map(ruleKey)).toEqual([]);
+  it('own-record, own-or-staff and own-or-team rules make a record to ask for', () => {
+    const ownRecordRules = new Set<Access>(['own-record', 'own-or-staff', 'own-or-team']);
+    expect(accessRules.filter((rule) => ownRecordRules.has(rule.access) && !rule.record).map(ruleKey)).toEqual([]);
   });
 });
 
-describe('access-control matrix: every API route × visitor, customer A, customer B, staff, owner', () => {
+describe('access-control matrix: every API route × visitor, customer A, customer B, packer, staff, owner', () => {
   for (const rule of accessRules) {
     for (const caller of callers) {
       const expected = expectationFor(rule.access, caller);

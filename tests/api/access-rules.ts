@@ -10,8 +10,12 @@ export type Access =
   | 'signed-in'
   /** Any signed-in account, on a record it owns: customer A's record; customer B, staff and owner get 404 (or 403). */
   | 'own-record'
-  /** The record's owner (customer A), and staff and owner; customer B gets 404 (or 403). */
+  /** The record's owner (customer A), and staff and owner; customer B and the packer get 404 (or 403). */
   | 'own-or-staff'
+  /** The record's owner (customer A), and the packer, staff and owner (reading an order); customer B gets 404 (or 403). */
+  | 'own-or-team'
+  /** The packer, staff and owner: the Pack List, shipping and reading orders. */
+  | 'packing'
   /** Staff and owner. */
   | 'staff'
   /** The owner only. */
@@ -25,7 +29,7 @@ export interface AccessRule {
   path: string;
   access: Access;
   /**
-   * `own-record` and `own-or-staff`: makes a record owned by `owner` (customer A) and returns the
+   * `own-record`, `own-or-staff` and `own-or-team`: makes a record owned by `owner` (customer A) and returns the
    * path's parameters. Other rules get a random UUID for every parameter unless `params` says otherwise.
    */
   record?: (owner: TestUser) => Promise<Record<string, string>>;
@@ -121,7 +125,7 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/roastery/planning', access: 'staff' },
   { method: 'GET', path: '/api/roastery/planning.csv', access: 'staff' },
 
-  { method: 'GET', path: '/api/roastery/settings', access: 'staff' },
+  { method: 'GET', path: '/api/roastery/settings', access: 'packing' },
   { method: 'PUT', path: '/api/roastery/settings', access: 'owner' },
   { method: 'GET', path: '/api/roastery/calendar', access: 'staff' },
   { method: 'PUT', path: '/api/roastery/calendar/:date', access: 'staff', params: { date: '2026-12-08' } },
@@ -133,8 +137,8 @@ export const accessRules: AccessRule[] = [
 
   { method: 'POST', path: '/api/checkout/green', access: 'signed-in' },
   { method: 'GET', path: '/api/orders', access: 'signed-in' },
-  { method: 'GET', path: '/api/orders.csv', access: 'staff' },
-  { method: 'GET', path: '/api/orders/:id', access: 'own-or-staff', record: orderOf },
+  { method: 'GET', path: '/api/orders.csv', access: 'packing' },
+  { method: 'GET', path: '/api/orders/:id', access: 'own-or-team', record: orderOf },
   { method: 'POST', path: '/api/orders/:id/pay', access: 'own-record', record: paidOrderOf },
   { method: 'POST', path: '/api/orders/:id/discard', access: 'own-record', record: orderOf },
 
@@ -157,8 +161,8 @@ export const accessRules: AccessRule[] = [
   { method: 'GET', path: '/api/roastery/subscribers/:id', access: 'staff' },
   { method: 'GET', path: '/api/roastery/rotation', access: 'staff' },
   { method: 'PUT', path: '/api/roastery/rotation/:date', access: 'staff', params: { date: '2031-01-06' } },
-  { method: 'POST', path: '/api/orders/:id/pack', access: 'staff' },
-  { method: 'POST', path: '/api/orders/:id/ship', access: 'staff', body: { carrier: 'Invented Parcel Co', trackingNumber: 'TEST123' } },
+  { method: 'POST', path: '/api/orders/:id/pack', access: 'packing' },
+  { method: 'POST', path: '/api/orders/:id/ship', access: 'packing', body: { carrier: 'Invented Parcel Co', trackingNumber: 'TEST123' } },
   { method: 'POST', path: '/api/orders/:id/refund', access: 'owner' },
   { method: 'POST', path: '/api/orders/:id/cancel', access: 'staff' },
   { method: 'POST', path: '/api/orders/:id/resend/:template', access: 'staff', params: { template: 'order-confirmed' } },
@@ -178,8 +182,8 @@ export const accessRules: AccessRule[] = [
   },
   { method: 'DELETE', path: '/api/journal/:id', access: 'own-record', record: journalEntryOf },
   { method: 'GET', path: '/api/roastery/lots/:code/journal-summary', access: 'staff', params: { code: 'ANY-LOT' } },
-  { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'staff', params: { date: '2026-12-08' } },
-  { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'staff', params: { date: '2026-12-08' } },
-  { method: 'POST', path: '/api/roastery/days/:date/ship', access: 'staff', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/pack-list', access: 'packing', params: { date: '2026-12-08' } },
+  { method: 'GET', path: '/api/roastery/days/:date/labels.pdf', access: 'packing', params: { date: '2026-12-08' } },
+  { method: 'POST', path: '/api/roastery/days/:date/ship', access: 'packing', params: { date: '2026-12-08' } },
   { method: 'GET', path: '/api/roastery/batches/:id/trace', access: 'staff' },
 ];

@@ -1,3 +1,4 @@
+import { readFile } from 'node:fs/promises';
 import { randomUUID } from 'node:crypto';
 import { parseOptions } from '@node-rs/argon2';
 import { eq } from 'drizzle-orm';
@@ -304,7 +305,9 @@ describe('demo accounts', () => {
           expect(row!.passwordHash).toMatch(/^\$argon2id\$v=19\$m=19456,t=2,p=1\$/);
           expect(await verifyPassword(row!.passwordHash, 'restday-demo')).toBe(true);
         }
-        expect(new Set(demoSignIns.map((demo) => demo.role))).toEqual(new Set(['customer', 'staff', 'owner']));
+        expect(new Set(demoSignIns.map((demo) => demo.role))).toEqual(new Set(['customer', 'packer', 'staff', 'owner']));
+        const readme = await readFile(new URL('../../README.md', import.meta.url), 'utf8');
+        for (const demo of demoSignIns) expect(readme, demo.email).toContain(`| ${demo.email}`);
         throw rollback;
       })
       .catch((error: unknown) => {

@@ -1,11 +1,21 @@
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import type { Response } from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { apiErrorSchema } from '@shared/schemas/errors';
 import { loadShopSettings } from '../../server/modules/settings/settings.repo';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
-import { createGreenOrder, createLotForSale, createRoastedOrder, createTestUser, type TestUser, uniqueDay } from '../factories/index';
+import {
+  createGreenOrder,
+  createLotForSale,
+  createRoastedOrder,
+  createTestUser,
+  saveTestShopSettings,
+  testPlaceOfBusiness,
+  type TestUser,
+  uniqueDay,
+} from '../factories/index';
 
 const app = createTestApp();
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -14,6 +24,12 @@ let customer: TestUser;
 beforeAll(async () => {
   staff = await signedInAgent(app, await createTestUser('staff'));
   customer = await createTestUser('customer', { name: 'Robin Labeltest' });
+  await saveTestShopSettings({ placeOfBusiness: testPlaceOfBusiness });
+});
+
+// Leave the shared test database on the defaults other test files expect.
+afterAll(async () => {
+  await saveTestShopSettings();
 });
 
 function binary(response: Response, done: (error: Error | null, body: Buffer) => void) {
@@ -22,25 +38,37 @@ function binary(response: Response, done: (error: Error | null, body: Buffer) =>
   response.on('end', () => done(null, Buffer.concat(chunks)));
 }
 
-/** The text on each page of a PDF, as a reader extracts it (pdfjs-dist). */
-async function pageTexts(pdf: Buffer): Promise<string[]> {
+/** Each page of a PDF, as a reader extracts it (pdfjs-dist): its text and its size in points. */
+async function pdfPages(pdf: Buffer): Promise<{ text: string; width: number; height: number }[]> {
   const document = await getDocument({ data: new Uint8Array(pdf), disableFontFace: true, verbosity: 0 }).promise;
-  const pages: string[] = [];
+  const pages: { text: string; width: number; height: number }[] = [];
   for (let n = 1; n <= document.numPages; n++) {
-    const content = await (await document.getPage(n)).getTextContent();
-    pages.push(content.items.map((item) => ('str' in item ? item.str : '')).join(' '));
+    const page = await document.getPage(n);
+    const content = await page.getTextContent();
+    const [, , width, height] = page.view as [number, number, number, number];
+    pages.push({ text: content.items.map((item) => ('str' in item ? item.str : '')).join(' '), width, height });
   }
   await document.destroy();
   return pages;
 }
 
-async function labelsFor(date: string) {
-  const response = await staff.get(`/api/roastery/days/${date}/labels.pdf`).buffer(true).parse(binary);
+async function labelPagesFor(date: string, stock?: string) {
+  const response = await staff
+    .get(`/api/roastery/days/${date}/labels.pdf${stock ? `?stock=${stock}` : ''}`)
+    .buffer(true)
+    .parse(binary);
   expect(response.status).toBe(200);
   expect(response.headers['content-type']).toBe('application/pdf');
-  expect(response.headers['content-disposition']).toContain(`restday-labels-${date}.pdf`);
-  return pageTexts(response.body as Buffer);
+  expect(response.headers['content-disposition']).toContain(`restday-labels-${date}${stock ? `-${stock}` : ''}.pdf`);
+  return pdfPages(response.body as Buffer);
 }
+
+async function labelsFor(date: string) {
+  return (await labelPagesFor(date)).map((page) => page.text);
+}
+
+/** The invented place of business as the label prints it, on one line. */
+const printedAddress = `${testPlaceOfBusiness.line1}, ${testPlaceOfBusiness.city}, ${testPlaceOfBusiness.region} ${testPlaceOfBusiness.postalCode}, US`;
 
 describe('GET /api/roastery/days/:date/labels.pdf', () => {
   it('prints one label per bag with its dual net weight, roast fields on roasted bags and green-coffee fields only on green bags', async () => {
@@ -75,8 +103,11 @@ describe('GET /api/roastery/days/:date/labels.pdf', () => {
 
     const dayText = (date: string) =>
       new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${date}T00:00:00Z`));
-    for (const page of roastedPages) {
+    for (const page of pages) {
       expect(page).toContain(shopName.toUpperCase());
+      expect(page).toContain(printedAddress);
+    }
+    for (const page of roastedPages) {
       expect(page).toContain(lot.name);
       expect(page).toContain(`Lot ${lot.code}`);
       expect(page).toContain('Medium-dark');
@@ -95,9 +126,55 @@ describe('GET /api/roastery/days/:date/labels.pdf', () => {
   });
 
   it('says so on a single page when nothing ships that day', async () => {
-    const date = uniqueDay();
+    // A day no other test's parcel ships on (a roast day's orders ship some days after it).
+    let date = uniqueDay();
+    while ((await staff.get(`/api/roastery/days/${date}/pack-list`)).body.orders.length > 0) date = uniqueDay();
     const pages = await labelsFor(date);
     expect(pages).toHaveLength(1);
     expect(pages[0]).toContain('No bags ship on');
+  });
+
+  it('prints ten labels to a US Letter sheet of 4 × 2 in labels, and to an A4 sheet of 99.1 × 57 mm labels, each with the shop’s name and address', async () => {
+    const lot = await createLotForSale(40_000);
+    const roasted = await createRoastedOrder(customer.id, {
+      roastDate: uniqueDay(),
+      lines: [{ lotId: lot.id, size: '12oz', quantity: 12, roastLevel: 'light', grind: 'whole-bean', brewMethod: 'filter' }],
+    });
+    const { shopName } = await loadShopSettings(getTestDb());
+
+    // 12 bags: a full sheet of 10, then 2 on the next. US Letter is 8.5 × 11 in = 612 × 792 pt and
+    // A4 210 × 297 mm = 595.28 × 841.89 pt (1 in = 72 pt, PDF 32000-1 § 8.3.2.3; 1 in = 25.4 mm, NIST SP 811).
+    const letter = await labelPagesFor(roasted.shipDate!, 'letter-10');
+    expect(letter.map(({ width, height }) => [width, height])).toEqual([
+      [612, 792],
+      [612, 792],
+    ]);
+    const a4 = await labelPagesFor(roasted.shipDate!, 'a4-10');
+    expect(a4).toHaveLength(2);
+    expect(a4[0]!.width).toBeCloseTo(595.28, 1);
+    expect(a4[0]!.height).toBeCloseTo(841.89, 1);
+    for (const pages of [letter, a4]) {
+      const count = (text: string, part: string) => text.split(part).length - 1;
+      expect(pages.map((page) => count(page.text, 'Net Wt 12 oz (340 g)'))).toEqual([10, 2]);
+      expect(pages.map((page) => count(page.text, printedAddress))).toEqual([10, 2]);
+      expect(pages.map((page) => count(page.text, shopName.toUpperCase()))).toEqual([10, 2]);
+    }
+  });
+
+  it('answers 400 naming stock for a label stock it does not know', async () => {
+    const response = await staff.get(`/api/roastery/days/${uniqueDay()}/labels.pdf?stock=legal-30`);
+    expect(response.status).toBe(400);
+    expect(Object.keys(apiErrorSchema.parse(response.body).error.fields ?? {})).toEqual(['stock']);
+  });
+
+  it('answers 409 place_of_business_missing until the shop’s postal address is set', async () => {
+    await saveTestShopSettings();
+    try {
+      const response = await staff.get(`/api/roastery/days/${uniqueDay()}/labels.pdf`);
+      expect(response.status).toBe(409);
+      expect(apiErrorSchema.parse(response.body).error.code).toBe('place_of_business_missing');
+    } finally {
+      await saveTestShopSettings({ placeOfBusiness: testPlaceOfBusiness });
+    }
   });
 });

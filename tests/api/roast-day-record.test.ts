@@ -2,7 +2,9 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { batchCreatedSchema, calendarResponseSchema, roastListResponseSchema } from '@shared/schemas/roastery';
+import { formatShopInstant } from '@shared/domain/shop-clock';
+import { batchCreatedSchema, batchListResponseSchema, calendarResponseSchema, roastListResponseSchema } from '@shared/schemas/roastery';
+import { shopSettingsSchema } from '@shared/schemas/settings';
 import { createTestApp } from '../setup/test-app';
 import { signedInAgent } from '../setup/test-users';
 import {
@@ -149,6 +151,14 @@ describe('a roast day’s Roast List is its production record', () => {
     expect(text).toContain('3,940 g out');
     expect(text).toContain('Done');
     expect(text).toContain('No green to pull.');
+    // The printed list has room to write weights by hand, and lists the batches already recorded,
+    // each at its time on the shop's clock (the zone named).
+    expect(text).toMatch(/Actual\s+in\s*\/\s*out\s+\(write\s+in\)/);
+    expect(text).toContain('Batches recorded');
+    const [recordedBatch] = batchListResponseSchema.parse((await staff.get(`/api/roastery/days/${date}/batches`)).body).items;
+    const { timeZone } = shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body);
+    expect(text).toContain(formatShopInstant(recordedBatch!.createdAt, timeZone, 'time'));
+    expect(text).toContain('4,635 g');
 
     // The Roast Calendar shows the day's record from the same batches.
     const calendar = await staff.get(`/api/roastery/calendar?from=${date}&to=${date}`);

@@ -6,7 +6,7 @@ import { auditLog } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
-import { createTestUser, saveTestShopSettings, type TestUser } from '../factories/index';
+import { createTestUser, saveTestShopSettings, testPlaceOfBusiness, testShopSettingsBody, type TestUser } from '../factories/index';
 
 let app: ReturnType<typeof createTestApp>;
 let staff: Awaited<ReturnType<typeof signedInAgent>>;
@@ -47,7 +47,7 @@ describe('GET /api/roastery/settings', () => {
 describe('PUT /api/roastery/settings', () => {
   it('saves the owner’s settings, which the next read returns, and records who changed which settings', async () => {
     const changed = {
-      ...defaultShopSettings,
+      ...testShopSettingsBody,
       timeZone: 'America/Denver',
       roastWeekdays: ['tue', 'thu'],
       overagePct: 3.5,
@@ -58,7 +58,7 @@ describe('PUT /api/roastery/settings', () => {
     expect(shopSettingsSchema.parse(response.body)).toEqual(changed);
     expect(shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body)).toEqual(changed);
     const audit = await lastSettingsAudit(ownerUser.id);
-    expect(audit?.detail).toEqual({ changed: 'timeZone,roastWeekdays,overagePct,roaster' });
+    expect(audit?.detail).toEqual({ changed: 'timeZone,roastWeekdays,overagePct,roaster,placeOfBusiness' });
   });
 
   it('saves the ship policy, the weekend hold and the rest by level, and defaults them when left out', async () => {
@@ -89,7 +89,7 @@ describe('PUT /api/roastery/settings', () => {
 
   it('answers 400 naming shipPolicy and holdOverWeekend for values they do not take, and changes nothing', async () => {
     const before = (await staff.get('/api/roastery/settings')).body as unknown;
-    const response = await owner.put('/api/roastery/settings').send({ ...defaultShopSettings, shipPolicy: 'whenever', holdOverWeekend: 'yes' });
+    const response = await owner.put('/api/roastery/settings').send({ ...testShopSettingsBody, shipPolicy: 'whenever', holdOverWeekend: 'yes' });
     expect(response.status).toBe(400);
     expect(Object.keys(apiErrorSchema.parse(response.body).error.fields ?? {})).toEqual(expect.arrayContaining(['shipPolicy', 'holdOverWeekend']));
     expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
@@ -98,7 +98,7 @@ describe('PUT /api/roastery/settings', () => {
   it('answers 400 naming each field that is wrong, and changes nothing', async () => {
     const before = (await staff.get('/api/roastery/settings')).body as unknown;
     const response = await owner.put('/api/roastery/settings').send({
-      ...defaultShopSettings,
+      ...testShopSettingsBody,
       timeZone: 'Mars/Olympus_Mons',
       cutoff: { time: '25:00', daysBefore: 1 },
       roaster: { capacityGrams: 12_000, minLoadPct: 90, maxLoadPct: 80 },
@@ -109,9 +109,34 @@ describe('PUT /api/roastery/settings', () => {
     expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
   });
 
+  it('answers 400 naming placeOfBusiness when the shop’s postal address is left out or null, and changes nothing', async () => {
+    const before = (await staff.get('/api/roastery/settings')).body as unknown;
+    const { placeOfBusiness: _address, ...withoutAddress } = testShopSettingsBody;
+    for (const body of [withoutAddress, { ...testShopSettingsBody, placeOfBusiness: null }]) {
+      const response = await owner.put('/api/roastery/settings').send(body);
+      expect(response.status).toBe(400);
+      expect(Object.keys(apiErrorSchema.parse(response.body).error.fields ?? {})).toEqual(['placeOfBusiness']);
+    }
+    expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
+  });
+
+  it('answers 400 naming each blank line of the place of business, and changes nothing', async () => {
+    const before = (await staff.get('/api/roastery/settings')).body as unknown;
+    const response = await owner
+      .put('/api/roastery/settings')
+      .send({ ...testShopSettingsBody, placeOfBusiness: { ...testPlaceOfBusiness, line1: ' ', postalCode: '', country: 'USA' } });
+    expect(response.status).toBe(400);
+    expect(Object.keys(apiErrorSchema.parse(response.body).error.fields ?? {}).sort()).toEqual([
+      'placeOfBusiness.country',
+      'placeOfBusiness.line1',
+      'placeOfBusiness.postalCode',
+    ]);
+    expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
+  });
+
   it('is the owner’s alone: staff get 403 and the settings stay as they were', async () => {
     const before = (await staff.get('/api/roastery/settings')).body as unknown;
-    const response = await staff.put('/api/roastery/settings').send({ ...defaultShopSettings, overagePct: 9 });
+    const response = await staff.put('/api/roastery/settings').send({ ...testShopSettingsBody, overagePct: 9 });
     expect(response.status).toBe(403);
     expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
   });

@@ -12,7 +12,7 @@ import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
 import { orderRow } from './payments-support';
-import { createLotForSale, createTestUser, saveTestShopSettings, shipTo, type TestUser } from '../factories/index';
+import { createLotForSale, createTestUser, saveTestShopSettings, shipTo, testShopSettingsBody, type TestUser } from '../factories/index';
 
 const app = createTestApp();
 let owner: Awaited<ReturnType<typeof signedInAgent>>;
@@ -42,7 +42,7 @@ afterAll(async () => {
 });
 
 async function putShipping(shipping: typeof editedShipping) {
-  const response = await owner.put('/api/roastery/settings').send({ ...defaultShopSettings, shipping });
+  const response = await owner.put('/api/roastery/settings').send({ ...testShopSettingsBody, shipping });
   expect(response.status, JSON.stringify(response.body)).toBe(200);
 }
 

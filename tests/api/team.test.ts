@@ -164,6 +164,41 @@ describe('role changes and disabling take effect on the next request', () => {
     expect((await staffAgent.get('/api/roastery/outbox')).status).toBe(200);
   });
 
+  it('staff made a packer: /me says packer, the Pack List and orders still open, stock, the Roast List, refunds and the team answer 403; the team lists them', async () => {
+    const { agent: owner } = await ownerAgent();
+    const member = await createTestUser('staff');
+    const memberAgent = await signedInAgent(app, member);
+
+    const changed = await owner.patch(`/api/owner/team/${member.id}`).send({ role: 'packer' });
+    expect(changed.status).toBe(200);
+    expect(teamMemberSchema.parse(changed.body)).toMatchObject({ id: member.id, role: 'packer' });
+    expect(userResponseSchema.parse((await memberAgent.get('/api/auth/me')).body).user?.role).toBe('packer');
+
+    expect((await memberAgent.get('/api/roastery/days/2026-12-08/pack-list')).status).toBe(200);
+    expect((await memberAgent.get('/api/orders?pageSize=5')).status).toBe(200);
+    expect((await memberAgent.get('/api/roastery/days/2026-12-08/roast-list')).status).toBe(403);
+    expect((await memberAgent.post('/api/lots/ANY-LOT/stock-adjustments').send({})).status).toBe(403);
+    expect((await memberAgent.post('/api/orders/00000000-0000-4000-8000-000000000000/refund').send({})).status).toBe(403);
+    expect((await memberAgent.get('/api/owner/team')).status).toBe(403);
+    expect((await memberAgent.put('/api/roastery/settings').send({})).status).toBe(403);
+
+    const team = teamResponseSchema.parse((await owner.get('/api/owner/team')).body);
+    expect(team.members.find((listed) => listed.id === member.id)?.role).toBe('packer');
+  });
+
+  it('POST /api/owner/team with role packer — then 201, and the invitation preview offers the packer role', async () => {
+    const { agent: owner } = await ownerAgent();
+    const email = `packer-${Date.now()}@example.test`;
+    const invited = await owner.post('/api/owner/team').send({ email, role: 'packer' });
+    expect(invited.status).toBe(201);
+    expect(pendingInvitationSchema.parse(invited.body).role).toBe('packer');
+    const preview = await request(app)
+      .post('/api/auth/invitations/preview')
+      .set(web)
+      .send({ token: await invitationToken(email) });
+    expect(invitationPreviewSchema.parse(preview.body).role).toBe('packer');
+  });
+
   it('a disabled team member is signed out on the next request and cannot sign in; re-enabled, they can', async () => {
     const { agent: owner } = await ownerAgent();
     const staff = await createTestUser('staff');

@@ -145,8 +145,10 @@ describe('a roast day in a real browser', () => {
     await form.getByText('development time ratio 21.28 %').waitFor();
     await form.getByRole('button', { name: 'Save batch' }).click();
 
-    await form.getByText(/Batch recorded/).waitFor();
-    const traceHref = await form.getByRole('link', { name: 'Trace this batch' }).getAttribute('href');
+    // Saved, the form closes (no second entry one click away) and the verdict stays on the line.
+    await page.getByText(/Batch recorded/).waitFor();
+    expect(await form.count()).toBe(0);
+    const traceHref = await page.getByRole('link', { name: 'Trace this batch' }).getAttribute('href');
     recordedBatchId = traceHref?.split('/').pop();
     const after = await getJson<BatchListResponse>(page, `/api/roastery/days/${date}/batches`);
     expect(after.items).toHaveLength(before.items.length + 1);

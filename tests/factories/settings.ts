@@ -4,6 +4,19 @@ import { defaultShopSettings, type ShopSettings } from '@shared/schemas/settings
 import { saveShopSettings } from '../../server/modules/settings/settings.repo';
 import { getTestDb } from '../setup/test-db';
 
+/** An invented place of business for the bag labels (the town and street exist nowhere). */
+export const testPlaceOfBusiness = {
+  line1: '14 Kettle Lane',
+  line2: null,
+  city: 'Greyhaven',
+  region: 'WA',
+  postalCode: '98201',
+  country: 'US',
+} satisfies NonNullable<ShopSettings['placeOfBusiness']>;
+
+/** A full `PUT /api/roastery/settings` body: the product defaults and the invented place of business. */
+export const testShopSettingsBody = { ...defaultShopSettings, placeOfBusiness: testPlaceOfBusiness } satisfies ShopSettings;
+
 /** The product defaults with the test's own changes, saved as the shop's settings. */
 export async function saveTestShopSettings(changes: Partial<ShopSettings> = {}): Promise<ShopSettings> {
   const settings = { ...defaultShopSettings, ...changes };

@@ -216,7 +216,13 @@ const badParams = [
 
 type Caller = 'visitor' | 'customer' | 'staff' | 'owner';
 const callerFor = (access: Access): Caller =>
-  access === 'public' || access === 'signed-request' ? 'visitor' : access === 'staff' ? 'staff' : access === 'owner' ? 'owner' : 'customer';
+  access === 'public' || access === 'signed-request'
+    ? 'visitor'
+    : access === 'staff' || access === 'packing'
+      ? 'staff'
+      : access === 'owner'
+        ? 'owner'
+        : 'customer';
 
 const people = {} as Record<Exclude<Caller, 'visitor'>, TestUser>;
 const agents = new Map<Caller, ReturnType<typeof request.agent>>();

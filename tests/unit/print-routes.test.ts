@@ -21,7 +21,7 @@ describe('npm run routes', () => {
     expect(row('GET', '/api/orders/:id')).toMatchObject({ access: 'customer', file: 'server/modules/orders/orders.routes.ts' });
     expect(row('POST', '/api/orders/:id/refund')).toMatchObject({ access: 'owner', file: 'server/modules/orders/orders.routes.ts' });
     expect(row('GET', '/api/roastery/days/:date/roast-list')).toMatchObject({ access: 'staff', file: 'server/modules/roastery/roastery.routes.ts' });
-    expect(row('GET', '/api/roastery/days/:date/pack-list')).toMatchObject({ access: 'staff', file: 'server/modules/packing/packing.routes.ts' });
+    expect(row('GET', '/api/roastery/days/:date/pack-list')).toMatchObject({ access: 'packer', file: 'server/modules/packing/packing.routes.ts' });
     // A guard on the whole router (`router.use(requireUser)`) counts for every route after it.
     expect(row('PATCH', '/api/account/profile')).toMatchObject({ access: 'customer', file: 'server/modules/account/account.routes.ts' });
     expect(row('GET', '/api/owner/team')).toMatchObject({ access: 'owner', file: 'server/modules/team/team.routes.ts' });
@@ -30,7 +30,7 @@ describe('npm run routes', () => {
   it('gives every route an access rule and a file under server/modules', () => {
     expect(routes.length).toBeGreaterThan(50);
     for (const route of routes) {
-      expect(['public', 'customer', 'staff', 'owner']).toContain(route.access);
+      expect(['public', 'customer', 'packer', 'staff', 'owner']).toContain(route.access);
       expect(route.file).toMatch(/^server\/modules\/[a-z-]+\/[a-z-]+\.routes\.ts$/);
     }
   });

@@ -60,6 +60,8 @@ export const shopSettings = pgTable(
     holdOverWeekend: boolean('hold_over_weekend').notNull().default(defaultShopSettings.holdOverWeekend),
     renewalReminderDays: integer('renewal_reminder_days').notNull().default(defaultShopSettings.renewalReminderDays),
     shipping: jsonb('shipping').$type<ShopSettings['shipping']>().notNull().default(defaultShopSettings.shipping),
+    /** The street address bag labels print under the shop's name; null until the owner enters it. */
+    placeOfBusiness: jsonb('place_of_business').$type<ShopSettings['placeOfBusiness']>(),
     updatedAt: instant('updated_at')
       .notNull()
       .defaultNow()

@@ -12,15 +12,18 @@ export const demoShop = {
   town: 'Wrenfield',
   state: 'CO',
   timeZone: 'America/Denver',
+  /** The roastery's street address, printed on every bag label (invented: Wrenfield does not exist). */
+  placeOfBusiness: { line1: '210 Foundry Row', line2: 'Unit 4', city: 'Wrenfield', region: 'CO', postalCode: '80999', country: 'US' },
 } as const;
 
 export type DemoPerson = { email: string; name: string; role: Role; joinedDaysAgo: number };
 
-/** Invented team: one owner, two staff. */
+/** Invented team: one owner, two staff, one packer. */
 export const demoTeam: DemoPerson[] = [
   { email: 'owner@wrenfield.test', name: 'Maren Atwood', role: 'owner', joinedDaysAgo: 720 },
   { email: 'roaster@wrenfield.test', name: 'Dario Quist', role: 'staff', joinedDaysAgo: 540 },
   { email: 'packer@wrenfield.test', name: 'Lena Porter', role: 'staff', joinedDaysAgo: 210 },
+  { email: 'dispatch@wrenfield.test', name: 'Ines Varga', role: 'packer', joinedDaysAgo: 45 },
 ];
 
 /** The demo customer: a home roaster who also subscribes. */

@@ -25,7 +25,8 @@ export { buildDemoScenario, type DemoScenario } from './scenario';
 export const demoSignIns: { role: Role; label: string; email: string; password: string }[] = [
   { role: 'owner', label: 'Owner (Maren Atwood)', email: 'owner@wrenfield.test', password: DEMO_PASSWORD },
   { role: 'staff', label: 'Roaster (Dario Quist)', email: 'roaster@wrenfield.test', password: DEMO_PASSWORD },
-  { role: 'staff', label: 'Packer (Lena Porter)', email: 'packer@wrenfield.test', password: DEMO_PASSWORD },
+  { role: 'staff', label: 'Staff, packing and stock (Lena Porter)', email: 'packer@wrenfield.test', password: DEMO_PASSWORD },
+  { role: 'packer', label: 'Packer (Ines Varga)', email: 'dispatch@wrenfield.test', password: DEMO_PASSWORD },
   { role: 'customer', label: 'Home roaster and subscriber (Robin Alder)', email: DEMO_CUSTOMER_EMAIL, password: DEMO_PASSWORD },
 ];
 

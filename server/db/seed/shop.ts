@@ -12,6 +12,7 @@ export function demoShopSettings(clock: SeedClock) {
     id: 1,
     shopName: demoShop.shopName,
     timeZone: demoShop.timeZone,
+    placeOfBusiness: demoShop.placeOfBusiness,
     roastWeekdays: [2, 4],
     cutoffTime: '12:00',
     cutoffDaysBefore: 1,

@@ -7,12 +7,13 @@ const DAY_MS = 24 * HOUR_MS;
 /**
  * How long a session lives (DEVELOPERS.md decision log has the reasons). Customers order every
  * few weeks and hold only their own data: 7 days idle, 30 days at most (NIST SP 800-63B AAL1).
- * Staff and owner reach every customer's orders and addresses, and the owner refunds and runs
+ * Packers, staff and owner reach every customer's orders and addresses, and the owner refunds and runs
  * the team: 30 minutes idle, 12 hours at most, about one roast day (NIST SP 800-63B AAL2).
  * Read with the role the account has now, so a promotion shortens a live session at once.
  */
 export const sessionTimeouts: Record<Role, { idleMs: number; absoluteMs: number }> = {
   customer: { idleMs: 7 * DAY_MS, absoluteMs: 30 * DAY_MS },
+  packer: { idleMs: 30 * MINUTE_MS, absoluteMs: 12 * HOUR_MS },
   staff: { idleMs: 30 * MINUTE_MS, absoluteMs: 12 * HOUR_MS },
   owner: { idleMs: 30 * MINUTE_MS, absoluteMs: 12 * HOUR_MS },
 };

@@ -10,7 +10,7 @@ import {
 } from '@shared/schemas/orders';
 import { refundOrderBodySchema, refundRequestHeadersSchema, type RefundResponse } from '@shared/schemas/packing';
 import { sendDownload } from '../../lib/download';
-import { requireRole, requireUser } from '../../middleware/require-role';
+import { packingRoles, requireRole, requireUser } from '../../middleware/require-role';
 import type { OrderDeskService } from './order-desk.service';
 import type { OrdersService } from './orders.service';
 import type { RefundsService } from './refunds.service';
@@ -70,10 +70,10 @@ export function ordersRoutes(orders: OrdersService, refunds: RefundsService, des
   return router;
 }
 
-/** The orders list as a CSV file (staff), mounted at `/api/orders.csv` (a sibling of `/orders`, not under it). */
+/** The orders list as a CSV file (packers, staff and the owner), mounted at `/api/orders.csv` (a sibling of `/orders`, not under it). */
 export function ordersCsvRoutes(orders: OrdersService): Router {
   const router = Router();
-  router.get('/', requireRole('staff', 'owner'), async (req, res) => {
+  router.get('/', requireRole(...packingRoles), async (req, res) => {
     sendDownload(res, 'restday-orders.csv', await orders.csv(req.user!, orderListQuerySchema.parse(req.query)));
   });
   return router;

@@ -3,10 +3,11 @@ import { arrivalDate } from '@shared/domain/roast-schedule';
 import { addDays, instantAt } from '@shared/domain/shop-time';
 import { orderCsvColumns, type OrderDetail, type OrderListQuery, type OrderListResponse, type OrderSummary } from '@shared/schemas/orders';
 import { AppError } from '../../lib/app-error';
-import type { SessionUser } from '../../middleware/require-role';
+import { packingRoles, type SessionUser } from '../../middleware/require-role';
 import type { OrderFilters, OrderRow, OrdersRepo } from './orders.repo';
 
-const isStaff = (user: SessionUser) => user.role === 'staff' || user.role === 'owner';
+/** The team reads every order (a packer too: packing starts from the order); a customer reads their own. */
+const readsEveryOrder = (user: SessionUser) => packingRoles.includes(user.role);
 
 /** What a list row and an order's detail both say. */
 function basicsOf(row: OrderRow) {
@@ -35,7 +36,7 @@ export function createOrdersService(repo: OrdersRepo) {
   async function filtersOf(user: SessionUser, query: OrderListQuery): Promise<OrderFilters> {
     const timeZone = query.from || query.to ? ((await repo.shopTimeZone()) ?? 'UTC') : 'UTC';
     return {
-      ...(isStaff(user) ? {} : { userId: user.id, hideDiscarded: true }),
+      ...(readsEveryOrder(user) ? {} : { userId: user.id, hideDiscarded: true }),
       text: query.q,
       status: query.status,
       kind: query.kind,
@@ -53,7 +54,7 @@ export function createOrdersService(repo: OrdersRepo) {
     },
 
     async get(user: SessionUser, orderId: string): Promise<OrderDetail> {
-      const order = await repo.find(orderId, isStaff(user) ? undefined : user.id);
+      const order = await repo.find(orderId, readsEveryOrder(user) ? undefined : user.id);
       if (!order) throw AppError.notFound('Order');
       const { shippingAddress } = order;
       const expectedArrival = order.shipDate ? arrivalDate(order.shipDate, await repo.transitDays()) : null;
@@ -76,7 +77,7 @@ export function createOrdersService(repo: OrdersRepo) {
         paidAt: order.paidAt?.toISOString() ?? null,
         shippedAt: order.shippedAt?.toISOString() ?? null,
         cancelledAt: order.cancelledAt?.toISOString() ?? null,
-        ...(isStaff(user) ? { staffNote: order.staffNote } : {}),
+        ...(readsEveryOrder(user) ? { staffNote: order.staffNote } : {}),
       };
     },
 

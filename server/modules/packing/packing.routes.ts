@@ -1,52 +1,60 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { bulkShipBodySchema, packDayParamsSchema, shipOrderBodySchema, type PackListResponse, type PackOrder } from '@shared/schemas/packing';
+import {
+  bulkShipBodySchema,
+  labelsPdfQuerySchema,
+  packDayParamsSchema,
+  shipOrderBodySchema,
+  type PackListResponse,
+  type PackOrder,
+} from '@shared/schemas/packing';
 import { sendDownload } from '../../lib/download';
-import { requireRole } from '../../middleware/require-role';
+import { packingRoles, requireRole } from '../../middleware/require-role';
 import type { PackingService } from './packing.service';
 
 const orderParams = z.object({ id: z.uuid('No such order.') });
 
-const staff = requireRole('staff', 'owner');
+const packers = requireRole(...packingRoles);
 
 /**
- * A roast day's Pack List and its labels (staff), mounted at `/api/roastery/days` beside the Roast
+ * A roast day's Pack List and its labels (packers, staff and the owner), mounted at `/api/roastery/days` beside the Roast
  * List's routes, so each route carries its own guard.
  */
 export function packDayRoutes(packing: PackingService): Router {
   const router = Router();
 
-  router.get('/:date/pack-list', staff, async (req, res) => {
+  router.get('/:date/pack-list', packers, async (req, res) => {
     const { date } = packDayParamsSchema.parse(req.params);
     res.json((await packing.packList(date)) satisfies PackListResponse);
   });
 
-  router.post('/:date/ship', staff, async (req, res) => {
+  router.post('/:date/ship', packers, async (req, res) => {
     const { date } = packDayParamsSchema.parse(req.params);
     res.json((await packing.shipDay(date, bulkShipBodySchema.parse(req.body))) satisfies PackListResponse);
   });
 
-  router.get('/:date/labels.pdf', staff, async (req, res) => {
+  router.get('/:date/labels.pdf', packers, async (req, res) => {
     const { date } = packDayParamsSchema.parse(req.params);
-    sendDownload(res, `restday-labels-${date}.pdf`, await packing.labelsPdf(date));
+    const { stock } = labelsPdfQuerySchema.parse(req.query);
+    sendDownload(res, `restday-labels-${date}${stock === 'single' ? '' : `-${stock}`}.pdf`, await packing.labelsPdf(date, stock));
   });
 
   return router;
 }
 
 /**
- * Packing and shipping an order (staff), mounted at `/api/orders` beside the orders module's own
+ * Packing and shipping an order (packers, staff and the owner), mounted at `/api/orders` beside the orders module's own
  * routes, so each route carries its own guard.
  */
 export function packOrderRoutes(packing: PackingService): Router {
   const router = Router();
 
-  router.post('/:id/pack', staff, async (req, res) => {
+  router.post('/:id/pack', packers, async (req, res) => {
     const { id } = orderParams.parse(req.params);
     res.json((await packing.pack(id)) satisfies PackOrder);
   });
 
-  router.post('/:id/ship', staff, async (req, res) => {
+  router.post('/:id/ship', packers, async (req, res) => {
     const { id } = orderParams.parse(req.params);
     res.json((await packing.ship(id, shipOrderBodySchema.parse(req.body))) satisfies PackOrder);
   });

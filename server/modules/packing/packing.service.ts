@@ -1,3 +1,4 @@
+import { labelStocks, type LabelStockId } from '@shared/domain/label-stock';
 import { bagNetWeightLabel } from '@shared/domain/labels';
 import { BagTooHeavyForShipping, planShipping, type ShippingSettings } from '@shared/domain/parcel-packing';
 import { arrivalDate } from '@shared/domain/roast-schedule';
@@ -189,10 +190,21 @@ export function createPackingService({ repo, clock }: PackingDeps) {
       return { date, orders: orders.map((order) => packOrderOf(order, shipping)) };
     },
 
-    /** One label per bag of the day's Pack List, as a PDF. */
-    async labelsPdf(date: string): Promise<Buffer> {
-      const [shopName, orders, shipping] = await Promise.all([repo.shopName(), repo.packList(date), repo.shippingSettings()]);
-      return renderLabelsPdf({ shopName, date, orders: orders.map((order) => packOrderOf(order, shipping)) });
+    /**
+     * One label per bag of the day's Pack List, as a PDF on the chosen label stock. Refused until the
+     * shop's place of business is set: a packed food label must name where it was packed.
+     */
+    async labelsPdf(date: string, stock: LabelStockId): Promise<Buffer> {
+      const [shopName, settings, orders] = await Promise.all([repo.shopName(), repo.shopSettings(), repo.packList(date)]);
+      if (!settings.placeOfBusiness) {
+        throw AppError.conflict('place_of_business_missing', 'Bag labels print the shop’s postal address: the owner enters it in Settings first.');
+      }
+      return renderLabelsPdf({
+        maker: { shopName, placeOfBusiness: settings.placeOfBusiness },
+        date,
+        orders: orders.map((order) => packOrderOf(order, settings.shipping)),
+        stock: labelStocks[stock],
+      });
     },
 
     /**

@@ -1,7 +1,8 @@
 import { stringify } from 'csv-stringify/sync';
 import PDFDocument from 'pdfkit';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
-import type { RoastListResponse } from '@shared/schemas/roastery';
+import { formatShopInstant } from '@shared/domain/shop-clock';
+import type { Batch, RoastListResponse } from '@shared/schemas/roastery';
 
 /** The CSV download's columns: one row per lot and level, with its lot's pull-list figures beside it. */
 export const roastListCsvColumns = [
@@ -98,7 +99,13 @@ interface Column {
  * The Roast List as a black-and-white PDF. Margins of three quarters of an inch and a text width
  * that fits both Letter and A4, so the same layout prints on either.
  */
-export function roastListPdf(list: RoastListResponse, shopName: string, paper: Paper): Promise<Buffer> {
+export function roastListPdf(
+  list: RoastListResponse,
+  shop: { shopName: string; timeZone: string },
+  paper: Paper,
+  recordedBatches: readonly Batch[],
+): Promise<Buffer> {
+  const { shopName } = shop;
   const doc = new PDFDocument({
     size: paperSizes[paper],
     margins: { top: 54, bottom: 54, left: 54, right: 54 },
@@ -182,15 +189,16 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
   } else {
     table(
       [
-        { title: 'Lot', width: 0.2 },
-        { title: 'Level', width: 0.09 },
-        { title: 'Bags', width: 0.06, align: 'right' },
-        { title: 'Roasted', width: 0.09, align: 'right' },
-        { title: 'Loss', width: 0.1, align: 'right' },
-        { title: 'Green', width: 0.09, align: 'right' },
-        { title: 'Batches (green each)', width: 0.13 },
-        { title: 'Recorded', width: 0.12 },
-        { title: 'Still to roast', width: 0.12 },
+        { title: 'Lot', width: 0.14 },
+        { title: 'Level', width: 0.08 },
+        { title: 'Bags', width: 0.05, align: 'right' },
+        { title: 'Roasted', width: 0.08, align: 'right' },
+        { title: 'Loss', width: 0.08, align: 'right' },
+        { title: 'Green', width: 0.08, align: 'right' },
+        { title: 'Batches (green each)', width: 0.1 },
+        { title: 'Recorded', width: 0.15 },
+        { title: 'Still to roast', width: 0.09 },
+        { title: 'Actual in / out (write in)', width: 0.15 },
       ],
       list.lines.map((line) => [
         `${line.lotCode}\n${line.lotName}`,
@@ -202,11 +210,39 @@ export function roastListPdf(list: RoastListResponse, shopName: string, paper: P
         line.batches.map((batch) => grams(batch.greenGrams)).join(', '),
         line.recorded.batches === 0 ? 'None' : `${line.recorded.batches}: ${grams(line.recorded.greenGrams)} in, ${grams(line.recorded.roastedGrams)} out`,
         line.toRoast.roastedGrams === 0 ? 'Done' : line.toRoast.batches.map((batch) => grams(batch.greenGrams)).join(', '),
+        // Room to write each batch's weights by the roaster, one pair of blanks per batch still to roast.
+        line.toRoast.batches.map(() => 'in ______ out ______').join('\n\n') || '-',
       ]),
     );
   }
 
-  heading('Pull list');
+  heading('Batches recorded');
+  if (recordedBatches.length === 0) {
+    doc.font('Helvetica').fontSize(10).text('No batches recorded for this day yet.', { width });
+  } else {
+    table(
+      [
+        { title: 'Recorded', width: 0.15 },
+        { title: 'Lot', width: 0.25 },
+        { title: 'Level', width: 0.12 },
+        { title: 'Green in', width: 0.12, align: 'right' },
+        { title: 'Roasted out', width: 0.12, align: 'right' },
+        { title: 'Loss', width: 0.1, align: 'right' },
+        { title: 'Operator', width: 0.14 },
+      ],
+      recordedBatches.map((batch) => [
+        formatShopInstant(batch.createdAt, shop.timeZone, 'time'),
+        `${batch.lotCode}\n${batch.lotName}`,
+        roastLevelLabels[batch.roastLevel],
+        grams(batch.greenGramsIn),
+        grams(batch.roastedGramsOut),
+        `${batch.lossPct} %${batch.withinExpected ? '' : ' (outside expected)'}`,
+        batch.operatorName ?? '',
+      ]),
+    );
+  }
+
+  heading('Pull list (still to pull)');
   if (list.pull.length > 0) {
     table(
       [

@@ -11,9 +11,9 @@ import {
   type CalendarResponse,
   type RoastListResponse,
 } from '@shared/schemas/roastery';
-import { shopSettingsSchema, type ShopSettings } from '@shared/schemas/settings';
+import { shopSettingsUpdateSchema, type ShopSettings } from '@shared/schemas/settings';
 import { sendDownload } from '../../lib/download';
-import { requireRole } from '../../middleware/require-role';
+import { packingRoles, requireRole } from '../../middleware/require-role';
 import type { BatchesService } from './batches.service';
 import type { CalendarService } from './calendar.service';
 import { paperSizes, roastListCsv, roastListPdf } from './roast-list-documents';
@@ -39,12 +39,13 @@ export function roasteryRoutes(services: RoasteryServices): Router {
   const router = Router();
   const noStore = { 'Cache-Control': 'no-store' };
 
-  router.get('/settings', staffOnly, async (_req, res) => {
+  // The whole team reads them (a packer's pages need the shop's time zone); only the owner changes them.
+  router.get('/settings', requireRole(...packingRoles), async (_req, res) => {
     res.set(noStore).json((await services.settings.get()) satisfies ShopSettings);
   });
 
   router.put('/settings', ownerOnly, async (req, res) => {
-    const settings = shopSettingsSchema.parse(req.body);
+    const settings = shopSettingsUpdateSchema.parse(req.body);
     res.json((await services.settings.replace(settings, { id: req.user!.id, ip: req.ip ?? null })) satisfies ShopSettings);
   });
 
@@ -71,8 +72,12 @@ export function roasteryRoutes(services: RoasteryServices): Router {
   router.get('/days/:date/roast-list.pdf', staffOnly, async (req, res) => {
     const { date } = roastDayParamsSchema.parse(req.params);
     const { paper } = paperQuerySchema.parse(req.query);
-    const { shopName, list } = await services.roastList.roastList(date);
-    sendDownload(res, `roast-list-${date}.pdf`, await roastListPdf(list, shopName, paper));
+    const [{ shopName, list }, settings, recorded] = await Promise.all([
+      services.roastList.roastList(date),
+      services.settings.get(),
+      services.batches.onDay(date),
+    ]);
+    sendDownload(res, `roast-list-${date}.pdf`, await roastListPdf(list, { shopName, timeZone: settings.timeZone }, paper, recorded.items));
   });
 
   router.post('/batches', staffOnly, async (req, res) => {

@@ -44,6 +44,7 @@ function toSettings(row: SettingsRow): ShopSettings {
     subscriptionDiscountPct: row.subscriptionDiscountPct,
     renewalReminderDays: row.renewalReminderDays,
     shipping: row.shipping,
+    placeOfBusiness: row.placeOfBusiness ?? null,
   };
 }
 
@@ -74,6 +75,7 @@ function toColumns(settings: ShopSettings) {
     subscriptionDiscountPct: settings.subscriptionDiscountPct,
     renewalReminderDays: settings.renewalReminderDays,
     shipping: settings.shipping,
+    placeOfBusiness: settings.placeOfBusiness,
   };
 }
 

@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, gt, inArray, isNull } from 'drizzle-orm';
-import type { TeamRole } from '@shared/schemas/team';
+import { teamRoles, type TeamRole } from '@shared/schemas/team';
 import type { DbOrTx, Tx } from '../../db/client';
 import { invitations, users } from '../../db/schema/index';
 
@@ -18,12 +18,12 @@ export function createTeamRepo(db: DbOrTx) {
       return db.transaction(work);
     },
 
-    /** Staff and owner accounts, owners first. */
+    /** The team's accounts (packers, staff, owners), owners first. */
     listMembers() {
       return db
         .select(memberColumns)
         .from(users)
-        .where(inArray(users.role, ['staff', 'owner']))
+        .where(inArray(users.role, [...teamRoles]))
         .orderBy(desc(users.role), asc(users.name));
     },
 

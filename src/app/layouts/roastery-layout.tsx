@@ -1,35 +1,42 @@
 import clsx from 'clsx';
+import { useQuery } from '@tanstack/react-query';
 import { ArrowLeft } from 'lucide-react';
-import { Link, NavLink, Outlet } from 'react-router-dom';
+import { Link, matchPath, NavLink, Outlet, useLocation } from 'react-router-dom';
+import type { Role } from '@shared/domain/vocabulary';
 import { RestdayMark } from '@/components/brand/restday-mark';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/features/auth/api/get-current-user';
 import { AccountMenu } from '@/features/auth/components/account-menu';
 import { RequireRole } from '@/features/auth/components/require-role';
 import { signedInLoader } from '@/features/auth/utils/require-user';
-import { ownerRoles, roasteryRoles } from '@/features/auth/utils/roles';
+import { getShopSettingsQueryOptions } from '@/features/shop-settings/api/get-shop-settings';
+import { ShopTimeZoneProvider } from '@/lib/shop-clock';
+import { ownerRoles, roasteryRoles, staffRoles } from '@/features/auth/utils/roles';
 import { NavigationProgress } from './navigation-progress';
 import { SkipLink } from './skip-link';
 
 /** A visitor is sent to sign in first; the page then shows a customer why it is closed to them. */
 export const clientLoader = signedInLoader;
 
-/** Pages only the owner may open; the rest of the nav is for all staff. */
-const ownerNav = [
-  { to: paths.roastery.ledger.getHref(), label: 'Ledger', end: false },
-  { to: paths.roastery.team.getHref(), label: 'Team', end: false },
-  { to: paths.roastery.settings.getHref(), label: 'Settings', end: false },
+type NavItem = { to: string; label: string; end: boolean; roles: readonly Role[] };
+
+/** The Roastery's places, each shown to the roles whose work it is (the server refuses the rest). */
+const roasteryNav: NavItem[] = [
+  { to: paths.roastery.overview.getHref(), label: 'Today', end: true, roles: staffRoles },
+  { to: paths.roastery.daySheetToday.getHref(), label: 'Day Sheet', end: false, roles: roasteryRoles },
+  { to: paths.roastery.calendar.getHref(), label: 'Roast Calendar', end: false, roles: staffRoles },
+  { to: paths.roastery.orders.getHref(), label: 'Orders', end: false, roles: roasteryRoles },
+  { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false, roles: staffRoles },
+  { to: paths.roastery.subscribers.getHref(), label: 'Subscribers', end: false, roles: staffRoles },
+  { to: paths.roastery.rotation.getHref(), label: 'Rotation', end: false, roles: staffRoles },
+  { to: paths.roastery.ledger.getHref(), label: 'Ledger', end: false, roles: ownerRoles },
+  { to: paths.roastery.team.getHref(), label: 'Team', end: false, roles: ownerRoles },
+  { to: paths.roastery.settings.getHref(), label: 'Settings', end: false, roles: ownerRoles },
 ];
 
-const roasteryNav = [
-  { to: paths.roastery.overview.getHref(), label: 'Today', end: true },
-  { to: paths.roastery.daySheetToday.getHref(), label: 'Day Sheet', end: false },
-  { to: paths.roastery.calendar.getHref(), label: 'Roast Calendar', end: false },
-  { to: paths.roastery.orders.getHref(), label: 'Orders', end: false },
-  { to: paths.roastery.greenStock.getHref(), label: 'Green Stock', end: false },
-  { to: paths.roastery.subscribers.getHref(), label: 'Subscribers', end: false },
-  { to: paths.roastery.rotation.getHref(), label: 'Rotation', end: false },
-];
+/** The pages a packer works on: the Day Sheet (its Pack List) and the orders. Every other Roastery page is for staff. */
+const packerPagePaths = [paths.roastery.daySheetToday.path, paths.roastery.daySheet.path, paths.roastery.orders.path, paths.roastery.order.path];
+const isPackerPage = (pathname: string) => packerPagePaths.some((path) => matchPath(path, pathname) !== null);
 
 function navLinkStyles({ isActive }: { isActive: boolean }): string {
   return clsx(
@@ -41,7 +48,10 @@ function navLinkStyles({ isActive }: { isActive: boolean }): string {
 /** The staff's Roastery: its own dark header, so nobody mistakes it for the shop. */
 export default function RoasteryLayout() {
   const role = useCurrentUser().data?.role;
-  const nav = role && ownerRoles.includes(role) ? [...roasteryNav, ...ownerNav] : roasteryNav;
+  const nav = role ? roasteryNav.filter((item) => item.roles.includes(role)) : [];
+  const { pathname } = useLocation();
+  // One clock on every staff page: the shop's time zone, from the settings the whole team reads.
+  const timeZone = useQuery({ ...getShopSettingsQueryOptions(), enabled: role !== undefined && roasteryRoles.includes(role) }).data?.timeZone;
   return (
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
@@ -80,13 +90,19 @@ export default function RoasteryLayout() {
 
       <main id="main" className="mx-auto w-full max-w-page flex-1 px-4 py-8 sm:px-6 sm:py-10">
         <RequireRole
-          allowed={roasteryRoles}
-          notAllowed={{
-            title: 'The Roastery is for the shop’s team',
-            reason: 'It is where staff plan roast days and pack orders. Your orders and Deliveries are in your account.',
-          }}
+          allowed={isPackerPage(pathname) ? roasteryRoles : staffRoles}
+          notAllowed={
+            role === 'packer'
+              ? { title: 'This page is for the roasting staff', reason: 'Your work is on the Day Sheet’s Pack List and in Orders, in the menu above.' }
+              : {
+                  title: 'The Roastery is for the shop’s team',
+                  reason: 'It is where staff plan roast days and pack orders. Your orders and Deliveries are in your account.',
+                }
+          }
         >
-          <Outlet />
+          <ShopTimeZoneProvider value={timeZone}>
+            <Outlet />
+          </ShopTimeZoneProvider>
         </RequireRole>
       </main>
     </div>

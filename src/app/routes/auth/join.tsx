@@ -8,7 +8,7 @@ import { AcceptInvitationForm } from '@/features/auth/components/accept-invitati
 import { AuthPanel } from '@/features/auth/components/auth-panel';
 import { ApiError } from '@/lib/api-client';
 
-const roleWords = { staff: 'a member of staff', owner: 'an owner' } as const;
+const roleWords = { packer: 'a packer', staff: 'a member of staff', owner: 'an owner' } as const;
 
 function UnusableLink({ title, children }: { title: string; children: string }) {
   return (

@@ -5,6 +5,7 @@ import { addDays, localDateOf } from '@shared/domain/shop-time';
 import type { PackListResponse, PackOrder } from '@shared/schemas/packing';
 import type { Batch, BatchCreated, RoastListResponse } from '@shared/schemas/roastery';
 import { defaultShopSettings } from '@shared/schemas/settings';
+import { axeViolations } from '@/testing/axe';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 beforeEach(() => window.localStorage.clear());
@@ -65,6 +66,18 @@ const roastList: RoastListResponse = {
   ],
 };
 
+/** The same day once the Test Ridge batch is recorded: that line is done, and only Invented Valley is left to pull. */
+const roastListAfterBatch: RoastListResponse = {
+  ...roastList,
+  lines: roastList.lines.map((line) =>
+    line.lotCode === 'RD-T01'
+      ? { ...line, recorded: { batches: 1, greenGrams: 4_635, roastedGrams: 3_940 }, toRoast: { roastedGrams: 0, greenGrams: 0, batches: [] } }
+      : line,
+  ),
+  pull: roastList.pull.filter((pull) => pull.lotCode !== 'RD-T01'),
+  totals: { ...roastList.totals, toRoast: { roastedGrams: 1_816, greenGrams: 2_126, batches: 1 } },
+};
+
 const recordedBatch: Batch = {
   id: '5a1b2c3d-4e5f-4a6b-8c7d-9e0f1a2b3c4d',
   roastDate: day,
@@ -119,16 +132,16 @@ function packOrder(overrides: Partial<PackOrder> = {}): PackOrder {
 }
 
 /** A small in-memory Roastery server for one day. */
-function daySheetServer({ batchAnswer }: { batchAnswer?: () => Response } = {}) {
+function daySheetServer({ batchAnswer, date = day }: { batchAnswer?: () => Response; date?: string } = {}) {
   const batches: Batch[] = [];
   let order = packOrder();
   return stubFetch((url, init) => {
     const method = init?.method ?? 'GET';
     const path = url.pathname;
     if (path === '/api/roastery/settings') return jsonResponse({ ...defaultShopSettings, timeZone: 'America/Denver' });
-    if (path === `/api/roastery/days/${day}/roast-list`) return jsonResponse(roastList);
-    if (path === `/api/roastery/days/${day}/batches`) return jsonResponse({ items: batches });
-    if (path === `/api/roastery/days/${day}/pack-list`) return jsonResponse({ date: day, orders: [order] } satisfies PackListResponse);
+    if (path === `/api/roastery/days/${date}/roast-list`) return jsonResponse({ ...(batches.length > 0 ? roastListAfterBatch : roastList), date });
+    if (path === `/api/roastery/days/${date}/batches`) return jsonResponse({ items: batches });
+    if (path === `/api/roastery/days/${date}/pack-list`) return jsonResponse({ date, orders: [order] } satisfies PackListResponse);
     if (path === '/api/roastery/batches' && method === 'POST') {
       if (batchAnswer) return batchAnswer();
       batches.push(recordedBatch);
@@ -211,7 +224,12 @@ describe('Day Sheet → Roast List', () => {
     expect(within(form).getByRole('status').textContent).toContain('development time ratio 21.28 %');
 
     fireEvent.click(within(form).getByRole('button', { name: 'Save batch' }));
-    expect(await within(form).findByText(/Batch recorded\. Loss 14\.99 % is within the expected 14\.0 %–16\.0 % for Medium\./)).toBeTruthy();
+    // Saved, the form closes at once (no second entry of the same numbers one click away) and the verdict stays.
+    expect(await screen.findByText(/Batch recorded\. Loss 14\.99 % is within the expected 14\.0 %–16\.0 % for Medium\./)).toBeTruthy();
+    expect(screen.queryByRole('form', { name: 'Record a batch of Test Ridge Washed, Medium' })).toBeNull();
+    expect(record.getAttribute('aria-expanded')).toBe('false');
+    await waitFor(() => expect(document.activeElement).toBe(record));
+    expect(sentRequests(fetchMock, 'POST', '/api/roastery/batches')).toHaveLength(1);
     expect(sentRequests(fetchMock, 'POST', '/api/roastery/batches')[0]?.body).toEqual({
       roastDate: day,
       lotCode: 'RD-T01',
@@ -221,14 +239,55 @@ describe('Day Sheet → Roast List', () => {
       totalSeconds: 705,
       firstCrackSeconds: 555,
     });
-    expect(within(form).getByRole('link', { name: 'Trace this batch' }).getAttribute('href')).toBe(`/roastery/batches/${recordedBatch.id}`);
+    expect(screen.getByRole('link', { name: 'Trace this batch' }).getAttribute('href')).toBe(`/roastery/batches/${recordedBatch.id}`);
+
+    // The pull list now shows only what is still to pull.
+    const pull = screen.getByRole('region', { name: 'Pull list' });
+    await waitFor(() => expect(within(pull).queryByRole('row', { name: /Test Ridge Washed/ })).toBeNull());
+    expect(within(pull).getByRole('row', { name: /Invented Valley Natural/ }).textContent).toContain('2,126 g');
+    expect(await axeViolations()).toEqual([]);
 
     const recorded = await screen.findByRole('table', { name: 'Batches recorded for the day' });
     const row = within(recorded).getByRole('row', { name: /Test Ridge Washed/ });
     expect(row.textContent).toContain('Within expected');
     expect(row.textContent).toContain('11:45 total');
-    // Recorded at 15:20 UTC: 8:20 in the morning in Denver (UTC−7 in December; IANA tz database).
-    await waitFor(() => expect(row.textContent).toContain('8:20 AM'));
+    // Recorded at 15:20 UTC: 8:20 in the morning in Denver (UTC−7 in December, MST; IANA tz database).
+    await waitFor(() => expect(row.textContent).toContain('8:20 AM MST'));
+  });
+
+  it('asks before recording a batch for a roast day still ahead, and records nothing when told to go back', async () => {
+    const later = addDays(localDateOf(new Date(), 'America/Denver'), 7);
+    const fetchMock = daySheetServer({ date: later });
+    renderApp(`/roastery/days/${later}`, { session: staff });
+
+    fireEvent.click(await screen.findByRole('button', { name: 'Record batch of Test Ridge Washed, Medium' }));
+    const form = screen.getByRole('form', { name: 'Record a batch of Test Ridge Washed, Medium' });
+    enterValue(within(form).getByLabelText('Roasted out (g)'), '3940');
+    fireEvent.click(within(form).getByRole('button', { name: 'Save batch' }));
+
+    const dialog = await screen.findByRole('dialog', { name: /^Record this batch for / });
+    expect(dialog.textContent).toContain('That roast day is still ahead');
+    expect(await axeViolations()).toEqual([]);
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Go back' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
+    expect(sentRequests(fetchMock, 'POST', '/api/roastery/batches')).toHaveLength(0);
+
+    fireEvent.click(within(form).getByRole('button', { name: 'Save batch' }));
+    fireEvent.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Record it for that day' }));
+    expect(await screen.findByText(/Batch recorded\./)).toBeTruthy();
+    expect(sentRequests(fetchMock, 'POST', '/api/roastery/batches')[0]?.body).toMatchObject({ roastDate: later, roastedGramsOut: 3940 });
+  });
+
+  it('prints a column to write each batch’s actual weights by hand', async () => {
+    daySheetServer();
+    renderApp(`/roastery/days/${day}`, { session: staff });
+
+    const lines = await screen.findByRole('region', { name: 'By lot and roast level' });
+    const writeIn = within(lines).getByRole('columnheader', { name: 'Actual weights, written in by hand' });
+    // Shown on paper only.
+    expect(writeIn.className).toContain('hidden');
+    expect(writeIn.className).toContain('print:table-cell');
+    expect(within(lines).getByRole('row', { name: /Test Ridge Washed/ }).textContent).toContain('in ___');
   });
 
   it('refuses a roasted weight above the green before sending anything, and shows a server refusal on its field', async () => {

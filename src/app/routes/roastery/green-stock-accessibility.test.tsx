@@ -1,8 +1,8 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, within } from '@testing-library/react';
-import axe from 'axe-core';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { OrderDetail, OrderSummary } from '@shared/schemas/orders';
+import { axeViolations as violations } from '@/testing/axe';
 import { jsonResponse, makeLotDetail, makeUser, renderApp, stubFetch } from '@/testing/test-utils';
 
 afterEach(() => {
@@ -11,19 +11,6 @@ afterEach(() => {
 });
 
 const staff = makeUser({ role: 'staff' });
-
-/**
- * axe-core's WCAG 2.0–2.2 A and AA rules on the rendered page. Contrast needs a real layout and
- * is left to the browser test; each violation reads "rule: help (where)".
- */
-async function violations(): Promise<string[]> {
-  const results = await axe.run(document.body, {
-    runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22a', 'wcag22aa'] },
-    rules: { 'color-contrast': { enabled: false } },
-  });
-  expect(results.passes.length).toBeGreaterThan(0);
-  return results.violations.map((violation) => `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`);
-}
 
 // Invented lots, customers and orders.
 const lot = {

@@ -9,7 +9,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { requireUser } from '@/features/auth/utils/require-user';
-import { roasteryRoles } from '@/features/auth/utils/roles';
+import { staffRoles } from '@/features/auth/utils/roles';
 import { getGreenStockQueryOptions, useGreenStock } from '@/features/green-stock/api/get-green-stock';
 import { GreenStockFigures, GreenStockTable } from '@/features/green-stock/components/green-stock-table';
 import { getPlanningQueryOptions, usePlanning } from '@/features/planning/api/get-planning';
@@ -19,7 +19,7 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const user = await requireUser(queryClient, request);
-    if (roasteryRoles.includes(user.role)) {
+    if (staffRoles.includes(user.role)) {
       void queryClient.prefetchQuery(getGreenStockQueryOptions());
       void queryClient.prefetchQuery(getPlanningQueryOptions());
     }

@@ -9,7 +9,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
 import { requireUser } from '@/features/auth/utils/require-user';
-import { roasteryRoles } from '@/features/auth/utils/roles';
+import { roasteryRoles, staffRoles } from '@/features/auth/utils/roles';
 import { getRoasteryOrderQueryOptions, useRoasteryOrder } from '@/features/roastery-orders/api/get-roastery-order';
 import { OrderDesk } from '@/features/roastery-orders/components/order-desk';
 import { RoasteryOrderDetail } from '@/features/roastery-orders/components/roastery-order-detail';
@@ -39,7 +39,10 @@ export default function RoasteryOrderRoute() {
   const { id = '' } = useParams();
   const orderQuery = useRoasteryOrder(id);
   const order = orderQuery.data;
-  const canRefund = useCurrentUser().data?.role === 'owner';
+  const role = useCurrentUser().data?.role;
+  const canRefund = role === 'owner';
+  // A packer reads the order and packs it from the Pack List; the desk's changes and the trace are staff work.
+  const actsOnOrders = role !== undefined && staffRoles.includes(role);
 
   if (order) {
     const title = `Order ${orderReference(order.id)}`;
@@ -68,21 +71,25 @@ export default function RoasteryOrderRoute() {
                     </Link>
                   </li>
                 ) : null}
-                <li>
-                  <Link to={paths.roastery.orderTrace.getHref(order.id)} className="inline-flex min-h-11 items-center font-semibold text-leaf underline">
-                    Trace this order
-                  </Link>
-                </li>
+                {actsOnOrders ? (
+                  <li>
+                    <Link to={paths.roastery.orderTrace.getHref(order.id)} className="inline-flex min-h-11 items-center font-semibold text-leaf underline">
+                      Trace this order
+                    </Link>
+                  </li>
+                ) : null}
               </ul>
             </>
           }
         />
-        <section aria-labelledby="order-desk" className="mt-8 max-w-2xl rounded-card border border-rule bg-sheet p-4 sm:p-5">
-          <h2 id="order-desk" className="mb-4 text-h2">
-            Act on this order
-          </h2>
-          <OrderDesk key={order.id} order={order} canRefund={canRefund} />
-        </section>
+        {actsOnOrders ? (
+          <section aria-labelledby="order-desk" className="mt-8 max-w-2xl rounded-card border border-rule bg-sheet p-4 sm:p-5">
+            <h2 id="order-desk" className="mb-4 text-h2">
+              Act on this order
+            </h2>
+            <OrderDesk key={order.id} order={order} canRefund={canRefund} />
+          </section>
+        ) : null}
       </>
     );
   }

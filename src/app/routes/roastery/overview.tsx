@@ -1,23 +1,33 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { ArrowRight } from 'lucide-react';
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
+import { Link, redirect, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
 import { CautionPanel } from '@/components/ui/caution-panel';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
+import { requireUser } from '@/features/auth/utils/require-user';
+import { roasteryRoles, staffRoles } from '@/features/auth/utils/roles';
 import { getLotsQueryOptions, useLots } from '@/features/lots/api/get-lots';
 import { GreenStockSnapshot } from '@/features/lots/components/green-stock-snapshot';
 import { getTodayQueryOptions, useToday } from '@/features/today/api/get-today';
 import { TodayOverview } from '@/features/today/components/today-overview';
 
-export const clientLoader = (queryClient: QueryClient) => () => {
-  void queryClient.prefetchQuery(getTodayQueryOptions());
-  void queryClient.prefetchQuery(getLotsQueryOptions());
-  return null;
-};
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const user = await requireUser(queryClient, request);
+    // A packer's Roastery starts at the day's Pack List; Today is the roasting staff's overview.
+    if (!staffRoles.includes(user.role)) {
+      if (roasteryRoles.includes(user.role)) throw redirect(paths.roastery.daySheetToday.getHref());
+      return null;
+    }
+    void queryClient.prefetchQuery(getTodayQueryOptions());
+    void queryClient.prefetchQuery(getLotsQueryOptions());
+    return null;
+  };
 
 function Today() {
   const todayQuery = useToday();

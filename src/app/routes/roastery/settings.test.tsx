@@ -2,7 +2,8 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { defaultShopSettings, type ShopSettings } from '@shared/schemas/settings';
-import { apiErrorResponse, jsonResponse, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
+import { axeViolations } from '@/testing/axe';
+import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -10,17 +11,43 @@ afterEach(() => {
 });
 
 const owner = makeUser({ role: 'owner', name: 'Wren Calloway', email: 'wren@example.test' });
-const stored: ShopSettings = { ...defaultShopSettings, timeZone: 'America/Denver' };
+// An invented place of business.
+const placeOfBusiness = { line1: '9 Millrace Yard', line2: null, city: 'Greyhaven', region: 'WA', postalCode: '98201', country: 'US' };
+const stored: ShopSettings = { ...defaultShopSettings, timeZone: 'America/Denver', placeOfBusiness };
 
-function settingsServer(put: (body: ShopSettings) => Response = (body) => jsonResponse(body)) {
+function settingsServer(put: (body: ShopSettings) => Response = (body) => jsonResponse(body), current: ShopSettings = stored) {
   return stubFetch((url, init) => {
     if (url.pathname !== '/api/roastery/settings') return apiErrorResponse(404, 'not_found', 'No fake');
     if ((init?.method ?? 'GET') === 'PUT') return put(JSON.parse(String(init?.body)) as ShopSettings);
-    return jsonResponse(stored);
+    return jsonResponse(current);
   });
 }
 
 describe('Shop settings', () => {
+  it('asks for the place of business the labels print before it saves, then sends it with the rest', async () => {
+    const fetchMock = settingsServer(undefined, { ...stored, placeOfBusiness: null });
+    renderApp('/roastery/settings', { session: owner });
+
+    const place = await screen.findByRole('group', { name: 'Place of business' }, { timeout: 15_000 });
+    const street = within(place).getByLabelText('Street address');
+    expect((street as HTMLInputElement).value).toBe('');
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+    await waitFor(() => expect(street.getAttribute('aria-invalid')).toBe('true'));
+    expect(within(place).getByText('Enter the street address.')).toBeTruthy();
+    expect(await axeViolations()).toEqual([]);
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/settings')).toHaveLength(0);
+
+    enterValue(street, placeOfBusiness.line1);
+    enterValue(within(place).getByLabelText('City or town'), placeOfBusiness.city);
+    enterValue(within(place).getByLabelText('State or region'), placeOfBusiness.region);
+    enterValue(within(place).getByLabelText('Postal code'), placeOfBusiness.postalCode);
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+
+    expect(await screen.findByText('Settings saved.')).toBeTruthy();
+    const body = sentRequests(fetchMock, 'PUT', '/api/roastery/settings')[0]?.body as ShopSettings;
+    expect(body.placeOfBusiness).toEqual(placeOfBusiness);
+  });
+
   it('shows every setting and saves the whole set as the server’s schema expects', async () => {
     const fetchMock = settingsServer();
     renderApp('/roastery/settings', { session: owner });
@@ -96,7 +123,7 @@ describe('Shop settings', () => {
     expect(screen.getByText('Too small for a shop roaster.')).toBeTruthy();
   });
 
-  it('stays closed to staff, whose browser never asks for it, and out of their navigation', async () => {
+  it('stays closed to staff, and out of their navigation (their browser reads the settings only for the shop’s clock)', async () => {
     const fetchMock = settingsServer();
     renderApp('/roastery/settings', { session: makeUser({ role: 'staff' }) });
 
@@ -105,6 +132,7 @@ describe('Shop settings', () => {
     expect(within(nav).queryByRole('link', { name: 'Settings' })).toBeNull();
     expect(within(nav).getByRole('link', { name: 'Day Sheet' })).toBeTruthy();
     expect(within(nav).getByRole('link', { name: 'Roast Calendar' })).toBeTruthy();
-    expect(requestedUrls(fetchMock)).not.toContain('/api/roastery/settings');
+    expect(screen.queryByRole('button', { name: 'Save settings' })).toBeNull();
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/settings')).toHaveLength(0);
   });
 });

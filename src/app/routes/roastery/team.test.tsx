@@ -2,6 +2,7 @@
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { TeamMember, TeamResponse } from '@shared/schemas/team';
+import { axeViolations } from '@/testing/axe';
 import { apiErrorResponse, jsonResponse, makeUser, renderApp, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
 
 afterEach(() => {
@@ -36,7 +37,7 @@ function teamServer(initial: TeamResponse) {
       const invitation = {
         id: '3e6a8c0d-4f5b-4c7d-8e8f-9a0b1c2d3e4f',
         email: String(body.email),
-        role: body.role as 'staff' | 'owner',
+        role: body.role as 'packer' | 'staff' | 'owner',
         invitedBy: owner.name,
         expiresAt: '2026-12-10T18:00:00.000Z',
       };
@@ -50,6 +51,22 @@ function teamServer(initial: TeamResponse) {
 }
 
 describe('Team page', () => {
+  it('gives a team member the packer role, offered with what a packer may do', async () => {
+    const fetchMock = teamServer({ members: [ownerRow, roaster], invitations: [] });
+    renderApp('/roastery/team', { session: owner });
+
+    const oren = await screen.findByRole('listitem', { name: 'Oren Vale' });
+    const role = within(oren).getByLabelText('Role');
+    expect(within(role).getByRole('option', { name: 'Packer: the Pack List, shipping and reading orders' })).toBeTruthy();
+    enterValue(role, 'packer');
+    fireEvent.click(within(oren).getByRole('button', { name: 'Change role' }));
+
+    expect(await screen.findByText('Oren Vale is now packer.')).toBeTruthy();
+    expect(sentRequests(fetchMock, 'PATCH', `/api/owner/team/${roaster.id}`)[0]?.body).toEqual({ role: 'packer' });
+    await waitFor(() => expect(within(oren).getByText('Packer')).toBeTruthy());
+    expect(await axeViolations()).toEqual([]);
+  });
+
   it('lists the team with roles and access, and keeps the owner’s own row out of reach', async () => {
     teamServer({ members: [ownerRow, roaster], invitations: [] });
     renderApp('/roastery/team', { session: owner });

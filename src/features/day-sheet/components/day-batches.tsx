@@ -3,15 +3,13 @@ import { roastLevelLabels } from '@shared/domain/vocabulary';
 import type { Batch } from '@shared/schemas/roastery';
 import { Badge } from '@/components/ui/badge';
 import { paths } from '@/config/paths';
-import { formatTime } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { formatExactGrams, formatLossPct, formatMinutesSeconds } from '../utils/roast-day-format';
 
-/**
- * The batches recorded for the day, each with its loss, its flag and a way to trace it. Times read
- * in `timeZone`, the shop's, when known.
- */
-export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?: string }) {
+/** The batches recorded for the day, each with its loss, its flag and a way to trace it; times on the shop's clock. */
+export function DayBatches({ batches }: { batches: Batch[] }) {
+  const clock = useShopClock();
   if (batches.length === 0) return <p className="text-ink-muted">No batches recorded for this day yet.</p>;
   return (
     <TableFrame className="print:overflow-visible print:rounded-none print:border-0">
@@ -30,7 +28,7 @@ export function DayBatches({ batches, timeZone }: { batches: Batch[]; timeZone?:
         <TableBody>
           {batches.map((batch) => (
             <tr key={batch.id}>
-              <TableCell>{formatTime(batch.createdAt, timeZone)}</TableCell>
+              <TableCell>{clock.time(batch.createdAt)}</TableCell>
               <TableRowHeader className="font-semibold">
                 {batch.lotName}
                 <span className="block text-small font-normal text-ink-muted print:text-black">{batch.lotCode}</span>

@@ -8,10 +8,12 @@ import { defaultLossModel } from '@shared/domain/roast-loss';
 import { roastLevelLabels, type RoastLevel } from '@shared/domain/vocabulary';
 import type { BatchCreate, BatchCreated } from '@shared/schemas/roastery';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { controlStyles } from '@/components/ui/control-styles';
 import { FormAlert } from '@/components/ui/form-alert';
 import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
+import { formatDayLongNoYear } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRecordBatch } from '../api/record-batch';
 import { formatLossPct, parseMinutesSeconds } from '../utils/roast-day-format';
@@ -77,7 +79,8 @@ function LivePreview({ line, fields }: { line: BatchLine; fields: Partial<Record
   );
 }
 
-function ServerAnswer({ batch, level }: { batch: BatchCreated; level: RoastLevel }) {
+/** What the server said of a saved batch: its loss against the level's range, and how the Roast List now plans the lot. */
+export function ServerAnswer({ batch, level }: { batch: BatchCreated; level: RoastLevel }) {
   const range = `${formatLossPct(batch.expectedLossPct.min)}–${formatLossPct(batch.expectedLossPct.max)}`;
   const ratio = batch.developmentTimeRatio === undefined ? '' : ` Development time ratio ${formatLossPct(batch.developmentTimeRatio)}.`;
   const planning = `The Roast List now plans this lot at ${formatLossPct(batch.plannedLossPct)} (${
@@ -100,8 +103,17 @@ function ServerAnswer({ batch, level }: { batch: BatchCreated; level: RoastLevel
   );
 }
 
+type RecordBatchFormProps = {
+  line: BatchLine;
+  suggestedGreenGrams?: number;
+  /** The shop's today: a batch for a later roast day is saved only once the person confirms it. */
+  today?: string;
+  /** Called with the server's answer once the batch is saved (the line then closes its form). */
+  onRecorded: (batch: BatchCreated) => void;
+};
+
 /** Records one batch of a Roast List line: green in, roasted out, and the roast's times. */
-export function RecordBatchForm({ line, suggestedGreenGrams }: { line: BatchLine; suggestedGreenGrams?: number }) {
+export function RecordBatchForm({ line, suggestedGreenGrams, today, onRecorded }: RecordBatchFormProps) {
   const form = useForm<RecordBatchFields>({
     resolver: zodResolver(recordBatchFieldsSchema),
     defaultValues: {
@@ -115,13 +127,22 @@ export function RecordBatchForm({ line, suggestedGreenGrams }: { line: BatchLine
   const watched = useWatch({ control: form.control });
   const record = useRecordBatch();
   const [formError, setFormError] = useState<string>();
-  const [answer, setAnswer] = useState<BatchCreated>();
+  const [awaitingConfirmation, setAwaitingConfirmation] = useState<BatchCreate>();
   const notesId = useId();
   const { errors } = form.formState;
+  const forLaterDay = today !== undefined && line.roastDate > today;
+
+  async function save(input: BatchCreate) {
+    setAwaitingConfirmation(undefined);
+    try {
+      onRecorded(await record.mutateAsync(input));
+    } catch (error) {
+      setFormError(applyServerErrors(error, form.setError, fieldNames));
+    }
+  }
 
   const submit = form.handleSubmit(async (fields) => {
     setFormError(undefined);
-    setAnswer(undefined);
     const input = toBatchInput(line, fields);
     // The same cross-field rules as the server (roasted below green, first crack before the end).
     const checked = batchMetrics(input, defaultLossModel);
@@ -131,13 +152,9 @@ export function RecordBatchForm({ line, suggestedGreenGrams }: { line: BatchLine
       });
       return;
     }
-    try {
-      const created = await record.mutateAsync(input);
-      setAnswer(created);
-      form.reset({ ...form.getValues(), roastedGramsOut: '', totalSeconds: '', firstCrackSeconds: '', notes: '' });
-    } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, fieldNames));
-    }
+    // A batch for a day still ahead is most often a slip of the date switcher: ask first.
+    if (forLaterDay) setAwaitingConfirmation(input);
+    else await save(input);
   });
 
   return (
@@ -148,7 +165,6 @@ export function RecordBatchForm({ line, suggestedGreenGrams }: { line: BatchLine
       className="grid gap-4"
     >
       {formError ? <FormAlert>{formError}</FormAlert> : null}
-      {answer ? <ServerAnswer batch={answer} level={line.roastLevel} /> : null}
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <TextField label="Green in (g)" inputMode="numeric" autoComplete="off" error={errors.greenGramsIn?.message} {...form.register('greenGramsIn')} />
         <TextField
@@ -197,10 +213,23 @@ export function RecordBatchForm({ line, suggestedGreenGrams }: { line: BatchLine
       </div>
       <LivePreview line={line} fields={watched} />
       <div>
-        <Button type="submit" disabled={form.formState.isSubmitting}>
-          {form.formState.isSubmitting ? 'Saving…' : 'Save batch'}
+        <Button type="submit" disabled={form.formState.isSubmitting || record.isPending}>
+          {form.formState.isSubmitting || record.isPending ? 'Saving…' : 'Save batch'}
         </Button>
       </div>
+      <ConfirmDialog
+        open={awaitingConfirmation !== undefined}
+        title={`Record this batch for ${formatDayLongNoYear(line.roastDate)}?`}
+        confirmLabel="Record it for that day"
+        cancelLabel="Go back"
+        busy={record.isPending}
+        onConfirm={() => {
+          if (awaitingConfirmation) void save(awaitingConfirmation);
+        }}
+        onCancel={() => setAwaitingConfirmation(undefined)}
+      >
+        {`That roast day is still ahead: today is ${today ? formatDayLongNoYear(today) : 'earlier'}. Its green comes out of stock now.`}
+      </ConfirmDialog>
     </form>
   );
 }

@@ -1,15 +1,15 @@
 import clsx from 'clsx';
 import { Printer, TriangleAlert } from 'lucide-react';
-import { Fragment, useState } from 'react';
+import { Fragment, useRef, useState } from 'react';
 import { roastLevelLabels } from '@shared/domain/vocabulary';
-import type { RoastListLine, RoastListResponse } from '@shared/schemas/roastery';
+import type { BatchCreated, RoastListLine, RoastListResponse } from '@shared/schemas/roastery';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { DownloadLink } from '@/components/ui/download-link';
 import { roastListPath, roastListPdfPath } from '../api/get-roast-list';
 import { formatExactGrams, formatLossPct } from '../utils/roast-day-format';
-import { RecordBatchForm } from './record-batch-form';
+import { RecordBatchForm, ServerAnswer } from './record-batch-form';
 
 /** "2 × 4,200 g" when the loads are equal, else each load. */
 function describeLoads(batches: RoastListLine['batches']): string {
@@ -21,8 +21,10 @@ function describeLoads(batches: RoastListLine['batches']): string {
 
 const lossSourceLabels = { level: 'level default', lot: 'this lot’s batches' } as const;
 
-function LineRows({ line, date }: { line: RoastListLine; date: string }) {
+function LineRows({ line, date, today }: { line: RoastListLine; date: string; today?: string }) {
   const [recording, setRecording] = useState(false);
+  const [saved, setSaved] = useState<BatchCreated>();
+  const toggleRef = useRef<HTMLButtonElement>(null);
   const formRowId = `record-${line.lotCode}-${line.roastLevel}`;
   const nextLoad = line.toRoast.batches[0]?.greenGrams;
   const done = line.toRoast.roastedGrams === 0;
@@ -67,13 +69,21 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
           {done ? 'Done' : describeLoads(line.toRoast.batches)}
           {done ? null : <span className="block text-small text-ink-muted print:text-black">{formatExactGrams(line.toRoast.roastedGrams)} roasted to go</span>}
         </TableCell>
+        <TableCell className="hidden text-small print:table-cell print:px-1">
+          <span className="block">in ___</span>
+          <span className="mt-2 block">out ___</span>
+        </TableCell>
         <TableCell className="print:hidden">
           <Button
+            ref={toggleRef}
             variant="secondary"
             className="whitespace-nowrap"
             aria-expanded={recording}
             aria-controls={formRowId}
-            onClick={() => setRecording((open) => !open)}
+            onClick={() => {
+              setSaved(undefined);
+              setRecording((open) => !open);
+            }}
           >
             {recording ? 'Close' : 'Record batch'}
             <span className="sr-only">
@@ -89,10 +99,24 @@ function LineRows({ line, date }: { line: RoastListLine; date: string }) {
             <RecordBatchForm
               line={{ roastDate: date, lotCode: line.lotCode, lotName: line.lotName, roastLevel: line.roastLevel }}
               suggestedGreenGrams={nextLoad}
+              today={today}
+              onRecorded={(batch) => {
+                // Closed at once, so the same numbers are never one click from a second entry.
+                setRecording(false);
+                setSaved(batch);
+                toggleRef.current?.focus();
+              }}
             />
           ) : null}
         </TableCell>
       </tr>
+      {saved ? (
+        <tr className="print:hidden">
+          <TableCell colSpan={10} className="bg-paper py-3">
+            <ServerAnswer batch={saved} level={line.roastLevel} />
+          </TableCell>
+        </tr>
+      ) : null}
     </Fragment>
   );
 }
@@ -134,9 +158,20 @@ function Warnings({ warnings }: { warnings: RoastListResponse['warnings'] }) {
   );
 }
 
-/** The Roast List of one day: what to roast, in which batches, and the green to pull for it. */
-export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
+/** Green already roasted today per lot: what its recorded batches took out of stock. */
+function roastedGreenByLot(lines: RoastListLine[]): Map<string, number> {
+  const byLot = new Map<string, number>();
+  for (const line of lines) byLot.set(line.lotCode, (byLot.get(line.lotCode) ?? 0) + line.recorded.greenGrams);
+  return byLot;
+}
+
+/**
+ * The Roast List of one day: what to roast, in which batches, and the green still to pull for it.
+ * `today` is the shop's: recording a batch for a later day asks first.
+ */
+export function RoastListView({ roastList, today }: { roastList: RoastListResponse; today?: string }) {
   const { date } = roastList;
+  const roastedGreen = roastedGreenByLot(roastList.lines);
   return (
     <div>
       <div className="mb-6 flex flex-wrap gap-2 print:hidden">
@@ -172,6 +207,9 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
                   <TableHeader>Batches</TableHeader>
                   <TableHeader>Recorded</TableHeader>
                   <TableHeader>Still to roast</TableHeader>
+                  <TableHeader className="hidden print:table-cell print:px-1">
+                    Actual<span className="sr-only"> weights, written in by hand</span>
+                  </TableHeader>
                   <TableHeader className="print:hidden">
                     <span className="sr-only">Actions</span>
                   </TableHeader>
@@ -179,7 +217,7 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
               </TableHead>
               <TableBody>
                 {roastList.lines.map((line) => (
-                  <LineRows key={`${line.lotCode}-${line.roastLevel}`} line={line} date={date} />
+                  <LineRows key={`${line.lotCode}-${line.roastLevel}`} line={line} date={date} today={today} />
                 ))}
               </TableBody>
             </Table>
@@ -189,9 +227,12 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
 
       {roastList.lines.length > 0 ? (
         <section aria-labelledby="pull-list" className="print-section mb-8">
-          <h2 id="pull-list" className="mb-3 text-h3">
+          <h2 id="pull-list" className="mb-1 text-h3">
             Pull list
           </h2>
+          <p className="mb-3 text-small text-ink-muted print:text-black">
+            The green still to pull for the batches not yet recorded; it updates as each batch is saved.
+          </p>
           {roastList.pull.length === 0 ? (
             <p className="text-ink-muted print:text-black">Everything on this list is roasted: no green left to pull.</p>
           ) : (
@@ -200,7 +241,8 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
                 <TableHead>
                   <tr>
                     <TableHeader>Lot</TableHeader>
-                    <TableHeader align="right">Green to pull</TableHeader>
+                    <TableHeader align="right">Still to pull</TableHeader>
+                    <TableHeader align="right">Already roasted</TableHeader>
                     <TableHeader align="right">In stock</TableHeader>
                     <TableHeader align="right">Short by</TableHeader>
                   </tr>
@@ -214,6 +256,9 @@ export function RoastListView({ roastList }: { roastList: RoastListResponse }) {
                       </TableRowHeader>
                       <TableCell align="right" className="whitespace-nowrap">
                         {formatExactGrams(pull.greenGrams)}
+                      </TableCell>
+                      <TableCell align="right" className="whitespace-nowrap">
+                        {formatExactGrams(roastedGreen.get(pull.lotCode) ?? 0)}
                       </TableCell>
                       <TableCell align="right" className="whitespace-nowrap">
                         {formatExactGrams(pull.stockGrams)}

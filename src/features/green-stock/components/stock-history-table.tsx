@@ -4,7 +4,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import { formatInstant } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { useStockMovements } from '../api/stock';
 import { movementReasonLabels } from '../utils/stock-labels';
@@ -12,6 +12,7 @@ import { formatGramsChange, formatPounds } from '../utils/weights';
 
 /** Every stock movement of the lot, newest first: by hand, sales, roasts and refunds. */
 export function StockHistoryTable({ code }: { code: string }) {
+  const clock = useShopClock();
   const movementsQuery = useStockMovements(code);
   if (movementsQuery.isError) {
     return <ErrorState title="The stock history could not load" error={movementsQuery.error} onRetry={() => void movementsQuery.refetch()} />;
@@ -48,7 +49,7 @@ export function StockHistoryTable({ code }: { code: string }) {
         <TableBody>
           {movements.map((movement) => (
             <tr key={movement.id}>
-              <TableRowHeader className="whitespace-nowrap">{formatInstant(movement.createdAt)}</TableRowHeader>
+              <TableRowHeader className="whitespace-nowrap">{clock.dateTime(movement.createdAt)}</TableRowHeader>
               <TableCell align="right" className={clsx('whitespace-nowrap', movement.deltaGrams < 0 ? 'text-alert' : 'text-ok')}>
                 {formatGramsChange(movement.deltaGrams)}
                 <span className="block text-caption text-ink-muted">{formatPounds(Math.abs(movement.deltaGrams))}</span>

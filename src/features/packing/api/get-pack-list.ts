@@ -1,9 +1,11 @@
+import type { LabelStockId } from '@shared/domain/label-stock';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { packListResponseSchema, type PackListResponse } from '@shared/schemas/packing';
 import { apiRequest } from '@/lib/api-client';
 
-export function labelsPdfPath(date: string): string {
-  return `/api/roastery/days/${encodeURIComponent(date)}/labels.pdf`;
+/** The day's bag labels as a PDF: one 4 × 3 in label a page, or `stock`'s sheet of ten. */
+export function labelsPdfPath(date: string, stock?: Exclude<LabelStockId, 'single'>): string {
+  return `/api/roastery/days/${encodeURIComponent(date)}/labels.pdf${stock ? `?stock=${stock}` : ''}`;
 }
 
 /** The orders that ship on `date`, each bag with what its label says. */

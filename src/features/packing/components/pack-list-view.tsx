@@ -25,14 +25,14 @@ function day(date: string | null): string {
   return date ? formatDayShort(date) : '—';
 }
 
-function OrderBags({ order }: { order: PackOrder }) {
+function OrderBags({ order, canTrace }: { order: PackOrder; canTrace: boolean }) {
   return (
     <div className="overflow-x-auto">
       <Table variant="sheet">
         <caption className="sr-only">Bags of order {orderReference(order.orderId)}</caption>
         <TableHead>
           <tr>
-            {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', 'Batch'].map((heading) => (
+            {['Bag', 'Coffee', 'Level', 'Grind', 'Net weight', 'Roasted', 'Ready from', 'Best before', ...(canTrace ? ['Batch'] : [])].map((heading) => (
               <TableHeader key={heading}>{heading}</TableHeader>
             ))}
           </tr>
@@ -53,15 +53,17 @@ function OrderBags({ order }: { order: PackOrder }) {
               <TableCell>{day(bag.roastDate)}</TableCell>
               <TableCell>{day(bag.readyFrom)}</TableCell>
               <TableCell>{day(bag.bestBefore)}</TableCell>
-              <TableCell>
-                {bag.batchId ? (
-                  <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
-                    Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
-                  </Link>
-                ) : (
-                  '—'
-                )}
-              </TableCell>
+              {canTrace ? (
+                <TableCell>
+                  {bag.batchId ? (
+                    <Link to={paths.roastery.batch.getHref(bag.batchId)} className="font-semibold text-leaf underline">
+                      Trace<span className="sr-only"> the batch of bag {bag.bagNumber}</span>
+                    </Link>
+                  ) : (
+                    '—'
+                  )}
+                </TableCell>
+              ) : null}
             </tr>
           ))}
         </TableBody>
@@ -95,7 +97,7 @@ function OrderParcels({ order }: { order: PackOrder }) {
   );
 }
 
-function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void }) {
+function PackOrderCard({ order, date, onShip, canTrace }: { order: PackOrder; date: string; onShip: (order: PackOrder) => void; canTrace: boolean }) {
   const markPacked = useMarkPacked(date);
   const [failure, setFailure] = useState<string>();
   const [confirming, setConfirming] = useState(false);
@@ -127,7 +129,7 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
         </p>
       ) : null}
       <div className="mt-3">
-        <OrderBags order={order} />
+        <OrderBags order={order} canTrace={canTrace} />
       </div>
       <OrderParcels order={order} />
       {failure ? (
@@ -159,9 +161,11 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
             Mark shipped
           </Button>
         ) : null}
-        <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="ml-auto font-semibold text-leaf underline">
-          Trace this order<span className="sr-only"> for {order.customerName}</span>
-        </Link>
+        {canTrace ? (
+          <Link to={paths.roastery.orderTrace.getHref(order.orderId)} className="ml-auto font-semibold text-leaf underline">
+            Trace this order<span className="sr-only"> for {order.customerName}</span>
+          </Link>
+        ) : null}
       </div>
     </li>
   );
@@ -170,7 +174,15 @@ function PackOrderCard({ order, date, onShip }: { order: PackOrder; date: string
 type PackFilter = 'open' | PackStage;
 
 /** The day's orders to pack and ship, bag by bag, with the labels to print for them. Shipped orders stay out of the way unless asked for. */
-export function PackListView({ packList }: { packList: PackListResponse }) {
+type PackListViewProps = {
+  packList: PackListResponse;
+  /** Whether the person may open batch and order traces (staff may, a packer may not). */
+  canTrace?: boolean;
+  /** The shop has no place of business yet, so the labels cannot print. */
+  labelsNeedAddress?: boolean;
+};
+
+export function PackListView({ packList, canTrace = true, labelsNeedAddress = false }: PackListViewProps) {
   const [shipping, setShipping] = useState<PackOrder>();
   const [shipped, setShipped] = useState<string>();
   const [shippingAll, setShippingAll] = useState(false);
@@ -185,10 +197,21 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
 
   return (
     <div>
-      <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
-        <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
-        <p className="text-small text-ink-muted">One label a bag, with both net weights.</p>
-      </div>
+      {labelsNeedAddress ? (
+        <div className="mb-6 print:hidden">
+          <FormAlert>Bag labels print the shop’s postal address, and none is set yet. The owner enters it in Settings, under Place of business.</FormAlert>
+        </div>
+      ) : (
+        <div className="mb-6 flex flex-wrap items-center gap-2 print:hidden">
+          <DownloadLink href={labelsPdfPath(date)}>Labels (PDF)</DownloadLink>
+          <DownloadLink href={labelsPdfPath(date, 'letter-10')}>Letter sheet (PDF)</DownloadLink>
+          <DownloadLink href={labelsPdfPath(date, 'a4-10')}>A4 sheet (PDF)</DownloadLink>
+          <p className="text-small text-ink-muted">
+            One label a bag, with the shop’s name and address and both net weights: 4 × 3 in for a label printer, or sheets of ten (4 × 2 in on US Letter, 99.1
+            × 57 mm on A4).
+          </p>
+        </div>
+      )}
       {orders.length > 0 ? (
         <div className="mb-6 grid gap-4 print:hidden">
           <ChoiceGroup
@@ -224,7 +247,7 @@ export function PackListView({ packList }: { packList: PackListResponse }) {
       ) : (
         <ul aria-label="Orders to pack" className="grid gap-4">
           {shown.map((order) => (
-            <PackOrderCard key={order.orderId} order={order} date={date} onShip={setShipping} />
+            <PackOrderCard key={order.orderId} order={order} date={date} onShip={setShipping} canTrace={canTrace} />
           ))}
         </ul>
       )}

@@ -7,7 +7,8 @@ import type { OrderDetail, OrderItem } from '@shared/schemas/orders';
 import { AddressDisplay } from '@/components/address/address-display';
 import { paths } from '@/config/paths';
 import { formatGrams } from '@/lib/format';
-import { formatDay, formatInstant } from '@/lib/dates';
+import { formatDay } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { orderKindLabels, paymentState } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
@@ -37,11 +38,12 @@ function Facts({ facts }: { facts: { term: string; value: ReactNode }[] }) {
 }
 
 function PaymentLine({ order }: { order: OrderDetail }) {
+  const clock = useShopClock();
   switch (paymentState(order)) {
     case 'unpaid':
       return <>Not paid yet: the customer has not finished the payment page.</>;
     case 'cancelled-unpaid':
-      return <>Never paid; cancelled {order.cancelledAt ? formatInstant(order.cancelledAt) : ''}. Nothing was charged.</>;
+      return <>Never paid; cancelled {order.cancelledAt ? clock.dateTime(order.cancelledAt) : ''}. Nothing was charged.</>;
     case 'refunded':
       return <>Refunded in full ({formatMoney(order.refundedCents, order.currency)}).</>;
     case 'partly-refunded':
@@ -51,7 +53,7 @@ function PaymentLine({ order }: { order: OrderDetail }) {
         </>
       );
     case 'paid':
-      return <>Paid {order.paidAt ? formatInstant(order.paidAt) : ''}.</>;
+      return <>Paid {order.paidAt ? clock.dateTime(order.paidAt) : ''}.</>;
   }
 }
 
@@ -71,6 +73,7 @@ const dayOrUnset = (day: string | null) => (day ? formatDay(day) : <span classNa
  * order's own work (shipping it, tracing its bags), shown in its own section.
  */
 export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; actions: ReactNode }) {
+  const clock = useShopClock();
   const address = order.shippingAddress;
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
@@ -78,7 +81,7 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
         <div className="flex flex-wrap items-center gap-3">
           <StaffOrderStatus status={order.status} />
           <span className="text-small text-ink-muted">
-            {orderKindLabels[order.kind]} · placed {formatInstant(order.placedAt)}
+            {orderKindLabels[order.kind]} · placed {clock.dateTime(order.placedAt)}
           </span>
         </div>
 
@@ -205,7 +208,7 @@ export function RoasteryOrderDetail({ order, actions }: { order: OrderDetail; ac
           <Panel id="order-tracking" title="Carrier and tracking">
             <Facts
               facts={[
-                ...(order.shippedAt ? [{ term: 'Shipped', value: formatInstant(order.shippedAt) }] : []),
+                ...(order.shippedAt ? [{ term: 'Shipped', value: clock.dateTime(order.shippedAt) }] : []),
                 ...(order.carrier ? [{ term: 'Carrier', value: order.carrier }] : []),
                 ...(order.trackingNumber ? [{ term: 'Tracking number', value: <span className="break-all">{order.trackingNumber}</span> }] : []),
               ]}

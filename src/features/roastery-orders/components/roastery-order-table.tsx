@@ -3,7 +3,8 @@ import { orderReference } from '@shared/domain/order-reference';
 import type { OrderSort, OrderSummary } from '@shared/schemas/orders';
 import { paths } from '@/config/paths';
 import { useShopMoney } from '@/lib/shop-currency';
-import { formatDay, formatInstant } from '@/lib/dates';
+import { formatDay } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 import { orderKindLabels, orderSortLabels } from '../utils/order-labels';
 import { StaffOrderStatus } from './staff-order-status';
@@ -21,6 +22,7 @@ const sortedColumn: Record<OrderSort, { column: SortedColumn; direction: 'ascend
 };
 
 export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; sort: OrderSort }) {
+  const clock = useShopClock();
   const { money } = useShopMoney();
   const sorted = sortedColumn[sort];
   const ariaSort = (column: SortedColumn) => (sorted.column === column ? sorted.direction : undefined);
@@ -61,7 +63,7 @@ export function RoasteryOrderTable({ orders, sort }: { orders: OrderSummary[]; s
                 </Link>
                 <span className="block text-caption text-ink-muted">{orderKindLabels[order.kind]}</span>
               </TableRowHeader>
-              <TableCell className="whitespace-nowrap">{formatInstant(order.placedAt)}</TableCell>
+              <TableCell className="whitespace-nowrap">{clock.dateTime(order.placedAt)}</TableCell>
               <TableCell>
                 {order.customer.name}
                 <span className="block text-caption break-all text-ink-muted">{order.customer.email}</span>

@@ -4,7 +4,7 @@ import { useState, type ReactNode } from 'react';
 import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
 import { currencies } from '@shared/domain/money';
 import { roastedBagSizes, roastLevelLabels, roastLevels, shipPolicies, shipPolicyLabels, weekdayLabels, weekdays } from '@shared/domain/vocabulary';
-import { shopSettingsSchema, type ShopSettings, type ShopSettingsInput } from '@shared/schemas/settings';
+import { shopSettingsUpdateSchema, type PlaceOfBusiness, type ShopSettings, type ShopSettingsInput } from '@shared/schemas/settings';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { SelectField } from '@/components/ui/select-field';
@@ -15,6 +15,8 @@ import { fieldPaths } from '../utils/settings-paths';
 import { CentsField } from './cents-field';
 
 type SettingsPath = Path<ShopSettingsInput>;
+
+const emptyPlaceOfBusiness: PlaceOfBusiness = { line1: '', line2: null, city: '', region: '', postalCode: '', country: 'US' };
 
 const bagSizeLabels = { '12oz': '12 oz bag', '1lb': '1 lb bag', '2lb': '2 lb bag' } as const;
 
@@ -31,8 +33,9 @@ function Group({ title, description, children }: { title: string; description?: 
 /** Every shop setting in one form, checked by the same schema the server uses. */
 export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
   const form = useForm<ShopSettingsInput, unknown, ShopSettings>({
-    resolver: zodResolver(shopSettingsSchema),
-    defaultValues: settings,
+    resolver: zodResolver(shopSettingsUpdateSchema),
+    // A shop that has not entered its place of business yet starts from empty address fields.
+    defaultValues: { ...settings, placeOfBusiness: settings.placeOfBusiness ?? emptyPlaceOfBusiness },
   });
   const bands = useFieldArray({ control: form.control, name: 'shipping.bands' });
   const save = useUpdateShopSettings();
@@ -44,6 +47,18 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
   const number = (name: SettingsPath) => form.register(name, { valueAsNumber: true });
   const numberField = (name: SettingsPath, label: string, hint?: string, step = '1') => (
     <TextField key={name} label={label} hint={hint} type="number" step={step} inputMode="decimal" error={errorAt(name)} {...number(name)} />
+  );
+
+  const addressField = (field: keyof PlaceOfBusiness, label: string, autoComplete: string, className?: string, hint?: string) => (
+    <TextField
+      key={field}
+      label={label}
+      hint={hint}
+      autoComplete={autoComplete}
+      className={className}
+      error={errorAt(`placeOfBusiness.${field}`) ?? (field === 'line1' ? errorAt('placeOfBusiness') : undefined)}
+      {...form.register(`placeOfBusiness.${field}`)}
+    />
   );
 
   const submit = form.handleSubmit(async (values) => {
@@ -178,6 +193,18 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
         ))}
         {numberField('subscriptionDiscountPct', 'Subscription discount (%)', undefined, '0.01')}
         {numberField('renewalReminderDays', 'Renewal reminder, days before the charge', '0 sends none.')}
+      </Group>
+
+      <Group
+        title="Place of business"
+        description="The shop’s street address. Every bag label prints it under the shop’s name, as a packed food label must say where it was packed."
+      >
+        {addressField('line1', 'Street address', 'address-line1', 'sm:col-span-2')}
+        {addressField('line2', 'Second line (optional)', 'address-line2')}
+        {addressField('city', 'City or town', 'address-level2')}
+        {addressField('region', 'State or region', 'address-level1')}
+        {addressField('postalCode', 'Postal code', 'postal-code')}
+        {addressField('country', 'Country', 'country', undefined, 'Two letters, e.g. US.')}
       </Group>
 
       <Group title="Shipping" description="Parcel weight is the coffee, each bag’s tare and the box; the first band it fits sets the price.">

@@ -4,11 +4,13 @@ import type { SubscriberDetail } from '@shared/schemas/subscribers';
 import { AddressDisplay } from '@/components/address/address-display';
 import { Badge } from '@/components/ui/badge';
 import { bagsLabel, brewMethodLabels, cadenceLabel, deliveryStatusLabels, subscriptionStatusLabels } from '@/lib/subscription-labels';
-import { formatDayWithWeekday, formatInstantDate } from '@/lib/dates';
+import { formatDayWithWeekday } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { Table, TableBody, TableCell, TableFrame, TableHead, TableHeader, TableRowHeader } from '@/components/ui/table';
 
 /** A subscriber's subscription, where it ships, and every delivery with the order it became. */
 export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDetail }) {
+  const clock = useShopClock();
   const status = subscriptionStatusLabels[subscriber.status];
   const facts: [string, string][] = [
     ['Coffee', subscriber.lotCode ? `${subscriber.coffee} (${subscriber.lotCode})` : subscriber.coffee],
@@ -18,9 +20,9 @@ export function SubscriberDetailView({ subscriber }: { subscriber: SubscriberDet
     ['Brew method', brewMethodLabels[subscriber.brewMethod]],
     ['Cadence', cadenceLabel(subscriber.cadenceWeeks)],
     ['Per delivery', formatMoney(subscriber.priceCents, subscriber.currency)],
-    ['Subscribed', formatInstantDate(subscriber.createdAt)],
+    ['Subscribed', clock.date(subscriber.createdAt)],
     ...(subscriber.pausedUntil ? [['Paused until', formatDayWithWeekday(subscriber.pausedUntil)] as [string, string]] : []),
-    ...(subscriber.cancelledAt ? [['Cancelled', formatInstantDate(subscriber.cancelledAt)] as [string, string]] : []),
+    ...(subscriber.cancelledAt ? [['Cancelled', clock.date(subscriber.cancelledAt)] as [string, string]] : []),
   ];
   return (
     <div className="grid gap-8">

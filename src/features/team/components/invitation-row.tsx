@@ -4,11 +4,12 @@ import type { PendingInvitation } from '@shared/schemas/team';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
-import { formatInstant } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { roleLabels } from '../utils/role-labels';
 
 /** An invitation still waiting for an answer, which the owner can withdraw. */
 export function InvitationRow({ invitation, onWithdraw }: { invitation: PendingInvitation; onWithdraw: () => Promise<unknown> }) {
+  const clock = useShopClock();
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string>();
   const emailId = `invitation-${invitation.id}`;
@@ -33,7 +34,7 @@ export function InvitationRow({ invitation, onWithdraw }: { invitation: PendingI
       </span>
       <Badge>{roleLabels[invitation.role]}</Badge>
       <span className="text-small text-ink-muted">
-        Link expires {formatInstant(invitation.expiresAt)}
+        Link expires {clock.dateTime(invitation.expiresAt)}
         {invitation.invitedBy ? ` · sent by ${invitation.invitedBy}` : ''}
       </span>
       <Button variant="secondary" className="ml-auto" disabled={busy} onClick={() => void withdraw()} aria-describedby={emailId}>

@@ -4,7 +4,7 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/select-field';
 import { ApiError } from '@/lib/api-client';
-import { formatInstantDate } from '@/lib/dates';
+import { useShopClock } from '@/lib/shop-clock';
 import { roleLabels, teamRoleDescriptions } from '../utils/role-labels';
 
 type TeamMemberRowProps = {
@@ -20,6 +20,7 @@ function isTeamRole(value: string): value is TeamRole {
 }
 
 export function TeamMemberRow({ member, isYou, onChangeRole, onSetDisabled }: TeamMemberRowProps) {
+  const clock = useShopClock();
   const [role, setRole] = useState<TeamRole>(isTeamRole(member.role) ? member.role : 'staff');
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string>();
@@ -53,7 +54,7 @@ export function TeamMemberRow({ member, isYou, onChangeRole, onSetDisabled }: Te
         {member.disabled ? <Badge tone="alert">Access disabled</Badge> : null}
       </div>
       <p className="mt-1 break-all text-ink-muted">{member.email}</p>
-      <p className="text-small text-ink-muted">Joined {formatInstantDate(member.joinedAt)}</p>
+      <p className="text-small text-ink-muted">Joined {clock.date(member.joinedAt)}</p>
 
       {failure ? (
         <p role="alert" className="mt-3 text-small font-semibold text-alert">
