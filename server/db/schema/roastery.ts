@@ -60,6 +60,7 @@ export const shopSettings = pgTable(
     holdOverWeekend: boolean('hold_over_weekend').notNull().default(defaultShopSettings.holdOverWeekend),
     renewalReminderDays: integer('renewal_reminder_days').notNull().default(defaultShopSettings.renewalReminderDays),
     shipping: jsonb('shipping').$type<ShopSettings['shipping']>().notNull().default(defaultShopSettings.shipping),
+    carriers: jsonb('carriers').$type<ShopSettings['carriers']>().notNull().default(defaultShopSettings.carriers),
     updatedAt: instant('updated_at')
       .notNull()
       .defaultNow()

@@ -44,6 +44,7 @@ function toSettings(row: SettingsRow): ShopSettings {
     subscriptionDiscountPct: row.subscriptionDiscountPct,
     renewalReminderDays: row.renewalReminderDays,
     shipping: row.shipping,
+    carriers: row.carriers,
   };
 }
 
@@ -74,6 +75,7 @@ function toColumns(settings: ShopSettings) {
     subscriptionDiscountPct: settings.subscriptionDiscountPct,
     renewalReminderDays: settings.renewalReminderDays,
     shipping: settings.shipping,
+    carriers: settings.carriers,
   };
 }
 
