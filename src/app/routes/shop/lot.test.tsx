@@ -41,11 +41,13 @@ describe('lot page', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Test Ridge Washed' })).toBeTruthy();
     await screen.findByRole('table', { name: 'Time after first crack' });
     // The lot, its Home Roast Guide, and how home roasters roast it (shown only from enough roasts).
-    expect(requestedUrls(fetchMock).sort()).toEqual([
-      '/api/lots/RD-T01',
-      '/api/lots/RD-T01/home-roasts',
-      '/api/lots/RD-T01/roast-guide?device=popper&greenGrams=454&level=light',
-    ]);
+    await waitFor(() =>
+      expect(requestedUrls(fetchMock).sort()).toEqual([
+        '/api/lots/RD-T01',
+        '/api/lots/RD-T01/home-roasts',
+        '/api/lots/RD-T01/roast-guide?device=popper&greenGrams=454&level=light',
+      ]),
+    );
 
     const descriptors = screen.getByRole('region', { name: 'Green coffee descriptors' });
     const value = (term: string) => within(descriptors).getByText(term).nextElementSibling?.textContent;
@@ -61,6 +63,29 @@ describe('lot page', () => {
     expect(screen.getByText('2.3 kg or more: $22.00 / kg')).toBeTruthy();
     expect(screen.getByRole('region', { name: 'Roast safely' })).toBeTruthy();
     await waitFor(() => expect(document.title).toBe('Test Ridge Washed · Green Lots · Restday'));
+  });
+
+  it('shows the safety cautions once, below the Home Roast Guide', async () => {
+    lotServer();
+    renderApp('/lots/RD-T01');
+
+    await screen.findByRole('table', { name: 'Time after first crack' });
+    expect(screen.getAllByRole('region', { name: 'Roast safely' })).toHaveLength(1);
+    expect(screen.queryByText('Before you roast')).toBeNull();
+  });
+
+  it('reads prices per lb and quantity breaks in pounds when Green Lots was filtered per lb', async () => {
+    lotServer();
+    renderApp('/lots/RD-T01?priceUnit=lb');
+
+    await screen.findByRole('heading', { level: 1, name: 'Test Ridge Washed' });
+    // 1 lb = 0.45359237 kg exactly (NIST SP 811, App. B): $22.00 / kg × 0.45359237 = $9.979 → $9.98 / lb,
+    // and the 2,268 g break ÷ 453.59237 g = 5.0001 lb.
+    expect(await screen.findByText('5 lb or more: $9.98 / lb')).toBeTruthy();
+    expect(screen.getByText(/\/ lb$/, { selector: 'p' })).toBeTruthy();
+    // The weight toggle switches the breaks back to metric.
+    fireEvent.click(screen.getByRole('button', { name: 'Grams' }));
+    expect(await screen.findByText('2.3 kg or more: $9.98 / lb')).toBeTruthy();
   });
 
   it('says when no lot has that code', async () => {
@@ -108,7 +133,7 @@ describe('lot page', () => {
     expect(lightRow.textContent).toContain('Suggested for this lot');
     // Popper times after first crack (common practice).
     expect(within(levels).getByRole('row', { name: /Medium-dark/ }).textContent).toContain('30–40 s');
-    expect(screen.getByText('Never leave the roaster unattended while it runs.')).toBeTruthy();
+    expect(screen.getByRole('region', { name: 'Roast safely' }).textContent).toContain('Never leave a roast unattended.');
     // 454 g at up to 80 g a batch (common practice) → 6 batches.
     expect(screen.getByText('Batches for a 1 lb bag').nextElementSibling?.textContent).toBe('6');
 
