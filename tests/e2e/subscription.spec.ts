@@ -43,6 +43,16 @@ async function accessibilityViolations(): Promise<string[]> {
   return results.violations.flatMap((violation) => violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')}`));
 }
 
+/** The invented subscriber's address on the shipping step, then on to the payment page. */
+async function fillShippingAddressAndPay() {
+  await page.getByLabel('Recipient’s name').fill(customer.name);
+  await page.getByLabel('Street address').fill('27 Tannery Row');
+  await page.getByLabel('City or town').fill('Millbrook Falls');
+  await page.getByLabel('State or region').fill('CO');
+  await page.getByLabel('ZIP or postal code').fill('80000');
+  await page.getByRole('button', { name: 'Continue to payment' }).click();
+}
+
 type CaughtEmail = { subject: string; time: string };
 
 /** Waits until the mail catcher holds a message to `address` whose subject matches each of `subjects`. */
@@ -103,12 +113,7 @@ describe('Roasted to Order in a real browser', () => {
   });
 
   it('pays with 4242 on the payment page and sees the schedule once the payment is confirmed', async () => {
-    await page.getByLabel('Recipient’s name').fill(customer.name);
-    await page.getByLabel('Street address').fill('27 Tannery Row');
-    await page.getByLabel('City or town').fill('Millbrook Falls');
-    await page.getByLabel('State or region').fill('CO');
-    await page.getByLabel('ZIP or postal code').fill('80000');
-    await page.getByRole('button', { name: 'Continue to payment' }).click();
+    await fillShippingAddressAndPay();
 
     await page.getByRole('heading', { name: 'Test payment' }).waitFor();
     await page.getByLabel('Card number').fill('4242 4242 4242 4242');
@@ -259,12 +264,7 @@ describe('Roasted to Order in a real browser', () => {
     await page.getByRole('button', { name: 'Continue to the shipping address' }).click();
 
     await page.getByRole('heading', { level: 1, name: 'Where your coffee ships' }).waitFor();
-    await page.getByLabel('Recipient’s name').fill(customer.name);
-    await page.getByLabel('Street address').fill('27 Tannery Row');
-    await page.getByLabel('City or town').fill('Millbrook Falls');
-    await page.getByLabel('State or region').fill('CO');
-    await page.getByLabel('ZIP or postal code').fill('80000');
-    await page.getByRole('button', { name: 'Continue to payment' }).click();
+    await fillShippingAddressAndPay();
     await page.getByRole('heading', { name: 'Test payment' }).waitFor();
     await page.getByRole('link', { name: 'Cancel and go back to the shop' }).click();
 

@@ -1,8 +1,7 @@
 // @vitest-environment happy-dom
 import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Subscription } from '@shared/schemas/subscriptions';
-import { jsonResponse, makeUser, renderApp, stubFetch } from '@/testing/test-utils';
+import { jsonResponse, makeSubscription, makeUser, renderApp, stubFetch } from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -43,47 +42,7 @@ describe('account area', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Hello, Wren Calloway' })).toBeTruthy();
   });
   it('shows the next delivery’s roast, ship and ready-from days when the customer subscribes', async () => {
-    // An invented subscription and its next delivery.
-    const delivery = {
-      roastDate: '2026-12-09',
-      shipDate: '2026-12-10',
-      readyFrom: '2026-12-14',
-      bestBefore: '2027-01-06',
-      expectedArrival: '2026-12-15',
-      readyOnArrival: true,
-      status: 'scheduled',
-      locked: false,
-      cutoffAt: '2026-12-08T19:00:00Z',
-      lotCode: 'RD-T01',
-      coffee: 'Test Ridge Washed',
-      roastLevel: 'light',
-      bagSize: '12oz',
-      bagsPerDelivery: 2,
-      grind: 'whole-bean',
-      brewMethod: 'filter',
-      orderId: null,
-      paid: false,
-    } satisfies Subscription['nextDelivery'];
-    const subscription: Subscription = {
-      id: '5a7c9e1b-3d5f-4a6b-8c9d-0e1f2a3b4c5d',
-      status: 'active',
-      lotCode: 'RD-T01',
-      coffee: 'Test Ridge Washed',
-      roastLevel: 'light',
-      bagSize: '12oz',
-      bagsPerDelivery: 2,
-      grind: 'whole-bean',
-      brewMethod: 'filter',
-      cadenceWeeks: 1,
-      pausedUntil: null,
-      cancelAtPeriodEnd: false,
-      endsOn: null,
-      priceCents: 3935,
-      currency: 'usd',
-      shippingAddress: { name: 'Ines Marlow', line1: '14 Quarry Lane', line2: null, city: 'Ashfield', region: 'OR', postalCode: '97000', country: 'US' },
-      nextDelivery: delivery,
-      createdAt: '2026-11-20T16:00:00Z',
-    };
+    const subscription = makeSubscription();
     stubFetch((url) =>
       url.pathname === '/api/subscriptions' ? jsonResponse({ items: [subscription] }) : jsonResponse({ error: { code: 'not_found', message: 'No fake' } }, 404),
     );
