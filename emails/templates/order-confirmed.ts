@@ -50,7 +50,7 @@ export const orderConfirmed: EmailTemplate<'order-confirmed'> = {
     if (p.shipTo) {
       blocks.push({ kind: 'address', title: 'Shipping to', lines: addressLines(p.shipTo) });
     }
-    blocks.push({ kind: 'button', label: 'See your account', url: shopLink(context, '/account') });
+    blocks.push({ kind: 'button', label: 'See your order', url: shopLink(context, `/orders/${encodeURIComponent(p.orderId)}`) });
     return { heading: 'Your order is confirmed', preheader: `Order ${orderReference(p.orderId)}: ${formatMoney(p.totalCents, p.currency)}, paid.`, blocks };
   },
 };

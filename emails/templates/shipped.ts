@@ -1,11 +1,11 @@
 import { formatDay, greeting } from '../parts/format';
 import type { Block } from '../parts/layout';
 import { orderReference } from '../../shared/domain/order-reference';
-import { type EmailTemplate } from '../parts/template';
+import { shopLink, type EmailTemplate } from '../parts/template';
 
 export const shipped: EmailTemplate<'shipped'> = {
   subject: (p) => (p.kind === 'green' ? 'Your green coffee is on its way' : 'Your coffee is on its way'),
-  content(p) {
+  content(p, context) {
     const rows: [string, string][] = [
       ['Order', orderReference(p.orderId)],
       ['Carrier', p.carrier],
@@ -20,6 +20,7 @@ export const shipped: EmailTemplate<'shipped'> = {
       { kind: 'facts', rows },
     ];
     if (p.trackingUrl) blocks.push({ kind: 'button', label: 'Track your parcel', url: p.trackingUrl });
+    blocks.push({ kind: 'button', label: 'See your order', url: shopLink(context, `/orders/${encodeURIComponent(p.orderId)}`) });
     if (p.readyFrom && p.readyOnArrival) {
       blocks.push({
         kind: 'paragraph',

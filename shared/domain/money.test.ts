@@ -1,8 +1,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { currencies, currencyExponent, formatMoney, isCurrencyCode, minorUnitDigits, percentOf, sumMinor, toMinorUnits } from './money';
+import { currencies, currencyExponent, shopCurrencies, formatMoney, isCurrencyCode, minorUnitDigits, percentOf, sumMinor, toMinorUnits } from './money';
 
 describe('currencies and their minor units', () => {
+  it('offers shops only currencies with zero or two decimals (Stripe takes three-decimal amounts in tens only: Stripe docs, Currencies)', () => {
+    expect(shopCurrencies).toEqual(expect.arrayContaining(['usd', 'eur', 'jpy']));
+    expect(shopCurrencies).not.toContain('kwd');
+    for (const currency of shopCurrencies) expect([0, 2]).toContain(currencyExponent(currency));
+  });
+
   it('knows two-, zero- and three-decimal currencies', () => {
     expect(currencyExponent('usd')).toBe(2); // Stripe docs, Currencies
     expect(currencyExponent('jpy')).toBe(0); // Stripe docs, Currencies: zero-decimal

@@ -39,6 +39,13 @@ export const currencyExponents = {
 export type CurrencyCode = keyof typeof currencyExponents;
 export const currencies = Object.keys(currencyExponents) as CurrencyCode[];
 
+/**
+ * Currencies a shop may sell in: two- and zero-decimal ones. Stripe takes three-decimal amounts
+ * only in whole tens of the minor unit (Stripe docs, Currencies: three-decimal currencies), which
+ * Restday's percentages and bag prices do not round to, so those are known for reading but not offered.
+ */
+export const shopCurrencies = currencies.filter((code) => currencyExponents[code] !== 3);
+
 export function isCurrencyCode(code: string): code is CurrencyCode {
   return Object.hasOwn(currencyExponents, code);
 }

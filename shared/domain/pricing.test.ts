@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultShopSettings } from '../schemas/settings';
-import { greenBagPrice, pricePerKgFor, quoteGreenOrder, quoteSubscriptionDelivery, type Quote, type TaxRule } from './pricing';
+import { greenBagPrice, pricePerKgFor, quoteGreenOrder, quoteSubscriptionDelivery, subscriptionBagPrices, type Quote, type TaxRule } from './pricing';
 import { greenBagSizes, roastedBagSizes } from './vocabulary';
 
 // Restday's default bands (shared/schemas/settings.ts; invented prices, no carrier's): ≤500 g $6.95, ≤1 kg $8.95,
@@ -120,5 +120,16 @@ describe('subscription deliveries', () => {
         expectBalanced(quoteGreenOrder(items, { 'RD-101': lot, 'RD-102': { pricePerKgCents: 3100, priceBreaks: [] } }, { shipping }));
       }),
     );
+  });
+});
+
+describe('subscriptionBagPrices', () => {
+  it('prices one bag of each size less the subscription discount, rounded half up to the cent', () => {
+    // $18.00 less 10 % = $16.20; $23.00 less 10 % = $20.70; $44.00 less 10 % = $39.60 (Restday's
+    // invented default prices). At 12.5 %: $18.00 × 0.125 = $2.25 → $15.75; $23.00 × 0.125 =
+    // $2.875 → $2.88 (halves up) → $20.12.
+    const prices = { '12oz': 1_800, '1lb': 2_300, '2lb': 4_400 };
+    expect(subscriptionBagPrices({ roastedBagPriceCents: prices, subscriptionDiscountPct: 10 })).toEqual({ '12oz': 1_620, '1lb': 2_070, '2lb': 3_960 });
+    expect(subscriptionBagPrices({ roastedBagPriceCents: prices, subscriptionDiscountPct: 12.5 })).toMatchObject({ '12oz': 1_575, '1lb': 2_012 });
   });
 });

@@ -15,7 +15,7 @@ import { percentOf, sumMinor } from './money';
 import { planShipping, type ParcelContent, type ShippingPlan, type ShippingSettings } from './parcel-packing';
 import { roundHalfUpDiv } from './integer-math';
 import { bagFillGrams, bagSizeDeclarations, exactGrams } from './units';
-import type { GreenBagSize, RoastedBagSize } from './vocabulary';
+import { roastedBagSizes, type GreenBagSize, type RoastedBagSize } from './vocabulary';
 
 export interface PriceBreak {
   minGrams: number;
@@ -161,4 +161,14 @@ export function quoteSubscriptionDelivery(choice: SubscriptionChoice, settings: 
   };
   const shipping = planShipping([{ key: bags.description, fillGrams: bagFillGrams(choice.bagSize), quantity: choice.bagsPerDelivery }], settings.shipping);
   return assembleQuote([bags, ...(discountCents > 0 ? [discount] : [])], shipping, taxRule);
+}
+
+/** One subscription bag of each roasted size after the subscription discount, before shipping. */
+export function subscriptionBagPrices(settings: Pick<PricingSettings, 'roastedBagPriceCents' | 'subscriptionDiscountPct'>): Record<RoastedBagSize, number> {
+  return Object.fromEntries(
+    roastedBagSizes.map((size) => {
+      const regular = settings.roastedBagPriceCents[size];
+      return [size, regular - percentOf(regular, settings.subscriptionDiscountPct)];
+    }),
+  ) as Record<RoastedBagSize, number>;
 }

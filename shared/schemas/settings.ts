@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { HARD_FLOOR_LOAD_PCT } from '../domain/batch-planner';
+import { carrierNamesAreUnique, isTrackingUrlTemplate, TRACKING_PLACEHOLDER } from '../domain/carriers';
 import { hasAtMostDecimals } from '../domain/integer-math';
-import { currencies, type CurrencyCode } from '../domain/money';
+import { shopCurrencies, type CurrencyCode } from '../domain/money';
 import { DEFAULT_LOSS_MIN_BATCHES, defaultLossModel } from '../domain/roast-loss';
 import { isClockTime, isValidTimeZone } from '../domain/shop-time';
 import { postalAddressInputSchema } from './address';
@@ -11,7 +12,7 @@ import { roastedBagSizes, roastLevels, shipPolicies, weekdays } from '../domain/
  * The owner's shop settings: body of `PUT /api/roastery/settings` and reply of its GET.
  * Fields added after the first version of that body (currency, restAdjustDays, dayCapacityGrams, lossModelMinBatches,
  * roastedBagPriceCents, subscriptionDiscountPct, renewalReminderDays, shipping, shipPolicy,
- * holdOverWeekend) default when left out; placeOfBusiness, added with the bag labels that print it, must be sent.
+ * holdOverWeekend, carriers) default when left out; placeOfBusiness, added with the bag labels that print it, must be sent.
  */
 
 const percent = (max: number) =>
@@ -71,6 +72,18 @@ const shippingSchema = z
     path: ['bands'],
   });
 
+/** A carrier the shop ships with: the name staff give on the Pack List and its tracking page. */
+export const carrierSchema = z.object({
+  name: z.string().trim().min(1, 'Name the carrier.').max(60, 'Keep the carrier to 60 characters.'),
+  trackingUrlTemplate: z
+    .string()
+    .trim()
+    .max(500, 'Keep the address to 500 characters.')
+    .refine(isTrackingUrlTemplate, `Use an https address with ${TRACKING_PLACEHOLDER} where the tracking number goes.`),
+});
+
+const carrierListSchema = z.array(carrierSchema).max(20, 'List at most 20 carriers.').refine(carrierNamesAreUnique, 'Give each carrier its own name.');
+
 // Darker roasts degas faster [Smrke et al. 2017]: light +1 day, medium-dark, dark and French −1
 // (from memory).
 const defaultRestAdjustDays = { light: 1, medium: 0, 'medium-dark': -1, dark: -1, french: -1 };
@@ -104,7 +117,7 @@ export type PlaceOfBusiness = z.output<typeof placeOfBusinessSchema>;
 export const shopSettingsSchema = z
   .object({
     timeZone: z.string().refine(isValidTimeZone, 'Use an IANA time zone such as America/Denver.'),
-    currency: z.enum(currencies as [CurrencyCode, ...CurrencyCode[]]).default('usd'),
+    currency: z.enum(shopCurrencies as [CurrencyCode, ...CurrencyCode[]]).default('usd'),
     roastWeekdays: weekdayList,
     cutoff: z.object({
       time: z.string().refine(isClockTime, 'Use 24-hour HH:MM, e.g. 12:00.'),
@@ -136,6 +149,8 @@ export const shopSettingsSchema = z
     shipping: shippingSchema.default(() => ({ ...defaultShipping, bands: defaultShipping.bands.map((band) => ({ ...band })) })),
     /** Null only until the owner first saves the settings: a shop installed before labels carried it. */
     placeOfBusiness: placeOfBusinessSchema.nullable(),
+    /** Carriers the shipped e-mail links to; a carrier not listed gets its tracking number alone. */
+    carriers: carrierListSchema.default(() => []),
   })
   .refine((settings) => settings.bestBeforeDays > Math.max(settings.restDays.filter, settings.restDays.espresso), {
     message: 'The best-before date must come after the coffee is ready.',
@@ -182,4 +197,5 @@ export const defaultShopSettings: ShopSettings = shopSettingsSchema.parse({
   renewalReminderDays: DEFAULT_RENEWAL_REMINDER_DAYS,
   shipping: defaultShipping,
   placeOfBusiness: null,
+  carriers: [],
 } satisfies ShopSettingsInput);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { instant, roastDatesSchema } from './dates';
-import { brewMethods, roastedBagSizes, roastLevels, shipPolicies } from '../domain/vocabulary';
+import { brewMethods, roastedBagSizes, roastLevels, shipPolicies, type RoastedBagSize } from '../domain/vocabulary';
 
 /** Most bags in one delivery (the subscriptions table allows 1–10). */
 const maxBags = 10;
@@ -52,6 +52,8 @@ export const subscriptionPreviewSchema = z.object({
   regularPriceCents: z.number().int(),
   discountPct: z.number(),
   shippingCents: z.number().int(),
+  /** One bag of each size after the subscription discount, before shipping, for the size picker. */
+  bagPriceCents: z.object(Object.fromEntries(roastedBagSizes.map((size) => [size, z.number().int()])) as Record<RoastedBagSize, z.ZodNumber>),
   currency: z.string(),
   /** The shop's ship policy, so the builder can say whether the bag lands ready to brew. */
   shipPolicy: z.enum(shipPolicies),

@@ -8,7 +8,11 @@ function withSearch(pathname: string, search?: URLSearchParams): string {
 export const paths = {
   home: { path: '/', getHref: () => '/' },
   lots: { path: '/lots', getHref: (search?: URLSearchParams) => withSearch('/lots', search) },
-  lot: { path: '/lots/:code', getHref: (code: string) => `/lots/${encodeURIComponent(code)}` },
+  lot: {
+    path: '/lots/:code',
+    /** `priceUnit` 'lb' carries the Green Lots price unit to the lot page. */
+    getHref: (code: string, priceUnit: 'kg' | 'lb' = 'kg') => `/lots/${encodeURIComponent(code)}${priceUnit === 'lb' ? '?priceUnit=lb' : ''}`,
+  },
   roastingBasics: { path: '/roasting-basics', getHref: () => '/roasting-basics' },
   /** The Roasted to Order builder; its choices ride in the search (`lot`, `level`, `size`, …). */
   subscribe: { path: '/subscribe', getHref: (search?: URLSearchParams) => withSearch('/subscribe', search) },

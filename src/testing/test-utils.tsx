@@ -5,6 +5,7 @@ import { vi } from 'vitest';
 import type { CurrencyCode } from '@shared/domain/money';
 import type { User } from '@shared/schemas/auth';
 import type { LotDetail, LotSummary } from '@shared/schemas/lots';
+import type { Subscription, SubscriptionDelivery } from '@shared/schemas/subscriptions';
 import { createAppRoutes } from '@/app/router';
 import { getCurrentUserQueryOptions } from '@/features/auth/api/get-current-user';
 import { createQueryClient } from '@/lib/query-client';
@@ -131,6 +132,56 @@ export function makeLotDetail(overrides: Partial<LotDetail> = {}): LotDetail {
     priceBreaks: [{ minGrams: 2268, pricePerKgCents: 2200 }],
     photos: [],
     specSheetUrl: null,
+    ...overrides,
+  };
+}
+
+/** An invented delivery of an invented lot, open for changes. */
+export function makeSubscriptionDelivery(overrides: Partial<SubscriptionDelivery> = {}): SubscriptionDelivery {
+  return {
+    roastDate: '2026-12-09',
+    shipDate: '2026-12-10',
+    readyFrom: '2026-12-14',
+    bestBefore: '2027-01-06',
+    expectedArrival: '2026-12-15',
+    readyOnArrival: true,
+    status: 'scheduled',
+    locked: false,
+    cutoffAt: '2026-12-08T19:00:00Z',
+    lotCode: 'RD-T01',
+    coffee: 'Test Ridge Washed',
+    roastLevel: 'light',
+    bagSize: '12oz',
+    bagsPerDelivery: 2,
+    grind: 'whole-bean',
+    brewMethod: 'filter',
+    orderId: null,
+    paid: false,
+    ...overrides,
+  };
+}
+
+/** An invented active subscription whose next delivery is `makeSubscriptionDelivery()`. */
+export function makeSubscription(overrides: Partial<Subscription> = {}): Subscription {
+  return {
+    id: '5a7c9e1b-3d5f-4a6b-8c9d-0e1f2a3b4c5d',
+    status: 'active',
+    lotCode: 'RD-T01',
+    coffee: 'Test Ridge Washed',
+    roastLevel: 'light',
+    bagSize: '12oz',
+    bagsPerDelivery: 2,
+    grind: 'whole-bean',
+    brewMethod: 'filter',
+    cadenceWeeks: 1,
+    pausedUntil: null,
+    cancelAtPeriodEnd: false,
+    endsOn: null,
+    priceCents: 3935,
+    currency: 'usd',
+    shippingAddress: { name: 'Ines Marlow', line1: '14 Quarry Lane', line2: null, city: 'Ashfield', region: 'OR', postalCode: '97000', country: 'US' },
+    nextDelivery: makeSubscriptionDelivery(),
+    createdAt: '2026-11-20T16:00:00Z',
     ...overrides,
   };
 }

@@ -1,12 +1,12 @@
 import { eq } from 'drizzle-orm';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { apiErrorSchema } from '@shared/schemas/errors';
 import { packListResponseSchema, packOrderSchema } from '@shared/schemas/packing';
 import { bagAllocations, deliveries, orderItems } from '../../server/db/schema/index';
 import { createTestApp } from '../setup/test-app';
 import { getTestDb } from '../setup/test-db';
 import { signedInAgent } from '../setup/test-users';
-import { outboxRows } from './outbox-support';
+import { inboxOf, outboxRows, testRelay, waitFor } from './outbox-support';
 import { allocationsOf, orderStatusOf } from './packing-support';
 import {
   createDelivery,
@@ -14,9 +14,11 @@ import {
   createLotForSale,
   createRoastedOrder,
   createSubscription,
+  createCustomer,
   createTestUser,
   pickRotationLot,
   recordBatch,
+  saveTestShopSettings,
   type TestUser,
   uniqueDay,
 } from '../factories/index';
@@ -329,5 +331,57 @@ describe('POST /api/roastery/days/:date/ship — mark all packed orders shipped'
     expect(apiErrorSchema.parse(noCarrier.body).error.fields).toHaveProperty('carrier');
     expect((await orderStatusOf(packed.id)).status).toBe('packed');
     expect(await outboxRows([`shipped:${packed.id}`])).toHaveLength(0);
+  });
+});
+
+describe('POST /api/orders/:id/ship — the shipped e-mail and the shop’s carriers', () => {
+  // Invented carriers on reserved example domains.
+  const carriers = [
+    { name: 'Kestrel Post', trackingUrlTemplate: 'https://track.example.com/parcel/{tracking}' },
+    { name: 'Larkspur Freight', trackingUrlTemplate: 'https://larkspur.example.net/find?number={tracking}' },
+  ];
+  beforeAll(async () => {
+    await saveTestShopSettings({ carriers });
+  });
+  afterAll(async () => {
+    await saveTestShopSettings();
+  });
+
+  async function shipAndRead(carrier: string, trackingNumber: string) {
+    const recipient = await createCustomer('shipped');
+    const lot = await createLotForSale(20_000);
+    const order = await createGreenOrder(recipient.id, lot.id, { status: 'packed', shipDate: uniqueDay() });
+    const response = await staff.post(`/api/orders/${order.id}/ship`).send({ carrier, trackingNumber });
+    expect(response.status, JSON.stringify(response.body)).toBe(200);
+    const { relay, mailer } = testRelay({ smtpUrl: inject('smtpUrl') });
+    const [mail] = await waitFor(
+      async () => {
+        await relay.relayOnce();
+        return inboxOf(inject('mailCatcherUrl'), recipient.email);
+      },
+      (mails) => mails.length > 0,
+      10_000,
+      'the shipped e-mail',
+    );
+    mailer.close();
+    return { order, text: mail!.text ?? '', html: mail!.html ?? '' };
+  }
+
+  it('links a listed carrier’s tracking page with the number in it, and the order page with its number', async () => {
+    const { order, text, html } = await shipAndRead('larkspur freight', 'lf 77-01 a');
+    // The Pack List keeps the number as staff typed it, upper-case and without spaces.
+    expect(text).toContain('https://larkspur.example.net/find?number=LF77-01A');
+    expect(html).toContain('Track your parcel');
+    expect(text).toContain(`/orders/${order.id}`);
+    expect(text).toContain(order.id.slice(0, 8).toUpperCase());
+    expect(text).toContain('Larkspur Freight');
+  });
+
+  it('shows the tracking number alone for a carrier the shop has not listed', async () => {
+    const { order, text, html } = await shipAndRead('Heron Parcel', 'HP123');
+    expect(text).toContain('HP123');
+    expect(html).not.toContain('Track your parcel');
+    expect(text).not.toMatch(/example\.(com|net)/);
+    expect(text).toContain(`/orders/${order.id}`);
   });
 });

@@ -104,7 +104,7 @@ describe('a roast day’s Roast List is its production record', () => {
       const shipped = await staff
         .post(`/api/orders/${orderId}/ship`)
         .set('X-Restday-Client', 'web')
-        .send({ carrier: 'USPS', trackingNumber: `9400${tag}` });
+        .send({ carrier: 'Kestrel Post', trackingNumber: `9400${tag}` });
       expect(shipped.status, JSON.stringify(shipped.body)).toBe(200);
     }
 

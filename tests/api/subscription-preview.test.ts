@@ -37,6 +37,8 @@ describe('GET /api/subscriptions/preview', () => {
       regularPriceCents: 4495,
       discountPct: 10,
       shippingCents: 895,
+      // One bag each, less 10 %: $18.00 → $16.20, $23.00 → $20.70, $44.00 → $39.60 (default prices).
+      bagPriceCents: { '12oz': 1620, '1lb': 2070, '2lb': 3960 },
       currency: 'usd',
       shipPolicy: 'ready_on_arrival',
       deliveries: [

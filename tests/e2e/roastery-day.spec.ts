@@ -213,11 +213,11 @@ describe('a roast day in a real browser', () => {
     if (order.status === 'roasted') await markPackedOnPage(page, card);
     await card.getByRole('button', { name: 'Mark shipped' }).click();
     const dialog = page.getByRole('dialog');
-    await dialog.getByLabel('Carrier').fill('USPS');
+    await dialog.getByLabel('Carrier').fill('Kestrel Post');
     // An invented tracking number.
     await dialog.getByLabel('Tracking number').fill('wr e2e 0042');
     await dialog.getByRole('button', { name: 'Mark shipped' }).click();
-    await page.getByText(/order is marked shipped \(USPS WRE2E0042\)/).waitFor();
+    await page.getByText(/order is marked shipped \(Kestrel Post WRE2E0042\)/).waitFor();
     // Shipped orders leave the list of those still to ship; the Shipped filter shows them.
     await card.waitFor({ state: 'detached' });
     await page.getByRole('radio', { name: /^Shipped \(\d+\)$/ }).check();
@@ -226,7 +226,7 @@ describe('a roast day in a real browser', () => {
     const packList = await getJson<PackListResponse>(page, `/api/roastery/days/${date}/pack-list`);
     expect(packList.orders.find((candidate) => candidate.orderId === order.orderId)).toMatchObject({
       status: 'shipped',
-      carrier: 'USPS',
+      carrier: 'Kestrel Post',
       trackingNumber: 'WRE2E0042',
     });
     expect(problems).toEqual([]);

@@ -43,6 +43,16 @@ async function accessibilityViolations(): Promise<string[]> {
   return results.violations.flatMap((violation) => violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')}`));
 }
 
+/** The invented subscriber's address on the shipping step, then on to the payment page. */
+async function fillShippingAddressAndPay() {
+  await page.getByLabel('Recipient’s name').fill(customer.name);
+  await page.getByLabel('Street address').fill('27 Tannery Row');
+  await page.getByLabel('City or town').fill('Millbrook Falls');
+  await page.getByLabel('State or region').fill('CO');
+  await page.getByLabel('ZIP or postal code').fill('80000');
+  await page.getByRole('button', { name: 'Continue to payment' }).click();
+}
+
 type CaughtEmail = { subject: string; time: string };
 
 /** Waits until the mail catcher holds a message to `address` whose subject matches each of `subjects`. */
@@ -103,12 +113,7 @@ describe('Roasted to Order in a real browser', () => {
   });
 
   it('pays with 4242 on the payment page and sees the schedule once the payment is confirmed', async () => {
-    await page.getByLabel('Recipient’s name').fill(customer.name);
-    await page.getByLabel('Street address').fill('27 Tannery Row');
-    await page.getByLabel('City or town').fill('Millbrook Falls');
-    await page.getByLabel('State or region').fill('CO');
-    await page.getByLabel('ZIP or postal code').fill('80000');
-    await page.getByRole('button', { name: 'Continue to payment' }).click();
+    await fillShippingAddressAndPay();
 
     await page.getByRole('heading', { name: 'Test payment' }).waitFor();
     await page.getByLabel('Card number').fill('4242 4242 4242 4242');
@@ -242,4 +247,35 @@ describe('Roasted to Order in a real browser', () => {
       await staffContext.close();
     }
   }, 90_000);
+  it('leaving the payment page unpaid comes back to the builder with the same choices, not the defaults', async () => {
+    await openInApp(page, `${baseUrl}/subscribe`);
+    await page.getByRole('list', { name: 'First three deliveries' }).waitFor();
+    await page.getByRole('group', { name: 'Bag size' }).getByRole('radio', { name: /^2 lb/ }).check();
+    await page
+      .getByRole('group', { name: /^Brew method/ })
+      .getByRole('radio', { name: /^Espresso/ })
+      .check();
+    await page
+      .getByRole('group', { name: /^Grind/ })
+      .getByRole('radio', { name: 'Espresso' })
+      .check();
+    await page.getByRole('group', { name: 'How often' }).getByRole('radio', { name: 'Every 4 weeks' }).check();
+    await page.waitForURL((url) => url.searchParams.get('size') === '2lb' && url.searchParams.get('every') === '4');
+    await page.getByRole('button', { name: 'Continue to the shipping address' }).click();
+
+    await page.getByRole('heading', { level: 1, name: 'Where your coffee ships' }).waitFor();
+    await fillShippingAddressAndPay();
+    await page.getByRole('heading', { name: 'Test payment' }).waitFor();
+    await page.getByRole('link', { name: 'Cancel and go back to the shop' }).click();
+
+    await page.getByText(/Your choices are below/).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/subscribe');
+    await page.getByRole('list', { name: 'First three deliveries' }).waitFor();
+    const checked = (group: string | RegExp) => page.getByRole('group', { name: group }).getByRole('radio', { checked: true });
+    expect(await checked('Bag size').getAttribute('value')).toBe('2lb');
+    expect(await checked(/^Brew method/).getAttribute('value')).toBe('espresso');
+    expect(await checked(/^Grind/).getAttribute('value')).toBe('espresso');
+    expect(await checked('How often').getAttribute('value')).toBe('4');
+    expect(problems).toEqual([]);
+  }, 60_000);
 });

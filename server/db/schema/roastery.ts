@@ -62,6 +62,7 @@ export const shopSettings = pgTable(
     shipping: jsonb('shipping').$type<ShopSettings['shipping']>().notNull().default(defaultShopSettings.shipping),
     /** The street address bag labels print under the shop's name; null until the owner enters it. */
     placeOfBusiness: jsonb('place_of_business').$type<ShopSettings['placeOfBusiness']>(),
+    carriers: jsonb('carriers').$type<ShopSettings['carriers']>().notNull().default(defaultShopSettings.carriers),
     updatedAt: instant('updated_at')
       .notNull()
       .defaultNow()

@@ -1,6 +1,7 @@
 // One-time green orders (invented customers and baskets): a little history, and the past week's
 // orders, the newest awaiting payment or shipping next, the oldest shipped.
 import type { EmailPayloads } from '../../../emails/index';
+import { demoTrackingUrl } from './shop';
 import type { BagSize, OrderStatus } from '../../../shared/domain/vocabulary';
 import type * as schema from '../schema/index';
 import { demoLots, type DemoLot } from './demo-lots';
@@ -122,7 +123,9 @@ export function demoGreenOrders(ctx: ScenarioContext) {
     const shippingAddress = accounts.addressOf(plan.userId);
     const orderShipDate = status === 'refunded' ? null : shipDate;
     // Drawn in the row's column order, so the PRNG sequence (and every demo value after it) is unchanged.
-    const shipment = shippedAt ? { shippedAt, carrier: rng.pick(['USPS', 'UPS']), trackingNumber: `WR-DEMO-${rng.hex(5).toUpperCase()}` } : null;
+    const shipment = shippedAt
+      ? { shippedAt, carrier: rng.pick(['Kestrel Post', 'Larkspur Freight']), trackingNumber: `WR-DEMO-${rng.hex(5).toUpperCase()}` }
+      : null;
     orders.push({
       id,
       userId: plan.userId,
@@ -168,7 +171,13 @@ export function demoGreenOrders(ctx: ScenarioContext) {
     }
     if (shipment) {
       const { carrier, trackingNumber } = shipment;
-      outbox.queue('shipped', plan.userId, id, { name, orderId: id, kind: 'green', carrier, trackingNumber }, shipment.shippedAt);
+      outbox.queue(
+        'shipped',
+        plan.userId,
+        id,
+        { name, orderId: id, kind: 'green', carrier, trackingNumber, trackingUrl: demoTrackingUrl(carrier, trackingNumber) },
+        shipment.shippedAt,
+      );
     }
   }
   return { orders, orderItems, stockMovements };

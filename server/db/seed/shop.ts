@@ -1,10 +1,23 @@
 // The invented shop's settings and its Roast Calendar overrides (an invented holiday and maintenance day).
+import { findCarrier, trackingUrl } from '../../../shared/domain/carriers';
 import { defaultLossModel } from '../../../shared/domain/roast-loss';
 import { defaultShopSettings } from '../../../shared/schemas/settings';
 import type * as schema from '../schema/index';
 import { demoCalendar, type DemoCalendar } from './demo-dates';
 import { demoShop } from './demo-people';
 import type { Insert, SeedClock } from './scenario-values';
+
+/** The carriers the demo shop ships with (invented names; the demo orders use them). */
+export const demoCarriers = [
+  { name: 'Kestrel Post', trackingUrlTemplate: 'https://track.example.com/parcel/{tracking}' },
+  { name: 'Larkspur Freight', trackingUrlTemplate: 'https://larkspur.example.net/find?number={tracking}' },
+];
+
+/** The tracking page of a demo parcel, as the shipped e-mail links it. */
+export function demoTrackingUrl(carrierName: string, trackingNumber: string): string | undefined {
+  const carrier = findCarrier(demoCarriers, carrierName);
+  return carrier && trackingUrl(carrier.trackingUrlTemplate, trackingNumber);
+}
 
 /** The shop's settings: the product's default schedule, roaster and loss model. */
 export function demoShopSettings(clock: SeedClock) {
@@ -32,6 +45,8 @@ export function demoShopSettings(clock: SeedClock) {
     maxLoadPct: 80,
     dailyCapacityGrams: 48_000,
     lossModel: defaultLossModel,
+    // Invented carriers with reserved example domains: the shipped e-mails link to no real site.
+    carriers: demoCarriers,
     updatedAt: clock.daysAgo(30),
   } satisfies Insert<typeof schema.shopSettings>;
 }

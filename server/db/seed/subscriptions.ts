@@ -1,5 +1,6 @@
 // Subscriptions (invented subscribers), their deliveries, and the order each billed delivery made.
 import type { EmailPayloads } from '../../../emails/index';
+import { demoTrackingUrl } from './shop';
 import {
   roastersRotationName,
   type BrewMethod,
@@ -244,7 +245,9 @@ function billDelivery(
     lineTotalCents: priceCents,
   };
   // Drawn in the row's column order, so the PRNG sequence (and every demo value after it) is unchanged.
-  const shipment = shippedAt ? { shippedAt, carrier: rng.pick(['USPS', 'UPS']), trackingNumber: `WR-DEMO-${rng.hex(5).toUpperCase()}` } : null;
+  const shipment = shippedAt
+    ? { shippedAt, carrier: rng.pick(['Kestrel Post', 'Larkspur Freight']), trackingNumber: `WR-DEMO-${rng.hex(5).toUpperCase()}` }
+    : null;
   const stripeInvoiceId = `in_demo_${rng.hex(8)}`;
   rows.orders.push({
     id,
@@ -285,7 +288,16 @@ function billDelivery(
       'shipped',
       userId,
       id,
-      { name, orderId: id, kind: 'roasted', carrier, trackingNumber, readyFrom: dates.readyFrom, bestBefore: dates.bestBefore },
+      {
+        name,
+        orderId: id,
+        kind: 'roasted',
+        carrier,
+        trackingNumber,
+        trackingUrl: demoTrackingUrl(carrier, trackingNumber),
+        readyFrom: dates.readyFrom,
+        bestBefore: dates.bestBefore,
+      },
       shipment.shippedAt,
     );
     outbox.queue(

@@ -1,4 +1,5 @@
 import { labelStocks, type LabelStockId } from '@shared/domain/label-stock';
+import { findCarrier, trackingUrl } from '@shared/domain/carriers';
 import { bagNetWeightLabel } from '@shared/domain/labels';
 import { BagTooHeavyForShipping, planShipping, type ShippingSettings } from '@shared/domain/parcel-packing';
 import { arrivalDate } from '@shared/domain/roast-schedule';
@@ -167,6 +168,8 @@ export function createPackingService({ repo, clock }: PackingDeps) {
     // When it should land, counted from the day it really left, and whether it is ready by then.
     const settings = await tx.shopSettings();
     const expectedArrival = arrivalDate(localDateOf(shippedAt, settings.timeZone), settings.transitDays);
+    // A carrier the shop has listed gets its tracking page; any other, the number alone.
+    const knownCarrier = findCarrier(settings.carriers, carrier);
     await queueEmail(tx.tx, {
       template: 'shipped',
       to: order.customerEmail,
@@ -175,8 +178,9 @@ export function createPackingService({ repo, clock }: PackingDeps) {
         name: order.customerName,
         orderId: order.id,
         kind: order.kind,
-        carrier,
+        carrier: knownCarrier?.name ?? carrier,
         trackingNumber,
+        ...(knownCarrier ? { trackingUrl: trackingUrl(knownCarrier.trackingUrlTemplate, trackingNumber) } : {}),
         expectedArrival,
         ...(roasted && order.readyFrom ? { readyFrom: order.readyFrom, readyOnArrival: expectedArrival >= order.readyFrom } : {}),
         ...(roasted && order.bestBefore ? { bestBefore: order.bestBefore } : {}),

@@ -45,6 +45,7 @@ function toSettings(row: SettingsRow): ShopSettings {
     renewalReminderDays: row.renewalReminderDays,
     shipping: row.shipping,
     placeOfBusiness: row.placeOfBusiness ?? null,
+    carriers: row.carriers,
   };
 }
 
@@ -76,6 +77,7 @@ function toColumns(settings: ShopSettings) {
     renewalReminderDays: settings.renewalReminderDays,
     shipping: settings.shipping,
     placeOfBusiness: settings.placeOfBusiness,
+    carriers: settings.carriers,
   };
 }
 

@@ -1,4 +1,4 @@
-import { quoteSubscriptionDelivery } from '@shared/domain/pricing';
+import { quoteSubscriptionDelivery, subscriptionBagPrices } from '@shared/domain/pricing';
 import { greenNeededForRoasted } from '@shared/domain/roast-loss';
 import { ScheduleError, scheduleOrder, subscriptionDeliveries, type RoastCalendar } from '@shared/domain/roast-schedule';
 import { localDateOf } from '@shared/domain/shop-time';
@@ -67,6 +67,7 @@ export function createSubscriptionPreviewService({ repo, clock }: { repo: Subscr
           regularPriceCents: regular.totalCents,
           discountPct: settings.subscriptionDiscountPct,
           shippingCents: quote.shippingCents,
+          bagPriceCents: subscriptionBagPrices(settings),
           currency: settings.currency,
           shipPolicy: settings.shipPolicy,
           deliveries: deliveries.map(({ roastDate, shipDate, readyFrom, bestBefore, expectedArrival, cutoffAt }) => ({

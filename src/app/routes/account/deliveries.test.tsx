@@ -1,8 +1,20 @@
 // @vitest-environment happy-dom
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Subscription, SubscriptionDelivery } from '@shared/schemas/subscriptions';
-import { apiErrorResponse, jsonResponse, makeLotDetail, makeUser, renderApp, requestedUrls, sentRequests, stubFetch, enterValue } from '@/testing/test-utils';
+import type { Subscription } from '@shared/schemas/subscriptions';
+import {
+  apiErrorResponse,
+  jsonResponse,
+  makeLotDetail,
+  makeSubscription as makeSubscriptionWith,
+  makeSubscriptionDelivery,
+  makeUser,
+  renderApp,
+  requestedUrls,
+  sentRequests,
+  stubFetch,
+  enterValue,
+} from '@/testing/test-utils';
 
 afterEach(() => {
   cleanup();
@@ -12,29 +24,7 @@ afterEach(() => {
 const subscriptionId = '5a7c9e1b-3d5f-4a6b-8c9d-0e1f2a3b4c5d';
 
 // Invented deliveries of an invented lot: the first is past its cutoff, the second is the next open one.
-function makeDelivery(overrides: Partial<SubscriptionDelivery> = {}): SubscriptionDelivery {
-  return {
-    roastDate: '2026-12-09',
-    shipDate: '2026-12-10',
-    readyFrom: '2026-12-14',
-    bestBefore: '2027-01-06',
-    expectedArrival: '2026-12-15',
-    readyOnArrival: true,
-    status: 'scheduled',
-    locked: false,
-    cutoffAt: '2026-12-08T19:00:00Z',
-    lotCode: 'RD-T01',
-    coffee: 'Test Ridge Washed',
-    roastLevel: 'light',
-    bagSize: '12oz',
-    bagsPerDelivery: 2,
-    grind: 'whole-bean',
-    brewMethod: 'filter',
-    orderId: null,
-    paid: false,
-    ...overrides,
-  };
-}
+const makeDelivery = makeSubscriptionDelivery;
 
 const lockedDelivery = makeDelivery({
   roastDate: '2026-12-02',
@@ -55,29 +45,7 @@ const laterDelivery = makeDelivery({
   cutoffAt: '2026-12-15T19:00:00Z',
 });
 
-function makeSubscription(overrides: Partial<Subscription> = {}): Subscription {
-  return {
-    id: subscriptionId,
-    status: 'active',
-    lotCode: 'RD-T01',
-    coffee: 'Test Ridge Washed',
-    roastLevel: 'light',
-    bagSize: '12oz',
-    bagsPerDelivery: 2,
-    grind: 'whole-bean',
-    brewMethod: 'filter',
-    cadenceWeeks: 1,
-    pausedUntil: null,
-    cancelAtPeriodEnd: false,
-    endsOn: null,
-    priceCents: 3935,
-    currency: 'usd',
-    shippingAddress: { name: 'Ines Marlow', line1: '14 Quarry Lane', line2: null, city: 'Ashfield', region: 'OR', postalCode: '97000', country: 'US' },
-    nextDelivery: lockedDelivery,
-    createdAt: '2026-11-20T16:00:00Z',
-    ...overrides,
-  };
-}
+const makeSubscription = (overrides: Partial<Subscription> = {}) => makeSubscriptionWith({ nextDelivery: lockedDelivery, ...overrides });
 
 /** The subscription as it is after the change (with the server's notice, when the test gives one), or a refusal. */
 type Answer = (body: Record<string, unknown>) => (Subscription & { notice?: string }) | Response;

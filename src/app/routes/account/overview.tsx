@@ -4,6 +4,8 @@ import { Link } from 'react-router-dom';
 import { PageTitle } from '@/components/seo/page-title';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/features/auth/api/get-current-user';
+import { useSubscriptions } from '@/features/subscriptions/api/get-subscriptions';
+import { formatDayWithWeekday } from '@/lib/dates';
 
 function AccountCard({ to, icon, title, children }: { to: string; icon: ReactNode; title: string; children: ReactNode }) {
   return (
@@ -23,6 +25,42 @@ function AccountCard({ to, icon, title, children }: { to: string; icon: ReactNod
   );
 }
 
+/** The soonest delivery of the customer's subscriptions, with its roast, ship and ready-from days. */
+function NextDelivery() {
+  const subscriptions = useSubscriptions().data?.items ?? [];
+  const next = subscriptions
+    .flatMap((subscription) => (subscription.nextDelivery ? [{ subscription, delivery: subscription.nextDelivery }] : []))
+    .sort((a, b) => a.delivery.roastDate.localeCompare(b.delivery.roastDate))[0];
+  if (!next) return null;
+  const { subscription, delivery } = next;
+  const days: [string, string][] = [
+    ['Roasted', delivery.roastDate],
+    ['Ships', delivery.shipDate],
+    ['Ready from', delivery.readyFrom],
+  ];
+  return (
+    <section aria-labelledby="next-delivery-heading" className="mb-8 rounded-card border border-rule bg-leaf-wash/40 p-5">
+      <h2 id="next-delivery-heading" className="text-h3">
+        Next delivery
+      </h2>
+      <p className="mt-1 text-ink-muted">{delivery.coffee ?? subscription.coffee}</p>
+      <dl className="mt-3 grid gap-3 sm:grid-cols-3">
+        {days.map(([term, day]) => (
+          <div key={term}>
+            <dt className="text-small text-ink-muted">{term}</dt>
+            <dd className="font-semibold">{formatDayWithWeekday(day)}</dd>
+          </div>
+        ))}
+      </dl>
+      <p className="mt-3">
+        <Link to={paths.account.deliveries.getHref()} className="font-semibold text-leaf underline">
+          See your deliveries
+        </Link>
+      </p>
+    </section>
+  );
+}
+
 export default function AccountOverviewRoute() {
   // The account layout shows this page only once the session is known.
   const user = useCurrentUser().data;
@@ -37,6 +75,8 @@ export default function AccountOverviewRoute() {
           Signed in as <span className="font-semibold break-all text-ink">{user.email}</span>
         </p>
       </header>
+
+      <NextDelivery />
 
       <ul className="grid gap-4 sm:grid-cols-2">
         <AccountCard to={paths.account.profile.getHref()} icon={<KeyRound aria-hidden="true" className="size-5 text-ember" />} title="Profile">

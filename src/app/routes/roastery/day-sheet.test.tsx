@@ -374,13 +374,13 @@ describe('Day Sheet tabs and Pack List', () => {
     const dialog = await screen.findByRole('dialog', { name: 'Mark Juno Reed’s order shipped' });
     fireEvent.click(within(dialog).getByRole('button', { name: 'Mark shipped' }));
     expect(await within(dialog).findByText('Name the carrier.')).toBeTruthy();
-    enterValue(within(dialog).getByLabelText('Carrier'), 'USPS');
+    enterValue(within(dialog).getByLabelText('Carrier'), 'Kestrel Post');
     enterValue(within(dialog).getByLabelText('Tracking number'), 'wr 1234 5678');
     fireEvent.click(within(dialog).getByRole('button', { name: 'Mark shipped' }));
 
-    expect(await screen.findByText(/order is marked shipped \(USPS WR12345678\)/)).toBeTruthy();
+    expect(await screen.findByText(/order is marked shipped \(Kestrel Post WR12345678\)/)).toBeTruthy();
     expect(sentRequests(fetchMock, 'POST', '/api/orders/6b2c3d4e-5f6a-4b7c-9d8e-0f1a2b3c4d5e/ship')[0]?.body).toEqual({
-      carrier: 'USPS',
+      carrier: 'Kestrel Post',
       trackingNumber: 'WR12345678',
     });
     // Shipped orders leave the list of those still to ship; the Shipped filter shows them.

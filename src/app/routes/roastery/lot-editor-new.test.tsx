@@ -100,7 +100,7 @@ describe('New lot', () => {
     fireEvent.click(within(form).getByRole('button', { name: 'Add a quantity break' }));
     type(form, 'Break 1: from (g)', '2268');
     type(form, 'Break 1: price per kg ($)', '20');
-    type(form, 'Reorder point (g)', '4536');
+    type(form, 'Reorder point', '10 lb');
     fireEvent.click(within(form).getByRole('button', { name: 'Add the lot' }));
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Invented Terrace Honey' })).toBeTruthy();

@@ -169,7 +169,7 @@ describe('Lot page in Green Stock: stock', () => {
   it('sets the reorder point and raises the reorder alert', async () => {
     const { fetchMock } = await openEditor();
     const form = screen.getByRole('form', { name: 'Reorder point' });
-    enterValue(within(form).getByLabelText('Reorder point (g)'), '5000');
+    enterValue(within(form).getByLabelText('Reorder point'), '5 kg');
     fireEvent.click(within(form).getByRole('button', { name: 'Save reorder point' }));
 
     expect(await within(form).findByText('Reorder point set to 5 kg · 11 lb.')).toBeTruthy();

@@ -53,7 +53,7 @@ describe('Shop settings', () => {
     renderApp('/roastery/settings', { session: owner });
 
     const timeZone = await screen.findByLabelText('Time zone', {}, { timeout: 15_000 });
-    expect((timeZone as HTMLInputElement).value).toBe('America/Denver');
+    await waitFor(() => expect((timeZone as HTMLSelectElement).value).toBe('America/Denver'));
     const roastDays = screen.getByRole('group', { name: 'Roast days' });
     expect((within(roastDays).getByLabelText('Wednesday') as HTMLInputElement).checked).toBe(true);
     expect((screen.getByLabelText('Roasted 12 oz bag') as HTMLInputElement).value).toBe('18.00');
@@ -95,6 +95,34 @@ describe('Shop settings', () => {
     const body = sentRequests(fetchMock, 'PUT', '/api/roastery/settings')[0]?.body as ShopSettings;
     expect(body.shipPolicy).toBe('after_degassing');
     expect(body.holdOverWeekend).toBe(false);
+  });
+
+  it('picks the time zone from the list of zones, offers no three-decimal currency, and saves a carrier with its tracking page', async () => {
+    const fetchMock = settingsServer();
+    renderApp('/roastery/settings', { session: owner });
+
+    const timeZone = (await screen.findByLabelText('Time zone', {}, { timeout: 15_000 })) as HTMLSelectElement;
+    expect(timeZone.tagName).toBe('SELECT');
+    expect([...timeZone.options].map((option) => option.value)).toContain('Europe/Lisbon');
+    fireEvent.change(timeZone, { target: { value: 'Europe/Lisbon' } });
+    const currencyCodes = [...(screen.getByLabelText('Currency') as HTMLSelectElement).options].map((option) => option.value);
+    expect(currencyCodes).toContain('jpy');
+    expect(currencyCodes).not.toContain('kwd');
+
+    fireEvent.click(screen.getByRole('button', { name: 'Add a carrier' }));
+    enterValue(await screen.findByLabelText('Carrier 1: name'), 'Kestrel Post');
+    const page = screen.getByLabelText('Carrier 1: tracking page');
+    enterValue(page, 'https://track.example.com/parcel/');
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+    await waitFor(() => expect(page.getAttribute('aria-invalid')).toBe('true'));
+    expect(sentRequests(fetchMock, 'PUT', '/api/roastery/settings')).toHaveLength(0);
+
+    enterValue(page, 'https://track.example.com/parcel/{tracking}');
+    fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+    expect(await screen.findByText('Settings saved.')).toBeTruthy();
+    const body = sentRequests(fetchMock, 'PUT', '/api/roastery/settings')[0]?.body as ShopSettings;
+    expect(body.timeZone).toBe('Europe/Lisbon');
+    expect(body.carriers).toEqual([{ name: 'Kestrel Post', trackingUrlTemplate: 'https://track.example.com/parcel/{tracking}' }]);
   });
 
   it('checks the form with the shared schema before sending', async () => {

@@ -67,7 +67,7 @@ function subscribersServer(total = 1) {
             paidAt: '2026-11-20T16:01:00Z',
             roastDate: '2026-11-25',
             shipDate: '2026-11-26',
-            carrier: 'USPS',
+            carrier: 'Kestrel Post',
             trackingNumber: '9400TEST0002',
           },
         },
@@ -111,7 +111,7 @@ describe('Subscribers (Roastery)', () => {
     const deliveries = screen.getByRole('table', { name: 'Deliveries of this subscription' });
     const row = within(deliveries).getByRole('row', { name: /Wed, Nov 25, 2026/ });
     expect(row.textContent).toContain('Shipped');
-    expect(row.textContent).toContain('USPS 9400TEST0002');
+    expect(row.textContent).toContain('Kestrel Post 9400TEST0002');
     expect(screen.getByText('14 Quarry Lane')).toBeTruthy();
   });
 });

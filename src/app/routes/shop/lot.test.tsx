@@ -66,6 +66,29 @@ describe('lot page', () => {
     await waitFor(() => expect(document.title).toBe('Test Ridge Washed · Green Lots · Restday'));
   });
 
+  it('shows the safety cautions once, below the Home Roast Guide', async () => {
+    lotServer();
+    renderApp('/lots/RD-T01');
+
+    await screen.findByRole('table', { name: 'Time after first crack' });
+    expect(screen.getAllByRole('region', { name: 'Roast safely' })).toHaveLength(1);
+    expect(screen.queryByText('Before you roast')).toBeNull();
+  });
+
+  it('reads prices per lb and quantity breaks in pounds when Green Lots was filtered per lb', async () => {
+    lotServer();
+    renderApp('/lots/RD-T01?priceUnit=lb');
+
+    await screen.findByRole('heading', { level: 1, name: 'Test Ridge Washed' });
+    // 1 lb = 0.45359237 kg exactly (NIST SP 811, App. B): $22.00 / kg × 0.45359237 = $9.979 → $9.98 / lb,
+    // and the 2,268 g break ÷ 453.59237 g = 5.0001 lb.
+    expect(await screen.findByText('5 lb or more: $9.98 / lb')).toBeTruthy();
+    expect(screen.getByText(/\/ lb$/, { selector: 'p' })).toBeTruthy();
+    // The weight toggle switches the breaks back to metric.
+    fireEvent.click(screen.getByRole('button', { name: 'Grams' }));
+    expect(await screen.findByText('2.3 kg or more: $9.98 / lb')).toBeTruthy();
+  });
+
   it('says when no lot has that code', async () => {
     stubFetch(() => apiErrorResponse(404, 'lot_not_found', 'No lot with that code.'));
     renderApp('/lots/RD-GONE');
@@ -111,7 +134,7 @@ describe('lot page', () => {
     expect(lightRow.textContent).toContain('Suggested for this lot');
     // Popper times after first crack (common practice).
     expect(within(levels).getByRole('row', { name: /Medium-dark/ }).textContent).toContain('30–40 s');
-    expect(screen.getByText('Never leave the roaster unattended while it runs.')).toBeTruthy();
+    expect(screen.getByRole('region', { name: 'Roast safely' }).textContent).toContain('Never leave a roast unattended.');
     // 454 g at up to 80 g a batch (common practice) → 6 batches.
     expect(screen.getByText('Batches for a 1 lb bag').nextElementSibling?.textContent).toBe('6');
 

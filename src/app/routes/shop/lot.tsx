@@ -3,7 +3,7 @@ import { deliveryGreenGrams } from '@shared/domain/delivery-plan';
 import { defaultShopSettings } from '@shared/schemas/settings';
 import { ArrowLeft } from 'lucide-react';
 import { lazy, Suspense, useState } from 'react';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { GreenBagSize, HomeRoastDevice, RoastLevel } from '@shared/domain/vocabulary';
 import type { LotDetail } from '@shared/schemas/lots';
 import { NotFoundMessage } from '@/components/errors/not-found-message';
@@ -18,6 +18,7 @@ import { HomeRoastGuide } from '@/features/lots/components/home-roast-guide';
 import { LotDetails } from '@/features/lots/components/lot-details';
 import { LotPurchasePanel } from '@/features/lots/components/lot-purchase-panel';
 import { WeightUnitToggle } from '@/features/lots/components/weight-unit-toggle';
+import { isPriceUnit } from '@/features/lots/utils/price-per-unit';
 import type { WeightUnit } from '@/features/lots/utils/weight-unit';
 import { ApiError } from '@/lib/api-client';
 
@@ -52,7 +53,10 @@ function LotPageSkeleton() {
 function LotPage({ lot }: { lot: LotDetail }) {
   const cart = useCart();
   const [size, setSize] = useState<GreenBagSize>('1lb');
-  const [unit, setUnit] = useState<WeightUnit>('g');
+  const priceUnitParam = useSearchParams()[0].get('priceUnit');
+  const priceUnit = isPriceUnit(priceUnitParam) ? priceUnitParam : 'kg';
+  // A visitor who reads prices per lb reads weights in US units too.
+  const [unit, setUnit] = useState<WeightUnit>(priceUnit === 'lb' ? 'oz' : 'g');
   const [device, setDevice] = useState<HomeRoastDevice>('popper');
   const [level, setLevel] = useState<RoastLevel>(lot.suggestedLevel);
 
@@ -70,6 +74,8 @@ function LotPage({ lot }: { lot: LotDetail }) {
     <>
       <LotDetails
         lot={lot}
+        priceUnit={priceUnit}
+        weightUnit={unit}
         purchase={
           <>
             <div className="mb-3">

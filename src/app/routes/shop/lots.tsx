@@ -30,7 +30,7 @@ export default function LotsRoute() {
       />
       <div className="grid gap-6">
         <LotFiltersForm filters={filters} origins={origins} onChange={updateFilters} priceUnit={priceUnit} onPriceUnitChange={setPriceUnit} />
-        <LotList filters={filters} />
+        <LotList filters={filters} priceUnit={priceUnit} />
       </div>
     </>
   );

@@ -130,7 +130,9 @@ describe('order page', () => {
 
   it('shows an order’s bags, totals, dates and tracking without asking again', async () => {
     const fetchMock = stubFetch(() =>
-      jsonResponse(makeOrder({ status: 'shipped', paidAt: '2026-12-01T16:06:00Z', shipDate: '2026-12-03', carrier: 'USPS', trackingNumber: '9400TEST0001' })),
+      jsonResponse(
+        makeOrder({ status: 'shipped', paidAt: '2026-12-01T16:06:00Z', shipDate: '2026-12-03', carrier: 'Kestrel Post', trackingNumber: '9400TEST0001' }),
+      ),
     );
     renderApp(`/orders/${orderId}`, { session: makeUser() });
 
@@ -139,7 +141,7 @@ describe('order page', () => {
     expect(screen.getByText('Shipped')).toBeTruthy();
     expect(screen.getByText('$31.17')).toBeTruthy();
     expect(screen.getByText('Dec 3, 2026')).toBeTruthy();
-    expect(screen.getByText('USPS 9400TEST0001')).toBeTruthy();
+    expect(screen.getByText('Kestrel Post 9400TEST0001')).toBeTruthy();
     expect(screen.queryByText('Waiting for the payment to be confirmed…')).toBeNull();
     expect(requestedUrls(fetchMock)).toEqual([`/api/orders/${orderId}`]);
   });

@@ -25,6 +25,7 @@ function shippingServer(onCheckout: () => Response) {
         regularPriceCents: 5295,
         discountPct: 10,
         shippingCents: 695,
+        bagPriceCents: { '12oz': 1620, '1lb': 2070, '2lb': 3960 },
         currency: 'usd',
         deliveries: [],
         shipPolicy: 'ready_on_arrival',

@@ -20,6 +20,7 @@ function makePreview(priceCents: number): SubscriptionPreview {
     regularPriceCents: priceCents + 180,
     discountPct: 10,
     shippingCents: 695,
+    bagPriceCents: { '12oz': 1620, '1lb': 2070, '2lb': 3960 },
     currency: 'usd',
     shipPolicy: 'ready_on_arrival',
     deliveries: [
@@ -159,5 +160,23 @@ describe('Roasted to Order builder', () => {
     expect(new URLSearchParams(router.state.location.search).get('redirectTo')).toBe(
       '/subscribe/shipping?lot=RD-T01&level=medium&size=2lb&bags=2&grind=pour-over&brew=filter&every=4',
     );
+  });
+  it('shows each bag size’s price, and asks before going on with a grind that does not suit the brew method', async () => {
+    builderServer();
+    const { router } = renderApp('/subscribe?grind=espresso&brew=filter', { session: makeUser() });
+
+    const sizes = await screen.findByRole('group', { name: 'Bag size' }, { timeout: 15_000 });
+    // The preview's per-bag prices after the 10 % discount: $16.20, $20.70, $39.60.
+    await waitFor(() => expect(within(sizes).getByText(/\$16\.20 a bag/)).toBeTruthy());
+    expect(within(sizes).getByText(/\$39\.60 a bag/)).toBeTruthy();
+    expect(screen.getByTestId('builder-action-bar').textContent).toContain('$23.15 each delivery');
+
+    fireEvent.click(screen.getByRole('button', { name: 'Continue to the shipping address' }));
+    expect(await screen.findByText(/too fine for filter brewing/)).toBeTruthy();
+    expect(router.state.location.pathname).toBe('/subscribe');
+
+    fireEvent.click(screen.getByRole('button', { name: 'Keep this grind and continue' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/subscribe/shipping'));
+    expect(new URLSearchParams(router.state.location.search).get('grind')).toBe('espresso');
   });
 });

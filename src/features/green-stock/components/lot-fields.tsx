@@ -14,6 +14,7 @@ import {
   centsFromDollars,
   dollarsFromCents,
   notesFromText,
+  gramsFromWeightText,
   numberFromText,
   numberOrNullFromText,
   textFromNotes,
@@ -247,11 +248,10 @@ export function LotFields({ form, isNew }: { form: LotForm; isNew: boolean }) {
       {isNew ? (
         <Group legend="In the Roastery" className="sm:grid-cols-2 sm:items-start">
           <TextField
-            label="Reorder point (g)"
-            hint="Green Stock flags the lot at or below this. 0 for none."
-            inputMode="numeric"
-            error={error('reorderPointGrams', 'Reorder point', 'Enter whole grams, e.g. 5000.')}
-            {...register('reorderPointGrams', { setValueAs: numberFromText })}
+            label="Reorder point"
+            hint="In g, kg or lb, e.g. 5000, 5 kg or 11 lb. Green Stock flags the lot at or below this. 0 for none."
+            error={error('reorderPointGrams', 'Reorder point', 'Enter a weight, e.g. 5 kg or 11 lb.')}
+            {...register('reorderPointGrams', { setValueAs: gramsFromWeightText })}
           />
           <CheckboxField label="List it in Green Lots" className="sm:mt-6" {...register('isListed')} />
         </Group>

@@ -14,8 +14,8 @@ import { formatDayWithWeekday } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateLot } from '../api/save-lot';
 import { fieldErrorText } from '../utils/field-error';
-import { numberFromText } from '../utils/lot-form-values';
-import { formatGramsAndPounds, formatPounds } from '../utils/weights';
+import { numberFromText, gramsFromWeightText } from '../utils/lot-form-values';
+import { formatGramsAndPounds } from '../utils/weights';
 import { CoverText } from './cover-text';
 
 type SettingsValues = z.input<typeof lotUpdateSchema>;
@@ -72,20 +72,25 @@ type NumberSettingCopy = {
   hint: (value: unknown) => string;
   saved: (value: number) => string;
   button: string;
+  /** Reads the typed text as the field's number. */
+  parse: (text: unknown) => number;
+  inputMode: 'numeric' | 'text';
 };
 
 const numberSettingCopy: Record<NumberSetting, NumberSettingCopy> = {
   reorderPointGrams: {
     formLabel: 'Reorder point',
-    inputLabel: 'Reorder point (g)',
+    inputLabel: 'Reorder point',
     errorName: 'The reorder point',
-    errorExample: 'Enter whole grams, e.g. 5000.',
+    errorExample: 'Enter a weight, e.g. 5 kg or 11 lb.',
     hint: (grams) =>
       typeof grams === 'number' && Number.isFinite(grams) && grams > 0
-        ? `Flag the lot at or below this. That is ${formatPounds(grams)}.`
-        : 'Flag the lot at or below this; 0 for none.',
+        ? `In g, kg or lb. Flag the lot at or below this. That is ${formatGramsAndPounds(grams)}.`
+        : 'In g, kg or lb, e.g. 5 kg or 11 lb. Flag the lot at or below this; 0 for none.',
     saved: (grams) => (grams > 0 ? `Reorder point set to ${formatGramsAndPounds(grams)}.` : 'Reorder point removed.'),
     button: 'Save reorder point',
+    parse: gramsFromWeightText,
+    inputMode: 'text',
   },
   supplierLeadTimeDays: {
     formLabel: 'Supplier lead time',
@@ -95,6 +100,8 @@ const numberSettingCopy: Record<NumberSetting, NumberSettingCopy> = {
     hint: () => 'Days from ordering more of this lot to having it on the shelf. Green planning asks for the order this long before the lot runs out.',
     saved: (days) => `Supplier lead time set to ${days} ${days === 1 ? 'day' : 'days'}.`,
     button: 'Save lead time',
+    parse: numberFromText,
+    inputMode: 'numeric',
   },
 };
 
@@ -131,10 +138,10 @@ function NumberSettingForm({ item, field }: { item: GreenStockItem; field: Numbe
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <TextField
         label={copy.inputLabel}
-        inputMode="numeric"
+        inputMode={copy.inputMode}
         hint={copy.hint(value)}
         error={fieldErrorText(form.formState.errors[field], copy.errorName, copy.errorExample)}
-        {...form.register(field, { setValueAs: numberFromText })}
+        {...form.register(field, { setValueAs: copy.parse })}
       />
       <div>
         <Button type="submit" variant="secondary" disabled={form.formState.isSubmitting}>

@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import { toMinorUnits } from '@shared/domain/money';
+import { parseQuantity, toGrams } from '@shared/domain/units';
 import type { lotCreateSchema, LotDetail, LotUpdate } from '@shared/schemas/lots';
 
 /** The lot form holds what `lotCreateSchema` reads, and gives what it returns. */
@@ -10,6 +11,18 @@ export type LotFormOutput = z.output<typeof lotCreateSchema>;
 export function numberFromText(text: unknown): number {
   if (typeof text === 'number') return text;
   return typeof text === 'string' && text.trim() !== '' ? Number(text.trim()) : Number.NaN;
+}
+
+/**
+ * A reorder point typed in grams ("5000"), or with its unit ("5 kg", "11 lb", "0.5 kg"), as whole
+ * grams to the nearest gram; anything else is NaN, which the schema refuses. 0 means none.
+ */
+export function gramsFromWeightText(text: unknown): number {
+  if (typeof text === 'number') return text;
+  if (typeof text !== 'string' || text.trim() === '') return Number.NaN;
+  if (/^\s*\d+\s*$/.test(text)) return Number(text.trim());
+  const parsed = parseQuantity(text);
+  return parsed.ok ? Math.round(toGrams(parsed.value)) : Number.NaN;
 }
 
 /** As `numberFromText`, but an empty box means "not known" (null). */

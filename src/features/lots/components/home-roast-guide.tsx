@@ -4,7 +4,6 @@ import { homeRoastProfiles, roastGuideDevices } from '@shared/domain/home-roast-
 import { bagFillGrams } from '@shared/domain/units';
 import { roastLevelLabels, roastLevels, type GreenBagSize, type HomeRoastDevice, type RoastLevel } from '@shared/domain/vocabulary';
 import { Badge } from '@/components/ui/badge';
-import { CautionPanel } from '@/components/ui/caution-panel';
 import { ErrorState } from '@/components/ui/error-state';
 import { SelectField } from '@/components/ui/select-field';
 import { Skeleton } from '@/components/ui/skeleton';
@@ -129,16 +128,6 @@ export function HomeRoastGuide({ lotCode, size, unit, device, onDeviceChange, le
               </TableBody>
             </Table>
             <p className="mt-2 text-small text-ink-muted">Times are a starting point ({guide.source}); judge the colour by eye as well.</p>
-
-            <div className="mt-6">
-              <CautionPanel title="Before you roast">
-                <ul className="list-disc space-y-1 pl-5">
-                  {guide.cautions.map((caution) => (
-                    <li key={caution}>{caution}</li>
-                  ))}
-                </ul>
-              </CautionPanel>
-            </div>
           </div>
         </div>
       ) : guideQuery.isError ? (

@@ -4,12 +4,13 @@ import { processLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { LotSummary } from '@shared/schemas/lots';
 import { paths } from '@/config/paths';
 import { formatAltitude } from '@/lib/format';
-import { useShopMoney } from '@/lib/shop-currency';
+import { useLotPrice } from '../hooks/use-lot-price';
+import type { PriceUnit } from '../utils/price-per-unit';
 import { LotPhoto } from './lot-photo';
 import { StockBadge } from './stock-badge';
 
-export function LotCard({ lot, headingLevel = 'h2' }: { lot: LotSummary; headingLevel?: 'h2' | 'h3' }) {
-  const { pricePerKg } = useShopMoney();
+export function LotCard({ lot, headingLevel = 'h2', priceUnit = 'kg' }: { lot: LotSummary; headingLevel?: 'h2' | 'h3'; priceUnit?: PriceUnit }) {
+  const price = useLotPrice(priceUnit);
   const Heading = headingLevel;
   const outOfStock = lot.stockGrams <= 0;
 
@@ -28,7 +29,7 @@ export function LotCard({ lot, headingLevel = 'h2' }: { lot: LotSummary; heading
             </span>
           </p>
           <Heading className="mt-1 text-h3">
-            <Link to={paths.lot.getHref(lot.code)} className="text-ink no-underline outline-none after:absolute after:inset-0 hover:underline">
+            <Link to={paths.lot.getHref(lot.code, priceUnit)} className="text-ink no-underline outline-none after:absolute after:inset-0 hover:underline">
               {lot.name}
             </Link>
           </Heading>
@@ -64,7 +65,7 @@ export function LotCard({ lot, headingLevel = 'h2' }: { lot: LotSummary; heading
         ) : null}
 
         <div className="mt-auto flex flex-wrap items-center justify-between gap-2 border-t border-rule pt-3">
-          <p className="font-semibold">{pricePerKg(lot.pricePerKgCents)}</p>
+          <p className="font-semibold">{price(lot.pricePerKgCents)}</p>
           <StockBadge stockGrams={lot.stockGrams} />
         </div>
       </div>

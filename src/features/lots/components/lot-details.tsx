@@ -2,8 +2,10 @@ import type { ReactNode } from 'react';
 import { processLabels, roastLevelLabels } from '@shared/domain/vocabulary';
 import type { LotDetail } from '@shared/schemas/lots';
 import { DownloadLink } from '@/components/ui/download-link';
-import { formatAltitude, formatGrams, formatPercent, formatScore } from '@/lib/format';
-import { useShopMoney } from '@/lib/shop-currency';
+import { formatAltitude, formatPercent, formatScore } from '@/lib/format';
+import { useLotPrice } from '../hooks/use-lot-price';
+import type { PriceUnit } from '../utils/price-per-unit';
+import { formatBulkWeight, type WeightUnit } from '../utils/weight-unit';
 import { LotPhoto } from './lot-photo';
 import { StockBadge } from './stock-badge';
 
@@ -17,8 +19,18 @@ function Descriptor({ term, children }: { term: string; children: ReactNode }) {
 }
 
 /** Everything Restday knows about one green lot, as a home roaster reads it; `purchase` sits under the price. */
-export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: ReactNode }) {
-  const { pricePerKg } = useShopMoney();
+export function LotDetails({
+  lot,
+  purchase,
+  priceUnit = 'kg',
+  weightUnit = 'g',
+}: {
+  lot: LotDetail;
+  purchase?: ReactNode;
+  priceUnit?: PriceUnit;
+  weightUnit?: WeightUnit;
+}) {
+  const price = useLotPrice(priceUnit);
   const outOfStock = lot.stockGrams <= 0;
   const [firstPhoto = null, ...morePhotos] = lot.photos;
 
@@ -48,14 +60,14 @@ export function LotDetails({ lot, purchase }: { lot: LotDetail; purchase?: React
           <p className="mt-1 text-small text-ink-muted">Lot code {lot.code}</p>
 
           <div className="mt-5 flex flex-wrap items-center gap-3">
-            <p className="text-h2 font-heading font-semibold">{pricePerKg(lot.pricePerKgCents)}</p>
+            <p className="text-h2 font-heading font-semibold">{price(lot.pricePerKgCents)}</p>
             <StockBadge stockGrams={lot.stockGrams} />
           </div>
           {lot.priceBreaks.length > 0 ? (
             <ul aria-label="Quantity prices" className="mt-2 text-small text-ink-muted">
               {lot.priceBreaks.map((priceBreak) => (
                 <li key={priceBreak.minGrams}>
-                  {formatGrams(priceBreak.minGrams)} or more: {pricePerKg(priceBreak.pricePerKgCents)}
+                  {formatBulkWeight(priceBreak.minGrams, weightUnit)} or more: {price(priceBreak.pricePerKgCents)}
                 </li>
               ))}
             </ul>

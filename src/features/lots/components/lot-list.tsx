@@ -6,10 +6,11 @@ import { ErrorState } from '@/components/ui/error-state';
 import { paths } from '@/config/paths';
 import { useLots } from '../api/get-lots';
 import { hasActiveFilters, type LotFilters } from '../utils/lot-filters';
+import type { PriceUnit } from '../utils/price-per-unit';
 import { LotGrid, LotGridSkeleton } from './lot-grid';
 
 /** The Green Lots results for the given filters, with their loading, empty and error states. */
-export function LotList({ filters }: { filters: LotFilters }) {
+export function LotList({ filters, priceUnit }: { filters: LotFilters; priceUnit?: PriceUnit }) {
   const lotsQuery = useLots(filters);
 
   if (lotsQuery.data === undefined) {
@@ -43,7 +44,7 @@ export function LotList({ filters }: { filters: LotFilters }) {
       <p role="status" className="mb-4 text-small text-ink-muted">
         {lots.length === 1 ? '1 lot' : `${lots.length} lots`}
       </p>
-      <LotGrid lots={lots} />
+      <LotGrid lots={lots} priceUnit={priceUnit} />
     </div>
   );
 }

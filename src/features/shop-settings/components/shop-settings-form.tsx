@@ -2,7 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { Plus, Trash2 } from 'lucide-react';
 import { useState, type ReactNode } from 'react';
 import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
-import { currencies } from '@shared/domain/money';
+import { TRACKING_PLACEHOLDER } from '@shared/domain/carriers';
+import { shopCurrencies } from '@shared/domain/money';
 import { roastedBagSizes, roastLevelLabels, roastLevels, shipPolicies, shipPolicyLabels, weekdayLabels, weekdays } from '@shared/domain/vocabulary';
 import { shopSettingsUpdateSchema, type PlaceOfBusiness, type ShopSettings, type ShopSettingsInput } from '@shared/schemas/settings';
 import { Button } from '@/components/ui/button';
@@ -17,6 +18,12 @@ import { CentsField } from './cents-field';
 type SettingsPath = Path<ShopSettingsInput>;
 
 const emptyPlaceOfBusiness: PlaceOfBusiness = { line1: '', line2: null, city: '', region: '', postalCode: '', country: 'US' };
+
+/** The zones this browser knows, with the saved one kept even where the list lacks it (e.g. UTC). */
+function timeZoneChoices(saved: string): string[] {
+  const zones = Intl.supportedValuesOf('timeZone');
+  return zones.includes(saved) ? zones : [saved, ...zones];
+}
 
 const bagSizeLabels = { '12oz': '12 oz bag', '1lb': '1 lb bag', '2lb': '2 lb bag' } as const;
 
@@ -38,10 +45,13 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
     defaultValues: { ...settings, placeOfBusiness: settings.placeOfBusiness ?? emptyPlaceOfBusiness },
   });
   const bands = useFieldArray({ control: form.control, name: 'shipping.bands' });
+  const carriers = useFieldArray({ control: form.control, name: 'carriers' });
   const save = useUpdateShopSettings();
   const [formError, setFormError] = useState<string>();
   const [saved, setSaved] = useState(false);
   const currency = useWatch({ control: form.control, name: 'currency' }) ?? 'usd';
+  // Held by value: the long option list renders after the form first sets the field.
+  const timeZone = useWatch({ control: form.control, name: 'timeZone' });
 
   const errorAt = (name: SettingsPath) => form.getFieldState(name, form.formState).error?.message;
   const number = (name: SettingsPath) => form.register(name, { valueAsNumber: true });
@@ -101,16 +111,15 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
       {saved ? <FormAlert tone="status">Settings saved.</FormAlert> : null}
 
       <Group title="Shop" description="Days and times are read in the shop’s time zone.">
-        <TextField
-          label="Time zone"
-          hint="An IANA name, e.g. America/Denver."
-          autoComplete="off"
-          spellCheck={false}
-          error={errorAt('timeZone')}
-          {...form.register('timeZone')}
-        />
+        <SelectField label="Time zone" {...form.register('timeZone')} value={timeZone}>
+          {timeZoneChoices(settings.timeZone).map((zone) => (
+            <option key={zone} value={zone}>
+              {zone.replaceAll('_', ' ')}
+            </option>
+          ))}
+        </SelectField>
         <SelectField label="Currency" {...form.register('currency')}>
-          {currencies.map((code) => (
+          {shopCurrencies.map((code) => (
             <option key={code} value={code}>
               {code.toUpperCase()}
             </option>
@@ -239,6 +248,44 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
           <Button variant="secondary" className="mt-3" onClick={() => bands.append({ maxGrams: Number.NaN, cents: 0 })}>
             <Plus aria-hidden="true" className="size-4" />
             Add a band
+          </Button>
+        </div>
+      </Group>
+
+      <Group
+        title="Carriers"
+        description={`The shipped e-mail links a listed carrier’s tracking page, with the tracking number where ${TRACKING_PLACEHOLDER} stands; any other carrier’s e-mail shows the number alone.`}
+      >
+        <div className="sm:col-span-2 lg:col-span-3">
+          <ol aria-label="Carriers" className="grid gap-3">
+            {carriers.fields.map((carrier, index) => (
+              <li key={carrier.id} className="flex flex-wrap items-end gap-3">
+                <TextField
+                  label={`Carrier ${index + 1}: name`}
+                  autoComplete="off"
+                  error={errorAt(`carriers.${index}.name`)}
+                  {...form.register(`carriers.${index}.name`)}
+                />
+                <TextField
+                  label={`Carrier ${index + 1}: tracking page`}
+                  hint={`https://… with ${TRACKING_PLACEHOLDER}`}
+                  type="url"
+                  autoComplete="off"
+                  spellCheck={false}
+                  error={errorAt(`carriers.${index}.trackingUrlTemplate`)}
+                  {...form.register(`carriers.${index}.trackingUrlTemplate`)}
+                />
+                <Button variant="secondary" onClick={() => carriers.remove(index)}>
+                  <Trash2 aria-hidden="true" className="size-4" />
+                  Remove carrier {index + 1}
+                </Button>
+              </li>
+            ))}
+          </ol>
+          {errorAt('carriers') ? <p className="mt-2 text-small font-semibold text-alert">{errorAt('carriers')}</p> : null}
+          <Button variant="secondary" className="mt-3" onClick={() => carriers.append({ name: '', trackingUrlTemplate: '' })}>
+            <Plus aria-hidden="true" className="size-4" />
+            Add a carrier
           </Button>
         </div>
       </Group>

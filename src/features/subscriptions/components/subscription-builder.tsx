@@ -3,6 +3,8 @@ import { useEffect, useState } from 'react';
 import { Controller, FormProvider, useForm, useWatch } from 'react-hook-form';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { deliveryGreenGrams } from '@shared/domain/delivery-plan';
+import { grindMismatch } from '@shared/domain/grind-fit';
+import { formatMoney } from '@shared/domain/money';
 import { processLabels, roastLevels, roastersRotationName, type RoastLevel } from '@shared/domain/vocabulary';
 import { defaultShopSettings } from '@shared/schemas/settings';
 import type { LotDetail, LotSummary } from '@shared/schemas/lots';
@@ -82,11 +84,25 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
         defaultShopSettings,
       );
 
+  // A grind that contradicts the brew method is asked about once; changing either asks again.
+  const mismatch = watched.brewMethod && watched.grind ? grindMismatch(watched.brewMethod, watched.grind) : null;
+  const [confirmedMismatch, setConfirmedMismatch] = useState<string | null>(null);
+  const [askGrind, setAskGrind] = useState(false);
+  if (askGrind && mismatch !== null && confirmedMismatch === mismatch) setAskGrind(false);
+
   const shippingHref = paths.subscribeShipping.getHref(new URLSearchParams(searchNow));
+  const goOn = () => navigate(signedIn ? shippingHref : paths.signIn.getHref(shippingHref));
   const submit = form.handleSubmit(() => {
     if (soldOut) return;
-    navigate(signedIn ? shippingHref : paths.signIn.getHref(shippingHref));
+    if (mismatch && confirmedMismatch !== mismatch) {
+      setAskGrind(true);
+      return;
+    }
+    goOn();
   });
+  const bagPrices = preview.data
+    ? Object.fromEntries(Object.entries(preview.data.bagPriceCents).map(([size, cents]) => [size, formatMoney(cents, preview.data.currency)]))
+    : undefined;
 
   const coffeeChoices = [
     { value: rotationSearchValue, label: roastersRotationName, detail: 'A different lot each time, picked by our roaster for the roast day.' },
@@ -127,9 +143,28 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
               </span>
             </FormAlert>
           ) : null}
-          <SubscriptionChoiceFieldset allowedLevels={allowedLevels} idPrefix="builder" />
+          <SubscriptionChoiceFieldset allowedLevels={allowedLevels} idPrefix="builder" bagPrices={bagPrices} />
+          {askGrind && mismatch ? (
+            <FormAlert>
+              <span>
+                {mismatch} Keep it, or choose another grind above.{' '}
+                <button
+                  type="button"
+                  className="font-semibold text-leaf underline"
+                  onClick={() => {
+                    setConfirmedMismatch(mismatch);
+                    setAskGrind(false);
+                    goOn();
+                  }}
+                >
+                  Keep this grind and continue
+                </button>
+              </span>
+            </FormAlert>
+          ) : null}
         </div>
-        <aside aria-label="Price and first deliveries" className="lg:sticky lg:top-6 lg:self-start">
+        {/* On a phone the aside's boxes join the form's column, so the price and Continue can stay in view at the bottom. */}
+        <aside aria-label="Price and first deliveries" className="contents lg:sticky lg:top-6 lg:block lg:self-start">
           <div className="rounded-card border border-rule bg-paper-shade/40 p-5">
             <SubscriptionPricePreview
               preview={preview.data}
@@ -138,20 +173,26 @@ export function SubscriptionBuilder({ lots, chosenLot, signedIn }: SubscriptionB
               onRetry={() => void preview.refetch()}
               cadenceWeeks={watched.cadenceWeeks ?? 2}
             />
-            <div className="mt-6 grid gap-2">
-              <Button type="submit" disabled={soldOut}>
-                {signedIn ? 'Continue to the shipping address' : 'Sign in to continue'}
-              </Button>
-              {signedIn ? null : (
-                <p className="text-small text-ink-muted">
-                  New here?{' '}
-                  <Link to={paths.createAccount.getHref(shippingHref)} className="font-semibold text-leaf underline">
-                    Create an account
-                  </Link>
-                  . Your choices are kept.
-                </p>
-              )}
-            </div>
+          </div>
+          <div
+            data-testid="builder-action-bar"
+            className="sticky bottom-0 z-10 -mx-4 grid gap-2 border-t border-rule bg-sheet px-4 py-3 shadow-card lg:static lg:mx-0 lg:mt-4 lg:border-0 lg:bg-transparent lg:p-0 lg:shadow-none"
+          >
+            {preview.data ? (
+              <p className="text-small font-semibold lg:hidden">{`${formatMoney(preview.data.priceCents, preview.data.currency)} each delivery`}</p>
+            ) : null}
+            <Button type="submit" disabled={soldOut}>
+              {signedIn ? 'Continue to the shipping address' : 'Sign in to continue'}
+            </Button>
+            {signedIn ? null : (
+              <p className="text-small text-ink-muted">
+                New here?{' '}
+                <Link to={paths.createAccount.getHref(shippingHref)} className="font-semibold text-leaf underline">
+                  Create an account
+                </Link>
+                . Your choices are kept.
+              </p>
+            )}
           </div>
         </aside>
       </form>

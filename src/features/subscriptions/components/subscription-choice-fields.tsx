@@ -11,13 +11,15 @@ type SubscriptionChoiceFieldsProps = {
   allowedLevels: readonly RoastLevel[];
   /** Keeps radio names unique when two forms share a page. */
   idPrefix: string;
+  /** Each bag size's price as the subscriber pays it, shown beside the size. */
+  bagPrices?: Partial<Record<(typeof roastedBagSizes)[number], string>>;
 };
 
 /**
  * Roast level, bag size, bags, brew method, grind and cadence, each a labelled group, inside the
  * builder's or the change form's `FormProvider` (both hold these fields).
  */
-export function SubscriptionChoiceFieldset({ allowedLevels, idPrefix }: SubscriptionChoiceFieldsProps) {
+export function SubscriptionChoiceFieldset({ allowedLevels, idPrefix, bagPrices }: SubscriptionChoiceFieldsProps) {
   const { control, register, formState } = useFormContext<SubscriptionChoiceFields>();
   const { errors } = formState;
   return (
@@ -44,7 +46,11 @@ export function SubscriptionChoiceFieldset({ allowedLevels, idPrefix }: Subscrip
           <ChoiceGroup
             legend="Bag size"
             name={`${idPrefix}-bag-size`}
-            choices={roastedBagSizes.map((size) => ({ value: size, label: bagSizeShort(size), detail: bagSizeNetLabel(size) }))}
+            choices={roastedBagSizes.map((size) => ({
+              value: size,
+              label: bagSizeShort(size),
+              detail: bagPrices?.[size] ? `${bagSizeNetLabel(size)} · ${bagPrices[size]} a bag` : bagSizeNetLabel(size),
+            }))}
             value={field.value as (typeof roastedBagSizes)[number] | undefined}
             onChange={field.onChange}
             error={errors.bagSize?.message}
