@@ -179,8 +179,29 @@ export function restDaysFor(coffee: CoffeeForRest, settings: ScheduleSettings): 
   return Math.max(0, settings.restDays[coffee.brewMethod] + settings.restAdjustDays[coffee.roastLevel]);
 }
 
-export function datesForRoastDate(roastDate: IsoDate, coffee: CoffeeForRest, settings: ScheduleSettings, calendar: RoastCalendar = {}): RoastDates {
-  const readyFrom = addDays(roastDate, restDaysFor(coffee, settings));
+const noCalendar: RoastCalendar = {};
+/**
+ * Each settings-and-calendar pair's dates by roast day and rest: a plan over thousands of
+ * subscriptions asks for the same few roast days again and again. Both are read-only inputs, so
+ * an answer holds for as long as they live.
+ */
+const datesMemo = new WeakMap<ScheduleSettings, WeakMap<RoastCalendar, Map<string, RoastDates>>>();
+
+export function datesForRoastDate(roastDate: IsoDate, coffee: CoffeeForRest, settings: ScheduleSettings, calendar: RoastCalendar = noCalendar): RoastDates {
+  const restDays = restDaysFor(coffee, settings);
+  let byCalendar = datesMemo.get(settings);
+  if (!byCalendar) datesMemo.set(settings, (byCalendar = new WeakMap()));
+  let byDay = byCalendar.get(calendar);
+  if (!byDay) byCalendar.set(calendar, (byDay = new Map()));
+  const key = `${roastDate}|${restDays}`;
+  let dates = byDay.get(key);
+  if (!dates) byDay.set(key, (dates = computeDates(roastDate, restDays, settings, calendar)));
+  // A copy: callers spread and change what they get.
+  return { ...dates };
+}
+
+function computeDates(roastDate: IsoDate, restDays: number, settings: ScheduleSettings, calendar: RoastCalendar): RoastDates {
+  const readyFrom = addDays(roastDate, restDays);
   const shipDate = shipDateFor(addDays(roastDate, settings.degasHoldDays), readyFrom, settings, calendar);
   return {
     roastDate,
