@@ -18,7 +18,7 @@
 import { planDeliveries, type KeptDelivery, type SubscriptionForPlan } from './delivery-plan';
 import { ceilDiv } from './integer-math';
 import { buildRoastList, type LotLossHistory, type RoastListSettings, type RoastOrderLine } from './roast-list';
-import { isOpenRoastDay, SEARCH_HORIZON_DAYS, type RoastCalendar, type ScheduleSettings } from './roast-schedule';
+import { firstGridDateStillAhead, SEARCH_HORIZON_DAYS, type RoastCalendar, type ScheduleSettings } from './roast-schedule';
 import { addDays, daysBetween, localDateOf, type IsoDate } from './shop-time';
 import { coverWindowDays } from './stock-cover';
 import { bagFillGrams } from './units';
@@ -46,11 +46,7 @@ export interface SubscriptionForPlanning extends SubscriptionForPlan {
  * and kept rows due before this date can be left unread when planning from today.
  */
 export function earliestNominalDateStillAhead(today: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar): IsoDate {
-  for (let back = 1; back <= SEARCH_HORIZON_DAYS; back += 1) {
-    const day = addDays(today, -back);
-    if (isOpenRoastDay(day, settings, calendar)) return addDays(day, 1);
-  }
-  return addDays(today, -SEARCH_HORIZON_DAYS);
+  return firstGridDateStillAhead(today, settings, calendar) ?? addDays(today, -SEARCH_HORIZON_DAYS);
 }
 
 /**

@@ -40,12 +40,15 @@ describe('lot page', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Test Ridge Washed' })).toBeTruthy();
     await screen.findByRole('table', { name: 'Time after first crack' });
-    // The lot, its Home Roast Guide, and how home roasters roast it (shown only from enough roasts).
-    expect(requestedUrls(fetchMock).sort()).toEqual([
-      '/api/lots/RD-T01',
-      '/api/lots/RD-T01/home-roasts',
-      '/api/lots/RD-T01/roast-guide?device=popper&greenGrams=454&level=light',
-    ]);
+    // The lot, its Home Roast Guide, and how home roasters roast it (shown only from enough roasts;
+    // that section loads once the page runs in the browser).
+    await waitFor(() =>
+      expect(requestedUrls(fetchMock).sort()).toEqual([
+        '/api/lots/RD-T01',
+        '/api/lots/RD-T01/home-roasts',
+        '/api/lots/RD-T01/roast-guide?device=popper&greenGrams=454&level=light',
+      ]),
+    );
 
     const descriptors = screen.getByRole('region', { name: 'Green coffee descriptors' });
     const value = (term: string) => within(descriptors).getByText(term).nextElementSibling?.textContent;
