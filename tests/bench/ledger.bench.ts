@@ -18,13 +18,13 @@ import { systemClock } from '../../server/lib/clock';
 import { createLogger } from '../../server/lib/logger';
 import { hashPassword } from '../../server/lib/password-hashing';
 import { saveShopSettings } from '../../server/modules/settings/settings.repo';
+import { medianMsInTurn } from './median-in-turn';
 
 const orderCount = 100_000;
 const subscriptionCount = 2_000;
 const oneOffRoastedCount = 5_000;
 const lotCount = 20;
-const warmUpRuns = 3;
-const samples = 15;
+const runs = { warmUpRuns: 3, samples: 15 };
 const password = 'bench only passphrase 7';
 const { timeZone } = defaultShopSettings;
 
@@ -224,25 +224,6 @@ function ledgerSpan(weeks: number): [string, string, string, string, string] {
   return [from, end, instantAt(from, '00:00', timeZone).toISOString(), instantAt(end, '00:00', timeZone).toISOString(), timeZone];
 }
 
-const median = (times: number[]) => [...times].sort((a, b) => a - b)[Math.floor(times.length / 2)]!;
-
-/** Warms both up, then times them in alternation so a busy moment lands on both sides; the median of each. */
-async function medianMsInTurn(first: () => Promise<unknown>, second: () => Promise<unknown>): Promise<[number, number]> {
-  for (let warmUp = 0; warmUp < warmUpRuns; warmUp += 1) {
-    await first();
-    await second();
-  }
-  const times: [number[], number[]] = [[], []];
-  for (let sample = 0; sample < samples; sample += 1) {
-    for (const [index, run] of [first, second].entries()) {
-      const started = performance.now();
-      await run();
-      times[index]!.push(performance.now() - started);
-    }
-  }
-  return [median(times[0]), median(times[1])];
-}
-
 /**
  * What the Ledger reads, as one plain statement: the ISO weeks of the span in the shop's time zone,
  * and per week the paid sales by kind, refunds, green sold and roasted, the subscriptions on the books
@@ -400,6 +381,7 @@ try {
       endpoint(`/api/owner/ledger?weeks=${weeks}`, (body) => {
         endpointCents = (body as LedgerBody).sales.reduce((sum, week) => sum + week.totalCents, 0);
       }),
+      runs,
     );
     if (endpointCents !== bareCents) throw new Error(`weeks=${weeks}: the Ledger's sales add up to ${endpointCents} cents, the bare SQL's to ${bareCents}`);
     results.push(
@@ -412,13 +394,14 @@ try {
     endpoint('/api/roastery/planning', (body) => {
       plannedLots = (body as { lots: unknown[] }).lots.length;
     }),
+    runs,
   );
   if (plannedLots !== lotCount) throw new Error(`planning answered ${plannedLots} lots, expected ${lotCount}`);
   results.push(
     `GET /api/roastery/planning: median ${endpointMs.toFixed(1)} ms; bare SQL aggregate: median ${bareMs.toFixed(1)} ms; ratio ${(endpointMs / bareMs).toFixed(2)}×`,
   );
   for (const line of results) console.log(line);
-  console.log(`(target ≤ 3×; ${samples} runs each, in turn, after ${warmUpRuns} warm-up runs)`);
+  console.log(`(target ≤ 3×; ${runs.samples} runs each, in turn, after ${runs.warmUpRuns} warm-up runs)`);
   bare.release();
   server.close();
   await database.close();
