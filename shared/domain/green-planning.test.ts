@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { KeptDelivery } from './delivery-plan';
-import { planGreen, subscriptionRoastDemand, type GreenPlanInput, type SubscriptionForPlanning } from './green-planning';
+import { earliestNominalDateStillAhead, planGreen, subscriptionRoastDemand, type GreenPlanInput, type SubscriptionForPlanning } from './green-planning';
 import { defaultLossModel } from './roast-loss';
 import type { RoastCalendar, ScheduleSettings } from './roast-schedule';
 
@@ -160,6 +160,24 @@ describe('planGreen — one lot, four weekly subscriptions of 2 × 12 oz at medi
     expect(plan.needGrams).toBe(0);
     expect(plan.runOutDate).toBeNull();
     expect(plan.reorderBy).toBeNull();
+  });
+});
+
+describe('earliestNominalDateStillAhead — which kept deliveries a plan from today still reads', () => {
+  it('is the day after the last open roast day before today (Tuesdays only: Tuesday 23 February 2027 → Wednesday 24 February)', () => {
+    expect(earliestNominalDateStillAhead('2027-03-01', schedule, {})).toBe('2027-02-24');
+    // Today itself a roast day: the last one before it is a week back.
+    expect(earliestNominalDateStillAhead('2027-03-02', schedule, {})).toBe('2027-02-24');
+  });
+
+  it('reaches back past a closed roast day: a delivery due on it moved to today or later', () => {
+    const closed: RoastCalendar = { overrides: { '2027-02-23': { open: false } } };
+    expect(earliestNominalDateStillAhead('2027-03-01', schedule, closed)).toBe('2027-02-17');
+  });
+
+  it('falls back to the search horizon when no roast day was open in it', () => {
+    // 120 days before 1 March 2027: 28 (February) + 31 (January) + 31 (December) + 30 (November) → 1 November 2026.
+    expect(earliestNominalDateStillAhead('2027-03-01', { ...schedule, roastWeekdays: [] }, {})).toBe('2026-11-01');
   });
 });
 

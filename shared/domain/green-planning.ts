@@ -18,7 +18,7 @@
 import { planDeliveries, type KeptDelivery, type SubscriptionForPlan } from './delivery-plan';
 import { ceilDiv } from './integer-math';
 import { buildRoastList, type LotLossHistory, type RoastListSettings, type RoastOrderLine } from './roast-list';
-import type { RoastCalendar, ScheduleSettings } from './roast-schedule';
+import { firstGridDateStillAhead, SEARCH_HORIZON_DAYS, type RoastCalendar, type ScheduleSettings } from './roast-schedule';
 import { addDays, daysBetween, localDateOf, type IsoDate } from './shop-time';
 import { coverWindowDays } from './stock-cover';
 import { bagFillGrams } from './units';
@@ -37,6 +37,16 @@ export interface SubscriptionForPlanning extends SubscriptionForPlan {
   /** Null: Roaster's Rotation. */
   lotCode: string | null;
   kept: readonly KeptDelivery[];
+}
+
+/**
+ * The earliest grid date whose delivery can still roast on or after `today`: the day after the
+ * last open roast day before it. A delivery only moves later, to the first open roast day on or
+ * after its grid date, so one due on or before that roast day was roasted (or skipped) in the past,
+ * and kept rows due before this date can be left unread when planning from today.
+ */
+export function earliestNominalDateStillAhead(today: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar): IsoDate {
+  return firstGridDateStillAhead(today, settings, calendar) ?? addDays(today, -SEARCH_HORIZON_DAYS);
 }
 
 /**

@@ -179,8 +179,29 @@ export function restDaysFor(coffee: CoffeeForRest, settings: ScheduleSettings): 
   return Math.max(0, settings.restDays[coffee.brewMethod] + settings.restAdjustDays[coffee.roastLevel]);
 }
 
-export function datesForRoastDate(roastDate: IsoDate, coffee: CoffeeForRest, settings: ScheduleSettings, calendar: RoastCalendar = {}): RoastDates {
-  const readyFrom = addDays(roastDate, restDaysFor(coffee, settings));
+const noCalendar: RoastCalendar = {};
+/**
+ * Each settings-and-calendar pair's dates by roast day and rest: a plan over thousands of
+ * subscriptions asks for the same few roast days again and again. Both are read-only inputs, so
+ * an answer holds for as long as they live.
+ */
+const datesMemo = new WeakMap<ScheduleSettings, WeakMap<RoastCalendar, Map<string, RoastDates>>>();
+
+export function datesForRoastDate(roastDate: IsoDate, coffee: CoffeeForRest, settings: ScheduleSettings, calendar: RoastCalendar = noCalendar): RoastDates {
+  const restDays = restDaysFor(coffee, settings);
+  let byCalendar = datesMemo.get(settings);
+  if (!byCalendar) datesMemo.set(settings, (byCalendar = new WeakMap()));
+  let byDay = byCalendar.get(calendar);
+  if (!byDay) byCalendar.set(calendar, (byDay = new Map()));
+  const key = `${roastDate}|${restDays}`;
+  let dates = byDay.get(key);
+  if (!dates) byDay.set(key, (dates = computeDates(roastDate, restDays, settings, calendar)));
+  // A copy: callers spread and change what they get.
+  return { ...dates };
+}
+
+function computeDates(roastDate: IsoDate, restDays: number, settings: ScheduleSettings, calendar: RoastCalendar): RoastDates {
+  const readyFrom = addDays(roastDate, restDays);
   const shipDate = shipDateFor(addDays(roastDate, settings.degasHoldDays), readyFrom, settings, calendar);
   return {
     roastDate,
@@ -249,13 +270,33 @@ export interface ScheduledDelivery extends RoastDates {
   locked: boolean;
 }
 
+/**
+ * The day after the last open roast day before `date`, within the search horizon; null when none
+ * was open. A delivery roasts on the first open roast day on or after its grid date, so one due on
+ * or before that roast day roasted before `date`.
+ */
+export function firstGridDateStillAhead(date: IsoDate, settings: ScheduleSettings, calendar: RoastCalendar = {}): IsoDate | null {
+  for (let back = 1; back <= SEARCH_HORIZON_DAYS; back += 1) {
+    const day = addDays(date, -back);
+    if (isOpenRoastDay(day, settings, calendar)) return addDays(day, 1);
+  }
+  return null;
+}
+
 export function subscriptionDeliveries(subscription: SubscriptionForSchedule, settings: ScheduleSettings, calendar: RoastCalendar = {}): ScheduledDelivery[] {
   const periodDays = subscription.cadenceWeeks * 7;
   const from = subscription.from ?? localDateOf(subscription.now, settings.timeZone);
   const skipped = new Set(subscription.skippedDates ?? []);
   const pausedUntil = subscription.pausedUntil ?? null;
-  // A delivery can only move later, and by at most the search horizon, so start just before `from`.
-  const firstIndex = Math.max(0, Math.floor((daysBetween(subscription.anchorDate, from) - SEARCH_HORIZON_DAYS) / periodDays));
+  // A delivery can only move later, to the first open roast day on or after its grid date: start at
+  // the first grid date after the last roast day before `from` (else the search horizon before it).
+  const stillAhead = firstGridDateStillAhead(from, settings, calendar);
+  const firstIndex = Math.max(
+    0,
+    stillAhead === null
+      ? Math.floor((daysBetween(subscription.anchorDate, from) - SEARCH_HORIZON_DAYS) / periodDays)
+      : Math.ceil(daysBetween(subscription.anchorDate, stillAhead) / periodDays),
+  );
   const deliveries: ScheduledDelivery[] = [];
   for (let index = firstIndex; deliveries.length < subscription.count; index += 1) {
     const nominalDate = addDays(subscription.anchorDate, index * periodDays);

@@ -22,7 +22,26 @@ const MS_PER_DAY = 86_400_000;
 const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
 const CLOCK_TIME = /^([01]\d|2[0-3]):([0-5]\d)$/;
 
-function epochDay(date: IsoDate): number {
+/**
+ * Remembers a pure function's answers: schedules over thousands of subscriptions ask the same few
+ * hundred days and instants again and again. Only successful answers are kept, and the memory is
+ * emptied when it fills, so arbitrary input cannot grow it without bound.
+ */
+function remembered<K, V>(compute: (key: K) => V, limit = 20_000): (key: K) => V {
+  const answers = new Map<K, V>();
+  return (key) => {
+    const known = answers.get(key);
+    if (known !== undefined) return known;
+    const answer = compute(key);
+    if (answers.size >= limit) answers.clear();
+    answers.set(key, answer);
+    return answer;
+  };
+}
+
+const epochDay = remembered(computeEpochDay);
+
+function computeEpochDay(date: IsoDate): number {
   const match = ISO_DATE.exec(date);
   if (!match) throw new RangeError(`not an ISO date (YYYY-MM-DD): ${date}`);
   const [, year, month, day] = match.map(Number) as [number, number, number, number];
@@ -34,9 +53,7 @@ function epochDay(date: IsoDate): number {
   return ms / MS_PER_DAY;
 }
 
-function fromEpochDay(day: number): IsoDate {
-  return new Date(day * MS_PER_DAY).toISOString().slice(0, 10);
-}
+const fromEpochDay = remembered((day: number): IsoDate => new Date(day * MS_PER_DAY).toISOString().slice(0, 10));
 
 export function isIsoDate(text: string): boolean {
   try {
@@ -142,9 +159,14 @@ function assertInstant(instant: Date): number {
 
 const pad = (value: number): string => String(value).padStart(2, '0');
 
-export function localDateOf(instant: Date, timeZone: string): IsoDate {
-  const clock = wallClockAt(assertInstant(instant), timeZone);
+const localDateAt = remembered((key: string): IsoDate => {
+  const [ms, timeZone] = key.split('|') as [string, string];
+  const clock = wallClockAt(Number(ms), timeZone);
   return `${String(clock.year).padStart(4, '0')}-${pad(clock.month)}-${pad(clock.day)}`;
+});
+
+export function localDateOf(instant: Date, timeZone: string): IsoDate {
+  return localDateAt(`${assertInstant(instant)}|${timeZone}`);
 }
 
 export function localTimeOf(instant: Date, timeZone: string): string {
@@ -152,7 +174,17 @@ export function localTimeOf(instant: Date, timeZone: string): string {
   return `${pad(clock.hour)}:${pad(clock.minute)}`;
 }
 
+const instantMsAt = remembered((key: string): number => {
+  const [date, time, timeZone] = key.split('|') as [IsoDate, string, string];
+  return computeInstantAt(date, time, timeZone).getTime();
+});
+
 export function instantAt(date: IsoDate, time: string, timeZone: string): Date {
+  // A fresh Date each time: callers may change the one they get.
+  return new Date(instantMsAt(`${date}|${time}|${timeZone}`));
+}
+
+function computeInstantAt(date: IsoDate, time: string, timeZone: string): Date {
   const match = CLOCK_TIME.exec(time);
   if (!match) throw new RangeError(`not a clock time (HH:MM): ${time}`);
   const wallMs = epochDay(date) * MS_PER_DAY + (Number(match[1]) * 60 + Number(match[2])) * MS_PER_MINUTE;

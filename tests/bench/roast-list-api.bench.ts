@@ -15,6 +15,7 @@ import { systemClock } from '../../server/lib/clock';
 import { createLogger } from '../../server/lib/logger';
 import { hashPassword } from '../../server/lib/password-hashing';
 import { saveShopSettings } from '../../server/modules/settings/settings.repo';
+import { medianMsInTurn } from './median-in-turn';
 import { defaultShopSettings } from '@shared/schemas/settings';
 
 const roastDate = '2026-12-09';
@@ -142,28 +143,6 @@ async function seedRoastDay(db: Db): Promise<string> {
   return staff!.email;
 }
 
-const median = (times: number[]) => [...times].sort((a, b) => a - b)[Math.floor(times.length / 2)]!;
-
-/**
- * Warms both up, then times them in alternation, so a busy moment on the machine lands on both
- * sides rather than on one; the median of each side's samples.
- */
-async function medianMsInTurn(first: () => Promise<unknown>, second: () => Promise<unknown>): Promise<[number, number]> {
-  for (let warmUp = 0; warmUp < warmUpRuns; warmUp += 1) {
-    await first();
-    await second();
-  }
-  const times: [number[], number[]] = [[], []];
-  for (let sample = 0; sample < samples; sample += 1) {
-    for (const [index, run] of [first, second].entries()) {
-      const started = performance.now();
-      await run();
-      times[index]!.push(performance.now() - started);
-    }
-  }
-  return [median(times[0]), median(times[1])];
-}
-
 const cluster = startCluster(testClusterOptions());
 try {
   const databaseName = 'restday_bench_roast_list';
@@ -217,7 +196,7 @@ try {
     bareBags = result.rows.reduce((total, row) => total + row.quantity, 0);
   };
 
-  const [bareMs, endpointMs] = await medianMsInTurn(bareQuery, endpoint);
+  const [bareMs, endpointMs] = await medianMsInTurn(bareQuery, endpoint, { warmUpRuns, samples });
   if (bareRows !== lineCount) throw new Error(`the bare query read ${bareRows} rows, expected ${lineCount}`);
   if (listedBags !== bareBags) throw new Error(`the roast list holds ${listedBags} bags, the rows ${bareBags}`);
   console.log(

@@ -7,6 +7,7 @@ import { roastLevelLabels } from '../../shared/domain/vocabulary';
 import type { PackListResponse } from '../../shared/schemas/packing';
 import type { BatchListResponse, RoastListResponse } from '../../shared/schemas/roastery';
 import type { ShopSettings } from '../../shared/schemas/settings';
+import type { TodayResponse } from '../../shared/schemas/today';
 import { launchChromium } from '../setup/chromium';
 import { openInApp } from '../setup/open-in-app';
 
@@ -46,6 +47,15 @@ async function signedIn(account: { email: string; password: string }, options: {
   // The sign-in page's own check of who is signed in answers 401 before signing in; only what follows counts.
   problems.length = 0;
   return { context, page, problems };
+}
+
+/** Waits until every chart in the region has drawn (the charting package loads lazily, on first use). */
+async function chartsDrawn(region: Locator, expected: number) {
+  const figures = region.getByRole('figure');
+  await figures.nth(expected - 1).waitFor();
+  expect(await figures.count()).toBe(expected);
+  // Each chart's own surface is its first; legends draw small ones of their own after it.
+  for (let index = 0; index < expected; index += 1) await figures.nth(index).locator('svg.recharts-surface').first().waitFor({ timeout: 20_000 });
 }
 
 async function getJson<T>(page: Page, path: string): Promise<T> {
@@ -263,6 +273,43 @@ describe('a roast day in a real browser', () => {
     expect(problems).toEqual([]);
   });
 
+  it('the owner opens Today, the Ledger with its charts, and Green Stock’s planning', async () => {
+    const owned = await signedIn(owner);
+    const { page, problems } = owned;
+    try {
+      const today = await getJson<TodayResponse>(page, '/api/roastery/today');
+      expect(today.nextRoastDay).not.toBeNull();
+      const roastCard = page.getByRole('region', { name: today.nextRoastDay!.isToday ? 'Roasting today' : /^Next roast day: / });
+      // The Roast List link opens the next roast day, not today when today is no roast day.
+      expect(await roastCard.getByRole('link', { name: 'Open the Roast List' }).getAttribute('href')).toBe(`/roastery/days/${today.nextRoastDay!.date}`);
+      await page.getByRole('region', { name: 'Pack and ship today' }).getByRole('link', { name: 'Open the Pack List' }).waitFor();
+      await page.getByRole('region', { name: 'Green coffee to reorder' }).waitFor();
+
+      await page.getByRole('navigation', { name: 'Roastery' }).getByRole('link', { name: 'Ledger' }).click();
+      await page.getByRole('heading', { level: 1, name: 'Ledger' }).waitFor();
+      // Twelve weeks by default: a header row and one row a week.
+      const sales = page.getByRole('table', { name: 'Sales by week' });
+      await sales.waitFor();
+      expect(await sales.getByRole('row').count()).toBe(13);
+      await page.getByRole('table', { name: 'Green planning by lot' }).waitFor();
+      const figureCount = await page.getByRole('main').getByRole('figure').count();
+      expect(figureCount).toBeGreaterThanOrEqual(4);
+      await chartsDrawn(page.getByRole('main'), figureCount);
+      await page.getByRole('link', { name: 'Sales CSV' }).waitFor();
+
+      await page.getByRole('navigation', { name: 'Roastery' }).getByRole('link', { name: 'Green Stock' }).click();
+      await page.getByRole('heading', { level: 1, name: 'Green Stock' }).waitFor();
+      const planning = page.getByRole('region', { name: 'Green planning, next 8 weeks' });
+      const planningRows = planning.getByRole('table', { name: 'Green planning by lot' }).getByRole('row');
+      await planningRows.nth(1).waitFor();
+      await chartsDrawn(planning, 1);
+      await planning.getByRole('link', { name: 'Planning CSV' }).waitFor();
+      expect(problems).toEqual([]);
+    } finally {
+      await owned.context.close();
+    }
+  }, 60_000);
+
   describe('accessibility (axe-core, WCAG 2.2 AA tags)', () => {
     // Each page loads, then axe walks its whole DOM: slow on a busy machine.
     const auditTimeout = 120_000;
@@ -311,10 +358,19 @@ describe('a roast day in a real browser', () => {
     );
 
     it(
-      'finds no violations on the owner’s shop settings',
+      'finds no violations on the owner’s shop settings, Today, the Ledger and Green Stock’s planning',
       async () => {
         const audit = await signedIn(owner, { bypassCSP: true });
-        const violations = await violationsOn(audit.page, '/roastery/settings', () => audit.page.getByLabel('Time zone').waitFor());
+        const { page } = audit;
+        const violations = [
+          ...(await violationsOn(page, '/roastery/settings', () => page.getByLabel('Time zone').waitFor())),
+          ...(await violationsOn(page, '/roastery', () => page.getByRole('region', { name: 'Pack and ship today' }).waitFor())),
+          ...(await violationsOn(page, '/roastery/ledger', async () => {
+            await page.getByRole('table', { name: 'Green planning by lot' }).waitFor();
+            await chartsDrawn(page.getByRole('main'), await page.getByRole('main').getByRole('figure').count());
+          })),
+          ...(await violationsOn(page, '/roastery/green-stock', () => chartsDrawn(page.getByRole('region', { name: /^Green planning, next / }), 1))),
+        ];
         expect(violations).toEqual([]);
         expect(audit.problems).toEqual([]);
         await audit.context.close();

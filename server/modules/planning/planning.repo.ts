@@ -1,4 +1,4 @@
-import { and, asc, between, eq, gte, inArray, sql } from 'drizzle-orm';
+import { and, asc, between, eq, gte, inArray, isNull, or, sql } from 'drizzle-orm';
 import { addDays, type IsoDate } from '@shared/domain/shop-time';
 import { SEARCH_HORIZON_DAYS } from '@shared/domain/roast-schedule';
 import type { Db } from '../../db/client';
@@ -68,13 +68,27 @@ export function createPlanningRepo(db: Db) {
         .where(inArray(subscriptions.status, ['active', 'paused', 'past_due']));
     },
 
-    /** Kept delivery rows a plan from today still reads (a grid delivery's nominal date lies at most the search horizon before its roast). */
-    async keptDeliveries(subscriptionIds: readonly string[], today: IsoDate) {
+    /**
+     * Kept delivery rows a plan from today still reads: those roasting from today on, and those
+     * due on the grid from `nominalFrom` (the grid deliveries they stand in for). Rows with no grid
+     * date are read back to the search horizon, as a grid delivery's nominal date lies at most that
+     * far before its roast.
+     */
+    async keptDeliveries(subscriptionIds: readonly string[], today: IsoDate, nominalFrom: IsoDate) {
       if (subscriptionIds.length === 0) return [];
       return db
         .select(keptDeliveryColumns)
         .from(deliveries)
-        .where(and(inArray(deliveries.subscriptionId, [...subscriptionIds]), gte(deliveries.roastDate, addDays(today, -SEARCH_HORIZON_DAYS))))
+        .where(
+          and(
+            inArray(deliveries.subscriptionId, [...subscriptionIds]),
+            or(
+              gte(deliveries.roastDate, today),
+              gte(deliveries.nominalDate, nominalFrom),
+              and(isNull(deliveries.nominalDate), gte(deliveries.roastDate, addDays(today, -SEARCH_HORIZON_DAYS))),
+            ),
+          ),
+        )
         .orderBy(asc(deliveries.roastDate));
     },
 

@@ -1,4 +1,4 @@
-import { planGreen, subscriptionRoastDemand, type SubscriptionForPlanning } from '@shared/domain/green-planning';
+import { earliestNominalDateStillAhead, planGreen, subscriptionRoastDemand, type SubscriptionForPlanning } from '@shared/domain/green-planning';
 import { lotLossHistoryOf } from '@shared/domain/roast-list';
 import { addDays, localDateOf } from '@shared/domain/shop-time';
 import { coverWindowDays, isAtReorderPoint } from '@shared/domain/stock-cover';
@@ -31,6 +31,7 @@ export function createPlanningService({ repo, clock }: { repo: PlanningRepo; clo
       const keptRows = await repo.keptDeliveries(
         subscriptionRows.map((row) => row.id),
         today,
+        earliestNominalDateStillAhead(today, settings, { overrides }),
       );
       const keptBySubscription = new Map<string, ReturnType<typeof keptDeliveryOf>[]>();
       for (const row of keptRows) {

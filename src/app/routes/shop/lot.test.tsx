@@ -41,7 +41,7 @@ describe('lot page', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Test Ridge Washed' })).toBeTruthy();
     await screen.findByRole('table', { name: 'Time after first crack' });
     // The lot, its Home Roast Guide, and how home roasters roast it (shown only from enough roasts;
-    // its section's code loads lazily, so its read comes a moment later).
+    // that section loads once the page runs in the browser).
     await waitFor(() =>
       expect(requestedUrls(fetchMock).sort()).toEqual([
         '/api/lots/RD-T01',

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { deliveryGreenGrams } from '@shared/domain/delivery-plan';
 import { defaultShopSettings } from '@shared/schemas/settings';
 import { ArrowLeft } from 'lucide-react';
-import { lazy, Suspense, useState } from 'react';
+import { lazy, Suspense, useState, useSyncExternalStore } from 'react';
 import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { GreenBagSize, HomeRoastDevice, RoastLevel } from '@shared/domain/vocabulary';
 import type { LotDetail } from '@shared/schemas/lots';
@@ -24,6 +24,18 @@ import { ApiError } from '@/lib/api-client';
 
 // Below the fold and shown only from enough roasts: its code loads after the page's own.
 const LotRoastSummary = lazy(() => import('@/features/journal/components/lot-roast-summary').then((module) => ({ default: module.LotRoastSummary })));
+
+const noSubscription = () => () => {};
+/**
+ * False on the server and while the browser takes the drawn page over, true after: the server
+ * draws the page in one pass and cannot wait for a part that loads lazily.
+ */
+const useInBrowser = () =>
+  useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -98,6 +110,7 @@ function canRoastForSubscription(lot: { stockGrams: number; suggestedLevel: Roas
 export default function LotRoute() {
   const { code = '' } = useParams();
   const lotQuery = useLot(code);
+  const inBrowser = useInBrowser();
 
   const backLink = (
     <Link to={paths.lots.getHref()} className="mb-6 inline-flex min-h-11 items-center gap-1.5 font-semibold text-leaf underline">
@@ -128,9 +141,11 @@ export default function LotRoute() {
           </p>
         )}
         <div className="mt-10 max-w-prose">
-          <Suspense fallback={null}>
-            <LotRoastSummary code={lotQuery.data.code} audience="public" />
-          </Suspense>
+          {inBrowser ? (
+            <Suspense fallback={null}>
+              <LotRoastSummary code={lotQuery.data.code} audience="public" />
+            </Suspense>
+          ) : null}
         </div>
         <div className="mt-10 max-w-prose">
           <HomeRoastingCautions />
