@@ -104,7 +104,7 @@ describe('Shop settings', () => {
     const timeZone = (await screen.findByLabelText('Time zone', {}, { timeout: 15_000 })) as HTMLSelectElement;
     expect(timeZone.tagName).toBe('SELECT');
     expect([...timeZone.options].map((option) => option.value)).toContain('Europe/Lisbon');
-    fireEvent.change(timeZone, { target: { value: 'Europe/Lisbon' } });
+    enterValue(timeZone, 'Europe/Lisbon');
     const currencyCodes = [...(screen.getByLabelText('Currency') as HTMLSelectElement).options].map((option) => option.value);
     expect(currencyCodes).toContain('jpy');
     expect(currencyCodes).not.toContain('kwd');
