@@ -98,19 +98,19 @@ describe('PUT /api/roastery/settings', () => {
   it('saves the shop’s carriers, and answers 400 naming the carrier whose tracking address is not https with {tracking}', async () => {
     // Invented carriers on reserved example domains.
     const carriers = [{ name: 'Kestrel Post', trackingUrlTemplate: 'https://track.example.com/parcel/{tracking}' }];
-    const saved = await owner.put('/api/roastery/settings').send({ ...defaultShopSettings, carriers });
+    const saved = await owner.put('/api/roastery/settings').send({ ...testShopSettingsBody, carriers });
     expect(saved.status).toBe(200);
     expect(shopSettingsSchema.parse((await staff.get('/api/roastery/settings')).body).carriers).toEqual(carriers);
 
     const before = (await staff.get('/api/roastery/settings')).body as unknown;
     const bad = await owner.put('/api/roastery/settings').send({
-      ...defaultShopSettings,
+      ...testShopSettingsBody,
       carriers: [...carriers, { name: 'Larkspur Freight', trackingUrlTemplate: 'http://larkspur.example.net/find' }],
     });
     expect(bad.status).toBe(400);
     expect(Object.keys(apiErrorSchema.parse(bad.body).error.fields ?? {})).toContain('carriers.1.trackingUrlTemplate');
     expect((await staff.get('/api/roastery/settings')).body).toEqual(before);
-    await owner.put('/api/roastery/settings').send(defaultShopSettings).expect(200);
+    await owner.put('/api/roastery/settings').send(testShopSettingsBody).expect(200);
   });
 
   it('answers 400 naming each field that is wrong, and changes nothing', async () => {
