@@ -138,7 +138,17 @@ function daySheetServer({ batchAnswer, date = day }: { batchAnswer?: () => Respo
   return stubFetch((url, init) => {
     const method = init?.method ?? 'GET';
     const path = url.pathname;
-    if (path === '/api/roastery/settings') return jsonResponse({ ...defaultShopSettings, timeZone: 'America/Denver' });
+    if (path === '/api/roastery/settings') {
+      // Invented carriers on reserved example domains.
+      return jsonResponse({
+        ...defaultShopSettings,
+        timeZone: 'America/Denver',
+        carriers: [
+          { name: 'Kestrel Post', trackingUrlTemplate: 'https://track.example.com/{tracking}' },
+          { name: 'Larkspur Freight', trackingUrlTemplate: 'https://larkspur.example.net/find/{tracking}' },
+        ],
+      });
+    }
     if (path === `/api/roastery/days/${date}/roast-list`) return jsonResponse({ ...(batches.length > 0 ? roastListAfterBatch : roastList), date });
     if (path === `/api/roastery/days/${date}/batches`) return jsonResponse({ items: batches });
     if (path === `/api/roastery/days/${date}/pack-list`) return jsonResponse({ date, orders: [order] } satisfies PackListResponse);
@@ -374,7 +384,11 @@ describe('Day Sheet tabs and Pack List', () => {
     const dialog = await screen.findByRole('dialog', { name: 'Mark Juno Reed’s order shipped' });
     fireEvent.click(within(dialog).getByRole('button', { name: 'Mark shipped' }));
     expect(await within(dialog).findByText('Name the carrier.')).toBeTruthy();
-    enterValue(within(dialog).getByLabelText('Carrier'), 'Kestrel Post');
+    // The shop's carriers are offered as the packer types.
+    const carrierInput = within(dialog).getByLabelText('Carrier');
+    const offered = document.getElementById(carrierInput.getAttribute('list') ?? '');
+    expect([...(offered?.querySelectorAll('option') ?? [])].map((option) => option.value)).toEqual(['Kestrel Post', 'Larkspur Freight']);
+    enterValue(carrierInput, 'Kestrel Post');
     enterValue(within(dialog).getByLabelText('Tracking number'), 'wr 1234 5678');
     fireEvent.click(within(dialog).getByRole('button', { name: 'Mark shipped' }));
 

@@ -82,7 +82,14 @@ function PackListPanel({ date, canTrace }: { date: string; canTrace: boolean }) 
   const settings = useShopSettings().data;
   if (packList.isError) return <ErrorState title="The Pack List could not load" error={packList.error} onRetry={() => void packList.refetch()} />;
   if (!packList.data) return <Loading what="Pack List" />;
-  return <PackListView packList={packList.data} canTrace={canTrace} labelsNeedAddress={settings !== undefined && settings.placeOfBusiness === null} />;
+  return (
+    <PackListView
+      packList={packList.data}
+      canTrace={canTrace}
+      labelsNeedAddress={settings !== undefined && settings.placeOfBusiness === null}
+      carrierNames={settings?.carriers.map((carrier) => carrier.name)}
+    />
+  );
 }
 
 /** Bags on the Roast List and orders on the Pack List, once each has loaded. */

@@ -180,9 +180,11 @@ type PackListViewProps = {
   canTrace?: boolean;
   /** The shop has no place of business yet, so the labels cannot print. */
   labelsNeedAddress?: boolean;
+  /** The names of the shop's carriers, offered when marking orders shipped. */
+  carrierNames?: readonly string[];
 };
 
-export function PackListView({ packList, canTrace = true, labelsNeedAddress = false }: PackListViewProps) {
+export function PackListView({ packList, canTrace = true, labelsNeedAddress = false, carrierNames = [] }: PackListViewProps) {
   const [shipping, setShipping] = useState<PackOrder>();
   const [shipped, setShipped] = useState<string>();
   const [shippingAll, setShippingAll] = useState(false);
@@ -255,6 +257,7 @@ export function PackListView({ packList, canTrace = true, labelsNeedAddress = fa
         <ShipOrderDialog
           order={shipping}
           date={date}
+          carrierNames={carrierNames}
           onClose={() => setShipping(undefined)}
           onShipped={(order) =>
             setShipped(`${order.customerName}’s order is marked shipped (${order.carrier} ${order.trackingNumber}); the shipped e-mail is on its way.`)
@@ -265,6 +268,7 @@ export function PackListView({ packList, canTrace = true, labelsNeedAddress = fa
         <ShipPackedDialog
           orders={packed}
           date={date}
+          carrierNames={carrierNames}
           onClose={() => setShippingAll(false)}
           onShipped={(count, carrier) =>
             setShipped(`${count} ${count === 1 ? 'order is' : 'orders are'} marked shipped with ${carrier}; each customer’s shipped e-mail is on its way.`)

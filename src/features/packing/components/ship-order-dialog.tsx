@@ -9,18 +9,20 @@ import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useShipOrder } from '../api/ship-order';
 import { useOpenDialog } from '../hooks/use-open-dialog';
+import { CarrierField } from './carrier-field';
 
 type ShipFields = z.input<typeof shipOrderBodySchema>;
 
 type ShipOrderDialogProps = {
   order: PackOrder;
   date: string;
+  carrierNames: readonly string[];
   onClose: () => void;
   onShipped: (order: PackOrder) => void;
 };
 
 /** A modal form for the carrier and tracking number; Escape or Cancel closes it and focus goes back. */
-export function ShipOrderDialog({ order, date, onClose, onShipped }: ShipOrderDialogProps) {
+export function ShipOrderDialog({ order, date, carrierNames, onClose, onShipped }: ShipOrderDialogProps) {
   const { dialogRef, finish } = useOpenDialog();
   const titleId = useId();
   const ship = useShipOrder(date);
@@ -55,7 +57,7 @@ export function ShipOrderDialog({ order, date, onClose, onShipped }: ShipOrderDi
       <p className="mt-1 text-small text-ink-muted">The customer gets the shipped e-mail with the tracking number and the day their coffee is ready.</p>
       <form noValidate onSubmit={(event) => void submit(event)} className="mt-4 grid gap-4">
         {formError ? <FormAlert>{formError}</FormAlert> : null}
-        <TextField label="Carrier" autoComplete="off" error={errors.carrier?.message} {...form.register('carrier')} />
+        <CarrierField carrierNames={carrierNames} error={errors.carrier?.message} {...form.register('carrier')} />
         <TextField
           label="Tracking number"
           autoComplete="off"

@@ -7,16 +7,18 @@ import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { useShipDay } from '../api/ship-day';
 import { useOpenDialog } from '../hooks/use-open-dialog';
+import { CarrierField } from './carrier-field';
 
 type ShipPackedDialogProps = {
   orders: PackOrder[];
   date: string;
+  carrierNames: readonly string[];
   onClose: () => void;
   onShipped: (count: number, carrier: string) => void;
 };
 
 /** "Mark all packed orders shipped": one carrier for all, a tracking number for each; all ship together or none does. */
-export function ShipPackedDialog({ orders, date, onClose, onShipped }: ShipPackedDialogProps) {
+export function ShipPackedDialog({ orders, date, carrierNames, onClose, onShipped }: ShipPackedDialogProps) {
   const { dialogRef, finish } = useOpenDialog();
   const titleId = useId();
   const shipDay = useShipDay(date);
@@ -61,7 +63,7 @@ export function ShipPackedDialog({ orders, date, onClose, onShipped }: ShipPacke
         className="mt-4 grid gap-4"
       >
         {formError ? <FormAlert>{formError}</FormAlert> : null}
-        <TextField label="Carrier" autoComplete="off" value={carrier} onChange={(event) => setCarrier(event.target.value)} />
+        <CarrierField carrierNames={carrierNames} value={carrier} onChange={(event) => setCarrier(event.target.value)} />
         {orders.map((order) => (
           <TextField
             key={order.orderId}
