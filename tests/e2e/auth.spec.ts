@@ -36,7 +36,7 @@ beforeAll(async () => {
   page.setDefaultTimeout(10_000);
   page.on('console', (message) => {
     if (isRefusedAuthRequest(message)) return;
-    if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);
+    if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()} (${message.location().url})`);
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
 });

@@ -71,6 +71,8 @@ describe('the header’s signed-in state', () => {
     expect(router.state.location.pathname).toBe('/');
     const [request] = sentRequests(fetchMock, 'POST', '/api/auth/sign-out');
     expect(request?.headers.get('X-Restday-Client')).toBe('web');
+    // The overview's subscriptions were read once, while signed in: leaving asks for nothing more.
+    expect(sentRequests(fetchMock, 'GET', '/api/subscriptions')).toHaveLength(1);
   });
 
   it('a Roastery visit still shows who is signed in, with the same menu', async () => {
