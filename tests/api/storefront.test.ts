@@ -7,6 +7,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { lotDetailSchema, lotListResponseSchema } from '@shared/schemas/lots';
 import { shippingRulesSchema } from '@shared/schemas/shipping';
+import { schemaOrgProblems } from '../setup/schema-org';
 import { createTestApp } from '../setup/test-app';
 import { createLotForSale } from '../factories/index';
 
@@ -142,6 +143,22 @@ describe('pages found and shared', () => {
         availability: 'https://schema.org/OutOfStock',
       }),
     ]);
+    expect(schemaOrgProblems(jsonLd)).toEqual([]);
+  });
+
+  it('the schema.org check itself refuses a type, a property and a value the vocabulary does not have', () => {
+    const offer = { '@type': 'Offer', price: '9.07', priceCurrency: 'USD', availability: 'https://schema.org/InStock' };
+    expect(schemaOrgProblems({ '@context': 'https://schema.org', '@type': 'Product', name: 'A lot', offers: [offer] })).toEqual([]);
+    expect(schemaOrgProblems({ '@type': 'GreenCoffeeLot', name: 'A lot' })).toEqual(['$: "GreenCoffeeLot" is not a schema.org type']);
+    const problems = schemaOrgProblems({
+      '@type': 'Product',
+      name: 'A lot',
+      roastLevel: 'light',
+      offers: [{ ...offer, availability: 'https://schema.org/Plenty' }],
+    });
+    expect(problems).toEqual(
+      expect.arrayContaining([expect.stringContaining('"roastLevel" is not a property of this type'), expect.stringMatching(/^\$\.offers\[0\]\/availability/)]),
+    );
   });
 
   it('GET /lots/:code — for no such lot, then 404 with a page kept out of the index', async () => {

@@ -79,7 +79,7 @@ export function lotProductJsonLd(lot: LotDetail, options: { url: string; imageUr
     description: lot.description || `${lot.origin}, ${lot.region}: ${lot.variety}, ${lot.process}.`,
     sku: lot.code,
     category: 'Green coffee beans',
-    countryOfOrigin: lot.origin,
+    countryOfOrigin: { '@type': 'Country', name: lot.origin },
     ...(options.imageUrls.length > 0 ? { image: options.imageUrls } : {}),
     offers,
   };
